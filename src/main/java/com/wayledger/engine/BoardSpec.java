@@ -1,0 +1,46 @@
+package com.wayledger.engine;
+
+import java.util.List;
+
+/**
+ * A distribution board with its circuits.
+ *
+ * @param id stable identifier of the stored board
+ * @param reference the board's name on site, e.g. "DB-K1"
+ * @param phases 1 or 3
+ * @param wayCount number of ways
+ * @param busbarRatingAmps busbar rating; null when unknown
+ * @param incomer incoming device or switch; null when unknown
+ * @param parentBoardId board this one is fed from; null when fed from the origin
+ * @param submainCable cable from the parent way or origin; null when not recorded
+ * @param unbalanceLimitPercent largest acceptable phase unbalance, %
+ * @param coincidenceFactor factor applied to this board's demand as seen by its parent, in (0, 1]
+ * @param diversityMethodKey the diversity method chosen for this board; null for the site default
+ * @param measuredExternalLoopImpedanceOhms Ze measured at the board; null when not measured
+ * @param measuredFaultCurrentKiloAmps prospective fault current measured at the board; null when not measured
+ * @param circuits the board's positions that hold a circuit, spare device or empty space record
+ */
+public record BoardSpec(
+    long id,
+    String reference,
+    int phases,
+    int wayCount,
+    Double busbarRatingAmps,
+    DeviceSpec incomer,
+    Long parentBoardId,
+    CableSpec submainCable,
+    double unbalanceLimitPercent,
+    double coincidenceFactor,
+    String diversityMethodKey,
+    Double measuredExternalLoopImpedanceOhms,
+    Double measuredFaultCurrentKiloAmps,
+    List<CircuitSpec> circuits) {
+
+  public BoardSpec {
+    circuits = List.copyOf(circuits);
+  }
+
+  public boolean isThreePhase() {
+    return phases == 3;
+  }
+}

@@ -1,0 +1,36 @@
+package com.wayledger.engine;
+
+import java.util.List;
+
+/**
+ * What one position of a board feeds: device, cable and loads.
+ *
+ * @param id stable identifier of the stored circuit (0 for an unsaved one)
+ * @param wayNumber way number on the board, from 1
+ * @param position the line(s) the circuit occupies
+ * @param description what the circuit feeds
+ * @param status in use, spare device or empty space
+ * @param lockedForBalancing whether phase balancing must leave it where it is
+ * @param device protective device; null for an empty space
+ * @param cable circuit cable; null when not recorded
+ * @param loads load items, possibly none
+ * @param feedsBoardId id of the sub-board this circuit feeds as a submain; null for a final circuit
+ * @param measuredLoopImpedanceOhms Zs measured at the circuit's far end; null when not measured
+ */
+public record CircuitSpec(
+    long id,
+    int wayNumber,
+    PhasePosition position,
+    String description,
+    WayStatus status,
+    boolean lockedForBalancing,
+    DeviceSpec device,
+    CableSpec cable,
+    List<LoadSpec> loads,
+    Long feedsBoardId,
+    Double measuredLoopImpedanceOhms) {
+
+  public CircuitSpec {
+    loads = List.copyOf(loads);
+  }
+}

@@ -1,0 +1,7 @@
+package com.wayledger.engine;
+
+/** Conductor metal of a cable. */
+public enum ConductorMaterial {
+  COPPER,
+  ALUMINIUM
+}

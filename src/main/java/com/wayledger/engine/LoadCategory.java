@@ -1,0 +1,17 @@
+package com.wayledger.engine;
+
+/** What kind of load an item is; diversity rules are chosen per category. */
+public enum LoadCategory {
+  LIGHTING,
+  SOCKET_OUTLETS,
+  COOKING,
+  WATER_HEATING_INSTANTANEOUS,
+  WATER_HEATING_STORAGE,
+  SPACE_HEATING,
+  AIR_CONDITIONING,
+  MOTOR,
+  EV_CHARGING,
+  IT_SMALL_POWER,
+  FIXED_APPLIANCE,
+  OTHER
+}
