@@ -1,0 +1,52 @@
+package com.wayledger.account;
+
+import org.slf4j.Logger;
+import org.slf4j.LoggerFactory;
+import org.springframework.beans.factory.annotation.Value;
+import org.springframework.boot.ApplicationArguments;
+import org.springframework.boot.ApplicationRunner;
+import org.springframework.core.annotation.Order;
+import org.springframework.stereotype.Component;
+
+/**
+ * Outside the demo there is no default password: when no user exists, the first admin is created from
+ * WAYLEDGER_ADMIN_USERNAME and WAYLEDGER_ADMIN_PASSWORD, or the log says how to create one.
+ */
+@Component
+@Order(10)
+class FirstAdmin implements ApplicationRunner {
+
+  private static final Logger LOG = LoggerFactory.getLogger(FirstAdmin.class);
+
+  private final AccountService accounts;
+  private final String username;
+  private final String password;
+
+  FirstAdmin(
+      AccountService accounts,
+      @Value("${wayledger.admin.username:}") String username,
+      @Value("${wayledger.admin.password:}") String password) {
+    this.accounts = accounts;
+    this.username = username;
+    this.password = password;
+  }
+
+  @Override
+  public void run(ApplicationArguments args) {
+    if (accounts.anyUser()) {
+      return;
+    }
+    if (username.isBlank() || password.isBlank()) {
+      LOG.warn(
+          "No user exists. Set WAYLEDGER_ADMIN_USERNAME and WAYLEDGER_ADMIN_PASSWORD (10 characters or more)"
+              + " and restart to create the first administrator.");
+      return;
+    }
+    if (password.length() < 10) {
+      LOG.error("WAYLEDGER_ADMIN_PASSWORD is shorter than 10 characters; no administrator was created.");
+      return;
+    }
+    accounts.create(new UserForm(username, username, password, Role.ADMIN));
+    LOG.info("Created the first administrator '{}'.", username);
+  }
+}

@@ -1,0 +1,217 @@
+package com.wayledger.board;
+
+import com.wayledger.site.Site;
+import jakarta.persistence.AttributeOverride;
+import jakarta.persistence.AttributeOverrides;
+import jakarta.persistence.Column;
+import jakarta.persistence.Embedded;
+import jakarta.persistence.Entity;
+import jakarta.persistence.GeneratedValue;
+import jakarta.persistence.GenerationType;
+import jakarta.persistence.Id;
+import jakarta.persistence.JoinColumn;
+import jakarta.persistence.ManyToOne;
+import jakarta.persistence.OneToMany;
+import jakarta.persistence.OrderBy;
+import jakarta.persistence.PrePersist;
+import jakarta.persistence.PreUpdate;
+import jakarta.persistence.Table;
+import jakarta.persistence.Version;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.List;
+
+/** A distribution board, fed from the site's origin or from a way of a parent board. */
+@Entity
+@Table(name = "board")
+public class Board {
+
+  @Id
+  @GeneratedValue(strategy = GenerationType.IDENTITY)
+  private Long id;
+
+  @ManyToOne(optional = false)
+  @JoinColumn(name = "site_id")
+  private Site site;
+
+  private String reference;
+  private String location;
+  private int phases;
+  private int wayCount;
+  private Double busbarRatingAmps;
+
+  @Embedded
+  @AttributeOverrides({
+    @AttributeOverride(name = "kind", column = @Column(name = "incomer_kind")),
+    @AttributeOverride(name = "curve", column = @Column(name = "incomer_curve")),
+    @AttributeOverride(name = "ratingAmps", column = @Column(name = "incomer_rating_amps")),
+    @AttributeOverride(name = "poles", column = @Column(name = "incomer_poles")),
+    @AttributeOverride(
+        name = "breakingCapacityKiloAmps",
+        column = @Column(name = "incomer_breaking_capacity_kiloamps")),
+    @AttributeOverride(name = "residualMilliAmps", column = @Column(name = "incomer_residual_milliamps")),
+    @AttributeOverride(name = "rcdType", column = @Column(name = "incomer_rcd_type"))
+  })
+  private DeviceDetails incomer;
+
+  @ManyToOne
+  @JoinColumn(name = "parent_board_id")
+  private Board parent;
+
+  private Long fedFromCircuitId;
+
+  @Embedded
+  @AttributeOverrides({
+    @AttributeOverride(name = "lineCsaSquareMillimetres", column = @Column(name = "submain_line_csa_mm2")),
+    @AttributeOverride(
+        name = "protectiveCsaSquareMillimetres", column = @Column(name = "submain_cpc_csa_mm2")),
+    @AttributeOverride(name = "material", column = @Column(name = "submain_material")),
+    @AttributeOverride(name = "insulation", column = @Column(name = "submain_insulation")),
+    @AttributeOverride(name = "lengthMetres", column = @Column(name = "submain_length_metres")),
+    @AttributeOverride(
+        name = "installationMethod", column = @Column(name = "submain_installation_method")),
+    @AttributeOverride(name = "ambientCelsius", column = @Column(name = "submain_ambient_celsius")),
+    @AttributeOverride(name = "groupedCircuits", column = @Column(name = "submain_grouped_circuits")),
+    @AttributeOverride(
+        name = "thermalInsulationMillimetres", column = @Column(name = "submain_thermal_insulation_mm"))
+  })
+  private CableDetails submain;
+
+  private double unbalanceLimitPercent;
+  private double coincidenceFactor;
+  private String diversityMethod;
+
+  @Column(name = "measured_ze_ohms")
+  private Double measuredExternalLoopImpedanceOhms;
+
+  @Column(name = "measured_fault_current_kiloamps")
+  private Double measuredFaultCurrentKiloAmps;
+
+  @Version private long version;
+
+  private Instant createdAt;
+  private Instant updatedAt;
+
+  @OneToMany(mappedBy = "board")
+  @OrderBy("wayNumber, position")
+  private List<Circuit> circuits = new ArrayList<>();
+
+  protected Board() {}
+
+  public Board(Site site) {
+    this.site = site;
+  }
+
+  @PrePersist
+  @PreUpdate
+  void touch() {
+    updatedAt = Instant.now();
+    if (createdAt == null) {
+      createdAt = updatedAt;
+    }
+  }
+
+  /** Copies every editable field from a validated form; the parent is resolved by the service. */
+  void apply(BoardForm form, Board parentBoard) {
+    reference = form.reference().strip();
+    location = form.location() == null || form.location().isBlank() ? null : form.location().strip();
+    phases = form.phases();
+    wayCount = form.wayCount();
+    busbarRatingAmps = form.busbarRatingAmps();
+    incomer = form.incomerDevice();
+    parent = parentBoard;
+    fedFromCircuitId = parentBoard == null ? null : form.fedFromCircuitId();
+    submain = form.submainCable();
+    unbalanceLimitPercent = form.unbalanceLimitPercent();
+    coincidenceFactor = form.coincidenceFactor();
+    diversityMethod =
+        form.diversityMethod() == null || form.diversityMethod().isBlank() ? null : form.diversityMethod();
+    measuredExternalLoopImpedanceOhms = form.measuredExternalLoopImpedanceOhms();
+    measuredFaultCurrentKiloAmps = form.measuredFaultCurrentKiloAmps();
+  }
+
+  /** Marks the board changed so that its version moves when only its circuits changed. */
+  void markScheduleChanged() {
+    updatedAt = Instant.now();
+  }
+
+  public boolean isThreePhase() {
+    return phases == 3;
+  }
+
+  public Long getId() {
+    return id;
+  }
+
+  public Site getSite() {
+    return site;
+  }
+
+  public String getReference() {
+    return reference;
+  }
+
+  public String getLocation() {
+    return location;
+  }
+
+  public int getPhases() {
+    return phases;
+  }
+
+  public int getWayCount() {
+    return wayCount;
+  }
+
+  public Double getBusbarRatingAmps() {
+    return busbarRatingAmps;
+  }
+
+  public DeviceDetails getIncomer() {
+    return incomer;
+  }
+
+  public Board getParent() {
+    return parent;
+  }
+
+  public Long getFedFromCircuitId() {
+    return fedFromCircuitId;
+  }
+
+  public CableDetails getSubmain() {
+    return submain;
+  }
+
+  public double getUnbalanceLimitPercent() {
+    return unbalanceLimitPercent;
+  }
+
+  public double getCoincidenceFactor() {
+    return coincidenceFactor;
+  }
+
+  public String getDiversityMethod() {
+    return diversityMethod;
+  }
+
+  public Double getMeasuredExternalLoopImpedanceOhms() {
+    return measuredExternalLoopImpedanceOhms;
+  }
+
+  public Double getMeasuredFaultCurrentKiloAmps() {
+    return measuredFaultCurrentKiloAmps;
+  }
+
+  public long getVersion() {
+    return version;
+  }
+
+  public Instant getUpdatedAt() {
+    return updatedAt;
+  }
+
+  public List<Circuit> getCircuits() {
+    return circuits;
+  }
+}

@@ -1,0 +1,146 @@
+package com.wayledger.board;
+
+import com.wayledger.engine.ConductorMaterial;
+import com.wayledger.engine.DeviceKind;
+import com.wayledger.engine.InstallationMethod;
+import com.wayledger.engine.Insulation;
+import com.wayledger.engine.RcdType;
+import com.wayledger.engine.TripCurve;
+import com.wayledger.site.Site;
+import com.wayledger.site.SiteService;
+import com.wayledger.system.FormRecovery;
+import com.wayledger.system.FormStatus;
+import com.wayledger.system.RuleViolation;
+import jakarta.servlet.http.HttpServletRequest;
+import jakarta.servlet.http.HttpServletResponse;
+import jakarta.validation.Valid;
+import org.springframework.stereotype.Controller;
+import org.springframework.ui.Model;
+import org.springframework.validation.BindingResult;
+import org.springframework.web.bind.annotation.GetMapping;
+import org.springframework.web.bind.annotation.ModelAttribute;
+import org.springframework.web.bind.annotation.PathVariable;
+import org.springframework.web.bind.annotation.PostMapping;
+import org.springframework.web.servlet.mvc.support.RedirectAttributes;
+
+/** A site's page with its board tree, and the board create/edit/delete forms. */
+@Controller
+public class BoardController {
+
+  private static final String FORM_VIEW = "board/form";
+
+  private final BoardService boards;
+  private final SiteService sites;
+  private final SchedulePage schedulePage;
+
+  public BoardController(BoardService boards, SiteService sites, SchedulePage schedulePage) {
+    this.boards = boards;
+    this.sites = sites;
+    this.schedulePage = schedulePage;
+  }
+
+  @ModelAttribute
+  void choices(Model model) {
+    model.addAttribute("deviceKinds", DeviceKind.values());
+    model.addAttribute("tripCurves", TripCurve.values());
+    model.addAttribute("rcdTypes", RcdType.values());
+    model.addAttribute("materials", ConductorMaterial.values());
+    model.addAttribute("insulations", Insulation.values());
+    model.addAttribute("installationMethods", InstallationMethod.values());
+  }
+
+  @GetMapping("/sites/{siteId}")
+  public String site(@PathVariable long siteId, Model model) {
+    model.addAttribute("site", sites.get(siteId));
+    model.addAttribute("tree", boards.tree(siteId));
+    return "board/site";
+  }
+
+  @GetMapping("/sites/{siteId}/boards/new")
+  public String newBoard(@PathVariable long siteId, Model model) {
+    Site site = sites.get(siteId);
+    model.addAttribute("site", site);
+    model.addAttribute("parents", boards.onSite(siteId));
+    model.addAttribute("form", BoardForm.blank(site.getPhases()));
+    return FORM_VIEW;
+  }
+
+  @PostMapping("/sites/{siteId}/boards")
+  public String create(
+      @PathVariable long siteId,
+      @Valid @ModelAttribute("form") BoardForm form,
+      BindingResult errors,
+      HttpServletRequest request,
+      Model model,
+      HttpServletResponse response) {
+    form = FormRecovery.ensure(form, errors, model, "form", BoardForm.class, request);
+    model.addAttribute("site", sites.get(siteId));
+    model.addAttribute("parents", boards.onSite(siteId));
+    if (errors.hasErrors()) {
+      return FormStatus.invalid(response, FORM_VIEW);
+    }
+    try {
+      return "redirect:/boards/" + boards.create(siteId, form).getId();
+    } catch (RuleViolation violation) {
+      FormStatus.reject(errors, violation);
+      return FormStatus.invalid(response, FORM_VIEW);
+    }
+  }
+
+  @GetMapping("/boards/{id}")
+  public String board(@PathVariable long id, Model model) {
+    schedulePage.fill(model, id);
+    return "board/board";
+  }
+
+  @GetMapping("/boards/{id}/edit")
+  public String edit(@PathVariable long id, Model model) {
+    Board board = boards.get(id);
+    model.addAttribute("board", board);
+    model.addAttribute("site", board.getSite());
+    model.addAttribute("parents", parentsFor(board));
+    model.addAttribute("form", BoardForm.of(board));
+    return FORM_VIEW;
+  }
+
+  @PostMapping("/boards/{id}")
+  public String update(
+      @PathVariable long id,
+      @Valid @ModelAttribute("form") BoardForm form,
+      BindingResult errors,
+      HttpServletRequest request,
+      Model model,
+      HttpServletResponse response) {
+    form = FormRecovery.ensure(form, errors, model, "form", BoardForm.class, request);
+    Board board = boards.get(id);
+    model.addAttribute("board", board);
+    model.addAttribute("site", board.getSite());
+    model.addAttribute("parents", parentsFor(board));
+    if (errors.hasErrors()) {
+      return FormStatus.invalid(response, FORM_VIEW);
+    }
+    try {
+      boards.update(id, form);
+      return "redirect:/boards/" + id;
+    } catch (RuleViolation violation) {
+      FormStatus.reject(errors, violation);
+      return FormStatus.invalid(response, FORM_VIEW);
+    }
+  }
+
+  @PostMapping("/boards/{id}/delete")
+  public String delete(@PathVariable long id, RedirectAttributes redirect) {
+    try {
+      return "redirect:/sites/" + boards.delete(id);
+    } catch (RuleViolation violation) {
+      redirect.addFlashAttribute("problem", violation.messageCode());
+      return "redirect:/boards/" + id;
+    }
+  }
+
+  private java.util.List<Board> parentsFor(Board board) {
+    return boards.onSite(board.getSite().getId()).stream()
+        .filter(candidate -> !candidate.getId().equals(board.getId()))
+        .toList();
+  }
+}

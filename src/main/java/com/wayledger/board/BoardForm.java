@@ -1,0 +1,112 @@
+package com.wayledger.board;
+
+import com.wayledger.engine.ConductorMaterial;
+import com.wayledger.engine.DeviceKind;
+import com.wayledger.engine.InstallationMethod;
+import com.wayledger.engine.Insulation;
+import com.wayledger.engine.RcdType;
+import com.wayledger.engine.TripCurve;
+import jakarta.validation.constraints.DecimalMax;
+import jakarta.validation.constraints.DecimalMin;
+import jakarta.validation.constraints.Max;
+import jakarta.validation.constraints.Min;
+import jakarta.validation.constraints.NotBlank;
+import jakarta.validation.constraints.NotNull;
+import jakarta.validation.constraints.Positive;
+import jakarta.validation.constraints.Size;
+
+/** What a user may edit on a board. */
+public record BoardForm(
+    @NotBlank @Size(max = 40) String reference,
+    @Size(max = 200) String location,
+    @NotNull Integer phases,
+    @NotNull @Min(1) @Max(96) Integer wayCount,
+    @Positive @DecimalMax("6300") Double busbarRatingAmps,
+    DeviceKind incomerKind,
+    TripCurve incomerCurve,
+    @Positive @DecimalMax("6300") Double incomerRatingAmps,
+    @Min(1) @Max(4) Integer incomerPoles,
+    @Positive @DecimalMax("200") Double incomerBreakingCapacityKiloAmps,
+    @Positive @DecimalMax("3000") Double incomerResidualMilliAmps,
+    RcdType incomerRcdType,
+    Long parentBoardId,
+    Long fedFromCircuitId,
+    @Positive @DecimalMax("630") Double submainLineCsa,
+    @Positive @DecimalMax("630") Double submainCpcCsa,
+    ConductorMaterial submainMaterial,
+    Insulation submainInsulation,
+    @Positive @DecimalMax("5000") Double submainLengthMetres,
+    InstallationMethod submainInstallationMethod,
+    @DecimalMin("-30") @DecimalMax("90") Double submainAmbientCelsius,
+    @Min(1) @Max(100) Integer submainGroupedCircuits,
+    @Min(0) @Max(100000) Integer submainThermalInsulationMm,
+    @NotNull @DecimalMin(value = "0", inclusive = false) @DecimalMax("100") Double unbalanceLimitPercent,
+    @NotNull @DecimalMin(value = "0", inclusive = false) @DecimalMax("1") Double coincidenceFactor,
+    @Size(max = 60) String diversityMethod,
+    @Positive @DecimalMax("100") Double measuredExternalLoopImpedanceOhms,
+    @Positive @DecimalMax("200") Double measuredFaultCurrentKiloAmps,
+    Long version) {
+
+  /** Default unbalance limit for a new board, %. Common practice: 10 % keeps neutral current modest. */
+  public static final double DEFAULT_UNBALANCE_LIMIT_PERCENT = 10.0;
+
+  public static BoardForm blank(int sitePhases) {
+    return new BoardForm(
+        "", "", sitePhases, sitePhases == 3 ? 12 : 10, null, DeviceKind.MCCB, null, null, null, null,
+        null, null, null, null, null, null, ConductorMaterial.COPPER, Insulation.THERMOPLASTIC_70, null,
+        null, null, null, null, DEFAULT_UNBALANCE_LIMIT_PERCENT, 1.0, null, null, null, null);
+  }
+
+  public static BoardForm of(Board board) {
+    DeviceDetails incomer = board.getIncomer();
+    CableDetails submain = board.getSubmain();
+    boolean hasIncomer = incomer != null;
+    boolean hasSubmain = submain != null;
+    return new BoardForm(
+        board.getReference(),
+        board.getLocation(),
+        board.getPhases(),
+        board.getWayCount(),
+        board.getBusbarRatingAmps(),
+        hasIncomer ? incomer.getKind() : null,
+        hasIncomer ? incomer.getCurve() : null,
+        hasIncomer ? incomer.getRatingAmps() : null,
+        hasIncomer ? incomer.getPoles() : null,
+        hasIncomer ? incomer.getBreakingCapacityKiloAmps() : null,
+        hasIncomer ? incomer.getResidualMilliAmps() : null,
+        hasIncomer ? incomer.getRcdType() : null,
+        board.getParent() == null ? null : board.getParent().getId(),
+        board.getFedFromCircuitId(),
+        hasSubmain ? submain.getLineCsaSquareMillimetres() : null,
+        hasSubmain ? submain.getProtectiveCsaSquareMillimetres() : null,
+        hasSubmain ? submain.getMaterial() : null,
+        hasSubmain ? submain.getInsulation() : null,
+        hasSubmain ? submain.getLengthMetres() : null,
+        hasSubmain ? submain.getInstallationMethod() : null,
+        hasSubmain ? submain.getAmbientCelsius() : null,
+        hasSubmain ? submain.getGroupedCircuits() : null,
+        hasSubmain ? submain.getThermalInsulationMillimetres() : null,
+        board.getUnbalanceLimitPercent(),
+        board.getCoincidenceFactor(),
+        board.getDiversityMethod(),
+        board.getMeasuredExternalLoopImpedanceOhms(),
+        board.getMeasuredFaultCurrentKiloAmps(),
+        board.getVersion());
+  }
+
+  DeviceDetails incomerDevice() {
+    if (incomerKind == null) {
+      return null;
+    }
+    return new DeviceDetails(
+        incomerKind, incomerCurve, incomerRatingAmps, incomerPoles, incomerBreakingCapacityKiloAmps,
+        incomerResidualMilliAmps, incomerRcdType);
+  }
+
+  CableDetails submainCable() {
+    return new CableDetails(
+        submainLineCsa, submainCpcCsa, submainMaterial, submainInsulation, submainLengthMetres,
+        submainInstallationMethod, submainAmbientCelsius, submainGroupedCircuits,
+        submainThermalInsulationMm);
+  }
+}

@@ -1,0 +1,149 @@
+package com.wayledger.board;
+
+import com.wayledger.site.Site;
+import com.wayledger.site.SiteService;
+import com.wayledger.system.NotFoundException;
+import com.wayledger.system.RuleViolation;
+import com.wayledger.system.StaleEditException;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.stream.Collectors;
+import org.springframework.stereotype.Service;
+import org.springframework.transaction.annotation.Transactional;
+
+/** Creates, edits and finds boards, and keeps the board tree of a site a tree. */
+@Service
+public class BoardService {
+
+  private final BoardRepository boards;
+  private final CircuitRepository circuits;
+  private final SiteService sites;
+
+  public BoardService(BoardRepository boards, CircuitRepository circuits, SiteService sites) {
+    this.boards = boards;
+    this.circuits = circuits;
+    this.sites = sites;
+  }
+
+  @Transactional(readOnly = true)
+  public Board get(long id) {
+    return boards.findById(id).orElseThrow(() -> new NotFoundException("Board", id));
+  }
+
+  @Transactional(readOnly = true)
+  public List<Board> onSite(long siteId) {
+    return boards.findBySite(siteId);
+  }
+
+  /** The site's boards in tree order (each parent before its children), with their depth. */
+  @Transactional(readOnly = true)
+  public List<BoardTreeNode> tree(long siteId) {
+    List<Board> all = boards.findBySite(siteId);
+    Map<Long, List<Board>> byParent =
+        all.stream()
+            .filter(board -> board.getParent() != null)
+            .collect(Collectors.groupingBy(board -> board.getParent().getId()));
+    List<BoardTreeNode> ordered = new ArrayList<>();
+    all.stream()
+        .filter(board -> board.getParent() == null)
+        .sorted(Comparator.comparing(Board::getReference))
+        .forEach(root -> walk(root, 0, byParent, ordered));
+    return ordered;
+  }
+
+  private static void walk(
+      Board board, int depth, Map<Long, List<Board>> byParent, List<BoardTreeNode> ordered) {
+    ordered.add(new BoardTreeNode(board, depth));
+    byParent.getOrDefault(board.getId(), List.of()).stream()
+        .sorted(Comparator.comparing(Board::getReference))
+        .forEach(child -> walk(child, depth + 1, byParent, ordered));
+  }
+
+  @Transactional
+  public Board create(long siteId, BoardForm form) {
+    Site site = sites.get(siteId);
+    Board parent = checkRules(site, form, null);
+    Board board = new Board(site);
+    board.apply(form, parent);
+    return boards.saveAndFlush(board);
+  }
+
+  @Transactional
+  public Board update(long boardId, BoardForm form) {
+    Board board = get(boardId);
+    if (form.version() != null && !Objects.equals(form.version(), board.getVersion())) {
+      throw new StaleEditException("Board " + board.getReference());
+    }
+    Board parent = checkRules(board.getSite(), form, board);
+    board.apply(form, parent);
+    return boards.saveAndFlush(board);
+  }
+
+  /** Deletes a board that feeds no other board; returns its site's id. */
+  @Transactional
+  public long delete(long boardId) {
+    Board board = get(boardId);
+    if (boards.countChildren(boardId) > 0) {
+      throw new RuleViolation("reference", "board.delete.hasChildren");
+    }
+    long siteId = board.getSite().getId();
+    boards.delete(board);
+    return siteId;
+  }
+
+  private Board checkRules(Site site, BoardForm form, Board existing) {
+    if (form.phases() != 1 && form.phases() != 3) {
+      throw new RuleViolation("phases", "board.phases.invalid");
+    }
+    if (form.phases() == 3 && site.getPhases() == 1) {
+      throw new RuleViolation("phases", "board.phases.beyondSupply");
+    }
+    String reference = form.reference().strip();
+    boolean taken =
+        existing == null
+            ? boards.existsBySiteIdAndReferenceIgnoreCase(site.getId(), reference)
+            : boards.existsBySiteIdAndReferenceIgnoreCaseAndIdNot(site.getId(), reference, existing.getId());
+    if (taken) {
+      throw new RuleViolation("reference", "board.reference.taken");
+    }
+    if (existing != null) {
+      Integer highestWay = circuits.highestWay(existing.getId());
+      if (highestWay != null && form.wayCount() < highestWay) {
+        throw new RuleViolation("wayCount", "board.wayCount.belowUsed", highestWay);
+      }
+    }
+    if (form.parentBoardId() == null) {
+      if (form.fedFromCircuitId() != null) {
+        throw new RuleViolation("fedFromCircuitId", "board.fedFrom.withoutParent");
+      }
+      return null;
+    }
+    Board parent =
+        boards
+            .findById(form.parentBoardId())
+            .filter(candidate -> candidate.getSite().getId().equals(site.getId()))
+            .orElseThrow(() -> new RuleViolation("parentBoardId", "board.parent.unknown"));
+    for (Board up = parent; up != null; up = up.getParent()) {
+      if (existing != null && up.getId().equals(existing.getId())) {
+        throw new RuleViolation("parentBoardId", "board.parent.cycle");
+      }
+    }
+    if (form.phases() == 3 && !parent.isThreePhase()) {
+      throw new RuleViolation("phases", "board.phases.beyondParent");
+    }
+    if (form.fedFromCircuitId() != null) {
+      boolean onParent =
+          circuits
+              .findById(form.fedFromCircuitId())
+              .map(circuit -> circuit.getBoard().getId().equals(parent.getId()))
+              .orElse(false);
+      if (!onParent) {
+        throw new RuleViolation("fedFromCircuitId", "board.fedFrom.notOnParent");
+      }
+    }
+    return parent;
+  }
+}

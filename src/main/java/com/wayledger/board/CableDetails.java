@@ -1,0 +1,138 @@
+package com.wayledger.board;
+
+import com.wayledger.engine.CableSpec;
+import com.wayledger.engine.ConductorMaterial;
+import com.wayledger.engine.InstallationMethod;
+import com.wayledger.engine.Insulation;
+import jakarta.persistence.Column;
+import jakarta.persistence.Embeddable;
+import jakarta.persistence.EnumType;
+import jakarta.persistence.Enumerated;
+
+/** A cable as stored on a circuit or as a board's submain (columns prefixed by the owner). */
+@Embeddable
+public class CableDetails {
+
+  @Column(name = "line_csa_mm2")
+  private Double lineCsaSquareMillimetres;
+
+  @Column(name = "cpc_csa_mm2")
+  private Double protectiveCsaSquareMillimetres;
+
+  @Enumerated(EnumType.STRING)
+  private ConductorMaterial material;
+
+  @Enumerated(EnumType.STRING)
+  private Insulation insulation;
+
+  private Double lengthMetres;
+
+  @Enumerated(EnumType.STRING)
+  private InstallationMethod installationMethod;
+
+  private Double ambientCelsius;
+  private Integer groupedCircuits;
+
+  @Column(name = "thermal_insulation_mm")
+  private Integer thermalInsulationMillimetres;
+
+  protected CableDetails() {}
+
+  public CableDetails(
+      Double lineCsaSquareMillimetres,
+      Double protectiveCsaSquareMillimetres,
+      ConductorMaterial material,
+      Insulation insulation,
+      Double lengthMetres,
+      InstallationMethod installationMethod,
+      Double ambientCelsius,
+      Integer groupedCircuits,
+      Integer thermalInsulationMillimetres) {
+    this.lineCsaSquareMillimetres = lineCsaSquareMillimetres;
+    this.protectiveCsaSquareMillimetres = protectiveCsaSquareMillimetres;
+    this.material = material;
+    this.insulation = insulation;
+    this.lengthMetres = lengthMetres;
+    this.installationMethod = installationMethod;
+    this.ambientCelsius = ambientCelsius;
+    this.groupedCircuits = groupedCircuits;
+    this.thermalInsulationMillimetres = thermalInsulationMillimetres;
+  }
+
+  /** Whether anything at all is recorded about this cable. */
+  public boolean isRecorded() {
+    return lineCsaSquareMillimetres != null || lengthMetres != null || material != null;
+  }
+
+  /** The engine's view of this cable, or null when nothing is recorded. Copper and 70 °C when unstated. */
+  CableSpec toSpec() {
+    if (!isRecorded()) {
+      return null;
+    }
+    return new CableSpec(
+        lineCsaSquareMillimetres,
+        protectiveCsaSquareMillimetres,
+        material == null ? ConductorMaterial.COPPER : material,
+        insulation == null ? Insulation.THERMOPLASTIC_70 : insulation,
+        lengthMetres,
+        installationMethod,
+        ambientCelsius,
+        groupedCircuits,
+        thermalInsulationMillimetres);
+  }
+
+  /** Short text such as "2.5/1.5 mm² 18 m". */
+  public String label() {
+    if (!isRecorded()) {
+      return "";
+    }
+    StringBuilder text = new StringBuilder();
+    if (lineCsaSquareMillimetres != null) {
+      text.append(Numbers.plain(lineCsaSquareMillimetres));
+      if (protectiveCsaSquareMillimetres != null) {
+        text.append('/').append(Numbers.plain(protectiveCsaSquareMillimetres));
+      }
+      text.append(" mm²");
+    }
+    if (lengthMetres != null) {
+      text.append(' ').append(Numbers.plain(lengthMetres)).append(" m");
+    }
+    return text.toString().strip();
+  }
+
+  public Double getLineCsaSquareMillimetres() {
+    return lineCsaSquareMillimetres;
+  }
+
+  public Double getProtectiveCsaSquareMillimetres() {
+    return protectiveCsaSquareMillimetres;
+  }
+
+  public ConductorMaterial getMaterial() {
+    return material;
+  }
+
+  public Insulation getInsulation() {
+    return insulation;
+  }
+
+  public Double getLengthMetres() {
+    return lengthMetres;
+  }
+
+  public InstallationMethod getInstallationMethod() {
+    return installationMethod;
+  }
+
+  public Double getAmbientCelsius() {
+    return ambientCelsius;
+  }
+
+  public Integer getGroupedCircuits() {
+    return groupedCircuits;
+  }
+
+  public Integer getThermalInsulationMillimetres() {
+    return thermalInsulationMillimetres;
+  }
+}

@@ -1,0 +1,166 @@
+package com.wayledger.board;
+
+import com.wayledger.engine.PhasePosition;
+import com.wayledger.engine.WayStatus;
+import jakarta.persistence.AttributeOverride;
+import jakarta.persistence.AttributeOverrides;
+import jakarta.persistence.CascadeType;
+import jakarta.persistence.Column;
+import jakarta.persistence.Embedded;
+import jakarta.persistence.Entity;
+import jakarta.persistence.EnumType;
+import jakarta.persistence.Enumerated;
+import jakarta.persistence.GeneratedValue;
+import jakarta.persistence.GenerationType;
+import jakarta.persistence.Id;
+import jakarta.persistence.JoinColumn;
+import jakarta.persistence.ManyToOne;
+import jakarta.persistence.OneToMany;
+import jakarta.persistence.OrderBy;
+import jakarta.persistence.Table;
+import jakarta.persistence.Version;
+import java.util.ArrayList;
+import java.util.List;
+
+/** What one position (or three positions, for a three-pole device) of a board holds. */
+@Entity
+@Table(name = "circuit")
+public class Circuit {
+
+  @Id
+  @GeneratedValue(strategy = GenerationType.IDENTITY)
+  private Long id;
+
+  @ManyToOne(optional = false)
+  @JoinColumn(name = "board_id")
+  private Board board;
+
+  private int wayNumber;
+
+  @Enumerated(EnumType.STRING)
+  private PhasePosition position;
+
+  private String description;
+
+  @Enumerated(EnumType.STRING)
+  private WayStatus status;
+
+  private boolean lockedForBalancing;
+
+  @Embedded
+  @AttributeOverrides({
+    @AttributeOverride(name = "kind", column = @Column(name = "device_kind")),
+    @AttributeOverride(name = "curve", column = @Column(name = "device_curve")),
+    @AttributeOverride(name = "ratingAmps", column = @Column(name = "device_rating_amps")),
+    @AttributeOverride(name = "poles", column = @Column(name = "device_poles")),
+    @AttributeOverride(
+        name = "breakingCapacityKiloAmps",
+        column = @Column(name = "device_breaking_capacity_kiloamps")),
+    @AttributeOverride(name = "residualMilliAmps", column = @Column(name = "device_residual_milliamps")),
+    @AttributeOverride(name = "rcdType", column = @Column(name = "device_rcd_type"))
+  })
+  private DeviceDetails device;
+
+  @Embedded
+  @AttributeOverrides({
+    @AttributeOverride(name = "lineCsaSquareMillimetres", column = @Column(name = "cable_line_csa_mm2")),
+    @AttributeOverride(name = "protectiveCsaSquareMillimetres", column = @Column(name = "cable_cpc_csa_mm2")),
+    @AttributeOverride(name = "material", column = @Column(name = "cable_material")),
+    @AttributeOverride(name = "insulation", column = @Column(name = "cable_insulation")),
+    @AttributeOverride(name = "lengthMetres", column = @Column(name = "cable_length_metres")),
+    @AttributeOverride(name = "installationMethod", column = @Column(name = "cable_installation_method")),
+    @AttributeOverride(name = "ambientCelsius", column = @Column(name = "cable_ambient_celsius")),
+    @AttributeOverride(name = "groupedCircuits", column = @Column(name = "cable_grouped_circuits")),
+    @AttributeOverride(
+        name = "thermalInsulationMillimetres", column = @Column(name = "cable_thermal_insulation_mm"))
+  })
+  private CableDetails cable;
+
+  @Column(name = "measured_zs_ohms")
+  private Double measuredLoopImpedanceOhms;
+
+  @Version private long version;
+
+  @OneToMany(mappedBy = "circuit", cascade = CascadeType.ALL, orphanRemoval = true)
+  @OrderBy("lineNumber")
+  private List<LoadItem> loads = new ArrayList<>();
+
+  protected Circuit() {}
+
+  Circuit(Board board) {
+    this.board = board;
+  }
+
+  /** Copies the circuit's own fields (not its loads) from a validated form. */
+  void apply(CircuitForm form) {
+    wayNumber = form.wayNumber();
+    position = form.position();
+    description = form.description().strip();
+    status = form.status();
+    lockedForBalancing = Boolean.TRUE.equals(form.lockedForBalancing());
+    device = status == WayStatus.EMPTY ? null : form.deviceDetails();
+    cable = status == WayStatus.IN_USE ? form.cableDetails() : null;
+    measuredLoopImpedanceOhms = form.measuredLoopImpedanceOhms();
+  }
+
+  void addLoad(LoadItem load) {
+    load.attachTo(this, loads.stream().mapToInt(LoadItem::getLineNumber).max().orElse(0) + 1);
+    loads.add(load);
+  }
+
+  /** Label of the position: "3 L2", or "3 L1–L3" for a three-pole device, or "3" on a single-phase board. */
+  public String positionLabel() {
+    if (!board.isThreePhase()) {
+      return Integer.toString(wayNumber);
+    }
+    return wayNumber + " " + (position == PhasePosition.THREE_POLE ? "L1–L3" : position.name());
+  }
+
+  public Long getId() {
+    return id;
+  }
+
+  public Board getBoard() {
+    return board;
+  }
+
+  public int getWayNumber() {
+    return wayNumber;
+  }
+
+  public PhasePosition getPosition() {
+    return position;
+  }
+
+  public String getDescription() {
+    return description;
+  }
+
+  public WayStatus getStatus() {
+    return status;
+  }
+
+  public boolean isLockedForBalancing() {
+    return lockedForBalancing;
+  }
+
+  public DeviceDetails getDevice() {
+    return device;
+  }
+
+  public CableDetails getCable() {
+    return cable;
+  }
+
+  public Double getMeasuredLoopImpedanceOhms() {
+    return measuredLoopImpedanceOhms;
+  }
+
+  public long getVersion() {
+    return version;
+  }
+
+  public List<LoadItem> getLoads() {
+    return loads;
+  }
+}

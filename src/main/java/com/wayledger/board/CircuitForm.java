@@ -1,0 +1,129 @@
+package com.wayledger.board;
+
+import com.wayledger.engine.ConductorMaterial;
+import com.wayledger.engine.DeviceKind;
+import com.wayledger.engine.InstallationMethod;
+import com.wayledger.engine.Insulation;
+import com.wayledger.engine.LoadCategory;
+import com.wayledger.engine.PhasePosition;
+import com.wayledger.engine.RatingUnit;
+import com.wayledger.engine.RcdType;
+import com.wayledger.engine.TripCurve;
+import com.wayledger.engine.WayStatus;
+import jakarta.validation.constraints.DecimalMax;
+import jakarta.validation.constraints.DecimalMin;
+import jakarta.validation.constraints.Max;
+import jakarta.validation.constraints.Min;
+import jakarta.validation.constraints.NotBlank;
+import jakarta.validation.constraints.NotNull;
+import jakarta.validation.constraints.Positive;
+import jakarta.validation.constraints.Size;
+
+/**
+ * A circuit row as typed on the schedule: position, device, cable and, when the circuit is new, an optional
+ * first load so that a schedule can be typed one row per circuit.
+ */
+public record CircuitForm(
+    @NotNull @Min(1) @Max(96) Integer wayNumber,
+    @NotNull PhasePosition position,
+    @NotBlank @Size(max = 120) String description,
+    @NotNull WayStatus status,
+    Boolean lockedForBalancing,
+    DeviceKind deviceKind,
+    TripCurve deviceCurve,
+    @Positive @DecimalMax("6300") Double deviceRatingAmps,
+    @Min(1) @Max(4) Integer devicePoles,
+    @Positive @DecimalMax("200") Double deviceBreakingCapacityKiloAmps,
+    @Positive @DecimalMax("3000") Double deviceResidualMilliAmps,
+    RcdType deviceRcdType,
+    @Positive @DecimalMax("630") Double cableLineCsa,
+    @Positive @DecimalMax("630") Double cableCpcCsa,
+    ConductorMaterial cableMaterial,
+    Insulation cableInsulation,
+    @Positive @DecimalMax("5000") Double cableLengthMetres,
+    InstallationMethod cableInstallationMethod,
+    @DecimalMin("-30") @DecimalMax("90") Double cableAmbientCelsius,
+    @Min(1) @Max(100) Integer cableGroupedCircuits,
+    @Min(0) @Max(100000) Integer cableThermalInsulationMm,
+    @Positive @DecimalMax("100") Double measuredLoopImpedanceOhms,
+    @Size(max = 120) String loadDescription,
+    LoadCategory loadCategory,
+    @Min(1) @Max(10000) Integer loadQuantity,
+    @Positive @DecimalMax("10000000") Double loadRatingValue,
+    RatingUnit loadRatingUnit,
+    @DecimalMin(value = "0", inclusive = false) @DecimalMax("1") Double loadPowerFactor,
+    Long version) {
+
+  /** A new in-use circuit at a position, with a type B MCB, copper 70 °C cable and a blank first load. */
+  public static CircuitForm blankAt(int wayNumber, PhasePosition position) {
+    return new CircuitForm(
+        wayNumber, position, "", WayStatus.IN_USE, false, DeviceKind.MCB, TripCurve.B, null, null, 6.0,
+        null, null, null, null, ConductorMaterial.COPPER, Insulation.THERMOPLASTIC_70, null, null, null,
+        null, null, null, "", LoadCategory.SOCKET_OUTLETS, 1, null, RatingUnit.W, 1.0, null);
+  }
+
+  public static CircuitForm of(Circuit circuit) {
+    DeviceDetails device = circuit.getDevice();
+    CableDetails cable = circuit.getCable();
+    boolean hasDevice = device != null;
+    boolean hasCable = cable != null;
+    return new CircuitForm(
+        circuit.getWayNumber(),
+        circuit.getPosition(),
+        circuit.getDescription(),
+        circuit.getStatus(),
+        circuit.isLockedForBalancing(),
+        hasDevice ? device.getKind() : null,
+        hasDevice ? device.getCurve() : null,
+        hasDevice ? device.getRatingAmps() : null,
+        hasDevice ? device.getPoles() : null,
+        hasDevice ? device.getBreakingCapacityKiloAmps() : null,
+        hasDevice ? device.getResidualMilliAmps() : null,
+        hasDevice ? device.getRcdType() : null,
+        hasCable ? cable.getLineCsaSquareMillimetres() : null,
+        hasCable ? cable.getProtectiveCsaSquareMillimetres() : null,
+        hasCable ? cable.getMaterial() : null,
+        hasCable ? cable.getInsulation() : null,
+        hasCable ? cable.getLengthMetres() : null,
+        hasCable ? cable.getInstallationMethod() : null,
+        hasCable ? cable.getAmbientCelsius() : null,
+        hasCable ? cable.getGroupedCircuits() : null,
+        hasCable ? cable.getThermalInsulationMillimetres() : null,
+        circuit.getMeasuredLoopImpedanceOhms(),
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        circuit.getVersion());
+  }
+
+  DeviceDetails deviceDetails() {
+    if (deviceKind == null) {
+      return null;
+    }
+    return new DeviceDetails(
+        deviceKind, deviceCurve, deviceRatingAmps, devicePoles, deviceBreakingCapacityKiloAmps,
+        deviceResidualMilliAmps, deviceRcdType);
+  }
+
+  CableDetails cableDetails() {
+    return new CableDetails(
+        cableLineCsa, cableCpcCsa, cableMaterial, cableInsulation, cableLengthMetres,
+        cableInstallationMethod, cableAmbientCelsius, cableGroupedCircuits, cableThermalInsulationMm);
+  }
+
+  /** Whether the user started typing a first load (any of its value fields filled). */
+  boolean hasFirstLoad() {
+    return (loadDescription != null && !loadDescription.isBlank()) || loadRatingValue != null;
+  }
+
+  /** The first load as a load form; its fields are checked by the same rules as any load. */
+  LoadForm firstLoad() {
+    return new LoadForm(
+        loadDescription == null || loadDescription.isBlank() ? description : loadDescription,
+        loadCategory, loadQuantity == null ? 1 : loadQuantity, loadRatingValue, loadRatingUnit,
+        loadPowerFactor, null, null, false);
+  }
+}

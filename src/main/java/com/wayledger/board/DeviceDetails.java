@@ -1,0 +1,108 @@
+package com.wayledger.board;
+
+import com.wayledger.engine.DeviceKind;
+import com.wayledger.engine.DeviceSpec;
+import com.wayledger.engine.RcdType;
+import com.wayledger.engine.TripCurve;
+import jakarta.persistence.Column;
+import jakarta.persistence.Embeddable;
+import jakarta.persistence.EnumType;
+import jakarta.persistence.Enumerated;
+
+/** A protective device as stored on a circuit or as a board's incomer (columns prefixed by the owner). */
+@Embeddable
+public class DeviceDetails {
+
+  @Enumerated(EnumType.STRING)
+  private DeviceKind kind;
+
+  @Enumerated(EnumType.STRING)
+  private TripCurve curve;
+
+  private Double ratingAmps;
+  private Integer poles;
+
+  @Column(name = "breaking_capacity_kiloamps")
+  private Double breakingCapacityKiloAmps;
+
+  @Column(name = "residual_milliamps")
+  private Double residualMilliAmps;
+
+  @Enumerated(EnumType.STRING)
+  private RcdType rcdType;
+
+  protected DeviceDetails() {}
+
+  public DeviceDetails(
+      DeviceKind kind,
+      TripCurve curve,
+      Double ratingAmps,
+      Integer poles,
+      Double breakingCapacityKiloAmps,
+      Double residualMilliAmps,
+      RcdType rcdType) {
+    this.kind = kind;
+    this.curve = kind != null && kind.hasCurve() ? curve : null;
+    this.ratingAmps = ratingAmps;
+    this.poles = poles;
+    this.breakingCapacityKiloAmps = breakingCapacityKiloAmps;
+    this.residualMilliAmps = kind != null && kind.isResidualCurrent() ? residualMilliAmps : null;
+    this.rcdType = kind != null && kind.isResidualCurrent() ? rcdType : null;
+  }
+
+  /** The engine's view of this device, or null when no device kind is recorded. */
+  DeviceSpec toSpec(int defaultPoles) {
+    if (kind == null) {
+      return null;
+    }
+    return new DeviceSpec(
+        kind, curve, ratingAmps, poles == null ? defaultPoles : poles, breakingCapacityKiloAmps,
+        residualMilliAmps, rcdType);
+  }
+
+  /** Short text such as "MCB C32 6 kA" or "RCBO B16 30 mA". */
+  public String label() {
+    if (kind == null) {
+      return "";
+    }
+    StringBuilder text = new StringBuilder(kind.name()).append(' ');
+    if (curve != null) {
+      text.append(curve.name());
+    }
+    if (ratingAmps != null) {
+      text.append(Numbers.plain(ratingAmps)).append(curve == null ? " A" : "");
+    }
+    if (residualMilliAmps != null) {
+      text.append(' ').append(Numbers.plain(residualMilliAmps)).append(" mA");
+    }
+    return text.toString().strip();
+  }
+
+  public DeviceKind getKind() {
+    return kind;
+  }
+
+  public TripCurve getCurve() {
+    return curve;
+  }
+
+  public Double getRatingAmps() {
+    return ratingAmps;
+  }
+
+  public Integer getPoles() {
+    return poles;
+  }
+
+  public Double getBreakingCapacityKiloAmps() {
+    return breakingCapacityKiloAmps;
+  }
+
+  public Double getResidualMilliAmps() {
+    return residualMilliAmps;
+  }
+
+  public RcdType getRcdType() {
+    return rcdType;
+  }
+}

@@ -1,0 +1,42 @@
+package com.wayledger.board;
+
+import com.wayledger.engine.LoadCategory;
+import com.wayledger.engine.RatingUnit;
+import jakarta.validation.constraints.DecimalMax;
+import jakarta.validation.constraints.DecimalMin;
+import jakarta.validation.constraints.Max;
+import jakarta.validation.constraints.Min;
+import jakarta.validation.constraints.NotBlank;
+import jakarta.validation.constraints.NotNull;
+import jakarta.validation.constraints.Positive;
+import jakarta.validation.constraints.Size;
+
+/** One load line as typed by a user. */
+public record LoadForm(
+    @NotBlank @Size(max = 120) String description,
+    @NotNull LoadCategory category,
+    @NotNull @Min(1) @Max(10000) Integer quantity,
+    @NotNull @Positive @DecimalMax("10000000") Double ratingValue,
+    @NotNull RatingUnit ratingUnit,
+    @NotNull @DecimalMin(value = "0", inclusive = false) @DecimalMax("1") Double powerFactor,
+    @DecimalMin("1") @DecimalMax("50") Double startUpSurgeMultiple,
+    @Positive @DecimalMax("60000") Double startUpSurgeMillis,
+    boolean continuous) {
+
+  public static LoadForm blank() {
+    return new LoadForm("", LoadCategory.SOCKET_OUTLETS, 1, null, RatingUnit.W, 1.0, null, null, false);
+  }
+
+  public static LoadForm of(LoadItem load) {
+    return new LoadForm(
+        load.getDescription(),
+        load.getCategory(),
+        load.getQuantity(),
+        load.getRatingValue(),
+        load.getRatingUnit(),
+        load.getPowerFactor(),
+        load.getStartUpSurgeMultiple(),
+        load.getStartUpSurgeMillis(),
+        load.isContinuous());
+  }
+}

@@ -1,0 +1,239 @@
+package com.wayledger.board;
+
+import com.wayledger.engine.ConductorMaterial;
+import com.wayledger.engine.DeviceKind;
+import com.wayledger.engine.InstallationMethod;
+import com.wayledger.engine.Insulation;
+import com.wayledger.engine.LoadCategory;
+import com.wayledger.engine.PhasePosition;
+import com.wayledger.engine.RatingUnit;
+import com.wayledger.engine.RcdType;
+import com.wayledger.engine.TripCurve;
+import com.wayledger.engine.WayStatus;
+import com.wayledger.system.FormRecovery;
+import com.wayledger.system.FormStatus;
+import com.wayledger.system.RuleViolation;
+import jakarta.servlet.http.HttpServletRequest;
+import jakarta.servlet.http.HttpServletResponse;
+import jakarta.validation.Valid;
+import org.springframework.stereotype.Controller;
+import org.springframework.ui.Model;
+import org.springframework.validation.BindingResult;
+import org.springframework.web.bind.annotation.GetMapping;
+import org.springframework.web.bind.annotation.ModelAttribute;
+import org.springframework.web.bind.annotation.PathVariable;
+import org.springframework.web.bind.annotation.PostMapping;
+import org.springframework.web.bind.annotation.RequestHeader;
+import org.springframework.web.bind.annotation.RequestParam;
+
+/**
+ * Inline editing of a board's schedule. With htmx each request answers with the fragment to swap in (the
+ * schedule table, or the editor row with its messages and status 422); without it, with a whole page.
+ */
+@Controller
+public class ScheduleController {
+
+  private static final String HX = "HX-Request";
+  private static final String SCHEDULE_FRAGMENT = "board/schedule :: scheduleTable";
+  private static final String EDITOR_FRAGMENT = "board/schedule :: circuitEditor";
+  private static final String EDITOR_PAGE = "board/circuit";
+
+  private final ScheduleService schedule;
+  private final SchedulePage schedulePage;
+  private final BoardService boards;
+
+  public ScheduleController(ScheduleService schedule, SchedulePage schedulePage, BoardService boards) {
+    this.schedule = schedule;
+    this.schedulePage = schedulePage;
+    this.boards = boards;
+  }
+
+  @ModelAttribute
+  void choices(Model model) {
+    model.addAttribute("positions", PhasePosition.values());
+    model.addAttribute("statuses", WayStatus.values());
+    model.addAttribute("deviceKinds", DeviceKind.values());
+    model.addAttribute("tripCurves", TripCurve.values());
+    model.addAttribute("rcdTypes", RcdType.values());
+    model.addAttribute("materials", ConductorMaterial.values());
+    model.addAttribute("insulations", Insulation.values());
+    model.addAttribute("installationMethods", InstallationMethod.values());
+    model.addAttribute("categories", LoadCategory.values());
+    model.addAttribute("ratingUnits", RatingUnit.values());
+  }
+
+  @GetMapping("/boards/{boardId}/schedule")
+  public String table(@PathVariable long boardId, Model model) {
+    schedulePage.fill(model, boardId);
+    return SCHEDULE_FRAGMENT;
+  }
+
+  @GetMapping("/boards/{boardId}/circuits/new")
+  public String newCircuit(
+      @PathVariable long boardId,
+      @RequestParam int way,
+      @RequestParam PhasePosition position,
+      @RequestHeader(value = HX, required = false) String htmx,
+      Model model) {
+    model.addAttribute("board", boards.get(boardId));
+    model.addAttribute("form", CircuitForm.blankAt(way, position));
+    return htmx != null ? EDITOR_FRAGMENT : EDITOR_PAGE;
+  }
+
+  @PostMapping("/boards/{boardId}/circuits")
+  public String create(
+      @PathVariable long boardId,
+      @Valid @ModelAttribute("form") CircuitForm form,
+      BindingResult errors,
+      HttpServletRequest request,
+      @RequestHeader(value = HX, required = false) String htmx,
+      Model model,
+      HttpServletResponse response) {
+    form = FormRecovery.ensure(form, errors, model, "form", CircuitForm.class, request);
+    if (!errors.hasErrors()) {
+      try {
+        Circuit saved = schedule.addCircuit(boardId, form);
+        return savedSchedule(boardId, saved.getWayNumber(), htmx, model, response);
+      } catch (RuleViolation violation) {
+        FormStatus.reject(errors, violation);
+      }
+    }
+    model.addAttribute("board", boards.get(boardId));
+    return rejected(htmx, response);
+  }
+
+  @GetMapping("/circuits/{id}/edit")
+  public String edit(
+      @PathVariable long id, @RequestHeader(value = HX, required = false) String htmx, Model model) {
+    fillEditor(model, id, CircuitForm.of(schedule.circuit(id)));
+    return htmx != null ? EDITOR_FRAGMENT : EDITOR_PAGE;
+  }
+
+  @PostMapping("/circuits/{id}")
+  public String update(
+      @PathVariable long id,
+      @Valid @ModelAttribute("form") CircuitForm form,
+      BindingResult errors,
+      HttpServletRequest request,
+      @RequestHeader(value = HX, required = false) String htmx,
+      Model model,
+      HttpServletResponse response) {
+    form = FormRecovery.ensure(form, errors, model, "form", CircuitForm.class, request);
+    long boardId = schedule.circuit(id).getBoard().getId();
+    if (!errors.hasErrors()) {
+      try {
+        schedule.updateCircuit(id, form);
+        return savedSchedule(boardId, form.wayNumber(), htmx, model, response);
+      } catch (RuleViolation violation) {
+        FormStatus.reject(errors, violation);
+      }
+    }
+    fillEditor(model, id, null);
+    return rejected(htmx, response);
+  }
+
+  @PostMapping("/circuits/{id}/delete")
+  public String delete(
+      @PathVariable long id, @RequestHeader(value = HX, required = false) String htmx, Model model) {
+    long boardId = schedule.deleteCircuit(id);
+    return savedSchedule(boardId, null, htmx, model, null);
+  }
+
+  @PostMapping("/circuits/{id}/loads")
+  public String addLoad(
+      @PathVariable long id,
+      @Valid @ModelAttribute("loadForm") LoadForm loadForm,
+      BindingResult errors,
+      HttpServletRequest request,
+      @RequestHeader(value = HX, required = false) String htmx,
+      Model model,
+      HttpServletResponse response) {
+    loadForm = FormRecovery.ensure(loadForm, errors, model, "loadForm", LoadForm.class, request);
+    if (!errors.hasErrors()) {
+      try {
+        schedule.addLoad(id, loadForm);
+        fillEditor(model, id, CircuitForm.of(schedule.circuit(id)));
+        model.addAttribute("loadForm", LoadForm.blank());
+        return htmx != null ? EDITOR_FRAGMENT : "redirect:/circuits/" + id + "/edit";
+      } catch (RuleViolation violation) {
+        FormStatus.reject(errors, violation);
+      }
+    }
+    fillEditor(model, id, CircuitForm.of(schedule.circuit(id)));
+    return FormStatus.invalid(response, htmx != null ? EDITOR_FRAGMENT : EDITOR_PAGE);
+  }
+
+  @GetMapping("/loads/{id}/edit")
+  public String editLoad(@PathVariable long id, Model model) {
+    LoadItem load = schedule.load(id);
+    model.addAttribute("load", load);
+    model.addAttribute("circuitId", load.getCircuit().getId());
+    model.addAttribute("loadForm", LoadForm.of(load));
+    return "board/load";
+  }
+
+  @PostMapping("/loads/{id}")
+  public String updateLoad(
+      @PathVariable long id,
+      @Valid @ModelAttribute("loadForm") LoadForm loadForm,
+      BindingResult errors,
+      HttpServletRequest request,
+      Model model,
+      HttpServletResponse response) {
+    loadForm = FormRecovery.ensure(loadForm, errors, model, "loadForm", LoadForm.class, request);
+    LoadItem load = schedule.load(id);
+    long circuitId = load.getCircuit().getId();
+    if (errors.hasErrors()) {
+      model.addAttribute("load", load);
+      model.addAttribute("circuitId", circuitId);
+      return FormStatus.invalid(response, "board/load");
+    }
+    schedule.updateLoad(id, loadForm);
+    return "redirect:/circuits/" + circuitId + "/edit";
+  }
+
+  @PostMapping("/loads/{id}/delete")
+  public String deleteLoad(
+      @PathVariable long id, @RequestHeader(value = HX, required = false) String htmx, Model model) {
+    long circuitId = schedule.deleteLoad(id);
+    if (htmx == null) {
+      return "redirect:/circuits/" + circuitId + "/edit";
+    }
+    fillEditor(model, circuitId, CircuitForm.of(schedule.circuit(circuitId)));
+    return EDITOR_FRAGMENT;
+  }
+
+  private void fillEditor(Model model, long circuitId, CircuitForm form) {
+    Circuit circuit = schedule.circuit(circuitId);
+    model.addAttribute("circuit", circuit);
+    model.addAttribute("circuitLoads", schedule.loadsOf(circuitId));
+    model.addAttribute("board", boards.get(circuit.getBoard().getId()));
+    if (form != null) {
+      model.addAttribute("form", form);
+    }
+    if (!model.containsAttribute("loadForm")) {
+      model.addAttribute("loadForm", LoadForm.blank());
+    }
+  }
+
+  /**
+   * After a successful change: with htmx the whole schedule table replaces the editor row (the form aims
+   * its response at its own row, for messages; success re-aims it at the table); without, a redirect.
+   */
+  private String savedSchedule(
+      long boardId, Integer focusAfterWay, String htmx, Model model, HttpServletResponse response) {
+    if (htmx == null) {
+      return "redirect:/boards/" + boardId;
+    }
+    if (response != null) {
+      response.setHeader("HX-Retarget", "#schedule");
+      response.setHeader("HX-Reswap", "outerHTML");
+    }
+    schedulePage.fill(model, boardId, focusAfterWay);
+    return SCHEDULE_FRAGMENT;
+  }
+
+  private static String rejected(String htmx, HttpServletResponse response) {
+    return FormStatus.invalid(response, htmx != null ? EDITOR_FRAGMENT : EDITOR_PAGE);
+  }
+}

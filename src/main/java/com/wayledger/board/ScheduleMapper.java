@@ -1,0 +1,94 @@
+package com.wayledger.board;
+
+import com.wayledger.engine.BoardSpec;
+import com.wayledger.engine.CircuitSpec;
+import com.wayledger.engine.LoadSpec;
+import com.wayledger.engine.SiteSpec;
+import com.wayledger.engine.SupplySpec;
+import com.wayledger.site.Site;
+import java.util.List;
+import java.util.Map;
+import java.util.stream.Collectors;
+
+/**
+ * The one place where stored sites, boards, circuits and loads become engine inputs. Entities never reach
+ * calculation code; every screen, export and API result that computes anything goes through here.
+ */
+public final class ScheduleMapper {
+
+  private ScheduleMapper() {}
+
+  /** The whole site as the engine sees it; {@code boards} are the site's boards with their circuits. */
+  public static SiteSpec toSpec(Site site, List<Board> boards) {
+    Map<Long, Long> childByFeedingCircuit =
+        boards.stream()
+            .filter(board -> board.getFedFromCircuitId() != null)
+            .collect(Collectors.toMap(Board::getFedFromCircuitId, Board::getId, (a, b) -> a));
+    List<BoardSpec> boardSpecs =
+        boards.stream().map(board -> toSpec(board, childByFeedingCircuit)).toList();
+    return new SiteSpec(site.getId(), site.getName(), supplyOf(site), site.getDefaultDiversityMethod(), boardSpecs);
+  }
+
+  public static SupplySpec supplyOf(Site site) {
+    return new SupplySpec(
+        site.getEarthingSystem(),
+        site.getNominalVoltageVolts(),
+        site.getPhases(),
+        site.getFrequencyHertz(),
+        site.getExternalLoopImpedanceOhms(),
+        site.getProspectiveFaultCurrentKiloAmps(),
+        site.getSupplyFuseRatingAmps());
+  }
+
+  private static BoardSpec toSpec(Board board, Map<Long, Long> childByFeedingCircuit) {
+    List<CircuitSpec> circuits =
+        board.getCircuits().stream()
+            .map(circuit -> toSpec(circuit, childByFeedingCircuit.get(circuit.getId())))
+            .toList();
+    return new BoardSpec(
+        board.getId(),
+        board.getReference(),
+        board.getPhases(),
+        board.getWayCount(),
+        board.getBusbarRatingAmps(),
+        board.getIncomer() == null ? null : board.getIncomer().toSpec(board.getPhases() == 3 ? 3 : 1),
+        board.getParent() == null ? null : board.getParent().getId(),
+        board.getSubmain() == null ? null : board.getSubmain().toSpec(),
+        board.getUnbalanceLimitPercent(),
+        board.getCoincidenceFactor(),
+        board.getDiversityMethod(),
+        board.getMeasuredExternalLoopImpedanceOhms(),
+        board.getMeasuredFaultCurrentKiloAmps(),
+        circuits);
+  }
+
+  private static CircuitSpec toSpec(Circuit circuit, Long feedsBoardId) {
+    List<LoadSpec> loads = circuit.getLoads().stream().map(ScheduleMapper::toSpec).toList();
+    int poles = circuit.getPosition().isSinglePole() ? 1 : 3;
+    return new CircuitSpec(
+        circuit.getId(),
+        circuit.getWayNumber(),
+        circuit.getPosition(),
+        circuit.getDescription(),
+        circuit.getStatus(),
+        circuit.isLockedForBalancing(),
+        circuit.getDevice() == null ? null : circuit.getDevice().toSpec(poles),
+        circuit.getCable() == null ? null : circuit.getCable().toSpec(),
+        loads,
+        feedsBoardId,
+        circuit.getMeasuredLoopImpedanceOhms());
+  }
+
+  private static LoadSpec toSpec(LoadItem load) {
+    return new LoadSpec(
+        load.getDescription(),
+        load.getCategory(),
+        load.getQuantity(),
+        load.getRatingValue(),
+        load.getRatingUnit(),
+        load.getPowerFactor(),
+        load.getStartUpSurgeMultiple(),
+        load.getStartUpSurgeMillis(),
+        load.isContinuous());
+  }
+}

@@ -1,0 +1,54 @@
+package com.wayledger.board;
+
+import com.wayledger.system.NotFoundException;
+import org.springframework.stereotype.Component;
+import org.springframework.transaction.annotation.Transactional;
+import org.springframework.ui.Model;
+
+/** Gathers what the schedule table of a board needs, for the full page and for its htmx fragments. */
+@Component
+class SchedulePage {
+
+  private final BoardRepository boards;
+  private final CircuitRepository circuits;
+
+  SchedulePage(BoardRepository boards, CircuitRepository circuits) {
+    this.boards = boards;
+    this.circuits = circuits;
+  }
+
+  @Transactional(readOnly = true)
+  public Board fill(Model model, long boardId) {
+    return fill(model, boardId, null);
+  }
+
+  /**
+   * As {@link #fill(Model, long)}, and puts the keyboard focus on the first free position after the given
+   * way, so that after saving one row the next is one keystroke away.
+   */
+  @Transactional(readOnly = true)
+  public Board fill(Model model, long boardId, Integer focusAfterWay) {
+    Board board = boards.findById(boardId).orElseThrow(() -> new NotFoundException("Board", boardId));
+    var onBoard = circuits.findByBoard(boardId);
+    onBoard.forEach(circuit -> circuit.getLoads().size());
+    model.addAttribute("board", board);
+    model.addAttribute("site", board.getSite());
+    board.getSite().getName();
+    if (board.getParent() != null) {
+      board.getParent().getReference();
+    }
+    var rows = ScheduleRows.of(board, onBoard);
+    model.addAttribute("rows", rows);
+    model.addAttribute(
+        "focusElementId",
+        focusAfterWay == null
+            ? null
+            : rows.stream()
+                .filter(row -> row.isFree() && row.wayNumber() >= focusAfterWay)
+                .map(ScheduleRow::elementId)
+                .findFirst()
+                .orElse(null));
+    model.addAttribute("circuitCount", onBoard.size());
+    return board;
+  }
+}

@@ -1,0 +1,138 @@
+package com.wayledger.site;
+
+import com.wayledger.engine.EarthingSystem;
+import jakarta.persistence.Column;
+import jakarta.persistence.Entity;
+import jakarta.persistence.EnumType;
+import jakarta.persistence.Enumerated;
+import jakarta.persistence.GeneratedValue;
+import jakarta.persistence.GenerationType;
+import jakarta.persistence.Id;
+import jakarta.persistence.PrePersist;
+import jakarta.persistence.PreUpdate;
+import jakarta.persistence.Table;
+import jakarta.persistence.Version;
+import java.time.Instant;
+
+/** One installation with one supply origin. */
+@Entity
+@Table(name = "site")
+public class Site {
+
+  @Id
+  @GeneratedValue(strategy = GenerationType.IDENTITY)
+  private Long id;
+
+  private String name;
+  private String address;
+
+  @Enumerated(EnumType.STRING)
+  private EarthingSystem earthingSystem;
+
+  private double nominalVoltageVolts;
+  private int phases;
+  private double frequencyHertz;
+  private Double externalLoopImpedanceOhms;
+
+  @Column(name = "prospective_fault_current_kiloamps")
+  private Double prospectiveFaultCurrentKiloAmps;
+
+  private Double supplyFuseRatingAmps;
+  private String defaultDiversityMethod;
+  private String notes;
+
+  @Version private long version;
+
+  private Instant createdAt;
+  private Instant updatedAt;
+
+  protected Site() {}
+
+  public Site(String name) {
+    this.name = name;
+  }
+
+  @PrePersist
+  @PreUpdate
+  void touch() {
+    updatedAt = Instant.now();
+    if (createdAt == null) {
+      createdAt = updatedAt;
+    }
+  }
+
+  /** Copies every editable field from a validated form. */
+  void apply(SiteForm form) {
+    name = form.name().strip();
+    address = blankToNull(form.address());
+    earthingSystem = form.earthingSystem();
+    nominalVoltageVolts = form.nominalVoltageVolts();
+    phases = form.phases();
+    frequencyHertz = form.frequencyHertz();
+    externalLoopImpedanceOhms = form.externalLoopImpedanceOhms();
+    prospectiveFaultCurrentKiloAmps = form.prospectiveFaultCurrentKiloAmps();
+    supplyFuseRatingAmps = form.supplyFuseRatingAmps();
+    defaultDiversityMethod = blankToNull(form.defaultDiversityMethod());
+    notes = blankToNull(form.notes());
+  }
+
+  private static String blankToNull(String text) {
+    return text == null || text.isBlank() ? null : text.strip();
+  }
+
+  public Long getId() {
+    return id;
+  }
+
+  public String getName() {
+    return name;
+  }
+
+  public String getAddress() {
+    return address;
+  }
+
+  public EarthingSystem getEarthingSystem() {
+    return earthingSystem;
+  }
+
+  public double getNominalVoltageVolts() {
+    return nominalVoltageVolts;
+  }
+
+  public int getPhases() {
+    return phases;
+  }
+
+  public double getFrequencyHertz() {
+    return frequencyHertz;
+  }
+
+  public Double getExternalLoopImpedanceOhms() {
+    return externalLoopImpedanceOhms;
+  }
+
+  public Double getProspectiveFaultCurrentKiloAmps() {
+    return prospectiveFaultCurrentKiloAmps;
+  }
+
+  public Double getSupplyFuseRatingAmps() {
+    return supplyFuseRatingAmps;
+  }
+
+  public String getDefaultDiversityMethod() {
+    return defaultDiversityMethod;
+  }
+
+  public String getNotes() {
+    return notes;
+  }
+
+  public long getVersion() {
+    return version;
+  }
+
+  public Instant getUpdatedAt() {
+    return updatedAt;
+  }
+}

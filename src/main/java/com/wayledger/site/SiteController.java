@@ -1,0 +1,94 @@
+package com.wayledger.site;
+
+import com.wayledger.engine.EarthingSystem;
+import com.wayledger.system.FormRecovery;
+import com.wayledger.system.FormStatus;
+import com.wayledger.system.RuleViolation;
+import jakarta.servlet.http.HttpServletRequest;
+import jakarta.servlet.http.HttpServletResponse;
+import jakarta.validation.Valid;
+import org.springframework.stereotype.Controller;
+import org.springframework.ui.Model;
+import org.springframework.validation.BindingResult;
+import org.springframework.web.bind.annotation.GetMapping;
+import org.springframework.web.bind.annotation.ModelAttribute;
+import org.springframework.web.bind.annotation.PathVariable;
+import org.springframework.web.bind.annotation.PostMapping;
+
+/** The site list and the site create/edit forms. */
+@Controller
+public class SiteController {
+
+  private static final String FORM_VIEW = "site/form";
+
+  private final SiteService sites;
+
+  public SiteController(SiteService sites) {
+    this.sites = sites;
+  }
+
+  @ModelAttribute("earthingSystems")
+  EarthingSystem[] earthingSystems() {
+    return EarthingSystem.values();
+  }
+
+  @GetMapping({"/", "/sites"})
+  public String list(Model model) {
+    model.addAttribute("sites", sites.all());
+    return "site/list";
+  }
+
+  @GetMapping("/sites/new")
+  public String newSite(Model model) {
+    model.addAttribute("form", SiteForm.blank());
+    return FORM_VIEW;
+  }
+
+  @PostMapping("/sites")
+  public String create(
+      @Valid @ModelAttribute("form") SiteForm form, BindingResult errors,
+      HttpServletRequest request, Model model, HttpServletResponse response) {
+    form = FormRecovery.ensure(form, errors, model, "form", SiteForm.class, request);
+    if (errors.hasErrors()) {
+      return FormStatus.invalid(response, FORM_VIEW);
+    }
+    try {
+      Site site = sites.create(form);
+      return "redirect:/sites/" + site.getId();
+    } catch (RuleViolation violation) {
+      FormStatus.reject(errors, violation);
+      return FormStatus.invalid(response, FORM_VIEW);
+    }
+  }
+
+  @GetMapping("/sites/{id}/edit")
+  public String edit(@PathVariable long id, Model model) {
+    Site site = sites.get(id);
+    model.addAttribute("site", site);
+    model.addAttribute("form", SiteForm.of(site));
+    return FORM_VIEW;
+  }
+
+  @PostMapping("/sites/{id}")
+  public String update(
+      @PathVariable long id,
+      @Valid @ModelAttribute("form") SiteForm form,
+      BindingResult errors,
+      HttpServletRequest request,
+      Model model,
+      HttpServletResponse response) {
+    form = FormRecovery.ensure(form, errors, model, "form", SiteForm.class, request);
+    Site site = sites.get(id);
+    model.addAttribute("site", site);
+    if (errors.hasErrors()) {
+      return FormStatus.invalid(response, FORM_VIEW);
+    }
+    try {
+      sites.update(id, form);
+      return "redirect:/sites/" + id;
+    } catch (RuleViolation violation) {
+      FormStatus.reject(errors, violation);
+      return FormStatus.invalid(response, FORM_VIEW);
+    }
+  }
+}

@@ -1,0 +1,64 @@
+package com.wayledger.site;
+
+import com.wayledger.system.NotFoundException;
+import com.wayledger.system.RuleViolation;
+import com.wayledger.system.StaleEditException;
+import java.util.List;
+import java.util.Objects;
+import org.springframework.stereotype.Service;
+import org.springframework.transaction.annotation.Transactional;
+
+/** Creates, edits and finds sites; the rules that a form alone cannot check live here. */
+@Service
+public class SiteService {
+
+  private final SiteRepository sites;
+
+  public SiteService(SiteRepository sites) {
+    this.sites = sites;
+  }
+
+  @Transactional(readOnly = true)
+  public List<Site> all() {
+    return sites.findAllByOrderByNameAsc();
+  }
+
+  @Transactional(readOnly = true)
+  public Site get(long id) {
+    return sites.findById(id).orElseThrow(() -> new NotFoundException("Site", id));
+  }
+
+  @Transactional
+  public Site create(SiteForm form) {
+    checkRules(form, null);
+    Site site = new Site(form.name());
+    site.apply(form);
+    return sites.saveAndFlush(site);
+  }
+
+  @Transactional
+  public Site update(long id, SiteForm form) {
+    Site site = get(id);
+    if (form.version() != null && !Objects.equals(form.version(), site.getVersion())) {
+      throw new StaleEditException("Site " + site.getName());
+    }
+    checkRules(form, id);
+    site.apply(form);
+    return sites.saveAndFlush(site);
+  }
+
+  private void checkRules(SiteForm form, Long id) {
+    if (form.phases() != 1 && form.phases() != 3) {
+      throw new RuleViolation("phases", "site.phases.invalid");
+    }
+    if (form.frequencyHertz() != 50.0 && form.frequencyHertz() != 60.0) {
+      throw new RuleViolation("frequencyHertz", "site.frequency.invalid");
+    }
+    String name = form.name().strip();
+    boolean taken =
+        id == null ? sites.existsByNameIgnoreCase(name) : sites.existsByNameIgnoreCaseAndIdNot(name, id);
+    if (taken) {
+      throw new RuleViolation("name", "site.name.taken");
+    }
+  }
+}
