@@ -1,0 +1,129 @@
+package com.wayledger.board;
+
+import com.wayledger.engine.LoadCategory;
+import com.wayledger.engine.PhasePosition;
+import com.wayledger.engine.RatingUnit;
+import com.wayledger.engine.WayStatus;
+import io.swagger.v3.oas.annotations.Operation;
+import io.swagger.v3.oas.annotations.tags.Tag;
+import jakarta.validation.Valid;
+import java.util.List;
+import org.springframework.http.HttpStatus;
+import org.springframework.transaction.annotation.Transactional;
+import org.springframework.web.bind.annotation.DeleteMapping;
+import org.springframework.web.bind.annotation.GetMapping;
+import org.springframework.web.bind.annotation.PathVariable;
+import org.springframework.web.bind.annotation.PostMapping;
+import org.springframework.web.bind.annotation.PutMapping;
+import org.springframework.web.bind.annotation.RequestBody;
+import org.springframework.web.bind.annotation.RequestMapping;
+import org.springframework.web.bind.annotation.ResponseStatus;
+import org.springframework.web.bind.annotation.RestController;
+
+/** Boards, circuits and loads over JSON: the same operations and rules as the schedule pages. */
+@RestController
+@RequestMapping("/api")
+@Tag(name = "Boards", description = "Boards, their circuits and loads")
+public class BoardApiController {
+
+  private final BoardService boards;
+  private final ScheduleService schedule;
+  private final BoardRepository boardRepository;
+
+  public BoardApiController(BoardService boards, ScheduleService schedule, BoardRepository boardRepository) {
+    this.boards = boards;
+    this.schedule = schedule;
+    this.boardRepository = boardRepository;
+  }
+
+  public record BoardSummary(
+      long id, String reference, String location, int phases, int wayCount, Long parentBoardId,
+      Double incomerRatingAmps, long version) {
+
+    static BoardSummary of(Board board) {
+      return new BoardSummary(
+          board.getId(), board.getReference(), board.getLocation(), board.getPhases(), board.getWayCount(),
+          board.getParent() == null ? null : board.getParent().getId(),
+          board.getIncomer() == null ? null : board.getIncomer().getRatingAmps(), board.getVersion());
+    }
+  }
+
+  public record LoadView(
+      long id, String description, LoadCategory category, int quantity, double ratingValue,
+      RatingUnit ratingUnit, double powerFactor, Double startUpSurgeMultiple, Double startUpSurgeMillis,
+      boolean continuous) {
+
+    static LoadView of(LoadItem load) {
+      return new LoadView(
+          load.getId(), load.getDescription(), load.getCategory(), load.getQuantity(), load.getRatingValue(),
+          load.getRatingUnit(), load.getPowerFactor(), load.getStartUpSurgeMultiple(),
+          load.getStartUpSurgeMillis(), load.isContinuous());
+    }
+  }
+
+  public record CircuitView(
+      long id, int wayNumber, PhasePosition position, String description, WayStatus status,
+      boolean lockedForBalancing, String device, String cable, CircuitForm fields, List<LoadView> loads) {
+
+    static CircuitView of(Circuit circuit) {
+      return new CircuitView(
+          circuit.getId(), circuit.getWayNumber(), circuit.getPosition(), circuit.getDescription(),
+          circuit.getStatus(), circuit.isLockedForBalancing(),
+          circuit.getDevice() == null ? null : circuit.getDevice().label(),
+          circuit.getCable() == null ? null : circuit.getCable().label(), CircuitForm.of(circuit),
+          circuit.getLoads().stream().map(LoadView::of).toList());
+    }
+  }
+
+  public record BoardDetail(BoardSummary board, BoardForm fields, List<CircuitView> circuits) {}
+
+  @GetMapping("/sites/{siteId}/boards")
+  @Operation(summary = "The boards of a site")
+  public List<BoardSummary> onSite(@PathVariable long siteId) {
+    return boards.onSite(siteId).stream().map(BoardSummary::of).toList();
+  }
+
+  @GetMapping("/boards/{id}")
+  @Transactional(readOnly = true)
+  @Operation(summary = "A board with its circuits and loads")
+  public BoardDetail get(@PathVariable long id) {
+    Board board =
+        boardRepository.findWithCircuits(id).orElseThrow(() -> new com.wayledger.system.NotFoundException("Board", id));
+    return new BoardDetail(
+        BoardSummary.of(board), BoardForm.of(board), board.getCircuits().stream().map(CircuitView::of).toList());
+  }
+
+  @PostMapping("/sites/{siteId}/boards")
+  @ResponseStatus(HttpStatus.CREATED)
+  @Operation(summary = "Create a board on a site (editor)")
+  public BoardSummary create(@PathVariable long siteId, @Valid @RequestBody BoardForm form) {
+    return BoardSummary.of(boards.create(siteId, form));
+  }
+
+  @PutMapping("/boards/{id}")
+  @Operation(summary = "Replace a board's fields (editor)")
+  public BoardSummary update(@PathVariable long id, @Valid @RequestBody BoardForm form) {
+    return BoardSummary.of(boards.update(id, form));
+  }
+
+  @PostMapping("/boards/{id}/circuits")
+  @ResponseStatus(HttpStatus.CREATED)
+  @Operation(summary = "Add a circuit, optionally with its first load (editor)")
+  public long addCircuit(@PathVariable long id, @Valid @RequestBody CircuitForm form) {
+    return schedule.addCircuit(id, form).getId();
+  }
+
+  @DeleteMapping("/circuits/{id}")
+  @ResponseStatus(HttpStatus.NO_CONTENT)
+  @Operation(summary = "Delete a circuit and its loads (editor)")
+  public void deleteCircuit(@PathVariable long id) {
+    schedule.deleteCircuit(id);
+  }
+
+  @PostMapping("/circuits/{id}/loads")
+  @ResponseStatus(HttpStatus.CREATED)
+  @Operation(summary = "Add a load to a circuit (editor)")
+  public long addLoad(@PathVariable long id, @Valid @RequestBody LoadForm form) {
+    return schedule.addLoad(id, form).getId();
+  }
+}

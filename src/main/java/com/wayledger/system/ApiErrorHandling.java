@@ -1,0 +1,66 @@
+package com.wayledger.system;
+
+import java.net.URI;
+import java.util.List;
+import java.util.Map;
+import org.springframework.dao.DataIntegrityViolationException;
+import org.springframework.http.HttpStatus;
+import org.springframework.http.ProblemDetail;
+import org.springframework.http.converter.HttpMessageNotReadableException;
+import org.springframework.orm.ObjectOptimisticLockingFailureException;
+import org.springframework.web.bind.MethodArgumentNotValidException;
+import org.springframework.web.bind.annotation.ExceptionHandler;
+import org.springframework.web.bind.annotation.RestControllerAdvice;
+import org.springframework.web.method.annotation.MethodArgumentTypeMismatchException;
+
+/**
+ * Errors of the JSON API as RFC 9457 problem details: the status, a sentence, and for bad input a list of
+ * {field, message} so a client can show each message beside its field.
+ */
+@RestControllerAdvice(annotations = org.springframework.web.bind.annotation.RestController.class)
+public class ApiErrorHandling {
+
+  @ExceptionHandler(MethodArgumentNotValidException.class)
+  public ProblemDetail invalid(MethodArgumentNotValidException e) {
+    List<Map<String, String>> fields =
+        e.getBindingResult().getFieldErrors().stream()
+            .map(error -> Map.of("field", error.getField(), "message", String.valueOf(error.getDefaultMessage())))
+            .toList();
+    ProblemDetail problem = problem(HttpStatus.BAD_REQUEST, "Some values are not acceptable.");
+    problem.setProperty("fields", fields);
+    return problem;
+  }
+
+  @ExceptionHandler(RuleViolation.class)
+  public ProblemDetail rule(RuleViolation e) {
+    ProblemDetail problem = problem(HttpStatus.UNPROCESSABLE_CONTENT, "A value breaks a rule of the schedule.");
+    problem.setProperty("fields", List.of(Map.of("field", e.field(), "message", e.messageCode())));
+    return problem;
+  }
+
+  @ExceptionHandler({HttpMessageNotReadableException.class, MethodArgumentTypeMismatchException.class})
+  public ProblemDetail unreadable(Exception e) {
+    return problem(HttpStatus.BAD_REQUEST, "The request body or a parameter is malformed.");
+  }
+
+  @ExceptionHandler(NotFoundException.class)
+  public ProblemDetail notFound(NotFoundException e) {
+    return problem(HttpStatus.NOT_FOUND, e.getMessage());
+  }
+
+  @ExceptionHandler({StaleEditException.class, ObjectOptimisticLockingFailureException.class})
+  public ProblemDetail stale(Exception e) {
+    return problem(HttpStatus.CONFLICT, "Someone else changed this record; fetch it again and retry.");
+  }
+
+  @ExceptionHandler(DataIntegrityViolationException.class)
+  public ProblemDetail conflict(DataIntegrityViolationException e) {
+    return problem(HttpStatus.CONFLICT, "The change conflicts with stored data and was not saved.");
+  }
+
+  private static ProblemDetail problem(HttpStatus status, String detail) {
+    ProblemDetail problem = ProblemDetail.forStatusAndDetail(status, detail);
+    problem.setType(URI.create("about:blank"));
+    return problem;
+  }
+}
