@@ -101,8 +101,11 @@ public final class DeviceProposer {
         continue;
       }
       if (in > iz) {
-        reasons.add("a larger cable is needed: the smallest rating not below Ib " + fixed(ib) + " A is " + fixed(in)
-            + " A, above the cable's Iz " + fixed(iz) + " A");
+        reasons.add(reasons.isEmpty()
+            ? "a larger cable is needed: the smallest rating not below Ib " + fixed(ib) + " A is " + fixed(in)
+                + " A, above the cable's Iz " + fixed(iz) + " A"
+            : "a larger cable is needed: no rating from Ib " + fixed(ib) + " A up to the cable's Iz " + fixed(iz)
+                + " A passes (reasons above)");
         return new DeviceProposal(id, null, List.of(), reasons);
       }
       boolean rcbo = (sockets && in <= settings.socketRcdMaxRatedAmps() && !upstream30)
