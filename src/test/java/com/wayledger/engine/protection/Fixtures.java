@@ -64,7 +64,7 @@ final class Fixtures {
         device, c.cable(), c.loads(), c.feedsBoardId(), c.measuredLoopImpedanceOhms());
   }
 
-  /** A single-phase board at the origin (no submain), with a 100 A incomer switch-breaker modelled as an MCCB. */
+  /** A single-phase board at the origin (no submain, no incomer recorded), 100 A busbar. */
   static BoardSpec originBoard(long id, List<CircuitSpec> circuits) {
     return new BoardSpec(id, "DB-" + id, 1, 12, 100.0, null, null, null, 10.0, 1.0, null, null, null, circuits);
   }
