@@ -1,0 +1,24 @@
+package com.wayledger.engine.protection;
+
+import com.wayledger.engine.Phase;
+import java.util.EnumMap;
+import java.util.Map;
+
+/**
+ * What the demand calculation says about one board, as the protection engine needs it.
+ *
+ * @param boardId the board
+ * @param phaseCurrentsAmps design current on each line at the board's incomer, A (a single-phase board uses L1)
+ * @param unbalancePercent phase unbalance, %; null for a single-phase board or when not worked out
+ */
+public record BoardLoading(long boardId, Map<Phase, Double> phaseCurrentsAmps, Double unbalancePercent) {
+
+  public BoardLoading {
+    phaseCurrentsAmps = phaseCurrentsAmps.isEmpty() ? Map.of() : Map.copyOf(new EnumMap<>(phaseCurrentsAmps));
+  }
+
+  /** The largest line current, A; null when no phase current is given. */
+  public Double largestPhaseAmps() {
+    return phaseCurrentsAmps.values().stream().max(Double::compare).orElse(null);
+  }
+}

@@ -1,0 +1,179 @@
+package com.wayledger.engine.protection;
+
+import com.wayledger.engine.CableSpec;
+import com.wayledger.engine.CircuitSpec;
+import com.wayledger.engine.DeviceKind;
+import com.wayledger.engine.DeviceSpec;
+import com.wayledger.engine.LoadCategory;
+import com.wayledger.engine.PhasePosition;
+import com.wayledger.engine.SupplySpec;
+import com.wayledger.engine.WayStatus;
+import com.wayledger.engine.protection.cable.CableRating;
+import com.wayledger.engine.protection.cable.CurrentCapacity;
+import com.wayledger.engine.protection.cable.VoltageDrop;
+import com.wayledger.engine.protection.check.BreakingCapacityCheck;
+import com.wayledger.engine.protection.check.CableProtectionCheck;
+import com.wayledger.engine.protection.check.LoopImpedanceCheck;
+import com.wayledger.engine.protection.check.OverloadCheck;
+import com.wayledger.engine.protection.check.SocketRcdCheck;
+import com.wayledger.engine.protection.check.StartUpSurge;
+import com.wayledger.engine.protection.check.SurgeCheck;
+import com.wayledger.engine.protection.check.VoltageDropCheck;
+import com.wayledger.engine.protection.device.DeviceCharacteristic;
+import com.wayledger.engine.protection.device.MccbSettings;
+import com.wayledger.engine.protection.fault.BoardFaultLevel;
+import com.wayledger.engine.protection.fault.LoopImpedance;
+import com.wayledger.engine.protection.result.CheckKind;
+import com.wayledger.engine.protection.result.Finding;
+import com.wayledger.engine.protection.result.Resolved;
+import com.wayledger.engine.protection.result.SourcedValue;
+import com.wayledger.engine.protection.result.Verdict;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.OptionalDouble;
+
+/** Runs every circuit-level check on one way, turning missing inputs into "not assessed" findings. */
+final class CircuitChecks {
+
+  private CircuitChecks() {}
+
+  static CircuitFindings assess(
+      SupplySpec supply,
+      CircuitSpec circuit,
+      BoardFaultLevel board,
+      Double designCurrentAmps,
+      MccbSettings mccb,
+      ProtectionSettings settings) {
+    DeviceSpec device = circuit.device();
+    List<Finding> findings = new ArrayList<>();
+    SourcedValue zs = LoopImpedance.of(circuit, board);
+    if (circuit.status() != WayStatus.IN_USE) {
+      // a spare device still has to survive a fault at the board
+      if (device != null) {
+        findings.add(BreakingCapacityCheck.assess(device.kind(), device.breakingCapacityKiloAmps(), board.faultCurrentKiloAmps()));
+      }
+      return new CircuitFindings(circuit.id(), circuit.wayNumber(), zs, null, null, null, findings);
+    }
+    double u0 = supply.nominalVoltageToEarthVolts();
+    boolean threePole = circuit.position() == PhasePosition.THREE_POLE;
+    Resolved<DeviceCharacteristic> overcurrent =
+        DeviceCharacteristic.of(device, mccb, settings.mccbInstantaneousMultiple());
+    Resolved<CableRating> rating = CurrentCapacity.of(circuit.cable(), threePole ? 3 : 2);
+
+    findings.add(overload(designCurrentAmps, device, overcurrent));
+    findings.add(cableProtection(overcurrent, rating));
+    findings.add(
+        device == null
+            ? Finding.notAssessed(CheckKind.BREAKING_CAPACITY, "protective device", BreakingCapacityCheck.REFERENCE)
+            : BreakingCapacityCheck.assess(device.kind(), device.breakingCapacityKiloAmps(), board.faultCurrentKiloAmps()));
+
+    Double ownResidual = residualOf(device);
+    Double residual = ownResidual != null ? ownResidual : board.upstreamResidualMilliAmps();
+    boolean finalCircuit = circuit.feedsBoardId() == null
+        && (device == null || device.ratedCurrentAmps() == null
+            || device.ratedCurrentAmps() <= settings.finalCircuitMaxRatedAmps());
+    findings.add(
+        LoopImpedanceCheck.assess(
+            supply.earthingSystem(), u0, zs, overcurrent, residual, finalCircuit, limits(settings)));
+
+    Double totalDrop = null;
+    Finding drop = voltageDrop(circuit, board, designCurrentAmps, u0, threePole, settings);
+    findings.add(drop);
+    if (drop.verdict() != Verdict.NOT_ASSESSED) {
+      totalDrop = drop.value("total drop");
+    }
+
+    OptionalDouble surge = StartUpSurge.peakAmps(circuit.loads(), u0, threePole);
+    if (surge.isEmpty()) {
+      findings.add(SurgeCheck.noSurgeRecorded());
+    } else if (!overcurrent.isKnown()) {
+      findings.add(Finding.notAssessedBecause(CheckKind.START_UP_SURGE, "no " + overcurrent.missing(), SurgeCheck.REFERENCE));
+    } else {
+      findings.add(SurgeCheck.assess(surge.getAsDouble(), overcurrent.value()));
+    }
+
+    if (circuit.loads().stream().anyMatch(l -> l.category() == LoadCategory.SOCKET_OUTLETS)) {
+      findings.add(socketRcd(device, ownResidual, board.upstreamResidualMilliAmps(), settings));
+    }
+    return new CircuitFindings(
+        circuit.id(),
+        circuit.wayNumber(),
+        zs,
+        rating.isKnown() ? rating.value().capacityAmps() : null,
+        totalDrop,
+        surge.isPresent() ? surge.getAsDouble() : null,
+        findings);
+  }
+
+  static LoopImpedanceCheck.Limits limits(ProtectionSettings s) {
+    return new LoopImpedanceCheck.Limits(
+        s.minimumVoltageFactor(), s.measuredLoopImpedanceFraction(), s.touchVoltageLimitVolts());
+  }
+
+  private static Finding overload(Double ib, DeviceSpec device, Resolved<DeviceCharacteristic> overcurrent) {
+    if (ib == null) {
+      return Finding.notAssessed(CheckKind.WAY_OVERLOAD, "design current Ib (from the demand calculation)", OverloadCheck.REFERENCE);
+    }
+    if (overcurrent.isKnown()) {
+      return OverloadCheck.assess(ib, overcurrent.value().overloadSettingAmps());
+    }
+    // a fuse has no characteristic here, but its rating is enough for Ib ≤ In
+    if (device != null && device.kind() == DeviceKind.FUSE && device.ratedCurrentAmps() != null) {
+      return OverloadCheck.assess(ib, device.ratedCurrentAmps());
+    }
+    return Finding.notAssessedBecause(CheckKind.WAY_OVERLOAD, "no " + overcurrent.missing(), OverloadCheck.REFERENCE);
+  }
+
+  private static Finding cableProtection(Resolved<DeviceCharacteristic> overcurrent, Resolved<CableRating> rating) {
+    if (!overcurrent.isKnown()) {
+      return Finding.notAssessedBecause(CheckKind.CABLE_PROTECTION, "no " + overcurrent.missing(), CableProtectionCheck.REFERENCE);
+    }
+    if (!rating.isKnown()) {
+      return Finding.notAssessed(CheckKind.CABLE_PROTECTION, rating.missing(), CableProtectionCheck.REFERENCE);
+    }
+    DeviceCharacteristic d = overcurrent.value();
+    return CableProtectionCheck.assess(d.overloadSettingAmps(), d.conventionalTrippingAmps(), rating.value());
+  }
+
+  private static Finding voltageDrop(
+      CircuitSpec circuit, BoardFaultLevel board, Double ib, double u0, boolean threePole, ProtectionSettings s) {
+    boolean lighting = circuit.loads().stream().anyMatch(l -> l.category() == LoadCategory.LIGHTING);
+    SourcedValue boardDrop = board.voltageDropFromOriginPercent();
+    if (!boardDrop.isKnown()) {
+      return Finding.notAssessed(CheckKind.VOLTAGE_DROP, boardDrop.missing(), VoltageDropCheck.REFERENCE);
+    }
+    if (ib == null) {
+      return Finding.notAssessed(CheckKind.VOLTAGE_DROP, "design current Ib (from the demand calculation)", VoltageDropCheck.REFERENCE);
+    }
+    CableSpec cable = circuit.cable();
+    if (cable == null) {
+      return Finding.notAssessed(CheckKind.VOLTAGE_DROP, "circuit cable", VoltageDropCheck.REFERENCE);
+    }
+    if (cable.lengthMetres() == null) {
+      return Finding.notAssessed(CheckKind.VOLTAGE_DROP, "cable length", VoltageDropCheck.REFERENCE);
+    }
+    Resolved<Double> mv =
+        VoltageDrop.milliVoltsPerAmpMetre(cable.material(), cable.lineCsaSquareMillimetres(), cable.insulation(), threePole);
+    if (!mv.isKnown()) {
+      return Finding.notAssessed(CheckKind.VOLTAGE_DROP, mv.missing(), VoltageDropCheck.REFERENCE);
+    }
+    double nominal = threePole ? Math.sqrt(3.0) * u0 : u0;
+    double circuitDrop = VoltageDrop.percent(mv.value(), ib, cable.lengthMetres(), nominal);
+    return VoltageDropCheck.assess(boardDrop.value(), circuitDrop, s.voltageDropLimitPercent(lighting), lighting);
+  }
+
+  private static Finding socketRcd(DeviceSpec device, Double own, Double upstream, ProtectionSettings s) {
+    if (device == null || device.ratedCurrentAmps() == null) {
+      return Finding.notAssessed(CheckKind.SOCKET_RCD, "device rating In", SocketRcdCheck.REFERENCE);
+    }
+    return SocketRcdCheck.assess(
+        device.ratedCurrentAmps(), own, upstream, s.socketRcdMaxRatedAmps(), s.socketRcdMaxResidualMilliAmps());
+  }
+
+  static Double residualOf(DeviceSpec device) {
+    if (device == null || device.kind() == null || !device.kind().isResidualCurrent()) {
+      return null;
+    }
+    return device.residualCurrentMilliAmps();
+  }
+}

@@ -1,0 +1,62 @@
+package com.wayledger.engine.protection.check;
+
+import com.wayledger.engine.protection.result.CheckKind;
+import com.wayledger.engine.protection.result.Finding;
+import com.wayledger.engine.protection.result.Quantity;
+import com.wayledger.engine.protection.result.Verdict;
+import java.util.List;
+
+/**
+ * Additional protection of socket-outlet circuits up to 32 A by a residual-current device of IΔn ≤ 30 mA. The
+ * engine sees the way's own device, the board's incomer and the incomers and ways above; an RCD outside the
+ * schedule (an RCD socket-outlet, a separate RCD unit) cannot be seen, so a missing RCD is a warning to look.
+ */
+public final class SocketRcdCheck {
+
+  public static final String REFERENCE = "BS 7671 411.3.3 / IEC 60364-4-41 411.3.3";
+
+  private SocketRcdCheck() {}
+
+  /**
+   * @param ratedAmps the way's In, A
+   * @param ownResidualMilliAmps IΔn of the way's own RCBO or RCD; null when it has none
+   * @param upstreamResidualMilliAmps smallest IΔn seen upstream; null when none
+   */
+  public static Finding assess(
+      double ratedAmps,
+      Double ownResidualMilliAmps,
+      Double upstreamResidualMilliAmps,
+      double maxRatedAmps,
+      double maxResidualMilliAmps) {
+    if (ratedAmps > maxRatedAmps) {
+      return Finding.pass(
+          CheckKind.SOCKET_RCD,
+          "socket-outlet circuit rated " + Rounding.amps(ratedAmps) + ", above the " + Rounding.amps(maxRatedAmps)
+              + " the rule covers",
+          List.of(new Quantity("In", ratedAmps, "A")),
+          REFERENCE);
+    }
+    if (ownResidualMilliAmps != null && ownResidualMilliAmps <= maxResidualMilliAmps) {
+      return Finding.pass(
+          CheckKind.SOCKET_RCD,
+          "protected by the way's own " + (long) (double) ownResidualMilliAmps + " mA device",
+          List.of(new Quantity("IΔn", ownResidualMilliAmps, "mA")),
+          REFERENCE);
+    }
+    if (upstreamResidualMilliAmps != null && upstreamResidualMilliAmps <= maxResidualMilliAmps) {
+      return Finding.pass(
+          CheckKind.SOCKET_RCD,
+          "protected by an upstream " + (long) (double) upstreamResidualMilliAmps + " mA device",
+          List.of(new Quantity("IΔn", upstreamResidualMilliAmps, "mA")),
+          REFERENCE);
+    }
+    return new Finding(
+        CheckKind.SOCKET_RCD,
+        Verdict.WARNING,
+        "socket-outlet circuit up to " + Rounding.amps(maxRatedAmps) + " with no " + (long) maxResidualMilliAmps
+            + " mA residual-current device on the schedule (an RCD outside the schedule cannot be seen)",
+        List.of(new Quantity("In", ratedAmps, "A")),
+        REFERENCE,
+        "fit a 30 mA RCBO on the way, or confirm on site that an upstream 30 mA RCD covers it");
+  }
+}

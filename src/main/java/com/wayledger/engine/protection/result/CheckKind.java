@@ -1,0 +1,27 @@
+package com.wayledger.engine.protection.result;
+
+/** The protection and cable checks the engine runs, with a plain-words title for screens and exports. */
+public enum CheckKind {
+  WAY_OVERLOAD("Way overloaded (Ib > In)"),
+  CABLE_PROTECTION("Cable protected by its device (In ≤ Iz, I2 ≤ 1.45·Iz)"),
+  BREAKING_CAPACITY("Breaking capacity at least the prospective fault current"),
+  LOOP_IMPEDANCE("Earth fault loop impedance within the disconnection limit"),
+  VOLTAGE_DROP("Voltage drop from the origin within the limit"),
+  START_UP_SURGE("Start-up surge below the instantaneous trip current"),
+  SOCKET_RCD("30 mA residual-current protection of socket-outlet circuits"),
+  INCOMER_OVERLOAD("Incomer not overloaded"),
+  BUSBAR_OVERLOAD("Busbar not overloaded"),
+  SUPPLY_FUSE_OVERLOAD("Supply fuse not overloaded"),
+  PHASE_UNBALANCE("Phase unbalance within the board's limit"),
+  SELECTIVITY("Selectivity between the incomer and outgoing devices");
+
+  private final String title;
+
+  CheckKind(String title) {
+    this.title = title;
+  }
+
+  public String title() {
+    return title;
+  }
+}
