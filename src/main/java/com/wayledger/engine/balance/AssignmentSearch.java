@@ -258,7 +258,7 @@ final class AssignmentSearch {
         - Math.min(least[0], Math.min(least[1], least[2]));
     long total = board.total;
     long lbMid = Math.max(secondLeast, (total - lbMax + 1) / 2);
-    return lbMax * keyBase + lbMid;
+    return board.keyBound(lbMax, lbMid);
   }
 
   /**

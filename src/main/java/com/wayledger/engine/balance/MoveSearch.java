@@ -189,6 +189,6 @@ final class MoveSearch {
         - Math.max(least[0], Math.max(least[1], least[2]))
         - Math.min(least[0], Math.min(least[1], least[2]));
     long lbMid = Math.max(mid, (board.total - lbMax + 1) / 2);
-    return lbMax * board.keyBase() + lbMid >= bestKey;
+    return board.keyBound(lbMax, lbMid) >= bestKey;
   }
 }

@@ -98,9 +98,9 @@ final class PreparedBoard {
   }
 
   /**
-   * The objective as one number: the largest phase load, then the middle one. With the total fixed, a
-   * smaller middle load means a larger smallest load, hence a smaller largest deviation from the mean once
-   * the largest load is settled, so comparing these keys is comparing (largest current, unbalance).
+   * The objective as one number: the largest phase load first, then the largest deviation from the mean,
+   * kept as the exact integer max|3·load − total| (three times the deviation), so comparing keys is
+   * comparing (largest current, then unbalance) without rounding.
    */
   long keyOf(long[] loads) {
     return key(loads[0], loads[1], loads[2]);
@@ -109,11 +109,17 @@ final class PreparedBoard {
   long key(long a, long b, long c) {
     long max = Math.max(a, Math.max(b, c));
     long min = Math.min(a, Math.min(b, c));
-    return max * keyBase() + (a + b + c - max - min);
+    return max * keyBase() + Math.max(3 * max - total, total - 3 * min);
+  }
+
+  /** Lower bound on the key when the largest load is at least {@code max} and the middle one at least {@code mid}. */
+  long keyBound(long max, long mid) {
+    long smallestUpper = total - max - mid;
+    return max * keyBase() + Math.max(3 * max - total, Math.max(0, total - 3 * smallestUpper));
   }
 
   long keyBase() {
-    return total + 1;
+    return 3 * total + 1;
   }
 
   long maxOfKey(long key) {
