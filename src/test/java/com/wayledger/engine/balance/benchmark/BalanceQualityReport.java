@@ -2,6 +2,8 @@ package com.wayledger.engine.balance.benchmark;
 
 import com.wayledger.engine.balance.BalanceProblem;
 import com.wayledger.engine.balance.BalanceResult;
+import com.wayledger.engine.balance.FewestMovesResult;
+import com.wayledger.engine.balance.LimitVerdict;
 import com.wayledger.engine.balance.PhaseBalancer;
 import java.util.Arrays;
 import java.util.List;
@@ -68,5 +70,37 @@ public final class BalanceQualityReport {
     System.out.printf(Locale.ROOT, "| optimal (branch and bound) | %.4f | %.3f |%n", optimalUnbalance / n, optimalLargest / n);
     System.out.printf(Locale.ROOT, "| largest-first greedy | %.4f | %.3f |%n", greedyUnbalance / n, greedyLargest / n);
     System.out.printf(Locale.ROOT, "| current (random) | %.4f | %.3f |%n", currentUnbalance / n, currentLargest / n);
+
+    // Fewest-moves mode on the first boards: far costlier per board, so a sample is enough to show its reach.
+    int sample = 50;
+    long[] movesNanos = new long[sample];
+    int reachedOptimum = 0;
+    int limitProved = 0;
+    int limitMovesSum = 0;
+    int limitCounted = 0;
+    int largestProvedStep = 0;
+    for (int b = 0; b < sample; b++) {
+      long start = System.nanoTime();
+      FewestMovesResult fewest = balancer.fewestMoves(boards.get(b));
+      movesNanos[b] = System.nanoTime() - start;
+      reachedOptimum += fewest.optimumReached() ? 1 : 0;
+      if (fewest.limitVerdict() == LimitVerdict.REACHED || fewest.limitVerdict() == LimitVerdict.ALREADY_WITHIN) {
+        limitProved++;
+      }
+      if (fewest.movesToReachLimit() != null) {
+        limitMovesSum += fewest.movesToReachLimit();
+        limitCounted++;
+      }
+      for (var step : fewest.steps()) {
+        if (step.proved()) {
+          largestProvedStep = Math.max(largestProvedStep, step.moves());
+        }
+      }
+    }
+    Arrays.sort(movesNanos);
+    System.out.printf(Locale.ROOT, "fewest moves, first %d boards: median %.1f ms, max %.1f ms; optimum reached on %d;"
+            + " 10 %% limit with proved fewest moves on %d, mean moves to the limit %.2f (%d boards); largest proved step %d%n",
+        sample, movesNanos[sample / 2] / 1e6, movesNanos[sample - 1] / 1e6, reachedOptimum, limitProved,
+        limitCounted == 0 ? 0.0 : (double) limitMovesSum / limitCounted, limitCounted, largestProvedStep);
   }
 }
