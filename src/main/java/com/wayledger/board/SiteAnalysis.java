@@ -67,6 +67,19 @@ public record SiteAnalysis(SiteSpec spec, SiteDemand demand, SiteFindings findin
     return counts;
   }
 
+  /** Problem counts per verdict for each circuit of a board, by circuit id. */
+  public Map<Long, Map<Verdict, Long>> circuitProblemCounts(long boardId) {
+    Map<Long, Map<Verdict, Long>> counts = new java.util.HashMap<>();
+    boardFindings(boardId).ifPresent(board -> board.circuits().forEach(circuit -> {
+      Map<Verdict, Long> perVerdict = new EnumMap<>(Verdict.class);
+      circuit.findings().stream()
+          .filter(SiteAnalysis::isProblem)
+          .forEach(finding -> perVerdict.merge(finding.verdict(), 1L, Long::sum));
+      counts.put(circuit.circuitId(), perVerdict);
+    }));
+    return counts;
+  }
+
   /** The line with the largest demand current on a board; null for a board with no demand. */
   public Phase worstPhase(long boardId) {
     BoardDemand board = boardDemand(boardId);
