@@ -103,6 +103,11 @@ public class Circuit {
     measuredLoopImpedanceOhms = form.measuredLoopImpedanceOhms();
   }
 
+  void moveTo(int newWayNumber, PhasePosition newPosition) {
+    wayNumber = newWayNumber;
+    position = newPosition;
+  }
+
   void replaceDevice(DeviceDetails newDevice) {
     device = newDevice;
   }
