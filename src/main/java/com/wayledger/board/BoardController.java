@@ -14,6 +14,7 @@ import com.wayledger.system.RuleViolation;
 import jakarta.servlet.http.HttpServletRequest;
 import jakarta.servlet.http.HttpServletResponse;
 import jakarta.validation.Valid;
+import com.wayledger.diversity.MethodLibrary;
 import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
 import org.springframework.validation.BindingResult;
@@ -33,13 +34,19 @@ public class BoardController {
   private final SiteService sites;
   private final SchedulePage schedulePage;
   private final AnalysisService analysis;
+  private final MethodLibrary methods;
 
   public BoardController(
-      BoardService boards, SiteService sites, SchedulePage schedulePage, AnalysisService analysis) {
+      BoardService boards,
+      SiteService sites,
+      SchedulePage schedulePage,
+      AnalysisService analysis,
+      MethodLibrary methods) {
     this.boards = boards;
     this.sites = sites;
     this.schedulePage = schedulePage;
     this.analysis = analysis;
+    this.methods = methods;
   }
 
   @ModelAttribute
@@ -50,6 +57,7 @@ public class BoardController {
     model.addAttribute("materials", ConductorMaterial.values());
     model.addAttribute("insulations", Insulation.values());
     model.addAttribute("installationMethods", InstallationMethod.values());
+    model.addAttribute("methods", methods.entries());
   }
 
   @GetMapping("/sites/{siteId}")

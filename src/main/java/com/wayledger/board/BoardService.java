@@ -1,5 +1,6 @@
 package com.wayledger.board;
 
+import com.wayledger.diversity.MethodLibrary;
 import com.wayledger.site.Site;
 import com.wayledger.site.SiteService;
 import com.wayledger.system.NotFoundException;
@@ -21,11 +22,14 @@ public class BoardService {
   private final BoardRepository boards;
   private final CircuitRepository circuits;
   private final SiteService sites;
+  private final MethodLibrary methods;
 
-  public BoardService(BoardRepository boards, CircuitRepository circuits, SiteService sites) {
+  public BoardService(
+      BoardRepository boards, CircuitRepository circuits, SiteService sites, MethodLibrary methods) {
     this.boards = boards;
     this.circuits = circuits;
     this.sites = sites;
+    this.methods = methods;
   }
 
   @Transactional(readOnly = true)
@@ -100,6 +104,10 @@ public class BoardService {
     }
     if (form.phases() == 3 && site.getPhases() == 1) {
       throw new RuleViolation("phases", "board.phases.beyondSupply");
+    }
+    if (form.diversityMethod() != null && !form.diversityMethod().isBlank()
+        && methods.catalog().find(form.diversityMethod()).isEmpty()) {
+      throw new RuleViolation("diversityMethod", "method.unknown");
     }
     String reference = form.reference().strip();
     boolean taken =

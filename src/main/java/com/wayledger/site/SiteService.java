@@ -1,5 +1,6 @@
 package com.wayledger.site;
 
+import com.wayledger.diversity.MethodLibrary;
 import com.wayledger.system.NotFoundException;
 import com.wayledger.system.RuleViolation;
 import com.wayledger.system.StaleEditException;
@@ -13,9 +14,11 @@ import org.springframework.transaction.annotation.Transactional;
 public class SiteService {
 
   private final SiteRepository sites;
+  private final MethodLibrary methods;
 
-  public SiteService(SiteRepository sites) {
+  public SiteService(SiteRepository sites, MethodLibrary methods) {
     this.sites = sites;
+    this.methods = methods;
   }
 
   @Transactional(readOnly = true)
@@ -53,6 +56,10 @@ public class SiteService {
     }
     if (form.frequencyHertz() != 50.0 && form.frequencyHertz() != 60.0) {
       throw new RuleViolation("frequencyHertz", "site.frequency.invalid");
+    }
+    if (form.defaultDiversityMethod() != null && !form.defaultDiversityMethod().isBlank()
+        && methods.catalog().find(form.defaultDiversityMethod()).isEmpty()) {
+      throw new RuleViolation("defaultDiversityMethod", "method.unknown");
     }
     String name = form.name().strip();
     boolean taken =
