@@ -32,11 +32,14 @@ public class BoardController {
   private final BoardService boards;
   private final SiteService sites;
   private final SchedulePage schedulePage;
+  private final AnalysisService analysis;
 
-  public BoardController(BoardService boards, SiteService sites, SchedulePage schedulePage) {
+  public BoardController(
+      BoardService boards, SiteService sites, SchedulePage schedulePage, AnalysisService analysis) {
     this.boards = boards;
     this.sites = sites;
     this.schedulePage = schedulePage;
+    this.analysis = analysis;
   }
 
   @ModelAttribute
@@ -53,6 +56,9 @@ public class BoardController {
   public String site(@PathVariable long siteId, Model model) {
     model.addAttribute("site", sites.get(siteId));
     model.addAttribute("tree", boards.tree(siteId));
+    SiteAnalysis results = analysis.ofSite(siteId);
+    model.addAttribute("headlines", results.headlines());
+    model.addAttribute("siteProblems", results.demand().problems());
     return "board/site";
   }
 

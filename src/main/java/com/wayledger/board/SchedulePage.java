@@ -11,10 +11,12 @@ class SchedulePage {
 
   private final BoardRepository boards;
   private final CircuitRepository circuits;
+  private final AnalysisService analysis;
 
-  SchedulePage(BoardRepository boards, CircuitRepository circuits) {
+  SchedulePage(BoardRepository boards, CircuitRepository circuits, AnalysisService analysis) {
     this.boards = boards;
     this.circuits = circuits;
+    this.analysis = analysis;
   }
 
   @Transactional(readOnly = true)
@@ -49,6 +51,22 @@ class SchedulePage {
                 .findFirst()
                 .orElse(null));
     model.addAttribute("circuitCount", onBoard.size());
+    SiteAnalysis results = analysis.ofSite(board.getSite().getId());
+    var demand = results.boardDemand(boardId);
+    model.addAttribute("demand", demand);
+    model.addAttribute("circuitDemand", results.circuitDemands(boardId));
+    model.addAttribute("circuitFindings", results.circuitFindings(boardId));
+    model.addAttribute("circuitProblems", results.circuitProblemCounts(boardId));
+    model.addAttribute("problems", results.problems(boardId));
+    model.addAttribute("problemCounts", results.problemCounts(boardId));
+    model.addAttribute("boardFindings", results.boardFindings(boardId).orElse(null));
+    model.addAttribute("findingSettings", results.findings().settings());
+    if (demand != null) {
+      model.addAttribute(
+          "phaseChart",
+          PhaseChart.of(demand, board.getIncomer() == null ? null : board.getIncomer().getRatingAmps()));
+      model.addAttribute("connectedAmps", PhaseChart.connectedAmps(demand));
+    }
     return board;
   }
 }

@@ -96,6 +96,25 @@ public class ScheduleService {
     return circuit;
   }
 
+  /**
+   * Fits another protective device to an in-use circuit (for instance an accepted proposal), keeping its
+   * cable and loads; refused when the circuit changed since the proposal was shown.
+   */
+  @Transactional
+  public Circuit replaceDevice(long circuitId, long expectedVersion, com.wayledger.engine.DeviceSpec device) {
+    Circuit circuit = circuit(circuitId);
+    if (circuit.getVersion() != expectedVersion) {
+      throw new StaleEditException("Circuit " + circuit.getDescription());
+    }
+    if (circuit.getStatus() == WayStatus.EMPTY) {
+      throw new RuleViolation("deviceKind", "circuit.device.emptyPosition");
+    }
+    circuit.replaceDevice(DeviceDetails.fromSpec(device));
+    circuit.getBoard().markScheduleChanged();
+    entityManager.flush();
+    return circuit;
+  }
+
   /** Deletes a circuit with its loads; returns the id of the board it was on. */
   @Transactional
   public long deleteCircuit(long circuitId) {

@@ -1,0 +1,90 @@
+package com.wayledger.board;
+
+import com.wayledger.engine.Phase;
+import com.wayledger.engine.SiteSpec;
+import com.wayledger.engine.demand.BoardDemand;
+import com.wayledger.engine.demand.CircuitDemand;
+import com.wayledger.engine.demand.DemandEngine;
+import com.wayledger.engine.demand.DiversityMethodCatalog;
+import com.wayledger.engine.demand.DiversityMethods;
+import com.wayledger.engine.demand.PhaseDemand;
+import com.wayledger.engine.demand.SiteDemand;
+import com.wayledger.engine.protection.BoardLoading;
+import com.wayledger.engine.protection.CircuitLoading;
+import com.wayledger.engine.protection.ProtectionEngine;
+import com.wayledger.engine.protection.ProtectionSettings;
+import com.wayledger.engine.protection.SiteFindings;
+import com.wayledger.site.Site;
+import com.wayledger.site.SiteService;
+import java.util.EnumMap;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import org.springframework.stereotype.Service;
+import org.springframework.transaction.annotation.Transactional;
+
+/**
+ * Runs the demand and protection engines on a stored site. Results are recomputed on every read, so they
+ * can never disagree with the schedule they came from.
+ */
+@Service
+public class AnalysisService {
+
+  private final SiteService sites;
+  private final BoardRepository boards;
+
+  public AnalysisService(SiteService sites, BoardRepository boards) {
+    this.sites = sites;
+    this.boards = boards;
+  }
+
+  /** The diversity methods a board may choose from. */
+  public DiversityMethodCatalog methods() {
+    return DiversityMethods.builtIn();
+  }
+
+  @Transactional(readOnly = true)
+  public SiteAnalysis ofSite(long siteId) {
+    Site site = sites.get(siteId);
+    List<Board> onSite = boards.findBySite(siteId);
+    onSite.forEach(board -> board.getCircuits().forEach(circuit -> circuit.getLoads().size()));
+    return analyse(ScheduleMapper.toSpec(site, onSite));
+  }
+
+  @Transactional(readOnly = true)
+  public SiteAnalysis ofBoard(long boardId) {
+    Board board = boards.findById(boardId).orElseThrow(() -> new com.wayledger.system.NotFoundException("Board", boardId));
+    return ofSite(board.getSite().getId());
+  }
+
+  /** Both engines on an engine input; the demand engine's currents feed the protection checks. */
+  public SiteAnalysis analyse(SiteSpec spec) {
+    SiteDemand demand = DemandEngine.evaluate(spec, methods());
+    SiteFindings findings =
+        ProtectionEngine.check(spec, circuitLoadings(demand), boardLoadings(demand), ProtectionSettings.DEFAULTS);
+    return new SiteAnalysis(spec, demand, findings);
+  }
+
+  private static Map<Long, CircuitLoading> circuitLoadings(SiteDemand demand) {
+    Map<Long, CircuitLoading> loadings = new HashMap<>();
+    for (BoardDemand board : demand.boards()) {
+      for (CircuitDemand circuit : board.circuits()) {
+        Double designCurrent = circuit.isAssessed() ? circuit.designCurrentAmps() : null;
+        loadings.put(circuit.circuitId(), new CircuitLoading(circuit.circuitId(), designCurrent));
+      }
+    }
+    return loadings;
+  }
+
+  private static Map<Long, BoardLoading> boardLoadings(SiteDemand demand) {
+    Map<Long, BoardLoading> loadings = new HashMap<>();
+    for (BoardDemand board : demand.boards()) {
+      Map<Phase, Double> currents = new EnumMap<>(Phase.class);
+      for (PhaseDemand phase : board.phases()) {
+        currents.put(phase.phase(), phase.currentAmps());
+      }
+      loadings.put(board.boardId(), new BoardLoading(board.boardId(), currents, board.unbalancePercent()));
+    }
+    return loadings;
+  }
+}
