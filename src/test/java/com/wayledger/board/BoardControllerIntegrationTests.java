@@ -5,7 +5,7 @@ import static com.wayledger.board.PageFixtures.SITE_ID;
 import static com.wayledger.board.PageFixtures.board;
 import static com.wayledger.board.PageFixtures.boardFields;
 import static com.wayledger.board.PageFixtures.postForm;
-import static com.wayledger.board.PageFixtures.site;
+import static com.wayledger.board.PageFixtures.storeHoldsTheBoard;
 import static com.wayledger.support.Roles.editor;
 import static com.wayledger.support.Roles.viewer;
 import static org.hamcrest.Matchers.containsString;
@@ -28,30 +28,34 @@ import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.
 
 import com.wayledger.account.SecurityConfig;
 import com.wayledger.site.SiteService;
-import com.wayledger.system.NotFoundException;
 import com.wayledger.system.RuleViolation;
 import java.util.List;
+import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.webmvc.test.autoconfigure.WebMvcTest;
 import org.springframework.context.annotation.Import;
 import org.springframework.test.context.bean.override.mockito.MockitoBean;
 import org.springframework.test.web.servlet.MockMvc;
-import org.springframework.ui.Model;
 
 /** The site page with its board tree, the board page and the board forms. */
 @WebMvcTest(BoardController.class)
-@Import(SecurityConfig.class)
+@Import({SecurityConfig.class, SchedulePage.class, AnalysisService.class})
 class BoardControllerIntegrationTests {
 
   @Autowired MockMvc mvc;
   @MockitoBean BoardService boards;
   @MockitoBean SiteService sites;
-  @MockitoBean SchedulePage schedulePage;
+  @MockitoBean BoardRepository boardRepository;
+  @MockitoBean CircuitRepository circuitRepository;
+
+  @BeforeEach
+  void storedBoard() {
+    storeHoldsTheBoard(boardRepository, circuitRepository, sites);
+  }
 
   @Test
   void viewerSeesTheSiteWithItsBoardTree() throws Exception {
-    given(sites.get(SITE_ID)).willReturn(site());
     given(boards.tree(SITE_ID)).willReturn(List.of(new BoardTreeNode(board(), 0)));
 
     mvc.perform(get("/sites/{id}", SITE_ID).with(viewer()))
@@ -63,8 +67,6 @@ class BoardControllerIntegrationTests {
 
   @Test
   void viewerSeesTheBoardScheduleWithoutEditButtons() throws Exception {
-    given(schedulePage.fill(any(Model.class), eq(BOARD_ID))).willAnswer(PageFixtures::fillSchedule);
-
     mvc.perform(get("/boards/{id}", BOARD_ID).with(viewer()))
         .andExpect(status().isOk())
         .andExpect(view().name("board/board"))
@@ -74,8 +76,6 @@ class BoardControllerIntegrationTests {
 
   @Test
   void editorSeesAnAddButtonOnFreePositions() throws Exception {
-    given(schedulePage.fill(any(Model.class), eq(BOARD_ID))).willAnswer(PageFixtures::fillSchedule);
-
     mvc.perform(get("/boards/{id}", BOARD_ID).with(editor()))
         .andExpect(status().isOk())
         .andExpect(content().string(containsString("class=\"small add\"")));
@@ -83,8 +83,6 @@ class BoardControllerIntegrationTests {
 
   @Test
   void unknownBoardIsNotFound() throws Exception {
-    given(schedulePage.fill(any(Model.class), eq(404L))).willThrow(new NotFoundException("Board", 404));
-
     mvc.perform(get("/boards/404").with(viewer()))
         .andExpect(status().isNotFound())
         .andExpect(view().name("error/problem"));
@@ -97,7 +95,6 @@ class BoardControllerIntegrationTests {
 
   @Test
   void editorOpensTheNewBoardForm() throws Exception {
-    given(sites.get(SITE_ID)).willReturn(site());
 
     mvc.perform(get("/sites/{id}/boards/new", SITE_ID).with(editor()))
         .andExpect(status().isOk())
@@ -127,7 +124,6 @@ class BoardControllerIntegrationTests {
 
   @Test
   void savedBoardRedirectsToItsPage() throws Exception {
-    given(sites.get(SITE_ID)).willReturn(site());
     given(boards.create(eq(SITE_ID), any())).willReturn(board());
 
     mvc.perform(postForm("/sites/3/boards", boardFields()).with(editor()).with(csrf()))
@@ -137,7 +133,6 @@ class BoardControllerIntegrationTests {
 
   @Test
   void zeroWaysComesBackWith422AndTheMessage() throws Exception {
-    given(sites.get(SITE_ID)).willReturn(site());
 
     mvc.perform(postForm("/sites/3/boards", boardFields(), "wayCount", "0").with(editor()).with(csrf()))
         .andExpect(status().is(422))
@@ -149,7 +144,6 @@ class BoardControllerIntegrationTests {
 
   @Test
   void lettersForTheNumberOfWaysKeepTheReferenceTyped() throws Exception {
-    given(sites.get(SITE_ID)).willReturn(site());
 
     mvc.perform(postForm("/sites/3/boards", boardFields(), "wayCount", "twelve").with(editor()).with(csrf()))
         .andExpect(status().is(422))
@@ -161,7 +155,6 @@ class BoardControllerIntegrationTests {
 
   @Test
   void coincidenceFactorAboveOneIsRefused() throws Exception {
-    given(sites.get(SITE_ID)).willReturn(site());
 
     mvc.perform(postForm("/sites/3/boards", boardFields(), "coincidenceFactor", "1.5").with(editor()).with(csrf()))
         .andExpect(status().is(422))
@@ -171,7 +164,6 @@ class BoardControllerIntegrationTests {
 
   @Test
   void ruleBrokenInTheServiceShowsBesideItsField() throws Exception {
-    given(sites.get(SITE_ID)).willReturn(site());
     given(boards.create(eq(SITE_ID), any())).willThrow(new RuleViolation("reference", "board.reference.taken"));
 
     mvc.perform(postForm("/sites/3/boards", boardFields()).with(editor()).with(csrf()))

@@ -1,5 +1,7 @@
 package com.wayledger.board;
 
+import static org.mockito.BDDMockito.given;
+
 import com.wayledger.engine.DeviceKind;
 import com.wayledger.engine.EarthingSystem;
 import com.wayledger.engine.LoadCategory;
@@ -8,14 +10,14 @@ import com.wayledger.engine.RatingUnit;
 import com.wayledger.engine.TripCurve;
 import com.wayledger.engine.WayStatus;
 import com.wayledger.site.Site;
+import com.wayledger.site.SiteService;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.LinkedHashMap;
-import org.mockito.invocation.InvocationOnMock;
+import java.util.Optional;
 import org.springframework.test.util.ReflectionTestUtils;
 import org.springframework.test.web.servlet.request.MockHttpServletRequestBuilder;
 import org.springframework.test.web.servlet.request.MockMvcRequestBuilders;
-import org.springframework.ui.Model;
 
 /** Stored-looking sites, boards and circuits for controller slices, where no database runs. */
 final class PageFixtures {
@@ -58,15 +60,16 @@ final class PageFixtures {
     return circuit;
   }
 
-  /** Answers SchedulePage.fill as the real one would for {@link #board()} with no circuits. */
-  static Board fillSchedule(InvocationOnMock call) {
-    Model model = call.getArgument(0);
+  /**
+   * Makes the mocked store hold {@link #board()} (no circuits) on its site, so that the real SchedulePage and
+   * AnalysisService can fill the page as they do in the running app. Returns the stored board.
+   */
+  static Board storeHoldsTheBoard(BoardRepository boards, CircuitRepository circuits, SiteService sites) {
     Board board = board();
-    model.addAttribute("board", board);
-    model.addAttribute("site", board.getSite());
-    model.addAttribute("rows", ScheduleRows.of(board, List.of()));
-    model.addAttribute("focusElementId", null);
-    model.addAttribute("circuitCount", 0);
+    given(boards.findById(BOARD_ID)).willReturn(Optional.of(board));
+    given(boards.findBySite(SITE_ID)).willReturn(List.of(board));
+    given(circuits.findByBoard(BOARD_ID)).willReturn(List.of());
+    given(sites.get(SITE_ID)).willReturn(board.getSite());
     return board;
   }
 

@@ -7,6 +7,7 @@ import static com.wayledger.board.PageFixtures.circuit;
 import static com.wayledger.board.PageFixtures.circuitFields;
 import static com.wayledger.board.PageFixtures.loadFields;
 import static com.wayledger.board.PageFixtures.postForm;
+import static com.wayledger.board.PageFixtures.storeHoldsTheBoard;
 import static com.wayledger.support.Roles.editor;
 import static com.wayledger.support.Roles.viewer;
 import static org.hamcrest.Matchers.containsString;
@@ -28,6 +29,7 @@ import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.
 
 import com.wayledger.account.SecurityConfig;
 import com.wayledger.engine.PhasePosition;
+import com.wayledger.site.SiteService;
 import com.wayledger.system.NotFoundException;
 import com.wayledger.system.RuleViolation;
 import java.util.List;
@@ -38,11 +40,10 @@ import org.springframework.boot.webmvc.test.autoconfigure.WebMvcTest;
 import org.springframework.context.annotation.Import;
 import org.springframework.test.context.bean.override.mockito.MockitoBean;
 import org.springframework.test.web.servlet.MockMvc;
-import org.springframework.ui.Model;
 
 /** Inline editing of the schedule: the htmx fragments, whole-page fallbacks, roles and bad input. */
 @WebMvcTest(ScheduleController.class)
-@Import(SecurityConfig.class)
+@Import({SecurityConfig.class, SchedulePage.class, AnalysisService.class})
 class ScheduleControllerIntegrationTests {
 
   private static final String EDITOR_FRAGMENT = "board/schedule :: circuitEditor";
@@ -50,15 +51,15 @@ class ScheduleControllerIntegrationTests {
 
   @Autowired MockMvc mvc;
   @MockitoBean ScheduleService schedule;
-  @MockitoBean SchedulePage schedulePage;
   @MockitoBean BoardService boards;
+  @MockitoBean SiteService sites;
+  @MockitoBean BoardRepository boardRepository;
+  @MockitoBean CircuitRepository circuitRepository;
 
   @BeforeEach
   void storedBoard() {
-    Board board = board();
+    Board board = storeHoldsTheBoard(boardRepository, circuitRepository, sites);
     given(boards.get(BOARD_ID)).willReturn(board);
-    given(schedulePage.fill(any(Model.class), eq(BOARD_ID))).willAnswer(PageFixtures::fillSchedule);
-    given(schedulePage.fill(any(Model.class), eq(BOARD_ID), any())).willAnswer(PageFixtures::fillSchedule);
   }
 
   private void storedCircuit() {
