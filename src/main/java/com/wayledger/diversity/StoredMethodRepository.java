@@ -2,4 +2,4 @@ package com.wayledger.diversity;
 
 import org.springframework.data.jpa.repository.JpaRepository;
 
-interface StoredMethodRepository extends JpaRepository<StoredMethod, String> {}
+public interface StoredMethodRepository extends JpaRepository<StoredMethod, String> {}

@@ -1,5 +1,7 @@
 package com.wayledger.board;
 
+import com.wayledger.diversity.MethodLibrary;
+import com.wayledger.diversity.StoredMethodRepository;
 import static com.wayledger.board.PageFixtures.BOARD_ID;
 import static com.wayledger.board.PageFixtures.SITE_ID;
 import static com.wayledger.board.PageFixtures.board;
@@ -40,11 +42,12 @@ import org.springframework.test.web.servlet.MockMvc;
 
 /** The site page with its board tree, the board page and the board forms. */
 @WebMvcTest(BoardController.class)
-@Import({SecurityConfig.class, SchedulePage.class, AnalysisService.class})
+@Import({SecurityConfig.class, MethodLibrary.class, SchedulePage.class, AnalysisService.class})
 class BoardControllerIntegrationTests {
 
   @Autowired MockMvc mvc;
   @MockitoBean BoardService boards;
+  @MockitoBean StoredMethodRepository storedMethods;
   @MockitoBean SiteService sites;
   @MockitoBean BoardRepository boardRepository;
   @MockitoBean CircuitRepository circuitRepository;

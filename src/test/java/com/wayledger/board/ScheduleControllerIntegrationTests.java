@@ -1,5 +1,7 @@
 package com.wayledger.board;
 
+import com.wayledger.diversity.MethodLibrary;
+import com.wayledger.diversity.StoredMethodRepository;
 import static com.wayledger.board.PageFixtures.BOARD_ID;
 import static com.wayledger.board.PageFixtures.CIRCUIT_ID;
 import static com.wayledger.board.PageFixtures.board;
@@ -43,7 +45,7 @@ import org.springframework.test.web.servlet.MockMvc;
 
 /** Inline editing of the schedule: the htmx fragments, whole-page fallbacks, roles and bad input. */
 @WebMvcTest(ScheduleController.class)
-@Import({SecurityConfig.class, SchedulePage.class, AnalysisService.class})
+@Import({SecurityConfig.class, MethodLibrary.class, SchedulePage.class, AnalysisService.class})
 class ScheduleControllerIntegrationTests {
 
   private static final String EDITOR_FRAGMENT = "board/schedule :: circuitEditor";
@@ -51,6 +53,7 @@ class ScheduleControllerIntegrationTests {
 
   @Autowired MockMvc mvc;
   @MockitoBean ScheduleService schedule;
+  @MockitoBean StoredMethodRepository storedMethods;
   @MockitoBean BoardService boards;
   @MockitoBean SiteService sites;
   @MockitoBean BoardRepository boardRepository;

@@ -1,5 +1,7 @@
 package com.wayledger.site;
 
+import com.wayledger.diversity.MethodLibrary;
+import com.wayledger.diversity.StoredMethodRepository;
 import static com.wayledger.support.Roles.editor;
 import static com.wayledger.support.Roles.viewer;
 import static org.hamcrest.Matchers.containsString;
@@ -37,11 +39,12 @@ import org.springframework.test.web.servlet.request.MockHttpServletRequestBuilde
 
 /** The site pages: who may see and change them, and how bad input comes back. */
 @WebMvcTest(SiteController.class)
-@Import(SecurityConfig.class)
+@Import({SecurityConfig.class, MethodLibrary.class})
 class SiteControllerIntegrationTests {
 
   @Autowired MockMvc mvc;
   @MockitoBean SiteService sites;
+  @MockitoBean StoredMethodRepository storedMethods;
 
   static Site storedSite(long id, String name) {
     Site site = new Site(name);
