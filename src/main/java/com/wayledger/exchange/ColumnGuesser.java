@@ -28,6 +28,14 @@ public final class ColumnGuesser {
   /** One proposed field per column. */
   public static List<ImportField> guess(SheetTable table) {
     int columns = table.headers().size();
+    if (table.isOwnExport()) {
+      List<ImportField> own = new ArrayList<>(columns);
+      for (String header : table.headers()) {
+        ScheduleColumn column = ScheduleColumn.byHeader(header);
+        own.add(column.isInput() ? ImportField.of(column) : ImportField.IGNORE);
+      }
+      return own;
+    }
     List<int[]> candidates = new ArrayList<>(); // {column, field ordinal, score}
     for (int c = 0; c < columns; c++) {
       List<String> sample = sample(table, c);

@@ -136,10 +136,9 @@ public final class RowReader {
         planned = new Planned(circuit, row.number(), problems.isEmpty());
         if (circuit.wayNumber() != null && circuit.position() != null) {
           byKey.putIfAbsent(circuit.wayNumber() + ":" + circuit.position(), planned);
-          if (problems.isEmpty()) {
-            for (Phase phase : circuit.position().phases()) {
-              slotRow.putIfAbsent(BoardContext.slot(circuit.wayNumber(), phase), row.number());
-            }
+          // a position claimed by a row with problems is still claimed: two rows for one position are ambiguous
+          for (Phase phase : circuit.position().phases()) {
+            slotRow.putIfAbsent(BoardContext.slot(circuit.wayNumber(), phase), row.number());
           }
         }
       } else if (problems.isEmpty()) {

@@ -189,7 +189,13 @@ public final class SpreadsheetReader {
     List<String> headers = new ArrayList<>(header.cells());
     int width = headers.size();
     List<SheetTable.Row> rows = new ArrayList<>();
+    boolean own = ownHeaders(headers);
+    int previous = header.number();
     for (SheetTable.Row row : raw.subList(best + 1, raw.size())) {
+      if (own && row.number() != previous + 1) {
+        break; // our export leaves a blank row between the schedule and its totals block
+      }
+      previous = row.number();
       width = Math.max(width, row.cells().size());
       rows.add(row);
     }
@@ -211,6 +217,10 @@ public final class SpreadsheetReader {
       padded.add(new SheetTable.Row(row.number(), cells));
     }
     return new SheetTable(names, index, header.number(), headers, padded);
+  }
+
+  private static boolean ownHeaders(List<String> headers) {
+    return new SheetTable(List.of(), 0, 0, headers, List.of()).isOwnExport();
   }
 
   // ------------------------------------------------------------------ CSV
