@@ -29,7 +29,9 @@ public final class CsvWriter {
       header.add(column.header());
     }
     double u0 = figures.demand() != null ? figures.demand().nominalVoltageVolts() : data.demand().nominalVoltageVolts();
-    try (CSVPrinter printer = new CSVPrinter(out, CSVFormat.RFC4180.builder().setHeader(header.toArray(String[]::new)).get())) {
+    // not closed here: the caller owns the writer (a response stream, say)
+    CSVPrinter printer = new CSVPrinter(out, CSVFormat.RFC4180.builder().setHeader(header.toArray(String[]::new)).get());
+    {
       for (CircuitEntry entry : board.circuits()) {
         BoardFigures.CircuitFigures f = figures.circuit(entry.circuitId());
         List<LoadForm> loads = entry.loads().isEmpty() ? Collections.singletonList(null) : entry.loads();
@@ -40,6 +42,7 @@ public final class CsvWriter {
         }
       }
     }
+    printer.flush();
   }
 
   private static List<String> row(CircuitForm c, LoadForm l, BoardFigures.CircuitFigures f, boolean first, double u0) {
