@@ -8,7 +8,7 @@ import java.util.List;
  */
 public enum ImportField {
   IGNORE(null, List.of()),
-  WAY(ScheduleColumn.WAY, List.of("way", "way no", "no", "number", "nr", "cct no", "circuit no", "circuit number", "position", "#")),
+  WAY(ScheduleColumn.WAY, List.of("way", "way no", "cct", "ckt", "circuit ref", "no", "number", "nr", "cct no", "circuit no", "circuit number", "position", "#")),
   LINE(ScheduleColumn.LINE, List.of("line", "phase", "ph", "phases", "pole position", "l")),
   CIRCUIT(ScheduleColumn.CIRCUIT, List.of("circuit", "description", "circuit description", "feeds", "serving", "designation", "name", "destination", "what it feeds")),
   STATE(ScheduleColumn.STATE, List.of("state", "status", "in use")),
@@ -40,7 +40,7 @@ public enum ImportField {
   SURGE_MILLIS(ScheduleColumn.SURGE_MILLIS, List.of("surge ms", "inrush ms", "start ms", "ms")),
   CONTINUOUS(ScheduleColumn.CONTINUOUS, List.of("continuous", "cont")),
   DEVICE_SUMMARY(null, List.of("protection", "breaker", "mcb", "ocpd", "protective device", "device rating", "fuse", "overcurrent device")),
-  LOAD_KILOWATTS(null, List.of("kw", "load kw", "power kw", "demand kw", "installed kw", "connected kw")),
+  LOAD_KILOWATTS(null, List.of("kw", "kilowatts", "kilowatt", "load kw", "power kw", "demand kw", "installed kw", "connected kw")),
   LOAD_WATTS(null, List.of("w", "watts", "load w", "power w", "wattage")),
   LOAD_AMPS(null, List.of("load a", "ib", "ib a", "design current", "load current", "current a", "full load current", "flc"));
 
