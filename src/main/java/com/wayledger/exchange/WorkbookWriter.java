@@ -71,7 +71,6 @@ public final class WorkbookWriter {
    */
   public void write(ExportData data, boolean withSummary, OutputStream out) throws IOException {
     SXSSFWorkbook workbook = new SXSSFWorkbook(WINDOW_ROWS);
-    workbook.setCompressTempFiles(true);
     try {
       WorkbookStyles styles = new WorkbookStyles(workbook);
       Set<String> names = new HashSet<>(Set.of(SUMMARY_SHEET.toLowerCase(Locale.ROOT), FINDINGS_SHEET.toLowerCase(Locale.ROOT), METHODS_SHEET.toLowerCase(Locale.ROOT)));

@@ -32,9 +32,9 @@ import java.util.Random;
  * Invented boards for the exchange tests and the benchmark, built without a database: the same entries are
  * turned into engine inputs here (in the test) as the board feature's mapper does for stored boards.
  */
-final class ExchangeFixtures {
+public final class ExchangeFixtures {
 
-  static final String CAUTION = "Figures assist a competent person (test caution).";
+  public static final String CAUTION = "Figures assist a competent person (test caution).";
 
   private ExchangeFixtures() {}
 
@@ -111,7 +111,7 @@ final class ExchangeFixtures {
         new SupplySpec(EarthingSystem.TN_C_S, 230.0, 3, 50.0, 0.35, 16.0, 100.0), methodKey, specs);
   }
 
-  static ExportData export(List<BoardEntry> boards, String methodKey) {
+  public static ExportData export(List<BoardEntry> boards, String methodKey) {
     SiteAnalysis analysis = new AnalysisService(null, null).analyse(spec(boards, methodKey));
     return new ExportData(9L, "Tallow test shop", "TN_C_S", boards, analysis.demand(), analysis.findings(),
         LocalDate.of(2025, 3, 14));
@@ -122,7 +122,7 @@ final class ExchangeFixtures {
   }
 
   /** A generated site of many boards, seeded so every run writes the same workbook. */
-  static List<BoardEntry> generated(int circuits, int perBoard, long seed) {
+  public static List<BoardEntry> generated(int circuits, int perBoard, long seed) {
     Random random = new Random(seed);
     LoadCategory[] categories = {LoadCategory.LIGHTING, LoadCategory.SOCKET_OUTLETS, LoadCategory.SPACE_HEATING, LoadCategory.MOTOR, LoadCategory.OTHER};
     List<BoardEntry> boards = new ArrayList<>();
