@@ -1,6 +1,5 @@
 package com.wayledger.exchange;
 
-import com.wayledger.board.LoadForm;
 import com.wayledger.engine.Phase;
 import com.wayledger.engine.PhasePosition;
 import com.wayledger.engine.demand.BoardDemand;
@@ -25,6 +24,8 @@ final class BoardFigures {
   record CircuitFigures(
       double diversityActive,
       double diversityReactive,
+      double ownConnectedWatts,
+      double ownConnectedVars,
       double connectedCurrentAmps,
       double designCurrentAmps,
       boolean feedsSubBoard,
@@ -44,20 +45,14 @@ final class BoardFigures {
     if (demand == null) {
       return;
     }
-    Map<Long, CircuitEntry> entries = new HashMap<>();
-    board.circuits().forEach(entry -> entries.put(entry.circuitId(), entry));
     for (CircuitDemand circuit : demand.circuits()) {
       BoardDemand child = circuit.feedsBoardId() == null ? null : site.board(circuit.feedsBoardId());
       double childWatts = 0;
       double childVars = 0;
       double childConnectedWatts = 0;
       double childConnectedVars = 0;
-      // the engine carries a sub-board on the way it chose; that way's connected load then includes the child's
-      double[] own = ownConnected(entries.get(circuit.circuitId()), demand.nominalVoltageVolts());
-      boolean carried =
-          child != null
-              && child.connectedWatts() > 0
-              && Math.abs(circuit.connectedWatts() - own[0] - child.connectedWatts()) <= 1e-6 * (1 + child.connectedWatts());
+      // the engine carries a sub-board's demand on the way it chose; that way then shows it
+      boolean carried = child != null && circuit.subBoardDemandVoltAmperes() > 0;
       if (carried) {
         double k = child.coincidenceFactor();
         childWatts = child.demandWatts() * k;
@@ -77,25 +72,14 @@ final class BoardFigures {
           new CircuitFigures(
               ratio(ownDemandWatts, ownConnectedWatts),
               ratio(ownDemandVars, ownConnectedVars),
+              ownConnectedWatts,
+              ownConnectedVars,
               circuit.connectedCurrentAmps(),
               circuit.designCurrentAmps(),
               child != null,
               problems.getOrDefault(circuit.circuitId(), 0),
               circuit.isAssessed()));
     }
-  }
-
-  private static double[] ownConnected(CircuitEntry entry, double nominalVoltageVolts) {
-    double[] sum = new double[2];
-    if (entry == null) {
-      return sum;
-    }
-    for (LoadForm load : entry.loads()) {
-      double[] pq = LoadPower.of(load, entry.circuit().position(), nominalVoltageVolts);
-      sum[0] += pq[0];
-      sum[1] += pq[1];
-    }
-    return sum;
   }
 
   private void carryToPhases(PhasePosition position, BoardDemand child, double k) {

@@ -15,7 +15,8 @@ import org.apache.commons.csv.CSVPrinter;
 
 /**
  * Writes one board's schedule as CSV: a header row, then one row per load line with the same columns as the
- * workbook. Computed columns hold the engine's figures as plain numbers (CSV holds no formulas). User text
+ * workbook. Computed columns hold the engine's figures for each circuit, on its first row, as plain numbers
+ * (CSV holds no formulas). User text
  * that could start a formula is prefixed with a single quote.
  */
 public final class CsvWriter {
@@ -28,7 +29,6 @@ public final class CsvWriter {
     for (ScheduleColumn column : ScheduleColumn.values()) {
       header.add(column.header());
     }
-    double u0 = figures.demand() != null ? figures.demand().nominalVoltageVolts() : data.demand().nominalVoltageVolts();
     // not closed here: the caller owns the writer (a response stream, say)
     CSVPrinter printer = new CSVPrinter(out, CSVFormat.RFC4180.builder().setHeader(header.toArray(String[]::new)).get());
     {
@@ -37,7 +37,7 @@ public final class CsvWriter {
         List<LoadForm> loads = entry.loads().isEmpty() ? Collections.singletonList(null) : entry.loads();
         boolean first = true;
         for (LoadForm load : loads) {
-          printer.printRecord(row(entry.circuit(), load, f, first, u0));
+          printer.printRecord(row(entry.circuit(), load, f, first));
           first = false;
         }
       }
@@ -45,7 +45,7 @@ public final class CsvWriter {
     printer.flush();
   }
 
-  private static List<String> row(CircuitForm c, LoadForm l, BoardFigures.CircuitFigures f, boolean first, double u0) {
+  private static List<String> row(CircuitForm c, LoadForm l, BoardFigures.CircuitFigures f, boolean first) {
     String[] cells = new String[ScheduleColumn.values().length];
     cells[WAY.ordinal()] = num(c.wayNumber());
     cells[LINE.ordinal()] = Codes.line(c.position());
@@ -69,8 +69,6 @@ public final class CsvWriter {
     cells[GROUPED.ordinal()] = num(c.cableGroupedCircuits());
     cells[THERMAL_INSULATION_MM.ordinal()] = num(c.cableThermalInsulationMm());
     cells[MEASURED_ZS.ordinal()] = num(c.measuredLoopImpedanceOhms());
-    double connectedKw = 0;
-    double connectedKvar = 0;
     if (l != null) {
       cells[LOAD.ordinal()] = CellText.forCsv(l.description());
       cells[CATEGORY.ordinal()] = name(l.category());
@@ -81,19 +79,17 @@ public final class CsvWriter {
       cells[SURGE_MULTIPLE.ordinal()] = num(l.startUpSurgeMultiple());
       cells[SURGE_MILLIS.ordinal()] = num(l.startUpSurgeMillis());
       cells[CONTINUOUS.ordinal()] = Codes.yes(l.continuous());
-      double[] pq = LoadPower.of(l, c.position(), u0);
-      connectedKw = pq[0] / 1000.0;
-      connectedKvar = pq[1] / 1000.0;
     }
-    double dp = f == null ? 1.0 : f.assessed() ? f.diversityActive() : 0.0;
-    double dq = f == null ? 1.0 : f.assessed() ? f.diversityReactive() : 0.0;
-    cells[CONNECTED_KW.ordinal()] = fixed(connectedKw, 3);
-    cells[CONNECTED_KVAR.ordinal()] = fixed(connectedKvar, 3);
-    cells[DIVERSITY_P.ordinal()] = fixed(dp, 3);
-    cells[DIVERSITY_Q.ordinal()] = fixed(dq, 3);
-    cells[DEMAND_KW.ordinal()] = fixed(connectedKw * dp, 3);
-    cells[DEMAND_KVAR.ordinal()] = fixed(connectedKvar * dq, 3);
+    // CSV holds no formulas: the computed columns carry the circuit's own figures, on its first row only
     if (first && f != null) {
+      double dp = f.assessed() ? f.diversityActive() : 0.0;
+      double dq = f.assessed() ? f.diversityReactive() : 0.0;
+      cells[CONNECTED_KW.ordinal()] = fixed(f.ownConnectedWatts() / 1000.0, 3);
+      cells[CONNECTED_KVAR.ordinal()] = fixed(f.ownConnectedVars() / 1000.0, 3);
+      cells[DIVERSITY_P.ordinal()] = fixed(dp, 3);
+      cells[DIVERSITY_Q.ordinal()] = fixed(dq, 3);
+      cells[DEMAND_KW.ordinal()] = fixed(f.ownConnectedWatts() * dp / 1000.0, 3);
+      cells[DEMAND_KVAR.ordinal()] = fixed(f.ownConnectedVars() * dq / 1000.0, 3);
       cells[IB_CONNECTED.ordinal()] = fixed(f.connectedCurrentAmps(), 1);
       cells[IB_DESIGN.ordinal()] = fixed(f.designCurrentAmps(), 1);
       cells[FINDINGS.ordinal()] = Integer.toString(f.problemFindings());
