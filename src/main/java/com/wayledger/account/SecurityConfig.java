@@ -66,7 +66,7 @@ public class SecurityConfig {
                     .hasRole("ADMIN")
                     .requestMatchers(HttpMethod.POST, CHANGES)
                     .hasRole("EDITOR")
-                    .requestMatchers(HttpMethod.GET, "/sites/new", "/sites/*/edit", "/sites/*/boards/new", "/boards/*/edit", "/boards/*/circuits/new", "/circuits/*/edit", "/loads/*/edit")
+                    .requestMatchers(HttpMethod.GET, "/sites/new", "/sites/*/edit", "/sites/*/boards/new", "/boards/*/edit", "/boards/*/circuits/new", "/circuits/*/edit", "/loads/*/edit", "/boards/*/import", "/boards/*/import/**")
                     .hasRole("EDITOR")
                     .anyRequest()
                     .hasRole("VIEWER"))

@@ -1,0 +1,32 @@
+package com.wayledger.exchange;
+
+import com.wayledger.engine.demand.SiteDemand;
+import com.wayledger.engine.protection.SiteFindings;
+import java.time.LocalDate;
+import java.util.List;
+
+/**
+ * Everything an export writes, read in one transaction: the site's facts, the boards to write (in tree
+ * order) with their circuits and loads, and the engine's figures for the whole site.
+ *
+ * @param siteId the site
+ * @param siteName its name
+ * @param earthing earthing system as text
+ * @param boards the boards to write, each parent before its children
+ * @param demand the demand engine's result for the whole site
+ * @param findings the protection engine's result for the whole site
+ * @param exportedOn the date printed on every sheet
+ */
+public record ExportData(
+    long siteId,
+    String siteName,
+    String earthing,
+    List<BoardEntry> boards,
+    SiteDemand demand,
+    SiteFindings findings,
+    LocalDate exportedOn) {
+
+  public ExportData {
+    boards = List.copyOf(boards);
+  }
+}

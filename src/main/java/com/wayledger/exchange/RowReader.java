@@ -1,0 +1,495 @@
+package com.wayledger.exchange;
+
+import static com.wayledger.exchange.ImportField.*;
+
+import com.wayledger.board.CircuitForm;
+import com.wayledger.board.LoadForm;
+import com.wayledger.engine.ConductorMaterial;
+import com.wayledger.engine.DeviceKind;
+import com.wayledger.engine.InstallationMethod;
+import com.wayledger.engine.Insulation;
+import com.wayledger.engine.LoadCategory;
+import com.wayledger.engine.Phase;
+import com.wayledger.engine.PhasePosition;
+import com.wayledger.engine.RatingUnit;
+import com.wayledger.engine.RcdType;
+import com.wayledger.engine.TripCurve;
+import com.wayledger.engine.WayStatus;
+import jakarta.validation.ConstraintViolation;
+import jakarta.validation.Validator;
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Set;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+/**
+ * Turns the rows of a mapped sheet into the circuits and loads they describe, checking each cell and each
+ * schedule rule (ways within the board, one circuit per position, a device where the way is used) so that
+ * the preview shows every problem beside its row and column before anything is stored.
+ *
+ * <p>Rows with the same way and line and the same circuit fields are one circuit with several loads (that
+ * is how our export writes a circuit); a row with no way, line or circuit text but a load continues the
+ * circuit above.
+ */
+public final class RowReader {
+
+  /** The board the rows go into. */
+  public record BoardContext(int phases, int wayCount, Set<String> occupied) {
+
+    boolean isThreePhase() {
+      return phases == 3;
+    }
+
+    static String slot(int way, Phase phase) {
+      return way + ":" + phase.name();
+    }
+  }
+
+  private static final Pattern DEVICE_TEXT =
+      Pattern.compile("(?i)^\\s*(MCB|RCBO|RCD|MCCB|FUSE)?\\s*([BCD])?\\s*(\\d+(?:[.,]\\d+)?)\\s*A?\\s*(?:/?\\s*(\\d+(?:[.,]\\d+)?)\\s*mA)?\\s*(MCB|RCBO|RCD|MCCB|FUSE)?\\s*$");
+
+  private static final Map<String, ImportField> CIRCUIT_PROPERTIES = Map.ofEntries(
+      Map.entry("wayNumber", WAY), Map.entry("position", LINE), Map.entry("description", CIRCUIT),
+      Map.entry("status", STATE), Map.entry("deviceKind", DEVICE), Map.entry("deviceCurve", CURVE),
+      Map.entry("deviceRatingAmps", RATING_AMPS), Map.entry("devicePoles", POLES),
+      Map.entry("deviceBreakingCapacityKiloAmps", BREAKING_KILOAMPS), Map.entry("deviceResidualMilliAmps", RESIDUAL_MILLIAMPS),
+      Map.entry("cableLineCsa", LINE_CSA), Map.entry("cableCpcCsa", CPC_CSA), Map.entry("cableLengthMetres", LENGTH_METRES),
+      Map.entry("cableAmbientCelsius", AMBIENT_CELSIUS), Map.entry("cableGroupedCircuits", GROUPED),
+      Map.entry("cableThermalInsulationMm", THERMAL_INSULATION_MM), Map.entry("measuredLoopImpedanceOhms", MEASURED_ZS));
+
+  private static final Map<String, ImportField> LOAD_PROPERTIES = Map.of(
+      "description", LOAD, "category", CATEGORY, "quantity", QUANTITY, "ratingValue", RATING, "ratingUnit", UNIT,
+      "powerFactor", POWER_FACTOR, "startUpSurgeMultiple", SURGE_MULTIPLE, "startUpSurgeMillis", SURGE_MILLIS);
+
+  private final Validator validator;
+
+  public RowReader(Validator validator) {
+    this.validator = validator;
+  }
+
+  public ImportPlan read(SheetTable table, List<ImportField> mapping, BoardContext board) {
+    Map<ImportField, Integer> columnOf = new EnumMap<>(ImportField.class);
+    for (int c = 0; c < mapping.size(); c++) {
+      if (mapping.get(c) != IGNORE) {
+        columnOf.putIfAbsent(mapping.get(c), c);
+      }
+    }
+    List<ImportPlan.PreviewRow> rows = new ArrayList<>();
+    Map<String, Planned> byKey = new LinkedHashMap<>();
+    Map<String, Integer> slotRow = new HashMap<>();
+    Planned previous = null;
+    for (SheetTable.Row row : table.rows()) {
+      Cells cells = new Cells(row, columnOf);
+      List<ImportPlan.Problem> problems = new ArrayList<>();
+      List<String> notes = new ArrayList<>();
+      boolean hasLoad = cells.anyFilled(LOAD, CATEGORY, QUANTITY, RATING, UNIT, POWER_FACTOR, SURGE_MULTIPLE, SURGE_MILLIS, LOAD_KILOWATTS, LOAD_WATTS, LOAD_AMPS);
+      boolean continuation = cells.blank(WAY) && cells.blank(LINE) && cells.blank(CIRCUIT) && hasLoad && previous != null;
+      if (continuation) {
+        LoadForm load = readLoad(cells, previous.circuit.description(), problems, notes);
+        if (!previous.valid) {
+          problems.add(new ImportPlan.Problem(WAY, "import.cell.circuitInvalid", new Object[] {previous.firstRow}));
+        } else if (previous.circuit.status() != WayStatus.IN_USE) {
+          problems.add(new ImportPlan.Problem(LOAD, "import.cell.loadOnUnused", new Object[0]));
+        }
+        if (problems.isEmpty()) {
+          previous.loads.add(load);
+          previous.rows.add(row.number());
+        }
+        rows.add(new ImportPlan.PreviewRow(row.number(), null, load, problems, notes));
+        continue;
+      }
+      CircuitForm circuit = readCircuit(cells, board, problems, notes);
+      LoadForm load = hasLoad ? readLoad(cells, circuit.description(), problems, notes) : null;
+      if (load != null && circuit.status() != null && circuit.status() != WayStatus.IN_USE) {
+        problems.add(new ImportPlan.Problem(cells.source(LOAD), "import.cell.loadOnUnused", new Object[0]));
+      }
+      Planned planned = null;
+      if (circuit.wayNumber() != null && circuit.position() != null) {
+        String key = circuit.wayNumber() + ":" + circuit.position();
+        Planned same = byKey.get(key);
+        if (same != null && same.circuit.equals(circuit)) {
+          planned = same; // another load of a circuit already read
+          if (!same.valid) {
+            problems.add(new ImportPlan.Problem(WAY, "import.cell.circuitInvalid", new Object[] {same.firstRow}));
+          }
+        } else {
+          for (Phase phase : circuit.position().phases()) {
+            String slot = BoardContext.slot(circuit.wayNumber(), phase);
+            if (slotRow.containsKey(slot)) {
+              problems.add(new ImportPlan.Problem(LINE, "import.cell.duplicate", new Object[] {slotRow.get(slot)}));
+              break;
+            }
+            if (board.occupied().contains(slot)) {
+              problems.add(new ImportPlan.Problem(LINE, "import.cell.taken", new Object[] {circuit.wayNumber(), phase.name()}));
+              break;
+            }
+          }
+        }
+      }
+      if (planned == null) {
+        planned = new Planned(circuit, row.number(), problems.isEmpty());
+        if (circuit.wayNumber() != null && circuit.position() != null) {
+          byKey.putIfAbsent(circuit.wayNumber() + ":" + circuit.position(), planned);
+          // a position claimed by a row with problems is still claimed: two rows for one position are ambiguous
+          for (Phase phase : circuit.position().phases()) {
+            slotRow.putIfAbsent(BoardContext.slot(circuit.wayNumber(), phase), row.number());
+          }
+        }
+      } else if (problems.isEmpty()) {
+        planned.rows.add(row.number());
+      }
+      if (problems.isEmpty() && load != null) {
+        planned.loads.add(load);
+      }
+      previous = planned;
+      rows.add(new ImportPlan.PreviewRow(row.number(), circuit, load, problems, notes));
+    }
+    List<ImportPlan.PlannedCircuit> circuits = new ArrayList<>();
+    for (Planned planned : distinct(byKey, rows)) {
+      if (planned.valid) {
+        circuits.add(new ImportPlan.PlannedCircuit(planned.circuit, List.copyOf(planned.loads), List.copyOf(planned.rows)));
+      }
+    }
+    return new ImportPlan(rows, circuits);
+  }
+
+  private static List<Planned> distinct(Map<String, Planned> byKey, List<ImportPlan.PreviewRow> rows) {
+    return new ArrayList<>(byKey.values());
+  }
+
+  private static final class Planned {
+    final CircuitForm circuit;
+    final int firstRow;
+    final boolean valid;
+    final List<LoadForm> loads = new ArrayList<>();
+    final List<Integer> rows = new ArrayList<>();
+
+    Planned(CircuitForm circuit, int firstRow, boolean valid) {
+      this.circuit = circuit;
+      this.firstRow = firstRow;
+      this.valid = valid;
+      rows.add(firstRow);
+    }
+  }
+
+  // ---------------------------------------------------------------- circuit
+
+  private CircuitForm readCircuit(Cells cells, BoardContext board, List<ImportPlan.Problem> problems, List<String> notes) {
+    Integer way = cells.whole(WAY, problems);
+    if (way == null && !cells.hasError(problems, WAY)) {
+      problems.add(new ImportPlan.Problem(WAY, "import.cell.wayMissing", new Object[0]));
+    }
+    PhasePosition position = null;
+    if (cells.blank(LINE)) {
+      if (board.isThreePhase()) {
+        problems.add(new ImportPlan.Problem(LINE, "import.cell.lineMissing", new Object[0]));
+      } else {
+        position = PhasePosition.L1;
+      }
+    } else {
+      position = Codes.parseLine(cells.text(LINE));
+      if (position == null) {
+        problems.add(new ImportPlan.Problem(LINE, "import.cell.unknownLine", new Object[] {cells.text(LINE)}));
+      } else if (!board.isThreePhase() && position != PhasePosition.L1) {
+        problems.add(new ImportPlan.Problem(LINE, "import.cell.singlePhaseBoard", new Object[0]));
+      }
+    }
+    String description = CellText.fromCsv(cells.text(CIRCUIT));
+    WayStatus status;
+    if (cells.blank(STATE)) {
+      status = description.toLowerCase(Locale.ROOT).startsWith("spare") ? WayStatus.SPARE_DEVICE : WayStatus.IN_USE;
+    } else {
+      status = Codes.parseState(cells.text(STATE));
+      if (status == null) {
+        problems.add(new ImportPlan.Problem(STATE, "import.cell.unknownState", new Object[] {cells.text(STATE)}));
+      }
+    }
+    Boolean locked = cells.yes(KEEP_LINE, problems);
+
+    DeviceKind kind = cells.choice(DEVICE, DeviceKind.class, problems);
+    TripCurve curve = cells.choice(CURVE, TripCurve.class, problems);
+    Double rating = cells.number(RATING_AMPS, problems);
+    Double residual = cells.number(RESIDUAL_MILLIAMPS, problems);
+    if (!cells.blank(DEVICE_SUMMARY)) {
+      Matcher m = DEVICE_TEXT.matcher(cells.text(DEVICE_SUMMARY));
+      if (!m.matches()) {
+        problems.add(new ImportPlan.Problem(DEVICE_SUMMARY, "import.cell.unreadableDevice", new Object[] {cells.text(DEVICE_SUMMARY)}));
+      } else {
+        String kindText = m.group(1) != null ? m.group(1) : m.group(5);
+        if (kind == null && kindText != null) {
+          kind = Codes.parseEnum(DeviceKind.class, kindText);
+        }
+        if (curve == null && m.group(2) != null) {
+          curve = TripCurve.valueOf(m.group(2).toUpperCase(Locale.ROOT));
+        }
+        if (rating == null) {
+          rating = Double.valueOf(m.group(3).replace(',', '.'));
+          cells.redirect(RATING_AMPS, DEVICE_SUMMARY);
+        }
+        if (residual == null && m.group(4) != null) {
+          residual = Double.valueOf(m.group(4).replace(',', '.'));
+          cells.redirect(RESIDUAL_MILLIAMPS, DEVICE_SUMMARY);
+        }
+        cells.redirect(DEVICE, DEVICE_SUMMARY);
+        cells.redirect(CURVE, DEVICE_SUMMARY);
+      }
+    }
+    if (kind == null && curve != null) {
+      kind = residual != null ? DeviceKind.RCBO : DeviceKind.MCB;
+      notes.add("import.note.deviceFromCurve");
+    }
+    if (kind != null && !kind.hasCurve() && curve != null && cells.blank(DEVICE_SUMMARY)) {
+      problems.add(new ImportPlan.Problem(CURVE, "import.cell.curveNotForDevice", new Object[] {kind.name()}));
+    }
+    if (status != null && status != WayStatus.EMPTY && kind == null && !cells.hasError(problems, DEVICE)) {
+      problems.add(new ImportPlan.Problem(cells.source(DEVICE), "import.cell.deviceRequired", new Object[0]));
+    }
+    if (kind == DeviceKind.RCD && residual == null) {
+      problems.add(new ImportPlan.Problem(cells.source(RESIDUAL_MILLIAMPS), "import.cell.residualRequired", new Object[0]));
+    }
+    if (way != null && way > board.wayCount()) {
+      problems.add(new ImportPlan.Problem(WAY, "import.cell.beyondBoard", new Object[] {board.wayCount()}));
+    }
+    CircuitForm form = new CircuitForm(
+        way, position, description, status, locked, kind, curve, rating, cells.whole(POLES, problems),
+        cells.number(BREAKING_KILOAMPS, problems), residual, cells.choice(RCD_TYPE, RcdType.class, problems),
+        cells.number(LINE_CSA, problems), cells.number(CPC_CSA, problems),
+        cells.choice(CONDUCTOR, ConductorMaterial.class, problems), cells.choice(INSULATION, Insulation.class, problems),
+        cells.number(LENGTH_METRES, problems), cells.choice(INSTALLATION, InstallationMethod.class, problems),
+        cells.number(AMBIENT_CELSIUS, problems), cells.whole(GROUPED, problems), cells.whole(THERMAL_INSULATION_MM, problems),
+        cells.number(MEASURED_ZS, problems), null, null, null, null, null, null, null);
+    for (ConstraintViolation<CircuitForm> violation : validator.validate(form)) {
+      ImportField field = CIRCUIT_PROPERTIES.getOrDefault(violation.getPropertyPath().toString(), CIRCUIT);
+      if (!cells.hasError(problems, cells.source(field))) {
+        problems.add(new ImportPlan.Problem(cells.source(field), "import.cell.invalid", new Object[] {violation.getMessage()}));
+      }
+    }
+    return form;
+  }
+
+  // ---------------------------------------------------------------- load
+
+  private LoadForm readLoad(Cells cells, String circuitDescription, List<ImportPlan.Problem> problems, List<String> notes) {
+    String description = CellText.fromCsv(cells.text(LOAD));
+    if (description.isBlank()) {
+      description = circuitDescription == null ? "" : circuitDescription;
+    }
+    LoadCategory category;
+    if (cells.blank(CATEGORY)) {
+      category = categoryFromWords(description);
+      notes.add("import.note.categoryGuessed");
+    } else {
+      category = Codes.parseEnum(LoadCategory.class, cells.text(CATEGORY));
+      if (category == null) {
+        category = categoryFromWords(cells.text(CATEGORY));
+        if (category == LoadCategory.OTHER && !Codes.squash(cells.text(CATEGORY)).equals("OTHER")) {
+          problems.add(new ImportPlan.Problem(CATEGORY, "import.cell.unknownCategory", new Object[] {cells.text(CATEGORY)}));
+        }
+      }
+    }
+    Integer quantity = cells.blank(QUANTITY) ? Integer.valueOf(1) : cells.whole(QUANTITY, problems);
+    Double rating = null;
+    RatingUnit unit = null;
+    if (!cells.blank(RATING)) {
+      rating = cells.number(RATING, problems);
+      unit = cells.choice(UNIT, RatingUnit.class, problems);
+      if (unit == null && cells.blank(UNIT)) {
+        problems.add(new ImportPlan.Problem(UNIT, "import.cell.unitMissing", new Object[0]));
+      }
+    } else if (!cells.blank(LOAD_KILOWATTS)) {
+      Double kw = cells.number(LOAD_KILOWATTS, problems);
+      rating = kw == null ? null : kw * 1000.0;
+      unit = RatingUnit.W;
+      cells.redirect(RATING, LOAD_KILOWATTS);
+    } else if (!cells.blank(LOAD_WATTS)) {
+      rating = cells.number(LOAD_WATTS, problems);
+      unit = RatingUnit.W;
+      cells.redirect(RATING, LOAD_WATTS);
+    } else if (!cells.blank(LOAD_AMPS)) {
+      rating = cells.number(LOAD_AMPS, problems);
+      unit = RatingUnit.A;
+      cells.redirect(RATING, LOAD_AMPS);
+    } else {
+      problems.add(new ImportPlan.Problem(RATING, "import.cell.ratingMissing", new Object[0]));
+    }
+    Double powerFactor;
+    if (cells.blank(POWER_FACTOR)) {
+      powerFactor = 1.0;
+      notes.add("import.note.unityPowerFactor");
+    } else {
+      powerFactor = cells.number(POWER_FACTOR, problems);
+    }
+    Boolean continuous = cells.yes(CONTINUOUS, problems);
+    LoadForm form = new LoadForm(
+        description, category, quantity, rating, unit, powerFactor, cells.number(SURGE_MULTIPLE, problems),
+        cells.number(SURGE_MILLIS, problems), Boolean.TRUE.equals(continuous));
+    for (ConstraintViolation<LoadForm> violation : validator.validate(form)) {
+      ImportField field = LOAD_PROPERTIES.getOrDefault(violation.getPropertyPath().toString(), LOAD);
+      if (!cells.hasError(problems, cells.source(field))) {
+        problems.add(new ImportPlan.Problem(cells.source(field), "import.cell.invalid", new Object[] {violation.getMessage()}));
+      }
+    }
+    return form;
+  }
+
+  /** A category from the words of a description; OTHER when none fits. */
+  static LoadCategory categoryFromWords(String text) {
+    String t = text == null ? "" : text.toLowerCase(Locale.ROOT);
+    if (t.matches(".*\\b(light|lights|lighting|lamp|lamps|luminaire.*)\\b.*")) {
+      return LoadCategory.LIGHTING;
+    }
+    if (t.matches(".*\\b(socket|sockets|outlet|outlets|receptacle.*|ring)\\b.*")) {
+      return LoadCategory.SOCKET_OUTLETS;
+    }
+    if (t.matches(".*\\b(cooker|cooking|oven|ovens|hob|range)\\b.*")) {
+      return LoadCategory.COOKING;
+    }
+    if (t.matches(".*\\b(shower|showers|instantaneous)\\b.*")) {
+      return LoadCategory.WATER_HEATING_INSTANTANEOUS;
+    }
+    if (t.matches(".*\\b(immersion|water heater|cylinder|boiler)\\b.*")) {
+      return LoadCategory.WATER_HEATING_STORAGE;
+    }
+    if (t.matches(".*\\b(heater|heaters|heating|radiator.*)\\b.*")) {
+      return LoadCategory.SPACE_HEATING;
+    }
+    if (t.matches(".*\\b(air conditioning|aircon|a/c|hvac|chiller)\\b.*")) {
+      return LoadCategory.AIR_CONDITIONING;
+    }
+    if (t.matches(".*\\b(motor|pump|fan|compressor|lift)\\b.*")) {
+      return LoadCategory.MOTOR;
+    }
+    if (t.matches(".*\\b(ev|charger|charging)\\b.*")) {
+      return LoadCategory.EV_CHARGING;
+    }
+    if (t.matches(".*\\b(it|computer|computers|server|data)\\b.*")) {
+      return LoadCategory.IT_SMALL_POWER;
+    }
+    return LoadCategory.OTHER;
+  }
+
+  // ---------------------------------------------------------------- cells
+
+  /** The cells of one row by field, and which column a derived value came from (for placing its problems). */
+  private static final class Cells {
+    private final SheetTable.Row row;
+    private final Map<ImportField, Integer> columnOf;
+    private final Map<ImportField, ImportField> source = new EnumMap<>(ImportField.class);
+
+    Cells(SheetTable.Row row, Map<ImportField, Integer> columnOf) {
+      this.row = row;
+      this.columnOf = columnOf;
+    }
+
+    String text(ImportField field) {
+      Integer column = columnOf.get(field);
+      return column == null ? "" : row.cell(column).strip();
+    }
+
+    boolean blank(ImportField field) {
+      return text(field).isEmpty();
+    }
+
+    boolean anyFilled(ImportField... fields) {
+      for (ImportField field : fields) {
+        if (!blank(field)) {
+          return true;
+        }
+      }
+      return false;
+    }
+
+    void redirect(ImportField field, ImportField from) {
+      source.put(field, from);
+    }
+
+    ImportField source(ImportField field) {
+      return source.getOrDefault(field, field);
+    }
+
+    boolean hasError(List<ImportPlan.Problem> problems, ImportField field) {
+      return problems.stream().anyMatch(p -> p.field() == field);
+    }
+
+    Double number(ImportField field, List<ImportPlan.Problem> problems) {
+      String text = text(field);
+      if (text.isEmpty()) {
+        return null;
+      }
+      Double value = Numbers.parse(text);
+      if (value == null) {
+        problems.add(new ImportPlan.Problem(field, "import.cell.notNumber", new Object[] {text}));
+      }
+      return value;
+    }
+
+    Integer whole(ImportField field, List<ImportPlan.Problem> problems) {
+      Double value = number(field, problems);
+      if (value == null) {
+        return null;
+      }
+      if (value != Math.rint(value) || Math.abs(value) > 1_000_000_000) {
+        problems.add(new ImportPlan.Problem(field, "import.cell.notWhole", new Object[] {text(field)}));
+        return null;
+      }
+      return value.intValue();
+    }
+
+    <E extends Enum<E>> E choice(ImportField field, Class<E> type, List<ImportPlan.Problem> problems) {
+      String text = text(field);
+      if (text.isEmpty()) {
+        return null;
+      }
+      E value = Codes.parseEnum(type, text);
+      if (value == null) {
+        problems.add(new ImportPlan.Problem(field, "import.cell.unknownChoice", new Object[] {text, choices(type)}));
+      }
+      return value;
+    }
+
+    Boolean yes(ImportField field, List<ImportPlan.Problem> problems) {
+      Boolean value = Codes.parseYes(text(field));
+      if (value == null) {
+        problems.add(new ImportPlan.Problem(field, "import.cell.unknownYes", new Object[] {text(field)}));
+      }
+      return value;
+    }
+
+    private static String choices(Class<? extends Enum<?>> type) {
+      StringBuilder text = new StringBuilder();
+      for (Enum<?> constant : type.getEnumConstants()) {
+        if (!text.isEmpty()) {
+          text.append(", ");
+        }
+        text.append(constant.name());
+      }
+      return text.toString();
+    }
+  }
+
+  /** Numbers as people type them in sheets: "16", "16 A", "2,5 mm²", "0.95". */
+  static final class Numbers {
+    private static final Pattern NUMBER = Pattern.compile("^([-+]?\\d+(?:[.,]\\d+)?(?:[eE][-+]?\\d+)?)\\s*[a-zA-Z²Ω°%×µ]*\\s*$");
+
+    private Numbers() {}
+
+    static Double parse(String text) {
+      Matcher m = NUMBER.matcher(text.strip());
+      if (!m.matches()) {
+        return null;
+      }
+      try {
+        double value = Double.parseDouble(m.group(1).replace(',', '.'));
+        return Double.isFinite(value) ? value : null;
+      } catch (NumberFormatException e) {
+        return null;
+      }
+    }
+  }
+}

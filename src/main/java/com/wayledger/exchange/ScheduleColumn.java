@@ -1,0 +1,82 @@
+package com.wayledger.exchange;
+
+/**
+ * The columns of a board's schedule table, in the order the exports write them. Input columns are read back
+ * on import; computed columns are written for the reader and ignored on import.
+ */
+public enum ScheduleColumn {
+  WAY("Way", true),
+  LINE("Line", true),
+  CIRCUIT("Circuit", true),
+  STATE("State", true),
+  KEEP_LINE("Keep line", true),
+  DEVICE("Device", true),
+  CURVE("Curve", true),
+  RATING_AMPS("In A", true),
+  POLES("Poles", true),
+  BREAKING_KILOAMPS("Icn kA", true),
+  RESIDUAL_MILLIAMPS("IΔn mA", true),
+  RCD_TYPE("RCD type", true),
+  LINE_CSA("Line mm²", true),
+  CPC_CSA("CPC mm²", true),
+  CONDUCTOR("Conductor", true),
+  INSULATION("Insulation", true),
+  LENGTH_METRES("Length m", true),
+  INSTALLATION("Installation", true),
+  AMBIENT_CELSIUS("Ambient °C", true),
+  GROUPED("Grouped", true),
+  THERMAL_INSULATION_MM("In insulation mm", true),
+  MEASURED_ZS("Measured Zs Ω", true),
+  LOAD("Load", true),
+  CATEGORY("Category", true),
+  QUANTITY("Qty", true),
+  RATING("Rating", true),
+  UNIT("Unit", true),
+  POWER_FACTOR("PF", true),
+  SURGE_MULTIPLE("Surge ×", true),
+  SURGE_MILLIS("Surge ms", true),
+  CONTINUOUS("Continuous", true),
+  CONNECTED_KW("Connected kW", false),
+  CONNECTED_KVAR("Connected kvar", false),
+  IB_CONNECTED("Ib connected A", false),
+  DIVERSITY_P("Diversity P", false),
+  DIVERSITY_Q("Diversity Q", false),
+  DEMAND_KW("Demand kW", false),
+  DEMAND_KVAR("Demand kvar", false),
+  IB_DESIGN("Ib design A", false),
+  FINDINGS("Findings", false);
+
+  /** How a three-pole position is written in the Line column. */
+  public static final String THREE_POLE_CODE = "3P";
+
+  private final String header;
+  private final boolean input;
+
+  ScheduleColumn(String header, boolean input) {
+    this.header = header;
+    this.input = input;
+  }
+
+  public String header() {
+    return header;
+  }
+
+  /** Whether import reads this column (computed columns are ignored). */
+  public boolean isInput() {
+    return input;
+  }
+
+  /** The column of this header, written exactly as the export writes it; null when none. */
+  public static ScheduleColumn byHeader(String text) {
+    if (text == null) {
+      return null;
+    }
+    String wanted = text.strip();
+    for (ScheduleColumn column : values()) {
+      if (column.header.equalsIgnoreCase(wanted)) {
+        return column;
+      }
+    }
+    return null;
+  }
+}

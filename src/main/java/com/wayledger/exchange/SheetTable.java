@@ -1,0 +1,44 @@
+package com.wayledger.exchange;
+
+import java.util.List;
+
+/**
+ * The cells of one sheet as text, as read from an uploaded file: its header row and the rows below it.
+ *
+ * @param sheetNames every sheet of the file (one, named after the file, for CSV)
+ * @param sheetIndex the sheet these rows come from
+ * @param headerRowNumber the header's row number as a spreadsheet shows it (from 1)
+ * @param headers the header cells, one per column
+ * @param rows the non-blank rows below the header
+ */
+public record SheetTable(
+    List<String> sheetNames, int sheetIndex, int headerRowNumber, List<String> headers, List<Row> rows) {
+
+  /** One row: its number as the spreadsheet shows it, and its cells (blank as ""), as wide as the header. */
+  public record Row(int number, List<String> cells) {
+
+    public String cell(int column) {
+      return column < cells.size() ? cells.get(column) : "";
+    }
+  }
+
+  public SheetTable {
+    sheetNames = List.copyOf(sheetNames);
+    headers = List.copyOf(headers);
+    rows = List.copyOf(rows);
+  }
+
+  /** Whether every header is one of ours, written as our export writes it. */
+  public boolean isOwnExport() {
+    if (headers.isEmpty()) {
+      return false;
+    }
+    for (int i = 0; i < headers.size(); i++) {
+      ScheduleColumn column = ScheduleColumn.byHeader(headers.get(i));
+      if (column == null || column.ordinal() != i) {
+        return false;
+      }
+    }
+    return headers.size() == ScheduleColumn.values().length;
+  }
+}

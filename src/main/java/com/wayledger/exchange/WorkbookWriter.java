@@ -1,0 +1,574 @@
+package com.wayledger.exchange;
+
+import static com.wayledger.exchange.ScheduleColumn.*;
+
+import com.wayledger.board.CircuitForm;
+import com.wayledger.board.LoadForm;
+import com.wayledger.engine.Phase;
+import com.wayledger.engine.PhasePosition;
+import com.wayledger.engine.demand.BoardDemand;
+import com.wayledger.engine.demand.DemandSettings;
+import com.wayledger.engine.protection.BoardFindings;
+import com.wayledger.engine.protection.CircuitFindings;
+import com.wayledger.engine.protection.ProtectionSettings;
+import com.wayledger.engine.protection.result.Finding;
+import com.wayledger.engine.protection.result.Quantity;
+import com.wayledger.engine.protection.result.Verdict;
+import java.io.IOException;
+import java.io.OutputStream;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Set;
+import java.util.stream.Collectors;
+import org.apache.poi.ss.usermodel.Cell;
+import org.apache.poi.ss.usermodel.CellStyle;
+import org.apache.poi.ss.usermodel.PrintSetup;
+import org.apache.poi.ss.usermodel.Row;
+import org.apache.poi.ss.usermodel.Sheet;
+import org.apache.poi.ss.util.CellRangeAddress;
+import org.apache.poi.ss.util.CellReference;
+import org.apache.poi.ss.util.WorkbookUtil;
+import org.apache.poi.xssf.streaming.SXSSFSheet;
+import org.apache.poi.xssf.streaming.SXSSFWorkbook;
+
+/**
+ * Writes schedules as an XLSX workbook with the streaming writer, so a site of thousands of circuits is
+ * written in a bounded window of rows. Board sheets hold one row per load line (a circuit without loads
+ * takes one row), input columns first and then computed columns whose per-row figures, per-phase and board
+ * totals are live formulas; figures the rows cannot express (diversity factors, sub-boards' demand) are
+ * written as values from the engine and named "at export".
+ */
+public final class WorkbookWriter {
+
+  /** Rows kept in memory per sheet before they are flushed to disk. */
+  private static final int WINDOW_ROWS = 200;
+
+  static final int HEADER_ROW = 3;
+  static final String SUMMARY_SHEET = "Summary";
+  static final String FINDINGS_SHEET = "Findings";
+  static final String METHODS_SHEET = "Methods";
+
+  private final String caution;
+
+  /** @param caution the caution printed on every sheet */
+  public WorkbookWriter(String caution) {
+    this.caution = caution;
+  }
+
+  /** Where a board sheet's totals are, so that other sheets can refer to them. */
+  record TotalsCells(String sheetName, String connectedKilowatts, String demandKilowatts, String highestPhaseAmps) {}
+
+  /**
+   * Writes the workbook.
+   *
+   * @param data the boards to write and the site's figures
+   * @param withSummary whether to add the site tree summary (a site export)
+   * @param out where to write; not closed
+   */
+  public void write(ExportData data, boolean withSummary, OutputStream out) throws IOException {
+    SXSSFWorkbook workbook = new SXSSFWorkbook(WINDOW_ROWS);
+    try {
+      WorkbookStyles styles = new WorkbookStyles(workbook);
+      Set<String> names = new HashSet<>(Set.of(SUMMARY_SHEET.toLowerCase(Locale.ROOT), FINDINGS_SHEET.toLowerCase(Locale.ROOT), METHODS_SHEET.toLowerCase(Locale.ROOT)));
+      SXSSFSheet summary = withSummary ? workbook.createSheet(SUMMARY_SHEET) : null;
+      Map<Long, TotalsCells> totals = new HashMap<>();
+      for (BoardEntry board : data.boards()) {
+        String name = uniqueName("Board " + board.reference(), names);
+        SXSSFSheet sheet = workbook.createSheet(name);
+        BoardFigures figures = new BoardFigures(board, data.demand(), data.findings());
+        totals.put(board.id(), writeBoard(sheet, board, figures, data, styles));
+      }
+      if (summary != null) {
+        writeSummary(summary, data, totals, styles);
+      }
+      List<Object[]> findingRows = findingRows(data);
+      if (!findingRows.isEmpty()) {
+        writeFindings(workbook.createSheet(FINDINGS_SHEET), findingRows, data, styles);
+      }
+      writeMethods(workbook.createSheet(METHODS_SHEET), data, styles);
+      workbook.setForceFormulaRecalculation(true);
+      workbook.write(out);
+    } finally {
+      workbook.close();
+    }
+  }
+
+  static String uniqueName(String wanted, Set<String> taken) {
+    String base = WorkbookUtil.createSafeSheetName(wanted, '_');
+    String name = base;
+    for (int n = 2; taken.contains(name.toLowerCase(Locale.ROOT)); n++) {
+      String suffix = " (" + n + ")";
+      name = base.substring(0, Math.min(base.length(), 31 - suffix.length())) + suffix;
+    }
+    taken.add(name.toLowerCase(Locale.ROOT));
+    return name;
+  }
+
+  // ---------------------------------------------------------------- board sheet
+
+  private TotalsCells writeBoard(SXSSFSheet sheet, BoardEntry board, BoardFigures figures, ExportData data, WorkbookStyles styles) {
+    Widths widths = new Widths(ScheduleColumn.values().length);
+    BoardDemand demand = figures.demand();
+    double u0 = demand != null ? demand.nominalVoltageVolts() : data.demand().nominalVoltageVolts();
+
+    Row title = sheet.createRow(0);
+    text(title, 0, "Schedule of board " + board.reference() + " — " + data.siteName(), styles.title, null);
+    Row facts = sheet.createRow(1);
+    text(facts, 0, "U0 V", styles.label, null);
+    number(facts, 1, u0, styles.number, null);
+    text(facts, 2, "Lines", styles.label, null);
+    number(facts, 3, board.phases(), styles.integer, null);
+    text(facts, 4, "Ways", styles.label, null);
+    number(facts, 5, board.wayCount(), styles.integer, null);
+    text(facts, 6, "Exported", styles.label, null);
+    text(facts, 7, data.exportedOn().toString(), styles.text, null);
+    text(facts, 8, "Diversity", styles.label, null);
+    text(facts, 9, demand == null ? "not assessed" : demand.methodName(), styles.text, null);
+    text(facts, 11, "Fed from", styles.label, null);
+    text(facts, 12, board.parentReference() == null ? "origin" : board.parentReference(), styles.text, null);
+    text(sheet.createRow(2), 0, "Caution: " + caution, styles.caution, null);
+
+    Row header = sheet.createRow(HEADER_ROW);
+    for (ScheduleColumn column : ScheduleColumn.values()) {
+      text(header, column.ordinal(), column.header(), styles.header, widths);
+    }
+
+    int firstData = HEADER_ROW + 1;
+    int rowIndex = firstData;
+    int lastData = firstData + Math.max(1, countRows(board)) - 1;
+    String u0Cell = "$B$2";
+    for (CircuitEntry entry : board.circuits()) {
+      BoardFigures.CircuitFigures circuitFigures = figures.circuit(entry.circuitId());
+      List<LoadForm> loads = entry.loads().isEmpty() ? java.util.Collections.singletonList(null) : entry.loads();
+      boolean first = true;
+      for (LoadForm load : loads) {
+        Row row = sheet.createRow(rowIndex);
+        writeCircuitCells(row, entry.circuit(), styles, widths);
+        if (load != null) {
+          writeLoadCells(row, load, styles, widths);
+        }
+        writeComputedCells(row, rowIndex + 1, first, circuitFigures, u0Cell, firstData + 1, lastData + 1, styles, widths);
+        first = false;
+        rowIndex++;
+      }
+    }
+    if (rowIndex == firstData) {
+      rowIndex++; // an empty board keeps one blank data row so the ranges stay valid
+    }
+    sheet.setAutoFilter(new CellRangeAddress(HEADER_ROW, lastData, 0, ScheduleColumn.values().length - 1));
+    TotalsCells cells = writeTotals(sheet, board, figures, rowIndex + 1, firstData + 1, lastData + 1, styles, widths);
+
+    widths.apply(sheet);
+    sheet.createFreezePane(3, HEADER_ROW + 1);
+    printSetup(sheet, data.siteName() + " — board " + board.reference(), data, HEADER_ROW);
+    return cells;
+  }
+
+  private static int countRows(BoardEntry board) {
+    int rows = 0;
+    for (CircuitEntry entry : board.circuits()) {
+      rows += Math.max(1, entry.loads().size());
+    }
+    return rows;
+  }
+
+  private static void writeCircuitCells(Row row, CircuitForm c, WorkbookStyles s, Widths w) {
+    number(row, WAY.ordinal(), c.wayNumber(), s.integer, w);
+    text(row, LINE.ordinal(), Codes.line(c.position()), s.text, w);
+    text(row, CIRCUIT.ordinal(), c.description(), s.text, w);
+    text(row, STATE.ordinal(), Codes.state(c.status()), s.text, w);
+    text(row, KEEP_LINE.ordinal(), Codes.yes(Boolean.TRUE.equals(c.lockedForBalancing())), s.text, w);
+    text(row, DEVICE.ordinal(), name(c.deviceKind()), s.text, w);
+    text(row, CURVE.ordinal(), name(c.deviceCurve()), s.text, w);
+    number(row, RATING_AMPS.ordinal(), c.deviceRatingAmps(), s.number, w);
+    number(row, POLES.ordinal(), c.devicePoles(), s.integer, w);
+    number(row, BREAKING_KILOAMPS.ordinal(), c.deviceBreakingCapacityKiloAmps(), s.number, w);
+    number(row, RESIDUAL_MILLIAMPS.ordinal(), c.deviceResidualMilliAmps(), s.number, w);
+    text(row, RCD_TYPE.ordinal(), name(c.deviceRcdType()), s.text, w);
+    number(row, LINE_CSA.ordinal(), c.cableLineCsa(), s.number, w);
+    number(row, CPC_CSA.ordinal(), c.cableCpcCsa(), s.number, w);
+    text(row, CONDUCTOR.ordinal(), name(c.cableMaterial()), s.text, w);
+    text(row, INSULATION.ordinal(), name(c.cableInsulation()), s.text, w);
+    number(row, LENGTH_METRES.ordinal(), c.cableLengthMetres(), s.number, w);
+    text(row, INSTALLATION.ordinal(), name(c.cableInstallationMethod()), s.text, w);
+    number(row, AMBIENT_CELSIUS.ordinal(), c.cableAmbientCelsius(), s.number, w);
+    number(row, GROUPED.ordinal(), c.cableGroupedCircuits(), s.integer, w);
+    number(row, THERMAL_INSULATION_MM.ordinal(), c.cableThermalInsulationMm(), s.integer, w);
+    number(row, MEASURED_ZS.ordinal(), c.measuredLoopImpedanceOhms(), s.ohms, w);
+  }
+
+  private static void writeLoadCells(Row row, LoadForm l, WorkbookStyles s, Widths w) {
+    text(row, LOAD.ordinal(), l.description(), s.text, w);
+    text(row, CATEGORY.ordinal(), name(l.category()), s.text, w);
+    number(row, QUANTITY.ordinal(), l.quantity(), s.integer, w);
+    number(row, RATING.ordinal(), l.ratingValue(), s.number, w);
+    text(row, UNIT.ordinal(), name(l.ratingUnit()), s.text, w);
+    number(row, POWER_FACTOR.ordinal(), l.powerFactor(), s.number, w);
+    number(row, SURGE_MULTIPLE.ordinal(), l.startUpSurgeMultiple(), s.number, w);
+    number(row, SURGE_MILLIS.ordinal(), l.startUpSurgeMillis(), s.number, w);
+    text(row, CONTINUOUS.ordinal(), Codes.yes(l.continuous()), s.text, w);
+  }
+
+  private static void writeComputedCells(
+      Row row, int r, boolean firstOfCircuit, BoardFigures.CircuitFigures figures, String u0, int from, int to,
+      WorkbookStyles s, Widths w) {
+    String qty = ref(QUANTITY, r);
+    String rating = ref(RATING, r);
+    String unit = ref(UNIT, r);
+    String pf = ref(POWER_FACTOR, r);
+    String line = ref(LINE, r);
+    String perLine = u0 + "*IF(" + line + "=\"" + THREE_POLE_CODE + "\",3,1)";
+    String blank = "OR(" + rating + "=\"\"," + qty + "=\"\"," + pf + "=\"\")";
+    formula(row, CONNECTED_KW.ordinal(),
+        "IF(" + blank + ",0," + qty + "*" + rating + "*IF(" + unit + "=\"W\",1,IF(" + unit + "=\"VA\"," + pf + "," + perLine + "*" + pf + "))/1000)",
+        s.kilowatts, w);
+    formula(row, CONNECTED_KVAR.ordinal(),
+        "IF(" + blank + ",0," + qty + "*" + rating + "*IF(" + unit + "=\"W\",1/" + pf + ",IF(" + unit + "=\"VA\",1," + perLine + "))*SQRT(1-" + pf + "^2)/1000)",
+        s.kilowatts, w);
+    double diversityP = figures == null ? 1.0 : figures.assessed() ? figures.diversityActive() : 0.0;
+    double diversityQ = figures == null ? 1.0 : figures.assessed() ? figures.diversityReactive() : 0.0;
+    number(row, DIVERSITY_P.ordinal(), diversityP, s.factor, w);
+    number(row, DIVERSITY_Q.ordinal(), diversityQ, s.factor, w);
+    formula(row, DEMAND_KW.ordinal(), ref(CONNECTED_KW, r) + "*" + ref(DIVERSITY_P, r), s.kilowatts, w);
+    formula(row, DEMAND_KVAR.ordinal(), ref(CONNECTED_KVAR, r) + "*" + ref(DIVERSITY_Q, r), s.kilowatts, w);
+    if (!firstOfCircuit) {
+      return;
+    }
+    if (figures != null && figures.feedsSubBoard()) {
+      number(row, IB_CONNECTED.ordinal(), figures.connectedCurrentAmps(), s.amps, w);
+    } else {
+      String way = ref(WAY, r);
+      String p = "SUMIFS(" + range(CONNECTED_KW, from, to) + "," + range(WAY, from, to) + "," + way + "," + range(LINE, from, to) + "," + line + ")";
+      String q = "SUMIFS(" + range(CONNECTED_KVAR, from, to) + "," + range(WAY, from, to) + "," + way + "," + range(LINE, from, to) + "," + line + ")";
+      formula(row, IB_CONNECTED.ordinal(), "SQRT(" + p + "^2+" + q + "^2)*1000/(" + perLine + ")", s.amps, w);
+    }
+    if (figures != null) {
+      number(row, IB_DESIGN.ordinal(), figures.designCurrentAmps(), s.amps, w);
+      number(row, FINDINGS.ordinal(), figures.problemFindings(), s.integer, w);
+    }
+  }
+
+  private TotalsCells writeTotals(
+      SXSSFSheet sheet, BoardEntry board, BoardFigures figures, int startRow, int from, int to, WorkbookStyles s, Widths w) {
+    String[] heads = {"Totals", "Connected kW", "Connected kvar", "Connected A", "Demand kW", "Demand kvar", "Demand A",
+        "Sub-boards kW (at export)", "Sub-boards kvar (at export)", "Allowance kW (at export)"};
+    Row head = sheet.createRow(startRow);
+    for (int i = 0; i < heads.length; i++) {
+      text(head, i, heads[i], s.header, null);
+    }
+    List<Phase> lines = board.isThreePhase() ? List.of(Phase.values()) : List.of(Phase.L1);
+    int first = startRow + 2; // Excel row of the first phase line
+    int r = first;
+    for (Phase phase : lines) {
+      Row row = sheet.createRow(r - 1);
+      text(row, 0, board.isThreePhase() ? phase.name() : "L–N", s.label, null);
+      formula(row, 1, phaseSum(CONNECTED_KW, phase, board, from, to), s.kilowatts, null);
+      formula(row, 2, phaseSum(CONNECTED_KVAR, phase, board, from, to), s.kilowatts, null);
+      formula(row, 3, "SQRT(B" + r + "^2+C" + r + "^2)*1000/$B$2", s.amps, null);
+      number(row, 7, figures.carriedWatts(phase) / 1000.0, s.kilowatts, null);
+      number(row, 8, figures.carriedVars(phase) / 1000.0, s.kilowatts, null);
+      number(row, 9, figures.allowanceWattsPerLine() / 1000.0, s.kilowatts, null);
+      formula(row, 4, phaseSum(DEMAND_KW, phase, board, from, to) + "+H" + r + "+J" + r, s.kilowatts, null);
+      formula(row, 5, phaseSum(DEMAND_KVAR, phase, board, from, to) + "+I" + r, s.kilowatts, null);
+      formula(row, 6, "SQRT(E" + r + "^2+F" + r + "^2)*1000/$B$2", s.amps, null);
+      r++;
+    }
+    int last = r - 1;
+    Row carried = sheet.createRow(r - 1);
+    text(carried, 0, "Sub-boards connected (at export)", s.label, null);
+    number(carried, 1, figures.carriedConnectedWatts() / 1000.0, s.kilowatts, null);
+    number(carried, 2, figures.carriedConnectedVars() / 1000.0, s.kilowatts, null);
+    int carriedRow = r++;
+    Row total = sheet.createRow(r - 1);
+    text(total, 0, "Board", s.totalLabel, null);
+    formula(total, 1, "SUM(B" + first + ":B" + last + ")+B" + carriedRow, s.totalKilowatts, null);
+    formula(total, 2, "SUM(C" + first + ":C" + last + ")+C" + carriedRow, s.totalKilowatts, null);
+    formula(total, 4, "SUM(E" + first + ":E" + last + ")", s.totalKilowatts, null);
+    formula(total, 5, "SUM(F" + first + ":F" + last + ")", s.totalKilowatts, null);
+    formula(total, 6, "MAX(G" + first + ":G" + last + ")", s.totalAmps, null);
+    text(total, 7, "← highest phase A", s.text, null);
+    int totalRow = r++;
+    if (board.isThreePhase()) {
+      Row unbalance = sheet.createRow(r - 1);
+      text(unbalance, 0, "Unbalance %", s.label, null);
+      String mean = "AVERAGE(G" + first + ":G" + last + ")";
+      formula(unbalance, 6,
+          "IF(" + mean + "<=0,0,100*MAX(ABS(G" + first + "-" + mean + "),ABS(G" + (first + 1) + "-" + mean + "),ABS(G" + last + "-" + mean + "))/" + mean + ")",
+          s.percent, null);
+      r++;
+    }
+    Row note = sheet.createRow(r);
+    text(note, 0, "Demand per row = connected × the circuit's diversity factors as worked out at export; change a load and the totals follow, "
+        + "but only a fresh export re-applies the diversity method (see the Methods sheet).", s.caution, null);
+    String quoted = "'" + sheet.getSheetName().replace("'", "''") + "'!";
+    return new TotalsCells(sheet.getSheetName(), quoted + "$B$" + totalRow, quoted + "$E$" + totalRow, quoted + "$G$" + totalRow);
+  }
+
+  private static String phaseSum(ScheduleColumn column, Phase phase, BoardEntry board, int from, int to) {
+    if (!board.isThreePhase()) {
+      return "SUM(" + range(column, from, to) + ")";
+    }
+    return "(SUMIFS(" + range(column, from, to) + "," + range(LINE, from, to) + ",\"" + phase.name() + "\")+SUMIFS("
+        + range(column, from, to) + "," + range(LINE, from, to) + ",\"" + THREE_POLE_CODE + "\")/3)";
+  }
+
+  // ---------------------------------------------------------------- other sheets
+
+  private void writeSummary(SXSSFSheet sheet, ExportData data, Map<Long, TotalsCells> totals, WorkbookStyles s) {
+    Widths w = new Widths(12);
+    text(sheet.createRow(0), 0, "Site " + data.siteName() + " — boards", s.title, null);
+    Row facts = sheet.createRow(1);
+    text(facts, 0, "Earthing", s.label, null);
+    text(facts, 1, data.earthing(), s.text, null);
+    text(facts, 2, "Exported", s.label, null);
+    text(facts, 3, data.exportedOn().toString(), s.text, null);
+    text(sheet.createRow(2), 0, "Caution: " + caution, s.caution, null);
+    String[] heads = {"Board", "Location", "Fed from", "Lines", "Ways", "Circuits", "Connected kW", "Demand kW",
+        "Highest phase A", "Incomer", "Unbalance %", "Not assessed"};
+    Row head = sheet.createRow(HEADER_ROW);
+    for (int i = 0; i < heads.length; i++) {
+      text(head, i, heads[i], s.header, w);
+    }
+    int r = HEADER_ROW + 1;
+    for (BoardEntry board : data.boards()) {
+      Row row = sheet.createRow(r++);
+      BoardDemand demand = data.demand().board(board.id());
+      TotalsCells cells = totals.get(board.id());
+      text(row, 0, "  ".repeat(board.depth()) + board.reference(), s.text, w);
+      text(row, 1, board.location(), s.text, w);
+      text(row, 2, board.parentReference() == null ? "origin" : board.parentReference(), s.text, w);
+      number(row, 3, board.phases(), s.integer, w);
+      number(row, 4, board.wayCount(), s.integer, w);
+      number(row, 5, board.circuits().size(), s.integer, w);
+      formula(row, 6, cells.connectedKilowatts(), s.kilowatts, w);
+      formula(row, 7, cells.demandKilowatts(), s.kilowatts, w);
+      formula(row, 8, cells.highestPhaseAmps(), s.amps, w);
+      text(row, 9, board.incomerLabel(), s.text, w);
+      if (demand != null && demand.unbalancePercent() != null) {
+        number(row, 10, demand.unbalancePercent(), s.percent, w);
+      }
+      text(row, 11, demand == null ? "not assessed" : String.join("; ", demand.notAssessed()), s.text, w);
+    }
+    sheet.setAutoFilter(new CellRangeAddress(HEADER_ROW, Math.max(HEADER_ROW + 1, r - 1), 0, heads.length - 1));
+    w.apply(sheet);
+    sheet.createFreezePane(1, HEADER_ROW + 1);
+    printSetup(sheet, data.siteName() + " — boards", data, HEADER_ROW);
+  }
+
+  private static List<Object[]> findingRows(ExportData data) {
+    List<Object[]> rows = new ArrayList<>();
+    if (data.findings() == null) {
+      return rows;
+    }
+    Set<Long> written = data.boards().stream().map(BoardEntry::id).collect(Collectors.toSet());
+    for (Finding finding : data.findings().siteFindings()) {
+      if (finding.verdict() != Verdict.PASS) {
+        rows.add(new Object[] {"origin", null, finding});
+      }
+    }
+    for (BoardFindings board : data.findings().boards()) {
+      if (!written.contains(board.boardId())) {
+        continue;
+      }
+      for (Finding finding : board.findings()) {
+        if (finding.verdict() != Verdict.PASS) {
+          rows.add(new Object[] {board.reference(), null, finding});
+        }
+      }
+      for (CircuitFindings circuit : board.circuits()) {
+        for (Finding finding : circuit.findings()) {
+          if (finding.verdict() != Verdict.PASS) {
+            rows.add(new Object[] {board.reference(), circuit.wayNumber(), finding});
+          }
+        }
+      }
+    }
+    return rows;
+  }
+
+  private void writeFindings(SXSSFSheet sheet, List<Object[]> rows, ExportData data, WorkbookStyles s) {
+    Widths w = new Widths(8);
+    text(sheet.createRow(0), 0, "Findings — " + data.siteName(), s.title, null);
+    text(sheet.createRow(1), 0, "Every check that did not pass, including those not assessed for want of an input.", s.text, null);
+    text(sheet.createRow(2), 0, "Caution: " + caution, s.caution, null);
+    String[] heads = {"Board", "Way", "Check", "Verdict", "Finding", "Figures", "Clause", "Remedy"};
+    Row head = sheet.createRow(HEADER_ROW);
+    for (int i = 0; i < heads.length; i++) {
+      text(head, i, heads[i], s.header, w);
+    }
+    int r = HEADER_ROW + 1;
+    for (Object[] item : rows) {
+      Finding finding = (Finding) item[2];
+      Row row = sheet.createRow(r++);
+      text(row, 0, (String) item[0], s.text, w);
+      if (item[1] != null) {
+        number(row, 1, (Integer) item[1], s.integer, w);
+      }
+      text(row, 2, finding.check().name(), s.text, w);
+      text(row, 3, finding.verdict().name(), s.text, w);
+      text(row, 4, finding.summary(), s.text, w);
+      text(row, 5, finding.values().stream().map(WorkbookWriter::quantity).collect(Collectors.joining("; ")), s.text, w);
+      text(row, 6, finding.reference(), s.text, w);
+      text(row, 7, finding.remedy(), s.text, w);
+    }
+    sheet.setAutoFilter(new CellRangeAddress(HEADER_ROW, Math.max(HEADER_ROW + 1, r - 1), 0, heads.length - 1));
+    w.apply(sheet);
+    sheet.createFreezePane(0, HEADER_ROW + 1);
+    printSetup(sheet, data.siteName() + " — findings", data, HEADER_ROW);
+  }
+
+  private static String quantity(Quantity q) {
+    return q.toString();
+  }
+
+  private void writeMethods(SXSSFSheet sheet, ExportData data, WorkbookStyles s) {
+    List<String[]> lines = new ArrayList<>();
+    lines.add(new String[] {"Caution", caution});
+    lines.add(new String[] {"Site", data.siteName()});
+    lines.add(new String[] {"Exported", data.exportedOn().toString()});
+    lines.add(new String[] {"U0 used, V", plain(data.demand().nominalVoltageVolts())});
+    DemandSettings settings = data.demand().settings();
+    lines.add(new String[] {"U0 when the site states none, V", plain(settings.nominalVoltageVolts())});
+    lines.add(new String[] {"Unbalance limit when a board states none, %", plain(settings.unbalanceLimitPercent())});
+    lines.add(new String[] {"Diversity when none is chosen", settings.fallbackMethodKey()});
+    lines.add(new String[] {"Coincidence factor when none is stated", plain(settings.coincidenceFactor())});
+    lines.add(new String[] {"Connected load", "P and Q summed per load line: W is active power, VA apparent, A current per line "
+        + "(S = U0·I, or 3·U0·I for a three-pole circuit); Ib connected = |S| / U0 (per line for three poles)."});
+    lines.add(new String[] {"Demand", "The board's diversity method applied by the demand engine; each circuit's demand / connected "
+        + "ratio (Diversity P, Diversity Q) is written as a value, and the sheet's demand columns and totals are formulas "
+        + "over it. Per-phase current = √(P² + Q²) / U0; a three-pole circuit adds a third to each line."});
+    lines.add(new String[] {"Unbalance", "Largest deviation of a phase current from the mean of the three, over the mean (NEMA MG-1 "
+        + "definition applied to currents)."});
+    lines.add(new String[] {"Findings", "Count of checks graded danger, warning or advice per circuit; every check that did not pass "
+        + "is on the Findings sheet with its clause."});
+    if (data.findings() != null) {
+      ProtectionSettings p = data.findings().settings();
+      lines.add(new String[] {"Supply ownership", p.supplyOwnership().name()});
+      lines.add(new String[] {"Voltage drop limit, lighting %", plain(p.lightingDropLimitPercent())});
+      lines.add(new String[] {"Voltage drop limit, other %", plain(p.otherDropLimitPercent())});
+      lines.add(new String[] {"Cmin (minimum voltage factor)", plain(p.minimumVoltageFactor())});
+      lines.add(new String[] {"Measured Zs fraction of the maximum", plain(p.measuredLoopImpedanceFraction())});
+    }
+    for (BoardEntry board : data.boards()) {
+      BoardDemand demand = data.demand().board(board.id());
+      if (demand == null) {
+        lines.add(new String[] {"Board " + board.reference(), "not assessed"});
+        continue;
+      }
+      lines.add(new String[] {"Board " + board.reference() + " method", demand.methodName() + " — " + demand.methodSource()});
+      for (String missing : demand.notAssessed()) {
+        lines.add(new String[] {"Board " + board.reference() + " not assessed", missing});
+      }
+      for (String note : demand.notes()) {
+        lines.add(new String[] {"Board " + board.reference() + " note", note});
+      }
+    }
+    for (String problem : data.demand().problems()) {
+      lines.add(new String[] {"Board tree", problem});
+    }
+    text(sheet.createRow(0), 0, "Settings and methods", s.title, null);
+    int r = 2;
+    for (String[] line : lines) {
+      Row row = sheet.createRow(r++);
+      text(row, 0, line[0], s.label, null);
+      text(row, 1, line[1], s.text, null);
+    }
+    sheet.setColumnWidth(0, 45 * 256);
+    sheet.setColumnWidth(1, 120 * 256);
+    printSetup(sheet, data.siteName() + " — methods", data, -1);
+  }
+
+  private static String plain(double value) {
+    return value == Math.rint(value) ? Long.toString((long) value) : Double.toString(value);
+  }
+
+  // ---------------------------------------------------------------- cells
+
+  private static void printSetup(Sheet sheet, String what, ExportData data, int headerRow) {
+    PrintSetup print = sheet.getPrintSetup();
+    print.setPaperSize(PrintSetup.A4_PAPERSIZE);
+    print.setLandscape(true);
+    sheet.setFitToPage(true);
+    print.setFitWidth((short) 1);
+    print.setFitHeight((short) 0);
+    if (headerRow >= 0) {
+      sheet.setRepeatingRows(new CellRangeAddress(headerRow, headerRow, -1, -1));
+    }
+    sheet.getFooter().setLeft(what.replace("&", "&&"));
+    sheet.getFooter().setCenter("Exported " + data.exportedOn());
+    sheet.getFooter().setRight("Page &P of &N");
+  }
+
+  static String ref(ScheduleColumn column, int excelRow) {
+    return CellReference.convertNumToColString(column.ordinal()) + excelRow;
+  }
+
+  static String range(ScheduleColumn column, int fromRow, int toRow) {
+    String letters = CellReference.convertNumToColString(column.ordinal());
+    return "$" + letters + "$" + fromRow + ":$" + letters + "$" + toRow;
+  }
+
+  private static String name(Enum<?> value) {
+    return value == null ? null : value.name();
+  }
+
+  /** Text always goes in as a string cell, never as a formula, whatever it starts with. */
+  private static void text(Row row, int column, String value, CellStyle style, Widths widths) {
+    if (value == null || value.isEmpty()) {
+      return;
+    }
+    Cell cell = row.createCell(column);
+    cell.setCellValue(value);
+    cell.setCellStyle(style);
+    if (widths != null) {
+      widths.see(column, value.length());
+    }
+  }
+
+  private static void number(Row row, int column, Number value, CellStyle style, Widths widths) {
+    if (value == null) {
+      return;
+    }
+    Cell cell = row.createCell(column);
+    cell.setCellValue(value.doubleValue());
+    cell.setCellStyle(style);
+    if (widths != null) {
+      widths.see(column, Math.min(10, value.toString().length()));
+    }
+  }
+
+  private static void formula(Row row, int column, String formula, CellStyle style, Widths widths) {
+    Cell cell = row.createCell(column);
+    cell.setCellFormula(formula);
+    cell.setCellStyle(style);
+    if (widths != null) {
+      widths.see(column, 9);
+    }
+  }
+
+  /** Column widths that fit the longest text seen, within bounds (the streaming writer cannot autosize cheaply). */
+  private static final class Widths {
+    private final int[] chars;
+
+    Widths(int columns) {
+      chars = new int[columns];
+    }
+
+    void see(int column, int length) {
+      if (column < chars.length) {
+        chars[column] = Math.max(chars[column], length);
+      }
+    }
+
+    void apply(Sheet sheet) {
+      for (int i = 0; i < chars.length; i++) {
+        int width = Math.max(6, Math.min(50, chars[i] + 2));
+        sheet.setColumnWidth(i, width * 256);
+      }
+    }
+  }
+}
