@@ -59,9 +59,14 @@ public class AnalysisService {
     return ofSite(board.getSite().getId());
   }
 
-  /** Both engines on an engine input; the demand engine's currents feed the protection checks. */
+  /** Both engines on an engine input, with the built-in and user-defined diversity methods. */
   public SiteAnalysis analyse(SiteSpec spec) {
-    SiteDemand demand = DemandEngine.evaluate(spec, methods());
+    return analyse(spec, methods());
+  }
+
+  /** Both engines on an engine input; the demand engine's currents feed the protection checks. */
+  public static SiteAnalysis analyse(SiteSpec spec, DiversityMethodCatalog methods) {
+    SiteDemand demand = DemandEngine.evaluate(spec, methods);
     SiteFindings findings =
         ProtectionEngine.check(spec, circuitLoadings(demand), boardLoadings(demand), ProtectionSettings.DEFAULTS);
     return new SiteAnalysis(spec, demand, findings);

@@ -112,7 +112,7 @@ public final class ExchangeFixtures {
   }
 
   public static ExportData export(List<BoardEntry> boards, String methodKey) {
-    SiteAnalysis analysis = new AnalysisService(null, null).analyse(spec(boards, methodKey));
+    SiteAnalysis analysis = AnalysisService.analyse(spec(boards, methodKey), DiversityMethods.builtIn());
     return new ExportData(9L, "Tallow test shop", "TN_C_S", boards, analysis.demand(), analysis.findings(),
         LocalDate.of(2025, 3, 14));
   }
