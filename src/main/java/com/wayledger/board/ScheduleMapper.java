@@ -40,6 +40,31 @@ public final class ScheduleMapper {
         site.getSupplyFuseRatingAmps());
   }
 
+  // --- change log (loadlog) support: snapshots are engine records, so a replay maps nothing twice ---
+
+  /** A circuit as the engine sees it, kept as the change log's before/after snapshot. */
+  public static CircuitSpec snapshotOf(Circuit circuit, Long feedsBoardId) {
+    return toSpec(circuit, feedsBoardId);
+  }
+
+  /** A board without its circuits, kept as the change log's before/after snapshot. */
+  public static BoardSpec headerOf(Board board) {
+    return replayed(toSpec(board, Map.of()), List.of());
+  }
+
+  /** A board rebuilt from a logged header and the circuits it held at one moment (the log's replay). */
+  public static BoardSpec replayed(BoardSpec header, java.util.Collection<CircuitSpec> circuits) {
+    return new BoardSpec(
+        header.id(), header.reference(), header.phases(), header.wayCount(), header.busbarRatingAmps(),
+        header.incomer(), header.parentBoardId(), header.submainCable(), header.unbalanceLimitPercent(),
+        header.coincidenceFactor(), header.diversityMethodKey(), header.measuredExternalLoopImpedanceOhms(),
+        header.measuredFaultCurrentKiloAmps(),
+        circuits.stream()
+            .sorted(java.util.Comparator.comparingInt(CircuitSpec::wayNumber)
+                .thenComparing(CircuitSpec::position))
+            .toList());
+  }
+
   private static BoardSpec toSpec(Board board, Map<Long, Long> childByFeedingCircuit) {
     List<CircuitSpec> circuits =
         board.getCircuits().stream()
