@@ -62,6 +62,12 @@ public class ChangeLog {
         .list();
   }
 
+  /** One entry by its id. */
+  @Transactional(readOnly = true)
+  public java.util.Optional<ChangeLogEntry> find(long id) {
+    return jdbc.sql("SELECT * FROM change_log WHERE id = ?").param(id).query(ChangeLog::entry).optional();
+  }
+
   /** The users who appear in a site's log, for the filter's choices. */
   @Transactional(readOnly = true)
   public List<String> usersOf(long siteId) {

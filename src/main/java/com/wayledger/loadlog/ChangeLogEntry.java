@@ -20,4 +20,11 @@ import java.time.Instant;
  */
 public record ChangeLogEntry(
     long id, long siteId, Long boardId, Long circuitId, Instant happenedAt, String username, ChangeKind kind,
-    String summary, String before, String after, String reason) {}
+    String summary, String before, String after, String reason) {
+  /** When, as "2025-03-01 14:05:09 UTC". */
+  public String when() {
+    return java.time.format.DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm:ss 'UTC'")
+        .withZone(java.time.ZoneOffset.UTC)
+        .format(happenedAt);
+  }
+}

@@ -73,7 +73,8 @@ final class HistoryReplay {
               ? Map.of()
               : currents(com.wayledger.board.ScheduleMapper.replayed(header, circuits.values()), supply, methods,
                   siteDefaultMethodKey);
-      points.add(new HistoryPoint(entry.id(), entry.happenedAt(), entry.summary(), currents, removed));
+      points.add(new HistoryPoint(entry.id(), entry.happenedAt(), entry.username(), entry.kind(), entry.summary(),
+          entry.reason(), currents, removed));
     }
     return points;
   }
