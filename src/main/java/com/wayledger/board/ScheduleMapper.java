@@ -49,7 +49,22 @@ public final class ScheduleMapper {
 
   /** A board without its circuits, kept as the change log's before/after snapshot. */
   public static BoardSpec headerOf(Board board) {
-    return replayed(toSpec(board, Map.of()), List.of());
+    // never touches board.getCircuits(): loading them would keep them in the session of a board being deleted
+    return new BoardSpec(
+        board.getId(),
+        board.getReference(),
+        board.getPhases(),
+        board.getWayCount(),
+        board.getBusbarRatingAmps(),
+        board.getIncomer() == null ? null : board.getIncomer().toSpec(board.getPhases() == 3 ? 3 : 1),
+        board.getParent() == null ? null : board.getParent().getId(),
+        board.getSubmain() == null ? null : board.getSubmain().toSpec(),
+        board.getUnbalanceLimitPercent(),
+        board.getCoincidenceFactor(),
+        board.getDiversityMethod(),
+        board.getMeasuredExternalLoopImpedanceOhms(),
+        board.getMeasuredFaultCurrentKiloAmps(),
+        List.of());
   }
 
   /** A board rebuilt from a logged header and the circuits it held at one moment (the log's replay). */
