@@ -49,7 +49,7 @@ class CapacityBrowserIntegrationTests {
     options.setBinary(BROWSER);
     options.addArguments("--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run",
         "--disable-background-networking", "--disable-component-update", "--disable-sync", "--disable-dev-shm-usage",
-        "--window-size=1400,1000", "--user-data-dir=" + profile);
+        "--window-size=1400,1600", "--user-data-dir=" + profile);
     ChromeDriverService service = new ChromeDriverService.Builder().usingDriverExecutable(DRIVER).build();
     browser = new ChromeDriver(service, options);
   }
@@ -87,6 +87,7 @@ class CapacityBrowserIntegrationTests {
     String firstPlace = first.findElement(By.tagName("strong")).getText();
     assertThat(bestText).as("the best line names the first row's place").contains(firstPlace.replace("KB1 ", ""));
 
+    shot("capacity-answer");
     first.findElement(By.name("reason")).sendKeys("WO-2207 yard charger");
     first.findElement(By.cssSelector("form.add-candidate button")).click();
 
@@ -95,6 +96,18 @@ class CapacityBrowserIntegrationTests {
     assertThat(newest.getText()).as("newest history row").contains("Van charger").contains("WO-2207 yard charger")
         .contains("demo");
     assertThat(browser.findElements(By.cssSelector("polyline.history-line"))).as("one line per phase").hasSize(3);
+    shot("board-history");
+  }
+
+  /** Keeps a screenshot under target/screenshots for a person to look at; not an assertion. */
+  private void shot(String name) {
+    try {
+      Path dir = Files.createDirectories(Path.of("target", "screenshots"));
+      byte[] png = ((org.openqa.selenium.TakesScreenshot) browser).getScreenshotAs(org.openqa.selenium.OutputType.BYTES);
+      Files.write(dir.resolve(name + ".png"), png);
+    } catch (java.io.IOException | RuntimeException ignored) {
+      // a missing screenshot must not fail the flow
+    }
   }
 
   private void signIn() {
