@@ -1,11 +1,13 @@
 package com.wayledger.account;
 
+import com.wayledger.system.RuleViolation;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 import org.springframework.beans.factory.annotation.Value;
 import org.springframework.boot.ApplicationArguments;
 import org.springframework.boot.ApplicationRunner;
 import org.springframework.core.annotation.Order;
+import org.springframework.dao.DataIntegrityViolationException;
 import org.springframework.stereotype.Component;
 
 /**
@@ -46,7 +48,12 @@ class FirstAdmin implements ApplicationRunner {
       LOG.error("WAYLEDGER_ADMIN_PASSWORD is shorter than 10 characters; no administrator was created.");
       return;
     }
-    accounts.create(new UserForm(username, username, password, Role.ADMIN));
-    LOG.info("Created the first administrator '{}'.", username);
+    try {
+      accounts.create(new UserForm(username, username, password, Role.ADMIN));
+      LOG.info("Created the first administrator '{}'.", username);
+    } catch (RuleViolation | DataIntegrityViolationException createdElsewhere) {
+      // Two replicas starting together on one database: the other one created the administrator first.
+      LOG.info("The first administrator '{}' was created by another instance.", username);
+    }
   }
 }

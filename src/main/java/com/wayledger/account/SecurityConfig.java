@@ -23,7 +23,7 @@ import org.springframework.security.web.context.RequestAttributeSecurityContextR
 public class SecurityConfig {
 
   private static final String[] CHANGES = {
-    "/sites/**", "/boards/**", "/circuits/**", "/loads/**"
+    "/sites/**", "/boards/**", "/circuits/**", "/loads/**", "/methods/**"
   };
 
   @Bean

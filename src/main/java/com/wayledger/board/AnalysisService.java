@@ -1,12 +1,12 @@
 package com.wayledger.board;
 
+import com.wayledger.diversity.MethodLibrary;
 import com.wayledger.engine.Phase;
 import com.wayledger.engine.SiteSpec;
 import com.wayledger.engine.demand.BoardDemand;
 import com.wayledger.engine.demand.CircuitDemand;
 import com.wayledger.engine.demand.DemandEngine;
 import com.wayledger.engine.demand.DiversityMethodCatalog;
-import com.wayledger.engine.demand.DiversityMethods;
 import com.wayledger.engine.demand.PhaseDemand;
 import com.wayledger.engine.demand.SiteDemand;
 import com.wayledger.engine.protection.BoardLoading;
@@ -32,15 +32,17 @@ public class AnalysisService {
 
   private final SiteService sites;
   private final BoardRepository boards;
+  private final MethodLibrary methodLibrary;
 
-  public AnalysisService(SiteService sites, BoardRepository boards) {
+  public AnalysisService(SiteService sites, BoardRepository boards, MethodLibrary methodLibrary) {
     this.sites = sites;
     this.boards = boards;
+    this.methodLibrary = methodLibrary;
   }
 
-  /** The diversity methods a board may choose from. */
+  /** The diversity methods a board may choose from: built-in and user-defined. */
   public DiversityMethodCatalog methods() {
-    return DiversityMethods.builtIn();
+    return methodLibrary.catalog();
   }
 
   @Transactional(readOnly = true)

@@ -14,6 +14,7 @@ import com.wayledger.system.RuleViolation;
 import jakarta.servlet.http.HttpServletRequest;
 import jakarta.servlet.http.HttpServletResponse;
 import jakarta.validation.Valid;
+import com.wayledger.diversity.MethodLibrary;
 import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
 import org.springframework.validation.BindingResult;
@@ -33,11 +34,20 @@ public class BoardController {
   private final BoardService boards;
   private final SiteService sites;
   private final SchedulePage schedulePage;
+  private final AnalysisService analysis;
+  private final MethodLibrary methods;
 
-  public BoardController(BoardService boards, SiteService sites, SchedulePage schedulePage) {
+  public BoardController(
+      BoardService boards,
+      SiteService sites,
+      SchedulePage schedulePage,
+      AnalysisService analysis,
+      MethodLibrary methods) {
     this.boards = boards;
     this.sites = sites;
     this.schedulePage = schedulePage;
+    this.analysis = analysis;
+    this.methods = methods;
   }
 
   @ModelAttribute
@@ -48,12 +58,16 @@ public class BoardController {
     model.addAttribute("materials", ConductorMaterial.values());
     model.addAttribute("insulations", Insulation.values());
     model.addAttribute("installationMethods", InstallationMethod.values());
+    model.addAttribute("methods", methods.entries());
   }
 
   @GetMapping("/sites/{siteId}")
   public String site(@PathVariable long siteId, Model model) {
     model.addAttribute("site", sites.get(siteId));
     model.addAttribute("tree", boards.tree(siteId));
+    SiteAnalysis results = analysis.ofSite(siteId);
+    model.addAttribute("headlines", results.headlines());
+    model.addAttribute("siteProblems", results.demand().problems());
     return "board/site";
   }
 

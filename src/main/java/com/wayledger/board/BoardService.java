@@ -1,5 +1,6 @@
 package com.wayledger.board;
 
+import com.wayledger.diversity.MethodLibrary;
 import com.wayledger.site.Site;
 import com.wayledger.site.SiteService;
 import com.wayledger.system.ChangeKind;
@@ -27,14 +28,17 @@ public class BoardService {
   private final BoardRepository boards;
   private final CircuitRepository circuits;
   private final SiteService sites;
+  private final MethodLibrary methods;
   private final ApplicationEventPublisher events;
 
   public BoardService(
-      BoardRepository boards, CircuitRepository circuits, SiteService sites, ApplicationEventPublisher events) {
+      BoardRepository boards, CircuitRepository circuits, SiteService sites, MethodLibrary methods,
+      ApplicationEventPublisher events) {
     this.events = events;
     this.boards = boards;
     this.circuits = circuits;
     this.sites = sites;
+    this.methods = methods;
   }
 
   @Transactional(readOnly = true)
@@ -138,6 +142,10 @@ public class BoardService {
     }
     if (form.phases() == 3 && site.getPhases() == 1) {
       throw new RuleViolation("phases", "board.phases.beyondSupply");
+    }
+    if (form.diversityMethod() != null && !form.diversityMethod().isBlank()
+        && methods.catalog().find(form.diversityMethod()).isEmpty()) {
+      throw new RuleViolation("diversityMethod", "method.unknown");
     }
     String reference = form.reference().strip();
     boolean taken =

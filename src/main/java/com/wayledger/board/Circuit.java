@@ -103,6 +103,15 @@ public class Circuit {
     measuredLoopImpedanceOhms = form.measuredLoopImpedanceOhms();
   }
 
+  void moveTo(int newWayNumber, PhasePosition newPosition) {
+    wayNumber = newWayNumber;
+    position = newPosition;
+  }
+
+  void replaceDevice(DeviceDetails newDevice) {
+    device = newDevice;
+  }
+
   void addLoad(LoadItem load) {
     load.attachTo(this, loads.stream().mapToInt(LoadItem::getLineNumber).max().orElse(0) + 1);
     loads.add(load);

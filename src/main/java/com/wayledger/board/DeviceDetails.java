@@ -50,6 +50,13 @@ public class DeviceDetails {
     this.rcdType = kind != null && kind.isResidualCurrent() ? rcdType : null;
   }
 
+  /** A stored device from the engine's description of one (for instance a proposed device). */
+  public static DeviceDetails fromSpec(DeviceSpec spec) {
+    return new DeviceDetails(
+        spec.kind(), spec.curve(), spec.ratedCurrentAmps(), spec.poles(), spec.breakingCapacityKiloAmps(),
+        spec.residualCurrentMilliAmps(), spec.rcdType());
+  }
+
   /** The engine's view of this device, or null when no device kind is recorded. */
   DeviceSpec toSpec(int defaultPoles) {
     if (kind == null) {

@@ -29,6 +29,32 @@ public final class ScheduleMapper {
     return new SiteSpec(site.getId(), site.getName(), supplyOf(site), site.getDefaultDiversityMethod(), boardSpecs);
   }
 
+  /**
+   * The same site with some single-pole circuits placed elsewhere (a balancing plan), so the engines can say
+   * what the board would carry after the moves without anything being stored.
+   */
+  public static SiteSpec withPlacements(SiteSpec site, List<Placement> placements) {
+    Map<Long, Placement> byCircuit =
+        placements.stream().collect(Collectors.toMap(Placement::circuitId, p -> p, (a, b) -> b));
+    List<BoardSpec> boards =
+        site.boards().stream()
+            .map(board -> new BoardSpec(board.id(), board.reference(), board.phases(), board.wayCount(),
+                board.busbarRatingAmps(), board.incomer(), board.parentBoardId(), board.submainCable(),
+                board.unbalanceLimitPercent(), board.coincidenceFactor(), board.diversityMethodKey(),
+                board.measuredExternalLoopImpedanceOhms(), board.measuredFaultCurrentKiloAmps(),
+                board.circuits().stream()
+                    .map(circuit -> {
+                      Placement placement = byCircuit.get(circuit.id());
+                      return placement == null ? circuit : new CircuitSpec(circuit.id(), placement.wayNumber(),
+                          com.wayledger.engine.PhasePosition.on(placement.phase()), circuit.description(),
+                          circuit.status(), circuit.lockedForBalancing(), circuit.device(), circuit.cable(),
+                          circuit.loads(), circuit.feedsBoardId(), circuit.measuredLoopImpedanceOhms());
+                    })
+                    .toList()))
+            .toList();
+    return new SiteSpec(site.id(), site.name(), site.supply(), site.defaultDiversityMethodKey(), boards);
+  }
+
   public static SupplySpec supplyOf(Site site) {
     return new SupplySpec(
         site.getEarthingSystem(),

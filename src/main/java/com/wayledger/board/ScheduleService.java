@@ -117,6 +117,66 @@ public class ScheduleService {
     return circuit;
   }
 
+  /**
+   * Fits another protective device to an in-use circuit (for instance an accepted proposal), keeping its
+   * cable and loads; refused when the circuit changed since the proposal was shown.
+   */
+  @Transactional
+  public Circuit replaceDevice(long circuitId, long expectedVersion, com.wayledger.engine.DeviceSpec device) {
+    Circuit circuit = circuit(circuitId);
+    if (circuit.getVersion() != expectedVersion) {
+      throw new StaleEditException("Circuit " + circuit.getDescription());
+    }
+    if (circuit.getStatus() == WayStatus.EMPTY) {
+      throw new RuleViolation("deviceKind", "circuit.device.emptyPosition");
+    }
+    circuit.replaceDevice(DeviceDetails.fromSpec(device));
+    circuit.getBoard().markScheduleChanged();
+    entityManager.flush();
+    return circuit;
+  }
+
+  /**
+   * Moves single-pole circuits of one board to other ways and lines in one transaction (a balancing plan or
+   * its undo): all of them or none. Refused when the board changed since the plan was shown, when a circuit
+   * is locked, three-pole or on another board, or when a target position is taken by a circuit that stays.
+   */
+  @Transactional
+  public void rearrange(long boardId, long expectedBoardVersion, java.util.List<Placement> placements) {
+    Board board = boards.findById(boardId).orElseThrow(() -> new NotFoundException("Board", boardId));
+    if (board.getVersion() != expectedBoardVersion) {
+      throw new StaleEditException("Board " + board.getReference());
+    }
+    java.util.List<Circuit> moving = new java.util.ArrayList<>();
+    for (Placement placement : placements) {
+      Circuit circuit = circuit(placement.circuitId());
+      if (!circuit.getBoard().getId().equals(boardId)) {
+        throw new RuleViolation("placements", "balance.circuit.otherBoard", placement.circuitId());
+      }
+      if (circuit.isLockedForBalancing() || !circuit.getPosition().isSinglePole()) {
+        throw new RuleViolation("placements", "balance.circuit.fixed", circuit.getDescription());
+      }
+      if (placement.wayNumber() < 1 || placement.wayNumber() > board.getWayCount()) {
+        throw new RuleViolation("placements", "circuit.way.beyondBoard", board.getWayCount());
+      }
+      if (!board.isThreePhase() && placement.phase() != com.wayledger.engine.Phase.L1) {
+        throw new RuleViolation("placements", "circuit.position.singlePhaseBoard");
+      }
+      moving.add(circuit);
+    }
+    for (Circuit circuit : moving) {
+      jdbc.sql("DELETE FROM way_slot WHERE circuit_id = ?").param(circuit.getId()).update();
+    }
+    for (int i = 0; i < moving.size(); i++) {
+      moving.get(i).moveTo(placements.get(i).wayNumber(), PhasePosition.on(placements.get(i).phase()));
+    }
+    for (Circuit circuit : moving) {
+      occupy(board, circuit);
+    }
+    board.markScheduleChanged();
+    entityManager.flush();
+  }
+
   /** Deletes a circuit with its loads; returns the id of the board it was on. */
   @Transactional
   public long deleteCircuit(long circuitId) {

@@ -80,6 +80,16 @@ public record SiteAnalysis(SiteSpec spec, SiteDemand demand, SiteFindings findin
     return counts;
   }
 
+  /** The headline figures of every board of the site, by board id. */
+  public Map<Long, BoardHeadline> headlines() {
+    Map<Long, BoardHeadline> headlines = new java.util.HashMap<>();
+    for (BoardDemand board : demand.boards()) {
+      headlines.put(
+          board.boardId(), BoardHeadline.of(board, worstPhase(board.boardId()), problemCounts(board.boardId())));
+    }
+    return headlines;
+  }
+
   /** The line with the largest demand current on a board; null for a board with no demand. */
   public Phase worstPhase(long boardId) {
     BoardDemand board = boardDemand(boardId);

@@ -98,41 +98,41 @@ class DemoSite implements ApplicationRunner {
                 50.0,
                 0.30,
                 12.0,
-                100.0,
+                200.0,
                 "uk-small-shop",
                 "Ground floor: bakery and shop. First floor: two flats. Landlord supply for stairs and yard.",
                 null));
     long siteId = site.getId();
 
-    Board main = boards.create(siteId, board("MDB", "Ground floor intake cupboard", 3, 8, 200.0,
-        DeviceKind.MCCB, null, 100.0, 25.0, null, null, 25.0, 16.0, 10.0, InstallationMethod.C));
+    Board main = boards.create(siteId, board("MDB", "Ground floor intake cupboard", 3, 8, 250.0,
+        DeviceKind.MCCB, null, 200.0, 25.0, null, null, 70.0, 35.0, 6.0, InstallationMethod.C));
     Circuit feedBakery = add(main, way(1, PhasePosition.THREE_POLE, "Submain to bakery board KB1",
-        DeviceKind.MCCB, null, 63.0, 25.0, 16.0, 16.0, 18.0, InstallationMethod.C));
+        DeviceKind.MCCB, null, 125.0, 25.0, 50.0, 25.0, 18.0, InstallationMethod.C));
     Circuit feedFlat1 = add(main, way(2, PhasePosition.L1, "Submain to flat 1 board",
-        DeviceKind.MCB, TripCurve.C, 40.0, 10.0, 10.0, 10.0, 22.0, InstallationMethod.C));
+        DeviceKind.MCCB, null, 100.0, 16.0, 25.0, 16.0, 22.0, InstallationMethod.C));
     Circuit feedFlat2 = add(main, way(2, PhasePosition.L2, "Submain to flat 2 board",
-        DeviceKind.MCB, TripCurve.C, 40.0, 10.0, 10.0, 10.0, 26.0, InstallationMethod.C));
+        DeviceKind.MCCB, null, 100.0, 16.0, 25.0, 16.0, 26.0, InstallationMethod.C));
     Circuit feedLandlord = add(main, way(2, PhasePosition.L3, "Submain to landlord board",
-        DeviceKind.MCB, TripCurve.C, 32.0, 10.0, 6.0, 6.0, 14.0, InstallationMethod.C));
+        DeviceKind.MCB, TripCurve.C, 63.0, 15.0, 16.0, 16.0, 14.0, InstallationMethod.C));
     add(main, way(3, PhasePosition.L1, "Intake cupboard lighting", DeviceKind.MCB, TripCurve.B, 6.0,
-        10.0, 1.5, 1.0, 6.0, InstallationMethod.C), load("Batten lights", LoadCategory.LIGHTING, 2, 60, RatingUnit.W, 0.95));
-    add(main, way(3, PhasePosition.L2, "Fire alarm panel", DeviceKind.MCB, TripCurve.B, 6.0, 10.0,
+        15.0, 1.5, 1.0, 6.0, InstallationMethod.C), load("Batten lights", LoadCategory.LIGHTING, 2, 60, RatingUnit.W, 0.95));
+    add(main, way(3, PhasePosition.L2, "Fire alarm panel", DeviceKind.MCB, TripCurve.B, 6.0, 15.0,
         1.5, 1.0, 8.0, InstallationMethod.C), load("Fire alarm panel", LoadCategory.FIXED_APPLIANCE, 1, 150, RatingUnit.W, 0.9));
     add(main, spare(3, PhasePosition.L3, "Spare", DeviceKind.MCB, TripCurve.B, 16.0));
 
     Board bakery = boards.create(siteId, subBoard("KB1", "Bakery, behind the proving room", 3, 12,
-        100.0, DeviceKind.MCCB, null, 63.0, main, feedBakery, 16.0, 16.0, 18.0, 0.9));
+        160.0, DeviceKind.MCCB, null, 125.0, main, feedBakery, 35.0, 16.0, 18.0, 0.9));
     bakeryCircuits(bakery);
 
-    Board flat1 = boards.create(siteId, subBoard("FLAT-1", "Flat 1 hallway cupboard", 1, 10, 100.0,
-        DeviceKind.RCD, null, 63.0, main, feedFlat1, 10.0, 10.0, 22.0, 1.0));
+    Board flat1 = boards.create(siteId, withMethod(subBoard("FLAT-1", "Flat 1 hallway cupboard", 1, 10, 100.0,
+        DeviceKind.MCCB, null, 100.0, main, feedFlat1, 25.0, 16.0, 22.0, 0.8), "uk-household"));
     flatCircuits(flat1, 1);
-    Board flat2 = boards.create(siteId, subBoard("FLAT-2", "Flat 2 hallway cupboard", 1, 10, 100.0,
-        DeviceKind.RCD, null, 63.0, main, feedFlat2, 10.0, 10.0, 26.0, 1.0));
+    Board flat2 = boards.create(siteId, withMethod(subBoard("FLAT-2", "Flat 2 hallway cupboard", 1, 10, 100.0,
+        DeviceKind.MCCB, null, 100.0, main, feedFlat2, 25.0, 16.0, 26.0, 0.8), "uk-household"));
     flatCircuits(flat2, 2);
 
-    Board landlord = boards.create(siteId, subBoard("LL", "Stair well, ground floor", 1, 8, 63.0,
-        DeviceKind.MCB, TripCurve.C, 32.0, main, feedLandlord, 6.0, 6.0, 14.0, 1.0));
+    Board landlord = boards.create(siteId, subBoard("LL", "Stair well, ground floor", 1, 8, 80.0,
+        DeviceKind.MCB, TripCurve.C, 63.0, main, feedLandlord, 16.0, 16.0, 14.0, 1.0));
     landlordCircuits(landlord);
   }
 
@@ -140,16 +140,16 @@ class DemoSite implements ApplicationRunner {
     // Three-phase appliances
     add(kb, way(1, PhasePosition.THREE_POLE, "Deck oven", DeviceKind.MCB, TripCurve.C, 32.0, 10.0,
         6.0, 6.0, 9.0, InstallationMethod.C),
-        load("Deck oven, three decks", LoadCategory.COOKING, 1, 18000, RatingUnit.W, 1.0));
+        load("Deck oven, three decks", LoadCategory.COOKING, 1, 13500, RatingUnit.W, 1.0));
     add(kb, way(2, PhasePosition.THREE_POLE, "Spiral dough mixer", DeviceKind.MCB, TripCurve.B, 16.0,
         10.0, 2.5, 2.5, 12.0, InstallationMethod.C),
         surge(load("Spiral mixer motor", LoadCategory.MOTOR, 1, 5500, RatingUnit.W, 0.82), 7.5, 150));
     add(kb, way(3, PhasePosition.THREE_POLE, "Walk-in cold room", DeviceKind.MCB, TripCurve.C, 20.0,
         10.0, 2.5, 2.5, 15.0, InstallationMethod.C),
         surge(load("Cold room condensing unit", LoadCategory.MOTOR, 1, 4000, RatingUnit.W, 0.8), 6.0, 200));
-    add(kb, way(4, PhasePosition.THREE_POLE, "Rack oven", DeviceKind.MCB, TripCurve.C, 40.0, 10.0,
-        10.0, 10.0, 11.0, InstallationMethod.C),
-        load("Rack oven", LoadCategory.COOKING, 1, 24000, RatingUnit.W, 0.98));
+    add(kb, way(4, PhasePosition.THREE_POLE, "Convection oven", DeviceKind.MCB, TripCurve.C, 32.0, 10.0,
+        6.0, 6.0, 11.0, InstallationMethod.C),
+        load("Convection oven", LoadCategory.COOKING, 1, 15000, RatingUnit.W, 0.98));
     // Single-phase circuits, mostly on L1: the board is lopsided on purpose.
     add(kb, way(5, PhasePosition.L1, "Prover", DeviceKind.MCB, TripCurve.B, 16.0, 10.0, 2.5, 1.5, 8.0,
         InstallationMethod.C), load("Prover heater", LoadCategory.FIXED_APPLIANCE, 1, 3000, RatingUnit.W, 1.0));
@@ -200,17 +200,17 @@ class DemoSite implements ApplicationRunner {
     add(flat, way(2, PhasePosition.L1, "Shower", DeviceKind.MCB, TripCurve.B, second ? 32.0 : 40.0, 6.0,
         10.0, 4.0, 11.0, InstallationMethod.C),
         load("Electric shower", LoadCategory.WATER_HEATING_INSTANTANEOUS, 1, second ? 10800 : 8500, RatingUnit.W, 1.0));
-    add(flat, way(3, PhasePosition.L1, "Sockets ring, living and bedrooms", DeviceKind.MCB, TripCurve.B,
-        32.0, 6.0, 2.5, 1.5, 42.0, InstallationMethod.C),
+    add(flat, way(3, PhasePosition.L1, "Sockets radial, living and bedrooms", DeviceKind.MCB, TripCurve.B,
+        20.0, 6.0, 2.5, 1.5, 32.0, InstallationMethod.C),
         load("General sockets", LoadCategory.SOCKET_OUTLETS, 1, 3500, RatingUnit.W, 0.95));
     // Flat 1's kitchen radial: 32 A breaker on 2.5 mm² run through loft insulation, so the cable is not protected.
     CircuitForm kitchen = way(4, PhasePosition.L1, "Sockets radial, kitchen", DeviceKind.MCB, TripCurve.B,
-        32.0, 6.0, 2.5, 1.5, 16.0, second ? InstallationMethod.C : InstallationMethod.A1);
+        32.0, 6.0, second ? 4.0 : 2.5, 1.5, 16.0, second ? InstallationMethod.C : InstallationMethod.A1);
     add(flat, second ? kitchen : withThermalInsulation(kitchen, 400),
         load("Kitchen appliances", LoadCategory.SOCKET_OUTLETS, 1, 3000, RatingUnit.W, 1.0));
-    add(flat, way(5, PhasePosition.L1, "Immersion heater", DeviceKind.MCB, TripCurve.B, 16.0, 6.0, 2.5, 1.5,
+    add(flat, way(5, PhasePosition.L1, "Washer-dryer", DeviceKind.MCB, TripCurve.B, 16.0, 6.0, 2.5, 1.5,
         8.0, InstallationMethod.C),
-        load("Immersion heater", LoadCategory.WATER_HEATING_STORAGE, 1, 3000, RatingUnit.W, 1.0));
+        load("Washer-dryer", LoadCategory.FIXED_APPLIANCE, 1, 2200, RatingUnit.W, 0.95));
     add(flat, way(6, PhasePosition.L1, "Lighting, downstairs rooms", DeviceKind.MCB, TripCurve.B, 6.0, 6.0,
         1.5, 1.0, 28.0, InstallationMethod.C), load("Ceiling lights", LoadCategory.LIGHTING, 9, 40, RatingUnit.W, 0.9));
     add(flat, way(7, PhasePosition.L1, "Lighting, bedrooms and bathroom", DeviceKind.MCB, TripCurve.B, 6.0,
@@ -218,7 +218,7 @@ class DemoSite implements ApplicationRunner {
     add(flat, way(8, PhasePosition.L1, "Smoke and heat alarms", DeviceKind.MCB, TripCurve.B, 6.0, 6.0, 1.5,
         1.0, 20.0, InstallationMethod.C), load("Mains alarms", LoadCategory.FIXED_APPLIANCE, 4, 5, RatingUnit.W, 0.9));
     add(flat, way(9, PhasePosition.L1, "Panel heaters", DeviceKind.MCB, TripCurve.B, 20.0, 6.0, 2.5, 1.5, 24.0,
-        InstallationMethod.C), load("Panel heaters", LoadCategory.SPACE_HEATING, 3, 1000, RatingUnit.W, 1.0));
+        InstallationMethod.C), load("Panel heaters", LoadCategory.SPACE_HEATING, 2, 750, RatingUnit.W, 1.0));
     add(flat, spare(10, PhasePosition.L1, "Spare", DeviceKind.MCB, TripCurve.B, 16.0));
   }
 
@@ -265,6 +265,17 @@ class DemoSite implements ApplicationRunner {
         base.submainThermalInsulationMm(), base.unbalanceLimitPercent(), coincidence, null, null, null, null);
   }
 
+  private static BoardForm withMethod(BoardForm form, String methodKey) {
+    return new BoardForm(form.reference(), form.location(), form.phases(), form.wayCount(),
+        form.busbarRatingAmps(), form.incomerKind(), form.incomerCurve(), form.incomerRatingAmps(),
+        form.incomerPoles(), form.incomerBreakingCapacityKiloAmps(), form.incomerResidualMilliAmps(),
+        form.incomerRcdType(), form.parentBoardId(), form.fedFromCircuitId(), form.submainLineCsa(),
+        form.submainCpcCsa(), form.submainMaterial(), form.submainInsulation(), form.submainLengthMetres(),
+        form.submainInstallationMethod(), form.submainAmbientCelsius(), form.submainGroupedCircuits(),
+        form.submainThermalInsulationMm(), form.unbalanceLimitPercent(), form.coincidenceFactor(), methodKey,
+        null, null, null);
+  }
+
   private static CircuitForm way(int way, PhasePosition position, String description, DeviceKind kind,
       TripCurve curve, Double ratingAmps, Double kiloAmps, Double csa, Double cpc, Double lengthMetres,
       InstallationMethod method) {
@@ -288,7 +299,7 @@ class DemoSite implements ApplicationRunner {
   private static CircuitForm spare(int way, PhasePosition position, String description, DeviceKind kind,
       TripCurve curve, Double ratingAmps) {
     return new CircuitForm(way, position, description, WayStatus.SPARE_DEVICE, false, kind, curve,
-        ratingAmps, 1, 6.0, null, null, null, null, null, null, null, null, null, null, null, null, null,
+        ratingAmps, 1, 15.0, null, null, null, null, null, null, null, null, null, null, null, null, null,
         null, null, null, null, null, null);
   }
 

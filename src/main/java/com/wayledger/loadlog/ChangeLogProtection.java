@@ -9,7 +9,7 @@ import org.flywaydb.core.api.migration.JavaMigration;
 import org.springframework.stereotype.Component;
 
 /**
- * Migration 2.1: on PostgreSQL the database itself refuses UPDATE, DELETE and TRUNCATE of change_log rows, with
+ * Migration 4.1: on PostgreSQL the database itself refuses UPDATE, DELETE and TRUNCATE of change_log rows, with
  * a trigger that raises an exception, whoever is connected (the table owner included). H2 cannot read the
  * PL/pgSQL it needs, so on H2 this migration records itself and does nothing: there the guarantee is the
  * application's (no code path updates or deletes a row). A Java migration rather than per-vendor SQL folders so
@@ -33,7 +33,7 @@ class ChangeLogProtection implements JavaMigration {
 
   @Override
   public MigrationVersion getVersion() {
-    return MigrationVersion.fromVersion("2.1");
+    return MigrationVersion.fromVersion("4.1");
   }
 
   @Override

@@ -7,6 +7,7 @@ import com.wayledger.system.RuleViolation;
 import jakarta.servlet.http.HttpServletRequest;
 import jakarta.servlet.http.HttpServletResponse;
 import jakarta.validation.Valid;
+import com.wayledger.diversity.MethodLibrary;
 import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
 import org.springframework.validation.BindingResult;
@@ -22,9 +23,16 @@ public class SiteController {
   private static final String FORM_VIEW = "site/form";
 
   private final SiteService sites;
+  private final MethodLibrary methods;
 
-  public SiteController(SiteService sites) {
+  public SiteController(SiteService sites, MethodLibrary methods) {
     this.sites = sites;
+    this.methods = methods;
+  }
+
+  @ModelAttribute("methods")
+  java.util.List<MethodLibrary.Entry> methods() {
+    return methods.entries();
   }
 
   @ModelAttribute("earthingSystems")

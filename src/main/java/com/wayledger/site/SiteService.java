@@ -1,5 +1,6 @@
 package com.wayledger.site;
 
+import com.wayledger.diversity.MethodLibrary;
 import com.wayledger.system.ChangeKind;
 import com.wayledger.system.NotFoundException;
 import com.wayledger.system.RuleViolation;
@@ -19,10 +20,12 @@ import org.springframework.transaction.annotation.Transactional;
 public class SiteService {
 
   private final SiteRepository sites;
+  private final MethodLibrary methods;
   private final ApplicationEventPublisher events;
 
-  public SiteService(SiteRepository sites, ApplicationEventPublisher events) {
+  public SiteService(SiteRepository sites, MethodLibrary methods, ApplicationEventPublisher events) {
     this.sites = sites;
+    this.methods = methods;
     this.events = events;
   }
 
@@ -77,6 +80,10 @@ public class SiteService {
     }
     if (form.frequencyHertz() != 50.0 && form.frequencyHertz() != 60.0) {
       throw new RuleViolation("frequencyHertz", "site.frequency.invalid");
+    }
+    if (form.defaultDiversityMethod() != null && !form.defaultDiversityMethod().isBlank()
+        && methods.catalog().find(form.defaultDiversityMethod()).isEmpty()) {
+      throw new RuleViolation("defaultDiversityMethod", "method.unknown");
     }
     String name = form.name().strip();
     boolean taken =

@@ -3,6 +3,7 @@ package com.wayledger.system;
 import java.net.URI;
 import java.util.List;
 import java.util.Map;
+import java.util.stream.Collectors;
 import org.springframework.dao.DataIntegrityViolationException;
 import org.springframework.http.HttpStatus;
 import org.springframework.http.ProblemDetail;
@@ -12,6 +13,7 @@ import org.springframework.web.bind.MethodArgumentNotValidException;
 import org.springframework.web.bind.annotation.ExceptionHandler;
 import org.springframework.web.bind.annotation.RestControllerAdvice;
 import org.springframework.web.method.annotation.MethodArgumentTypeMismatchException;
+import tools.jackson.core.JacksonException;
 
 /**
  * Errors of the JSON API as RFC 9457 problem details: the status, a sentence, and for bad input a list of
@@ -38,8 +40,23 @@ public class ApiErrorHandling {
     return problem;
   }
 
-  @ExceptionHandler({HttpMessageNotReadableException.class, MethodArgumentTypeMismatchException.class})
-  public ProblemDetail unreadable(Exception e) {
+  @ExceptionHandler(HttpMessageNotReadableException.class)
+  public ProblemDetail unreadable(HttpMessageNotReadableException e) {
+    ProblemDetail problem = problem(HttpStatus.BAD_REQUEST, "The request body or a parameter is malformed.");
+    // A value of the wrong type ("abc" for a rating, an unknown enum name) names its field in Jackson's path;
+    // broken JSON syntax has no path and gets no field.
+    if (e.getCause() instanceof JacksonException jackson && !jackson.getPath().isEmpty()) {
+      String field =
+          jackson.getPath().stream()
+              .map(step -> step.getPropertyName() != null ? step.getPropertyName() : "[" + step.getIndex() + "]")
+              .collect(Collectors.joining("."));
+      problem.setProperty("fields", List.of(Map.of("field", field, "message", "not a valid value here")));
+    }
+    return problem;
+  }
+
+  @ExceptionHandler(MethodArgumentTypeMismatchException.class)
+  public ProblemDetail mismatch(MethodArgumentTypeMismatchException e) {
     return problem(HttpStatus.BAD_REQUEST, "The request body or a parameter is malformed.");
   }
 

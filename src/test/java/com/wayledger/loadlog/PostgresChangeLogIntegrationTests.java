@@ -18,7 +18,7 @@ import org.springframework.test.context.DynamicPropertySource;
 
 /**
  * On PostgreSQL the database itself refuses to change or remove change-log rows, even for the connection that
- * owns the table (migration 2.1). Skips without a PostgreSQL database; fails in CI (CI=true).
+ * owns the table (migration 4.1). Skips without a PostgreSQL database; fails in CI (CI=true).
  */
 @EnabledWithPostgres
 @SpringBootTest

@@ -9,8 +9,21 @@ package com.wayledger.engine.protection.result;
  */
 public record Quantity(String name, double value, String unit) {
 
+  /** "Ib = 9.72 A": three significant figures, at most three decimals, for people to read; {@link #value()} keeps all. */
   @Override
   public String toString() {
-    return name + " = " + value + (unit.isEmpty() ? "" : " " + unit);
+    return name + " = " + readable(value) + (unit.isEmpty() ? "" : " " + unit);
+  }
+
+  static String readable(double value) {
+    if (value == 0 || Double.isNaN(value) || Double.isInfinite(value)) {
+      return String.valueOf(value);
+    }
+    java.math.BigDecimal rounded =
+        new java.math.BigDecimal(value).round(new java.math.MathContext(3, java.math.RoundingMode.HALF_UP));
+    if (rounded.scale() > 3) {
+      rounded = rounded.setScale(3, java.math.RoundingMode.HALF_UP);
+    }
+    return rounded.stripTrailingZeros().toPlainString();
   }
 }

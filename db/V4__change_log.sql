@@ -1,6 +1,6 @@
 -- Change log (package loadlog): one row per change to a site, board, circuit or load, written in the same
 -- transaction as the change. Append-only: the application has no way to change or remove a row, and on
--- PostgreSQL a trigger refuses UPDATE, DELETE and TRUNCATE (Java migration 2.1, loadlog.ChangeLogProtection,
+-- PostgreSQL a trigger refuses UPDATE, DELETE and TRUNCATE (Java migration 4.1, loadlog.ChangeLogProtection,
 -- because the trigger needs PL/pgSQL, which H2 does not read). One script for PostgreSQL and H2.
 -- board_id and circuit_id have no foreign key on purpose: the log outlives deleted boards and circuits.
 

@@ -1,0 +1,61 @@
+package com.wayledger.balance;
+
+import com.wayledger.board.Placement;
+import com.wayledger.engine.balance.BalanceResult;
+import com.wayledger.engine.balance.CircuitMove;
+import com.wayledger.engine.balance.FewestMovesResult;
+import com.wayledger.engine.demand.BoardDemand;
+import java.util.List;
+
+/**
+ * What the balancing page shows for one board.
+ *
+ * @param basis whether circuits were weighed by demand after diversity or by connected load
+ * @param optimal the proved-optimal (or best within budget) arrangement
+ * @param fewestMoves the k-moves table for the existing arrangement
+ * @param chosenMoves the moves of the plan being previewed
+ * @param chosenLabel which plan is previewed ("optimal" or "k moves")
+ * @param before the board's demand as it stands
+ * @param after the board's demand with the chosen plan applied (computed, not stored)
+ * @param placements the chosen plan as placements to apply
+ * @param undo the placements that put every moved circuit back
+ */
+public record BalancePlans(
+    Basis basis,
+    BalanceResult optimal,
+    FewestMovesResult fewestMoves,
+    List<CircuitMove> chosenMoves,
+    String chosenLabel,
+    BoardDemand before,
+    BoardDemand after,
+    List<Placement> placements,
+    List<Placement> undo) {
+
+  /** What each circuit is weighed by. */
+  public enum Basis {
+    DEMAND,
+    CONNECTED
+  }
+
+  /** Top of the bar charts, A: the largest line current before or after, plus a margin, at least 1 A. */
+  public double chartScaleAmps() {
+    double largest = 1.0;
+    for (BoardDemand side : new BoardDemand[] {before, after}) {
+      if (side != null) {
+        for (var phase : side.phases()) {
+          largest = Math.max(largest, phase.currentAmps() * 1.15);
+        }
+      }
+    }
+    return largest;
+  }
+
+  /** Placements as one form value: "12:4:L2 13:5:L1". */
+  public String placementTokens() {
+    return String.join(" ", placements.stream().map(Placement::token).toList());
+  }
+
+  public String undoTokens() {
+    return String.join(" ", undo.stream().map(Placement::token).toList());
+  }
+}

@@ -1,0 +1,146 @@
+package com.wayledger.balance;
+
+import com.wayledger.balance.BalancePlans.Basis;
+import com.wayledger.board.AnalysisService;
+import com.wayledger.board.Placement;
+import com.wayledger.board.ScheduleMapper;
+import com.wayledger.board.SiteAnalysis;
+import com.wayledger.engine.BoardSpec;
+import com.wayledger.engine.CircuitSpec;
+import com.wayledger.engine.Phase;
+import com.wayledger.engine.PhasePosition;
+import com.wayledger.engine.WayStatus;
+import com.wayledger.engine.balance.BalanceItem;
+import com.wayledger.engine.balance.BalanceProblem;
+import com.wayledger.engine.balance.BalanceResult;
+import com.wayledger.engine.balance.CircuitMove;
+import com.wayledger.engine.balance.FewestMovesResult;
+import com.wayledger.engine.balance.MovesStep;
+import com.wayledger.engine.balance.PhaseBalancer;
+import com.wayledger.engine.demand.BoardDemand;
+import com.wayledger.engine.demand.CircuitDemand;
+import com.wayledger.system.NotFoundException;
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import org.springframework.stereotype.Service;
+
+/**
+ * Turns a stored board into a balancing problem and its plans into placements. Single-pole circuits in use
+ * and not locked may move; three-pole and locked circuits are fixed loads; a position is free when no
+ * circuit, spare device or empty-space record holds it.
+ */
+@Service
+public class BalanceService {
+
+  private final AnalysisService analysis;
+
+  public BalanceService(AnalysisService analysis) {
+    this.analysis = analysis;
+  }
+
+  /**
+   * The plans for a board.
+   *
+   * @param movesChoice null for the optimal plan, else the number of moves of the fewest-moves row to preview
+   */
+  public BalancePlans plans(long boardId, Basis basis, Integer movesChoice) {
+    SiteAnalysis results = analysis.ofBoard(boardId);
+    BoardSpec board =
+        results.spec().boards().stream().filter(b -> b.id() == boardId).findFirst()
+            .orElseThrow(() -> new NotFoundException("Board", boardId));
+    BoardDemand before = results.boardDemand(boardId);
+    BalanceProblem problem = problemOf(board, before, basis);
+    PhaseBalancer balancer = new PhaseBalancer();
+    BalanceResult optimal = balancer.optimise(problem);
+    FewestMovesResult fewest = balancer.fewestMoves(problem);
+    List<CircuitMove> chosen = optimal.moves() == null ? List.of() : optimal.moves();
+    String label = "optimal";
+    if (movesChoice != null && fewest.steps() != null) {
+      for (MovesStep step : fewest.steps()) {
+        if (step.moves() == movesChoice) {
+          chosen = step.plan();
+          label = movesChoice + " moves";
+        }
+      }
+    }
+    List<Placement> placements = placementsOf(chosen);
+    List<Placement> undo = undoOf(chosen);
+    BoardDemand after =
+        placements.isEmpty()
+            ? before
+            : analysis.analyse(ScheduleMapper.withPlacements(results.spec(), placements)).boardDemand(boardId);
+    return new BalancePlans(basis, optimal, fewest, chosen, label, before, after, placements, undo);
+  }
+
+  /** The balancing problem of a board: public so the API can show what was solved. */
+  public static BalanceProblem problemOf(BoardSpec board, BoardDemand demand, Basis basis) {
+    Map<Long, CircuitDemand> byCircuit = new java.util.HashMap<>();
+    if (demand != null) {
+      demand.circuits().forEach(c -> byCircuit.put(c.circuitId(), c));
+    }
+    double u0 = demand == null ? 230.0 : demand.nominalVoltageVolts();
+    List<BalanceItem> items = new ArrayList<>();
+    Map<Phase, Double> fixed = new EnumMap<>(Phase.class);
+    for (Phase phase : Phase.values()) {
+      fixed.put(phase, 0.0);
+    }
+    Set<String> taken = new HashSet<>();
+    for (CircuitSpec circuit : board.circuits()) {
+      for (Phase phase : circuit.position().phases()) {
+        taken.add(circuit.wayNumber() + ":" + phase);
+      }
+      CircuitDemand result = byCircuit.get(circuit.id());
+      Double amps = result == null || !result.isAssessed() ? null : amps(result, basis, u0);
+      if (circuit.position() == PhasePosition.THREE_POLE) {
+        if (amps != null) {
+          for (Phase phase : Phase.values()) {
+            fixed.merge(phase, amps / 3.0, Double::sum);
+          }
+        }
+        continue;
+      }
+      if (circuit.status() != WayStatus.IN_USE) {
+        continue;
+      }
+      Phase phase = circuit.position().phases().iterator().next();
+      items.add(new BalanceItem(circuit.id(), circuit.description(), amps, phase, circuit.wayNumber(),
+          !circuit.lockedForBalancing()));
+    }
+    Map<Phase, List<Integer>> freeWays = new EnumMap<>(Phase.class);
+    for (Phase phase : Phase.values()) {
+      List<Integer> ways = new ArrayList<>();
+      for (int way = 1; way <= board.wayCount(); way++) {
+        if (!taken.contains(way + ":" + phase)) {
+          ways.add(way);
+        }
+      }
+      freeWays.put(phase, ways);
+    }
+    return new BalanceProblem(items, fixed, null, freeWays, board.unbalanceLimitPercent(), board.isThreePhase());
+  }
+
+  /** A circuit's weight in amps: its share of demand on its line, or its connected current. */
+  private static double amps(CircuitDemand circuit, Basis basis, double u0) {
+    double watts = basis == Basis.CONNECTED ? circuit.connectedWatts() : circuit.demandWatts();
+    double vars = basis == Basis.CONNECTED ? circuit.connectedVars() : circuit.demandVars();
+    return Math.hypot(watts, vars) / u0;
+  }
+
+  static List<Placement> placementsOf(List<CircuitMove> moves) {
+    return moves.stream()
+        .filter(move -> move.toWay() != null)
+        .map(move -> new Placement(move.circuitId(), move.toWay(), move.toPhase()))
+        .toList();
+  }
+
+  static List<Placement> undoOf(List<CircuitMove> moves) {
+    return moves.stream()
+        .filter(move -> move.fromWay() != null && move.fromPhase() != null && move.toWay() != null)
+        .map(move -> new Placement(move.circuitId(), move.fromWay(), move.fromPhase()))
+        .toList();
+  }
+}
