@@ -22,6 +22,7 @@ import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.ModelAttribute;
 import org.springframework.web.bind.annotation.PathVariable;
 import org.springframework.web.bind.annotation.PostMapping;
+import org.springframework.web.bind.annotation.RequestParam;
 import org.springframework.web.servlet.mvc.support.RedirectAttributes;
 
 /** A site's page with its board tree, and the board create/edit/delete forms. */
@@ -85,6 +86,7 @@ public class BoardController {
       @Valid @ModelAttribute("form") BoardForm form,
       BindingResult errors,
       HttpServletRequest request,
+      @RequestParam(required = false) String reason,
       Model model,
       HttpServletResponse response) {
     form = FormRecovery.ensure(form, errors, model, "form", BoardForm.class, request);
@@ -94,7 +96,7 @@ public class BoardController {
       return FormStatus.invalid(response, FORM_VIEW);
     }
     try {
-      return "redirect:/boards/" + boards.create(siteId, form).getId();
+      return "redirect:/boards/" + boards.create(siteId, form, reason).getId();
     } catch (RuleViolation violation) {
       FormStatus.reject(errors, violation);
       return FormStatus.invalid(response, FORM_VIEW);
@@ -123,6 +125,7 @@ public class BoardController {
       @Valid @ModelAttribute("form") BoardForm form,
       BindingResult errors,
       HttpServletRequest request,
+      @RequestParam(required = false) String reason,
       Model model,
       HttpServletResponse response) {
     form = FormRecovery.ensure(form, errors, model, "form", BoardForm.class, request);
@@ -134,7 +137,7 @@ public class BoardController {
       return FormStatus.invalid(response, FORM_VIEW);
     }
     try {
-      boards.update(id, form);
+      boards.update(id, form, reason);
       return "redirect:/boards/" + id;
     } catch (RuleViolation violation) {
       FormStatus.reject(errors, violation);
@@ -143,9 +146,10 @@ public class BoardController {
   }
 
   @PostMapping("/boards/{id}/delete")
-  public String delete(@PathVariable long id, RedirectAttributes redirect) {
+  public String delete(
+      @PathVariable long id, @RequestParam(required = false) String reason, RedirectAttributes redirect) {
     try {
-      return "redirect:/sites/" + boards.delete(id);
+      return "redirect:/sites/" + boards.delete(id, reason);
     } catch (RuleViolation violation) {
       redirect.addFlashAttribute("problem", violation.messageCode());
       return "redirect:/boards/" + id;

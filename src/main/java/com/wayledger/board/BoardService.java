@@ -3,8 +3,10 @@ package com.wayledger.board;
 import com.wayledger.diversity.MethodLibrary;
 import com.wayledger.site.Site;
 import com.wayledger.site.SiteService;
+import com.wayledger.system.ChangeKind;
 import com.wayledger.system.NotFoundException;
 import com.wayledger.system.RuleViolation;
+import com.wayledger.system.ScheduleChanged;
 import com.wayledger.system.StaleEditException;
 import java.util.ArrayList;
 import java.util.Comparator;
@@ -12,10 +14,14 @@ import java.util.List;
 import java.util.Map;
 import java.util.Objects;
 import java.util.stream.Collectors;
+import org.springframework.context.ApplicationEventPublisher;
 import org.springframework.stereotype.Service;
 import org.springframework.transaction.annotation.Transactional;
 
-/** Creates, edits and finds boards, and keeps the board tree of a site a tree. */
+/**
+ * Creates, edits and finds boards, and keeps the board tree of a site a tree. Each change publishes a
+ * {@link ScheduleChanged} event for the change log, with the optional reason the user gave.
+ */
 @Service
 public class BoardService {
 
@@ -23,9 +29,12 @@ public class BoardService {
   private final CircuitRepository circuits;
   private final SiteService sites;
   private final MethodLibrary methods;
+  private final ApplicationEventPublisher events;
 
   public BoardService(
-      BoardRepository boards, CircuitRepository circuits, SiteService sites, MethodLibrary methods) {
+      BoardRepository boards, CircuitRepository circuits, SiteService sites, MethodLibrary methods,
+      ApplicationEventPublisher events) {
+    this.events = events;
     this.boards = boards;
     this.circuits = circuits;
     this.sites = sites;
@@ -68,34 +77,63 @@ public class BoardService {
 
   @Transactional
   public Board create(long siteId, BoardForm form) {
+    return create(siteId, form, null);
+  }
+
+  @Transactional
+  public Board create(long siteId, BoardForm form, String reason) {
     Site site = sites.get(siteId);
     Board parent = checkRules(site, form, null);
     Board board = new Board(site);
     board.apply(form, parent);
-    return boards.saveAndFlush(board);
+    Board saved = boards.saveAndFlush(board);
+    logged(saved, ChangeKind.BOARD_ADDED, "added", null, ScheduleMapper.headerOf(saved), reason);
+    return saved;
   }
 
   @Transactional
   public Board update(long boardId, BoardForm form) {
+    return update(boardId, form, null);
+  }
+
+  @Transactional
+  public Board update(long boardId, BoardForm form, String reason) {
     Board board = get(boardId);
     if (form.version() != null && !Objects.equals(form.version(), board.getVersion())) {
       throw new StaleEditException("Board " + board.getReference());
     }
     Board parent = checkRules(board.getSite(), form, board);
+    var before = ScheduleMapper.headerOf(board);
     board.apply(form, parent);
-    return boards.saveAndFlush(board);
+    Board saved = boards.saveAndFlush(board);
+    logged(saved, ChangeKind.BOARD_EDITED, "changed", before, ScheduleMapper.headerOf(saved), reason);
+    return saved;
   }
 
   /** Deletes a board that feeds no other board; returns its site's id. */
   @Transactional
   public long delete(long boardId) {
+    return delete(boardId, null);
+  }
+
+  /** Deletes a board that feeds no other board; returns its site's id. */
+  @Transactional
+  public long delete(long boardId, String reason) {
     Board board = get(boardId);
     if (boards.countChildren(boardId) > 0) {
       throw new RuleViolation("reference", "board.delete.hasChildren");
     }
     long siteId = board.getSite().getId();
+    logged(board, ChangeKind.BOARD_REMOVED, "removed", ScheduleMapper.headerOf(board), null, reason);
     boards.delete(board);
     return siteId;
+  }
+
+  private void logged(Board board, ChangeKind kind, String what, Object before, Object after, String reason) {
+    events.publishEvent(
+        new ScheduleChanged(
+            board.getSite().getId(), board.getId(), null, kind,
+            "Board “" + board.getReference() + "”: " + what, before, after, reason));
   }
 
   private Board checkRules(Site site, BoardForm form, Board existing) {

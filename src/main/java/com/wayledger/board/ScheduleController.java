@@ -12,10 +12,13 @@ import com.wayledger.engine.TripCurve;
 import com.wayledger.engine.WayStatus;
 import com.wayledger.system.FormRecovery;
 import com.wayledger.system.FormStatus;
+import com.wayledger.system.RecordDiff;
 import com.wayledger.system.RuleViolation;
+import com.wayledger.system.StaleEditException;
 import jakarta.servlet.http.HttpServletRequest;
 import jakarta.servlet.http.HttpServletResponse;
 import jakarta.validation.Valid;
+import org.springframework.orm.ObjectOptimisticLockingFailureException;
 import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
 import org.springframework.validation.BindingResult;
@@ -87,12 +90,13 @@ public class ScheduleController {
       BindingResult errors,
       HttpServletRequest request,
       @RequestHeader(value = HX, required = false) String htmx,
+      @RequestParam(required = false) String reason,
       Model model,
       HttpServletResponse response) {
     form = FormRecovery.ensure(form, errors, model, "form", CircuitForm.class, request);
     if (!errors.hasErrors()) {
       try {
-        Circuit saved = schedule.addCircuit(boardId, form);
+        Circuit saved = schedule.addCircuit(boardId, form, reason);
         return savedSchedule(boardId, saved.getWayNumber(), htmx, model, response);
       } catch (RuleViolation violation) {
         FormStatus.reject(errors, violation);
@@ -116,16 +120,19 @@ public class ScheduleController {
       BindingResult errors,
       HttpServletRequest request,
       @RequestHeader(value = HX, required = false) String htmx,
+      @RequestParam(required = false) String reason,
       Model model,
       HttpServletResponse response) {
     form = FormRecovery.ensure(form, errors, model, "form", CircuitForm.class, request);
     long boardId = schedule.circuit(id).getBoard().getId();
     if (!errors.hasErrors()) {
       try {
-        schedule.updateCircuit(id, form);
+        schedule.updateCircuit(id, form, reason);
         return savedSchedule(boardId, form.wayNumber(), htmx, model, response);
       } catch (RuleViolation violation) {
         FormStatus.reject(errors, violation);
+      } catch (StaleEditException | ObjectOptimisticLockingFailureException stale) {
+        return conflict(id, form, htmx, model, response);
       }
     }
     fillEditor(model, id, null);
@@ -134,8 +141,9 @@ public class ScheduleController {
 
   @PostMapping("/circuits/{id}/delete")
   public String delete(
-      @PathVariable long id, @RequestHeader(value = HX, required = false) String htmx, Model model) {
-    long boardId = schedule.deleteCircuit(id);
+      @PathVariable long id, @RequestHeader(value = HX, required = false) String htmx,
+      @RequestParam(required = false) String reason, Model model) {
+    long boardId = schedule.deleteCircuit(id, reason);
     return savedSchedule(boardId, null, htmx, model, null);
   }
 
@@ -146,12 +154,13 @@ public class ScheduleController {
       BindingResult errors,
       HttpServletRequest request,
       @RequestHeader(value = HX, required = false) String htmx,
+      @RequestParam(required = false) String reason,
       Model model,
       HttpServletResponse response) {
     loadForm = FormRecovery.ensure(loadForm, errors, model, "loadForm", LoadForm.class, request);
     if (!errors.hasErrors()) {
       try {
-        schedule.addLoad(id, loadForm);
+        schedule.addLoad(id, loadForm, reason);
         fillEditor(model, id, CircuitForm.of(schedule.circuit(id)));
         model.addAttribute("loadForm", LoadForm.blank());
         return htmx != null ? EDITOR_FRAGMENT : "redirect:/circuits/" + id + "/edit";
@@ -178,6 +187,7 @@ public class ScheduleController {
       @Valid @ModelAttribute("loadForm") LoadForm loadForm,
       BindingResult errors,
       HttpServletRequest request,
+      @RequestParam(required = false) String reason,
       Model model,
       HttpServletResponse response) {
     loadForm = FormRecovery.ensure(loadForm, errors, model, "loadForm", LoadForm.class, request);
@@ -188,19 +198,35 @@ public class ScheduleController {
       model.addAttribute("circuitId", circuitId);
       return FormStatus.invalid(response, "board/load");
     }
-    schedule.updateLoad(id, loadForm);
+    schedule.updateLoad(id, loadForm, reason);
     return "redirect:/circuits/" + circuitId + "/edit";
   }
 
   @PostMapping("/loads/{id}/delete")
   public String deleteLoad(
-      @PathVariable long id, @RequestHeader(value = HX, required = false) String htmx, Model model) {
-    long circuitId = schedule.deleteLoad(id);
+      @PathVariable long id, @RequestHeader(value = HX, required = false) String htmx,
+      @RequestParam(required = false) String reason, Model model) {
+    long circuitId = schedule.deleteLoad(id, reason);
     if (htmx == null) {
       return "redirect:/circuits/" + circuitId + "/edit";
     }
     fillEditor(model, circuitId, CircuitForm.of(schedule.circuit(circuitId)));
     return EDITOR_FRAGMENT;
+  }
+
+  /**
+   * Someone saved the circuit after this editor was opened: 409, the editor again holding the values saved
+   * now (and their version, so a second save is a deliberate overwrite), with the user's own values listed
+   * beside them so nothing typed is lost. Same answer for htmx (swapped into the row) and plain requests.
+   */
+  private String conflict(long id, CircuitForm yours, String htmx, Model model, HttpServletResponse response) {
+    CircuitForm saved = CircuitForm.of(schedule.circuit(id));
+    model.asMap().remove(BindingResult.MODEL_KEY_PREFIX + "form");
+    model.addAttribute("conflict", RecordDiff.between(yours, saved, java.util.Set.of("version")));
+    model.addAttribute("yours", yours);
+    fillEditor(model, id, saved);
+    response.setStatus(HttpServletResponse.SC_CONFLICT);
+    return htmx != null ? EDITOR_FRAGMENT : EDITOR_PAGE;
   }
 
   private void fillEditor(Model model, long circuitId, CircuitForm form) {

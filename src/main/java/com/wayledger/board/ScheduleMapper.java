@@ -66,6 +66,46 @@ public final class ScheduleMapper {
         site.getSupplyFuseRatingAmps());
   }
 
+  // --- change log (loadlog) support: snapshots are engine records, so a replay maps nothing twice ---
+
+  /** A circuit as the engine sees it, kept as the change log's before/after snapshot. */
+  public static CircuitSpec snapshotOf(Circuit circuit, Long feedsBoardId) {
+    return toSpec(circuit, feedsBoardId);
+  }
+
+  /** A board without its circuits, kept as the change log's before/after snapshot. */
+  public static BoardSpec headerOf(Board board) {
+    // never touches board.getCircuits(): loading them would keep them in the session of a board being deleted
+    return new BoardSpec(
+        board.getId(),
+        board.getReference(),
+        board.getPhases(),
+        board.getWayCount(),
+        board.getBusbarRatingAmps(),
+        board.getIncomer() == null ? null : board.getIncomer().toSpec(board.getPhases() == 3 ? 3 : 1),
+        board.getParent() == null ? null : board.getParent().getId(),
+        board.getSubmain() == null ? null : board.getSubmain().toSpec(),
+        board.getUnbalanceLimitPercent(),
+        board.getCoincidenceFactor(),
+        board.getDiversityMethod(),
+        board.getMeasuredExternalLoopImpedanceOhms(),
+        board.getMeasuredFaultCurrentKiloAmps(),
+        List.of());
+  }
+
+  /** A board rebuilt from a logged header and the circuits it held at one moment (the log's replay). */
+  public static BoardSpec replayed(BoardSpec header, java.util.Collection<CircuitSpec> circuits) {
+    return new BoardSpec(
+        header.id(), header.reference(), header.phases(), header.wayCount(), header.busbarRatingAmps(),
+        header.incomer(), header.parentBoardId(), header.submainCable(), header.unbalanceLimitPercent(),
+        header.coincidenceFactor(), header.diversityMethodKey(), header.measuredExternalLoopImpedanceOhms(),
+        header.measuredFaultCurrentKiloAmps(),
+        circuits.stream()
+            .sorted(java.util.Comparator.comparingInt(CircuitSpec::wayNumber)
+                .thenComparing(CircuitSpec::position))
+            .toList());
+  }
+
   private static BoardSpec toSpec(Board board, Map<Long, Long> childByFeedingCircuit) {
     List<CircuitSpec> circuits =
         board.getCircuits().stream()

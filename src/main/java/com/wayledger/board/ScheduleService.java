@@ -4,14 +4,17 @@ import com.wayledger.engine.DeviceKind;
 import com.wayledger.engine.Phase;
 import com.wayledger.engine.PhasePosition;
 import com.wayledger.engine.WayStatus;
+import com.wayledger.system.ChangeKind;
 import com.wayledger.system.NotFoundException;
 import com.wayledger.system.RuleViolation;
+import com.wayledger.system.ScheduleChanged;
 import com.wayledger.system.StaleEditException;
 import jakarta.persistence.EntityManager;
 import jakarta.validation.ConstraintViolation;
 import jakarta.validation.Validator;
 import java.util.Objects;
 import java.util.Set;
+import org.springframework.context.ApplicationEventPublisher;
 import org.springframework.dao.DataIntegrityViolationException;
 import org.springframework.jdbc.core.simple.JdbcClient;
 import org.springframework.stereotype.Service;
@@ -20,7 +23,9 @@ import org.springframework.transaction.annotation.Transactional;
 /**
  * Every change to a board's circuits and loads goes through here, so that the rules of a schedule (one
  * circuit per position, ways within the board, a device wherever the position is not empty) live in one
- * place. Each method is one transaction: a change is stored whole or not at all.
+ * place. Each method is one transaction: a change is stored whole or not at all, together with its entry in
+ * the change log (a {@link ScheduleChanged} event, recorded by the loadlog package in the same transaction).
+ * The optional {@code reason} (a work order, say) goes into that entry.
  */
 @Service
 public class ScheduleService {
@@ -31,6 +36,7 @@ public class ScheduleService {
   private final JdbcClient jdbc;
   private final EntityManager entityManager;
   private final Validator validator;
+  private final ApplicationEventPublisher events;
 
   public ScheduleService(
       BoardRepository boards,
@@ -38,7 +44,9 @@ public class ScheduleService {
       LoadItemRepository loads,
       JdbcClient jdbc,
       EntityManager entityManager,
-      Validator validator) {
+      Validator validator,
+      ApplicationEventPublisher events) {
+    this.events = events;
     this.boards = boards;
     this.circuits = circuits;
     this.loads = loads;
@@ -65,6 +73,11 @@ public class ScheduleService {
 
   @Transactional
   public Circuit addCircuit(long boardId, CircuitForm form) {
+    return addCircuit(boardId, form, null);
+  }
+
+  @Transactional
+  public Circuit addCircuit(long boardId, CircuitForm form, String reason) {
     Board board = boards.findById(boardId).orElseThrow(() -> new NotFoundException("Board", boardId));
     checkCircuitRules(board, form, null);
     LoadForm firstLoad = form.hasFirstLoad() ? checkedFirstLoad(form) : null;
@@ -76,23 +89,31 @@ public class ScheduleService {
     circuits.save(circuit);
     occupy(board, circuit);
     board.markScheduleChanged();
+    logged(circuit, ChangeKind.CIRCUIT_ADDED, "added", null, snapshot(circuit), reason);
     return circuit;
   }
 
   @Transactional
   public Circuit updateCircuit(long circuitId, CircuitForm form) {
+    return updateCircuit(circuitId, form, null);
+  }
+
+  @Transactional
+  public Circuit updateCircuit(long circuitId, CircuitForm form, String reason) {
     Circuit circuit = circuit(circuitId);
     if (form.version() != null && !Objects.equals(form.version(), circuit.getVersion())) {
       throw new StaleEditException("Circuit " + circuit.getDescription());
     }
     Board board = circuit.getBoard();
     checkCircuitRules(board, form, circuitId);
+    var before = snapshot(circuit);
     circuit.apply(form);
     if (form.hasFirstLoad()) {
       circuit.addLoad(new LoadItem(checkedFirstLoad(form)));
     }
     occupy(board, circuit);
     board.markScheduleChanged();
+    logged(circuit, ChangeKind.CIRCUIT_EDITED, "changed", before, snapshot(circuit), reason);
     return circuit;
   }
 
@@ -159,8 +180,15 @@ public class ScheduleService {
   /** Deletes a circuit with its loads; returns the id of the board it was on. */
   @Transactional
   public long deleteCircuit(long circuitId) {
+    return deleteCircuit(circuitId, null);
+  }
+
+  /** Deletes a circuit with its loads; returns the id of the board it was on. */
+  @Transactional
+  public long deleteCircuit(long circuitId, String reason) {
     Circuit circuit = circuit(circuitId);
     Board board = circuit.getBoard();
+    logged(circuit, ChangeKind.CIRCUIT_REMOVED, "removed", snapshot(circuit), null, reason);
     jdbc.sql("UPDATE board SET fed_from_circuit_id = NULL WHERE fed_from_circuit_id = ?")
         .param(circuitId)
         .update();
@@ -171,33 +199,81 @@ public class ScheduleService {
 
   @Transactional
   public LoadItem addLoad(long circuitId, LoadForm form) {
+    return addLoad(circuitId, form, null);
+  }
+
+  @Transactional
+  public LoadItem addLoad(long circuitId, LoadForm form, String reason) {
     Circuit circuit = circuit(circuitId);
     if (circuit.getStatus() != WayStatus.IN_USE) {
       throw new RuleViolation("description", "load.circuit.notInUse");
     }
+    var before = snapshot(circuit);
     LoadItem load = new LoadItem(form);
     circuit.addLoad(load);
     circuit.getBoard().markScheduleChanged();
     entityManager.flush();
+    logged(circuit, ChangeKind.LOAD_ADDED, "load “" + load.getDescription() + "” added", before,
+        snapshot(circuit), reason);
     return load;
   }
 
   @Transactional
   public LoadItem updateLoad(long loadId, LoadForm form) {
+    return updateLoad(loadId, form, null);
+  }
+
+  @Transactional
+  public LoadItem updateLoad(long loadId, LoadForm form, String reason) {
     LoadItem load = load(loadId);
+    var before = snapshot(load.getCircuit());
     load.apply(form);
     load.getCircuit().getBoard().markScheduleChanged();
+    logged(load.getCircuit(), ChangeKind.LOAD_EDITED, "load “" + load.getDescription() + "” changed", before,
+        snapshot(load.getCircuit()), reason);
     return load;
   }
 
   /** Deletes a load; returns the id of the circuit it was on. */
   @Transactional
   public long deleteLoad(long loadId) {
+    return deleteLoad(loadId, null);
+  }
+
+  /** Deletes a load; returns the id of the circuit it was on. */
+  @Transactional
+  public long deleteLoad(long loadId, String reason) {
     LoadItem load = load(loadId);
     Circuit circuit = load.getCircuit();
+    var before = snapshot(circuit);
     circuit.getLoads().remove(load);
     circuit.getBoard().markScheduleChanged();
+    logged(circuit, ChangeKind.LOAD_REMOVED, "load “" + load.getDescription() + "” removed", before,
+        snapshot(circuit), reason);
     return circuit.getId();
+  }
+
+  // --- change log (loadlog): each change publishes one event, recorded in this transaction ---
+
+  private com.wayledger.engine.CircuitSpec snapshot(Circuit circuit) {
+    Long feeds =
+        circuit.getId() == null
+            ? null
+            : jdbc.sql("SELECT id FROM board WHERE fed_from_circuit_id = ?")
+                .param(circuit.getId())
+                .query(Long.class)
+                .optional()
+                .orElse(null);
+    return ScheduleMapper.snapshotOf(circuit, feeds);
+  }
+
+  private void logged(Circuit circuit, ChangeKind kind, String what, Object before, Object after, String reason) {
+    Board board = circuit.getBoard();
+    String summary =
+        "Way " + circuit.positionLabel() + " “" + circuit.getDescription() + "”: " + what;
+    events.publishEvent(
+        new ScheduleChanged(
+            board.getSite().getId(), board.getId(), circuit.getId(), kind, summary, before, after, reason));
   }
 
   private void checkCircuitRules(Board board, CircuitForm form, Long circuitId) {

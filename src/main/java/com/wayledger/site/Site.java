@@ -40,6 +40,7 @@ public class Site {
   private Double supplyFuseRatingAmps;
   private String defaultDiversityMethod;
   private String notes;
+  private double loadingThresholdPercent = SiteForm.DEFAULT_LOADING_THRESHOLD_PERCENT;
 
   @Version private long version;
 
@@ -74,6 +75,9 @@ public class Site {
     supplyFuseRatingAmps = form.supplyFuseRatingAmps();
     defaultDiversityMethod = blankToNull(form.defaultDiversityMethod());
     notes = blankToNull(form.notes());
+    if (form.loadingThresholdPercent() != null) {
+      loadingThresholdPercent = form.loadingThresholdPercent();
+    }
   }
 
   private static String blankToNull(String text) {
@@ -126,6 +130,11 @@ public class Site {
 
   public String getNotes() {
     return notes;
+  }
+
+  /** Loading of a board's incomer above which the site overview highlights it, %. */
+  public double getLoadingThresholdPercent() {
+    return loadingThresholdPercent;
   }
 
   public long getVersion() {

@@ -1,24 +1,32 @@
 package com.wayledger.site;
 
 import com.wayledger.diversity.MethodLibrary;
+import com.wayledger.system.ChangeKind;
 import com.wayledger.system.NotFoundException;
 import com.wayledger.system.RuleViolation;
+import com.wayledger.system.ScheduleChanged;
 import com.wayledger.system.StaleEditException;
 import java.util.List;
 import java.util.Objects;
+import org.springframework.context.ApplicationEventPublisher;
 import org.springframework.stereotype.Service;
 import org.springframework.transaction.annotation.Transactional;
 
-/** Creates, edits and finds sites; the rules that a form alone cannot check live here. */
+/**
+ * Creates, edits and finds sites; the rules that a form alone cannot check live here. Each change publishes a
+ * {@link ScheduleChanged} event for the change log (the snapshots are the site forms before and after).
+ */
 @Service
 public class SiteService {
 
   private final SiteRepository sites;
   private final MethodLibrary methods;
+  private final ApplicationEventPublisher events;
 
-  public SiteService(SiteRepository sites, MethodLibrary methods) {
+  public SiteService(SiteRepository sites, MethodLibrary methods, ApplicationEventPublisher events) {
     this.sites = sites;
     this.methods = methods;
+    this.events = events;
   }
 
   @Transactional(readOnly = true)
@@ -36,18 +44,34 @@ public class SiteService {
     checkRules(form, null);
     Site site = new Site(form.name());
     site.apply(form);
-    return sites.saveAndFlush(site);
+    Site saved = sites.saveAndFlush(site);
+    logged(saved, ChangeKind.SITE_ADDED, "added", null, SiteForm.of(saved), null);
+    return saved;
   }
 
   @Transactional
   public Site update(long id, SiteForm form) {
+    return update(id, form, null);
+  }
+
+  @Transactional
+  public Site update(long id, SiteForm form, String reason) {
     Site site = get(id);
     if (form.version() != null && !Objects.equals(form.version(), site.getVersion())) {
       throw new StaleEditException("Site " + site.getName());
     }
     checkRules(form, id);
+    SiteForm before = SiteForm.of(site);
     site.apply(form);
-    return sites.saveAndFlush(site);
+    Site saved = sites.saveAndFlush(site);
+    logged(saved, ChangeKind.SITE_EDITED, "changed", before, SiteForm.of(saved), reason);
+    return saved;
+  }
+
+  private void logged(Site site, ChangeKind kind, String what, Object before, Object after, String reason) {
+    events.publishEvent(
+        new ScheduleChanged(
+            site.getId(), null, null, kind, "Site “" + site.getName() + "”: " + what, before, after, reason));
   }
 
   private void checkRules(SiteForm form, Long id) {

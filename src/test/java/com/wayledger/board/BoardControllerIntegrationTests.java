@@ -127,7 +127,7 @@ class BoardControllerIntegrationTests {
 
   @Test
   void savedBoardRedirectsToItsPage() throws Exception {
-    given(boards.create(eq(SITE_ID), any())).willReturn(board());
+    given(boards.create(eq(SITE_ID), any(), any())).willReturn(board());
 
     mvc.perform(postForm("/sites/3/boards", boardFields()).with(editor()).with(csrf()))
         .andExpect(status().is3xxRedirection())
@@ -167,7 +167,7 @@ class BoardControllerIntegrationTests {
 
   @Test
   void ruleBrokenInTheServiceShowsBesideItsField() throws Exception {
-    given(boards.create(eq(SITE_ID), any())).willThrow(new RuleViolation("reference", "board.reference.taken"));
+    given(boards.create(eq(SITE_ID), any(), any())).willThrow(new RuleViolation("reference", "board.reference.taken"));
 
     mvc.perform(postForm("/sites/3/boards", boardFields()).with(editor()).with(csrf()))
         .andExpect(status().is(422))
@@ -195,7 +195,7 @@ class BoardControllerIntegrationTests {
 
   @Test
   void boardThatFeedsOthersIsKeptWithTheReason() throws Exception {
-    given(boards.delete(BOARD_ID)).willThrow(new RuleViolation("reference", "board.delete.hasChildren"));
+    given(boards.delete(eq(BOARD_ID), any())).willThrow(new RuleViolation("reference", "board.delete.hasChildren"));
 
     mvc.perform(post("/boards/5/delete").with(editor()).with(csrf()))
         .andExpect(status().is3xxRedirection())

@@ -120,19 +120,19 @@ class ScheduleControllerIntegrationTests {
   @Test
   void savedCircuitSwapsTheWholeScheduleTableIn() throws Exception {
     Circuit saved = circuit(board());
-    given(schedule.addCircuit(eq(BOARD_ID), any())).willReturn(saved);
+    given(schedule.addCircuit(eq(BOARD_ID), any(), any())).willReturn(saved);
 
     mvc.perform(postForm("/boards/5/circuits", circuitFields()).header("HX-Request", "true").with(editor()).with(csrf()))
         .andExpect(status().isOk())
         .andExpect(view().name(SCHEDULE_FRAGMENT))
         .andExpect(header().string("HX-Retarget", "#schedule"))
         .andExpect(header().string("HX-Reswap", "outerHTML"));
-    verify(schedule).addCircuit(eq(BOARD_ID), any(CircuitForm.class));
+    verify(schedule).addCircuit(eq(BOARD_ID), any(CircuitForm.class), any()); // loadlog: reason passed through
   }
 
   @Test
   void withoutHtmxASavedCircuitRedirectsToTheBoard() throws Exception {
-    given(schedule.addCircuit(eq(BOARD_ID), any())).willReturn(circuit(board()));
+    given(schedule.addCircuit(eq(BOARD_ID), any(), any())).willReturn(circuit(board()));
 
     mvc.perform(postForm("/boards/5/circuits", circuitFields()).with(editor()).with(csrf()))
         .andExpect(status().is3xxRedirection())
@@ -174,7 +174,7 @@ class ScheduleControllerIntegrationTests {
 
   @Test
   void occupiedPositionShowsTheRuleBesideTheWayNumber() throws Exception {
-    given(schedule.addCircuit(eq(BOARD_ID), any()))
+    given(schedule.addCircuit(eq(BOARD_ID), any(), any()))
         .willThrow(new RuleViolation("wayNumber", "circuit.position.occupied", 4, "L2"));
 
     mvc.perform(postForm("/boards/5/circuits", circuitFields()).header("HX-Request", "true").with(editor()).with(csrf()))
@@ -241,6 +241,6 @@ class ScheduleControllerIntegrationTests {
         .andExpect(status().isOk())
         .andExpect(view().name(EDITOR_FRAGMENT))
         .andExpect(model().attribute("loadForm", LoadForm.blank()));
-    verify(schedule).addLoad(eq(CIRCUIT_ID), any(LoadForm.class));
+    verify(schedule).addLoad(eq(CIRCUIT_ID), any(LoadForm.class), any()); // loadlog: reason passed through
   }
 }

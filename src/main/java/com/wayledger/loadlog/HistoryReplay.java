@@ -1,0 +1,91 @@
+package com.wayledger.loadlog;
+
+import com.wayledger.engine.BoardSpec;
+import com.wayledger.engine.CircuitSpec;
+import com.wayledger.engine.Phase;
+import com.wayledger.engine.SupplySpec;
+import com.wayledger.engine.demand.BoardDemand;
+import com.wayledger.engine.demand.DemandEngine;
+import com.wayledger.engine.demand.DiversityMethodCatalog;
+import com.wayledger.engine.demand.PhaseDemand;
+import com.wayledger.system.ChangeKind;
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+
+/**
+ * Rebuilds a board at every logged change from the log's snapshots and evaluates it with the demand engine.
+ *
+ * <p>The state before the first entry is the baseline: a circuit whose first entry is an edit or removal
+ * existed before logging began, so its "before" snapshot is in the baseline; likewise the board header.
+ * Then each entry's "after" snapshot replaces the circuit (or header), and a removal drops it. The board is
+ * evaluated on its own (sub-boards' demand is not carried onto the ways feeding them), with today's supply
+ * and diversity catalogue: the log records the schedule, not the site's supply.
+ */
+final class HistoryReplay {
+
+  private HistoryReplay() {}
+
+  /**
+   * @param entries the board's entries, oldest first
+   * @param currentHeader the board's header now, used when no board entry carries one
+   */
+  static List<HistoryPoint> replay(
+      List<ChangeLogEntry> entries, BoardSpec currentHeader, SupplySpec supply, DiversityMethodCatalog methods,
+      String siteDefaultMethodKey) {
+    BoardSpec header = null;
+    Map<Long, CircuitSpec> circuits = new LinkedHashMap<>();
+    Set<Long> seen = new HashSet<>();
+    boolean boardSeen = false;
+    for (ChangeLogEntry entry : entries) {
+      if (entry.circuitId() == null) {
+        if (!boardSeen && entry.kind() != ChangeKind.BOARD_ADDED && entry.before() != null) {
+          header = Snapshots.board(entry.before());
+        }
+        boardSeen = true;
+      } else if (seen.add(entry.circuitId()) && entry.kind() != ChangeKind.CIRCUIT_ADDED && entry.before() != null) {
+        circuits.put(entry.circuitId(), Snapshots.circuit(entry.before()));
+      }
+    }
+    if (header == null) {
+      header = currentHeader;
+    }
+    List<HistoryPoint> points = new ArrayList<>();
+    for (ChangeLogEntry entry : entries) {
+      boolean removed = false;
+      if (entry.circuitId() == null) {
+        if (entry.after() != null) {
+          header = Snapshots.board(entry.after());
+        } else if (entry.kind() == ChangeKind.BOARD_REMOVED) {
+          removed = true;
+        }
+      } else if (entry.after() == null) {
+        circuits.remove(entry.circuitId());
+      } else {
+        circuits.put(entry.circuitId(), Snapshots.circuit(entry.after()));
+      }
+      Map<Phase, Double> currents =
+          removed || header == null
+              ? Map.of()
+              : currents(com.wayledger.board.ScheduleMapper.replayed(header, circuits.values()), supply, methods,
+                  siteDefaultMethodKey);
+      points.add(new HistoryPoint(entry.id(), entry.happenedAt(), entry.username(), entry.kind(), entry.summary(),
+          entry.reason(), currents, removed));
+    }
+    return points;
+  }
+
+  static Map<Phase, Double> currents(
+      BoardSpec board, SupplySpec supply, DiversityMethodCatalog methods, String siteDefaultMethodKey) {
+    BoardDemand demand = DemandEngine.evaluateBoard(board, supply, methods, siteDefaultMethodKey);
+    Map<Phase, Double> currents = new EnumMap<>(Phase.class);
+    for (PhaseDemand phase : demand.phases()) {
+      currents.put(phase.phase(), phase.currentAmps());
+    }
+    return currents;
+  }
+}
