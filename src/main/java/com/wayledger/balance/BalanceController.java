@@ -52,6 +52,7 @@ public class BalanceController {
       @RequestParam String placements,
       @RequestParam(required = false, defaultValue = "") String undo,
       @RequestParam long version,
+      @RequestParam(required = false, defaultValue = "") String reason,
       RedirectAttributes redirect) {
     List<Placement> parsed = parse(placements);
     if (parsed == null || parsed.isEmpty()) {
@@ -59,7 +60,7 @@ public class BalanceController {
       return "redirect:/boards/" + id + "/balance";
     }
     try {
-      schedule.rearrange(id, version, parsed);
+      schedule.rearrange(id, version, parsed, reason.isBlank() ? null : reason.strip());
       redirect.addFlashAttribute("applied", parsed.size());
       redirect.addFlashAttribute("undoTokens", undo);
     } catch (RuleViolation violation) {

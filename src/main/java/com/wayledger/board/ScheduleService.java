@@ -130,9 +130,12 @@ public class ScheduleService {
     if (circuit.getStatus() == WayStatus.EMPTY) {
       throw new RuleViolation("deviceKind", "circuit.device.emptyPosition");
     }
+    com.wayledger.engine.CircuitSpec before = snapshot(circuit);
     circuit.replaceDevice(DeviceDetails.fromSpec(device));
     circuit.getBoard().markScheduleChanged();
     entityManager.flush();
+    logged(circuit, ChangeKind.CIRCUIT_EDITED, "device replaced by the proposal " + circuit.getDevice().label(),
+        before, snapshot(circuit), "device proposal accepted");
     return circuit;
   }
 
@@ -143,6 +146,13 @@ public class ScheduleService {
    */
   @Transactional
   public void rearrange(long boardId, long expectedBoardVersion, java.util.List<Placement> placements) {
+    rearrange(boardId, expectedBoardVersion, placements, null);
+  }
+
+  /** As {@link #rearrange(long, long, java.util.List)}, with the reason recorded in the change log. */
+  @Transactional
+  public void rearrange(
+      long boardId, long expectedBoardVersion, java.util.List<Placement> placements, String reason) {
     Board board = boards.findById(boardId).orElseThrow(() -> new NotFoundException("Board", boardId));
     if (board.getVersion() != expectedBoardVersion) {
       throw new StaleEditException("Board " + board.getReference());
@@ -164,6 +174,7 @@ public class ScheduleService {
       }
       moving.add(circuit);
     }
+    java.util.List<com.wayledger.engine.CircuitSpec> before = moving.stream().map(this::snapshot).toList();
     for (Circuit circuit : moving) {
       jdbc.sql("DELETE FROM way_slot WHERE circuit_id = ?").param(circuit.getId()).update();
     }
@@ -175,6 +186,10 @@ public class ScheduleService {
     }
     board.markScheduleChanged();
     entityManager.flush();
+    java.util.List<com.wayledger.engine.CircuitSpec> after = moving.stream().map(this::snapshot).toList();
+    events.publishEvent(
+        new ScheduleChanged(board.getSite().getId(), board.getId(), null, ChangeKind.BALANCING_APPLIED,
+            "Phase balancing: " + moving.size() + " circuit(s) moved", before, after, reason));
   }
 
   /** Deletes a circuit with its loads; returns the id of the board it was on. */

@@ -42,7 +42,13 @@ final class HistoryReplay {
     Set<Long> seen = new HashSet<>();
     boolean boardSeen = false;
     for (ChangeLogEntry entry : entries) {
-      if (entry.circuitId() == null) {
+      if (entry.kind() == ChangeKind.BALANCING_APPLIED) {
+        for (CircuitSpec moved : Snapshots.circuits(entry.before())) {
+          if (seen.add(moved.id())) {
+            circuits.put(moved.id(), moved);
+          }
+        }
+      } else if (entry.circuitId() == null) {
         if (!boardSeen && entry.kind() != ChangeKind.BOARD_ADDED && entry.before() != null) {
           header = Snapshots.board(entry.before());
         }
@@ -57,7 +63,9 @@ final class HistoryReplay {
     List<HistoryPoint> points = new ArrayList<>();
     for (ChangeLogEntry entry : entries) {
       boolean removed = false;
-      if (entry.circuitId() == null) {
+      if (entry.kind() == ChangeKind.BALANCING_APPLIED) {
+        Snapshots.circuits(entry.after()).forEach(moved -> circuits.put(moved.id(), moved));
+      } else if (entry.circuitId() == null) {
         if (entry.after() != null) {
           header = Snapshots.board(entry.after());
         } else if (entry.kind() == ChangeKind.BOARD_REMOVED) {

@@ -23,6 +23,13 @@ final class Snapshots {
     return json == null ? null : MAPPER.readValue(json, CircuitSpec.class);
   }
 
+  /** Several circuits in one entry (a balancing plan moves many circuits as one change). */
+  static java.util.List<CircuitSpec> circuits(String json) {
+    return json == null
+        ? java.util.List.of()
+        : java.util.List.of(MAPPER.readValue(json, CircuitSpec[].class));
+  }
+
   static BoardSpec board(String json) {
     return json == null ? null : MAPPER.readValue(json, BoardSpec.class);
   }

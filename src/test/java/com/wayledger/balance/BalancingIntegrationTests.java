@@ -30,6 +30,7 @@ class BalancingIntegrationTests {
   @Autowired SiteService sites;
   @Autowired AnalysisService analysis;
   @Autowired org.springframework.jdbc.core.simple.JdbcClient jdbc;
+  @Autowired com.wayledger.loadlog.HistoryService history;
 
   @Test
   void applyingTheOptimalPlanBringsTheBakeryWithinItsLimitAndUndoRestoresEveryPosition() {
@@ -59,6 +60,39 @@ class BalancingIntegrationTests {
     schedule.rearrange(bakery.getId(), shownVersion, plans.placements());
     assertThatThrownBy(() -> schedule.rearrange(bakery.getId(), shownVersion, plans.undo()))
         .isInstanceOf(StaleEditException.class);
+  }
+
+  @Test
+  void applyingAPlanIsOneEntryInTheBoardsHistoryWithItsReason() {
+    Board bakery = bakery();
+    BalancePlans plans = balancing.plans(bakery.getId(), Basis.DEMAND, 1);
+    long entriesBefore = logEntries(bakery.getId());
+    schedule.rearrange(bakery.getId(), boards.get(bakery.getId()).getVersion(), plans.placements(), "WO-77");
+    assertThat(logEntries(bakery.getId())).as("one log row for the whole plan").isEqualTo(entriesBefore + 1);
+    String kind =
+        jdbc.sql("SELECT kind FROM change_log WHERE board_id = ? AND reason = 'WO-77'").param(bakery.getId())
+            .query(String.class).single();
+    assertThat(kind).isEqualTo("BALANCING_APPLIED");
+  }
+
+  @Test
+  void theDemandHistoryReplaysABalancingPlanToTheBoardAsItNowStands() {
+    Board bakery = bakery();
+    BalancePlans plans = balancing.plans(bakery.getId(), Basis.DEMAND, null);
+    schedule.rearrange(bakery.getId(), boards.get(bakery.getId()).getVersion(), plans.placements(), "replay check");
+    var points = history.points(bakery.getId());
+    var last = points.get(points.size() - 1);
+    var now = analysis.ofBoard(bakery.getId()).boardDemand(bakery.getId());
+    assertThat(last.kind().name()).isEqualTo("BALANCING_APPLIED");
+    for (var phase : now.phases()) {
+      assertThat(last.on(phase.phase()))
+          .as("replayed current on %s", phase.phase())
+          .isCloseTo(phase.currentAmps(), org.assertj.core.api.Assertions.within(1e-6));
+    }
+  }
+
+  private long logEntries(long boardId) {
+    return jdbc.sql("SELECT COUNT(*) FROM change_log WHERE board_id = ?").param(boardId).query(Long.class).single();
   }
 
   private Board bakery() {
