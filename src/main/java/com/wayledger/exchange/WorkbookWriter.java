@@ -16,14 +16,17 @@ import com.wayledger.engine.protection.result.Quantity;
 import com.wayledger.engine.protection.result.Verdict;
 import java.io.IOException;
 import java.io.OutputStream;
+import java.io.Writer;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.HashSet;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
-import java.util.stream.Collectors;
+import java.util.zip.Deflater;
+import org.apache.commons.compress.archivers.zip.ZipArchiveOutputStream;
 import org.apache.poi.ss.usermodel.Cell;
 import org.apache.poi.ss.usermodel.CellStyle;
 import org.apache.poi.ss.usermodel.PrintSetup;
@@ -34,6 +37,7 @@ import org.apache.poi.ss.util.CellReference;
 import org.apache.poi.ss.util.WorkbookUtil;
 import org.apache.poi.xssf.streaming.SXSSFSheet;
 import org.apache.poi.xssf.streaming.SXSSFWorkbook;
+import org.apache.poi.xssf.streaming.SheetDataWriter;
 
 /**
  * Writes schedules as an XLSX workbook with the streaming writer, so a site of thousands of circuits is
@@ -70,7 +74,7 @@ public final class WorkbookWriter {
    * @param out where to write; not closed
    */
   public void write(ExportData data, boolean withSummary, OutputStream out) throws IOException {
-    SXSSFWorkbook workbook = new SXSSFWorkbook(WINDOW_ROWS);
+    SXSSFWorkbook workbook = new FastWorkbook(WINDOW_ROWS);
     try {
       WorkbookStyles styles = new WorkbookStyles(workbook);
       Set<String> names = new HashSet<>(Set.of(SUMMARY_SHEET.toLowerCase(Locale.ROOT), FINDINGS_SHEET.toLowerCase(Locale.ROOT), METHODS_SHEET.toLowerCase(Locale.ROOT)));
@@ -85,7 +89,7 @@ public final class WorkbookWriter {
       if (summary != null) {
         writeSummary(summary, data, totals, styles);
       }
-      List<Object[]> findingRows = findingRows(data);
+      List<FindingRow> findingRows = findingRows(data);
       if (!findingRows.isEmpty()) {
         writeFindings(workbook.createSheet(FINDINGS_SHEET), findingRows, data, styles);
       }
@@ -95,6 +99,76 @@ public final class WorkbookWriter {
     } finally {
       workbook.close();
     }
+  }
+
+  /**
+   * The streaming workbook with two speed-ups of the writing, which dominates a large export: zipped at the
+   * fastest deflate level (the sheets' XML is highly repetitive, so the file grows by about a quarter while
+   * zipping takes a fraction of the time), and text escaped in runs rather than character by character.
+   */
+  private static final class FastWorkbook extends SXSSFWorkbook {
+    FastWorkbook(int window) {
+      super(window);
+    }
+
+    @Override
+    protected SheetDataWriter createSheetDataWriter() throws IOException {
+      return new RunEscapingSheetWriter();
+    }
+
+    @Override
+    protected ZipArchiveOutputStream createArchiveOutputStream(OutputStream out) {
+      ZipArchiveOutputStream zip = super.createArchiveOutputStream(out);
+      zip.setLevel(Deflater.BEST_SPEED);
+      return zip;
+    }
+  }
+
+  /** POI's sheet writer with its text escaping done in runs of plain characters (same output, see {@link #escape}). */
+  static final class RunEscapingSheetWriter extends SheetDataWriter {
+    RunEscapingSheetWriter() throws IOException {
+      super();
+    }
+
+    @Override
+    protected void outputEscapedString(String text) throws IOException {
+      escape(text, _out);
+    }
+  }
+
+  /**
+   * Writes text as POI's streaming writer escapes it (POI 5.5's {@code SheetDataWriter.outputEscapedString}):
+   * {@code < > & "} as entities, tab, line feed, carriage return and no-break space as character references,
+   * other control characters and U+FFFE/U+FFFF as "?", everything else as it is; but plain runs are written
+   * whole instead of one character at a time. {@code WorkbookWriterTests} compares both on awkward text.
+   */
+  static void escape(String text, Writer out) throws IOException {
+    if (text == null) {
+      return;
+    }
+    int length = text.length();
+    int run = 0;
+    for (int i = 0; i < length; i++) {
+      char c = text.charAt(i);
+      String replacement;
+      switch (c) {
+        case '<' -> replacement = "&lt;";
+        case '>' -> replacement = "&gt;";
+        case '&' -> replacement = "&amp;";
+        case '"' -> replacement = "&quot;";
+        case '\n' -> replacement = "&#xa;";
+        case '\r' -> replacement = "&#xd;";
+        case '\t' -> replacement = "&#x9;";
+        case '\u00a0' -> replacement = "&#xa0;";
+        default -> replacement = c < ' ' || c >= '\ufffe' ? "?" : null;
+      }
+      if (replacement != null) {
+        out.write(text, run, i - run);
+        out.write(replacement);
+        run = i + 1;
+      }
+    }
+    out.write(text, run, length - run);
   }
 
   static String uniqueName(String wanted, Set<String> taken) {
@@ -359,15 +433,31 @@ public final class WorkbookWriter {
     printSetup(sheet, data.siteName() + " — boards", data, HEADER_ROW);
   }
 
-  private static List<Object[]> findingRows(ExportData data) {
-    List<Object[]> rows = new ArrayList<>();
+  /**
+   * One row of the Findings sheet: a finding of the site, a board or one circuit ({@code way} set), or the
+   * same "not assessed" finding of several circuits of a board gathered into one row ({@code circuits} > 1,
+   * {@code ways} listing their ways).
+   */
+  record FindingRow(String board, Integer way, Finding finding, int circuits, String ways) {}
+
+  /**
+   * Every danger, warning and advice in full, in board order; checks not assessed on a board's circuits are
+   * gathered per board and reason (check, text, clause, remedy), one row naming how many circuits and which
+   * ways, so that a site with thousands of circuits missing the same input does not give thousands of
+   * identical rows, and still no "not assessed" is left out.
+   */
+  static List<FindingRow> findingRows(ExportData data) {
+    List<FindingRow> rows = new ArrayList<>();
     if (data.findings() == null) {
       return rows;
     }
-    Set<Long> written = data.boards().stream().map(BoardEntry::id).collect(Collectors.toSet());
+    Set<Long> written = new HashSet<>();
+    for (BoardEntry board : data.boards()) {
+      written.add(board.id());
+    }
     for (Finding finding : data.findings().siteFindings()) {
       if (finding.verdict() != Verdict.PASS) {
-        rows.add(new Object[] {"origin", null, finding});
+        rows.add(new FindingRow("origin", null, finding, 0, null));
       }
     }
     for (BoardFindings board : data.findings().boards()) {
@@ -376,24 +466,56 @@ public final class WorkbookWriter {
       }
       for (Finding finding : board.findings()) {
         if (finding.verdict() != Verdict.PASS) {
-          rows.add(new Object[] {board.reference(), null, finding});
+          rows.add(new FindingRow(board.reference(), null, finding, 0, null));
         }
       }
+      Map<Finding, List<Integer>> notAssessed = new LinkedHashMap<>();
       for (CircuitFindings circuit : board.circuits()) {
         for (Finding finding : circuit.findings()) {
-          if (finding.verdict() != Verdict.PASS) {
-            rows.add(new Object[] {board.reference(), circuit.wayNumber(), finding});
+          if (finding.verdict() == Verdict.NOT_ASSESSED) {
+            notAssessed.computeIfAbsent(finding, f -> new ArrayList<>()).add(circuit.wayNumber());
+          } else if (finding.verdict() != Verdict.PASS) {
+            rows.add(new FindingRow(board.reference(), circuit.wayNumber(), finding, 1, null));
           }
+        }
+      }
+      for (Map.Entry<Finding, List<Integer>> gathered : notAssessed.entrySet()) {
+        List<Integer> ways = gathered.getValue();
+        if (ways.size() == 1) {
+          rows.add(new FindingRow(board.reference(), ways.get(0), gathered.getKey(), 1, null));
+        } else {
+          rows.add(new FindingRow(board.reference(), null, gathered.getKey(), ways.size(), wayRanges(ways)));
         }
       }
     }
     return rows;
   }
 
-  private void writeFindings(SXSSFSheet sheet, List<Object[]> rows, ExportData data, WorkbookStyles s) {
+  /** Way numbers as ascending ranges: 1–4, 7, 9–12. */
+  static String wayRanges(List<Integer> ways) {
+    int[] sorted = ways.stream().filter(w -> w != null).mapToInt(Integer::intValue).sorted().distinct().toArray();
+    StringBuilder text = new StringBuilder();
+    for (int i = 0; i < sorted.length; i++) {
+      int from = sorted[i];
+      while (i + 1 < sorted.length && sorted[i + 1] == sorted[i] + 1) {
+        i++;
+      }
+      if (!text.isEmpty()) {
+        text.append(", ");
+      }
+      text.append(from);
+      if (sorted[i] != from) {
+        text.append('–').append(sorted[i]);
+      }
+    }
+    return text.toString();
+  }
+
+  private void writeFindings(SXSSFSheet sheet, List<FindingRow> rows, ExportData data, WorkbookStyles s) {
     Widths w = new Widths(8);
     text(sheet.createRow(0), 0, "Findings — " + data.siteName(), s.title, null);
-    text(sheet.createRow(1), 0, "Every check that did not pass, including those not assessed for want of an input.", s.text, null);
+    text(sheet.createRow(1), 0, "Every check that did not pass: each danger, warning and advice in full; checks not assessed for want "
+        + "of an input gathered per board and reason, with the number of circuits and their ways.", s.text, null);
     text(sheet.createRow(2), 0, "Caution: " + caution, s.caution, null);
     String[] heads = {"Board", "Way", "Check", "Verdict", "Finding", "Figures", "Clause", "Remedy"};
     Row head = sheet.createRow(HEADER_ROW);
@@ -401,17 +523,20 @@ public final class WorkbookWriter {
       text(head, i, heads[i], s.header, w);
     }
     int r = HEADER_ROW + 1;
-    for (Object[] item : rows) {
-      Finding finding = (Finding) item[2];
+    for (FindingRow item : rows) {
+      Finding finding = item.finding();
       Row row = sheet.createRow(r++);
-      text(row, 0, (String) item[0], s.text, w);
-      if (item[1] != null) {
-        number(row, 1, (Integer) item[1], s.integer, w);
+      text(row, 0, item.board(), s.text, w);
+      if (item.way() != null) {
+        number(row, 1, item.way(), s.integer, w);
       }
       text(row, 2, finding.check().name(), s.text, w);
       text(row, 3, finding.verdict().name(), s.text, w);
       text(row, 4, finding.summary(), s.text, w);
-      text(row, 5, finding.values().stream().map(WorkbookWriter::quantity).collect(Collectors.joining("; ")), s.text, w);
+      String figures = item.ways() != null
+          ? item.circuits() + " circuits, ways " + item.ways()
+          : joinQuantities(finding.values());
+      text(row, 5, figures, s.text, w);
       text(row, 6, finding.reference(), s.text, w);
       text(row, 7, finding.remedy(), s.text, w);
     }
@@ -419,6 +544,20 @@ public final class WorkbookWriter {
     w.apply(sheet);
     sheet.createFreezePane(0, HEADER_ROW + 1);
     printSetup(sheet, data.siteName() + " — findings", data, HEADER_ROW);
+  }
+
+  private static String joinQuantities(List<Quantity> values) {
+    if (values.isEmpty()) {
+      return null;
+    }
+    StringBuilder text = new StringBuilder();
+    for (Quantity q : values) {
+      if (!text.isEmpty()) {
+        text.append("; ");
+      }
+      text.append(quantity(q));
+    }
+    return text.toString();
   }
 
   private static String quantity(Quantity q) {
@@ -444,7 +583,8 @@ public final class WorkbookWriter {
     lines.add(new String[] {"Unbalance", "Largest deviation of a phase current from the mean of the three, over the mean (NEMA MG-1 "
         + "definition applied to currents)."});
     lines.add(new String[] {"Findings", "Count of checks graded danger, warning or advice per circuit; every check that did not pass "
-        + "is on the Findings sheet with its clause."});
+        + "is on the Findings sheet with its clause: each problem on its own row, checks not assessed gathered per board "
+        + "and reason with the number of circuits and their ways."});
     if (data.findings() != null) {
       ProtectionSettings p = data.findings().settings();
       lines.add(new String[] {"Supply ownership", p.supplyOwnership().name()});
@@ -503,12 +643,21 @@ public final class WorkbookWriter {
     sheet.getFooter().setRight("Page &P of &N");
   }
 
+  /** Each schedule column's letters, worked out once rather than for every reference in every row. */
+  private static final String[] LETTERS = new String[ScheduleColumn.values().length];
+
+  static {
+    for (ScheduleColumn column : ScheduleColumn.values()) {
+      LETTERS[column.ordinal()] = CellReference.convertNumToColString(column.ordinal());
+    }
+  }
+
   static String ref(ScheduleColumn column, int excelRow) {
-    return CellReference.convertNumToColString(column.ordinal()) + excelRow;
+    return LETTERS[column.ordinal()] + excelRow;
   }
 
   static String range(ScheduleColumn column, int fromRow, int toRow) {
-    String letters = CellReference.convertNumToColString(column.ordinal());
+    String letters = LETTERS[column.ordinal()];
     return "$" + letters + "$" + fromRow + ":$" + letters + "$" + toRow;
   }
 

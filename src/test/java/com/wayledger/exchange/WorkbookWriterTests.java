@@ -7,17 +7,26 @@ import com.wayledger.engine.Phase;
 import com.wayledger.engine.demand.BoardDemand;
 import com.wayledger.engine.demand.CircuitDemand;
 import com.wayledger.engine.demand.DiversityMethods;
+import com.wayledger.engine.protection.BoardFindings;
+import com.wayledger.engine.protection.CircuitFindings;
+import com.wayledger.engine.protection.result.Finding;
+import com.wayledger.engine.protection.result.Verdict;
 import java.io.ByteArrayInputStream;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
+import java.io.StringWriter;
+import java.io.Writer;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import org.apache.poi.ss.usermodel.Cell;
 import org.apache.poi.ss.usermodel.CellType;
 import org.apache.poi.ss.usermodel.FormulaEvaluator;
 import org.apache.poi.ss.usermodel.PrintSetup;
 import org.apache.poi.ss.usermodel.Row;
 import org.apache.poi.ss.usermodel.Sheet;
+import org.apache.poi.xssf.streaming.SheetDataWriter;
 import org.apache.poi.xssf.usermodel.XSSFSheet;
 import org.apache.poi.xssf.usermodel.XSSFWorkbook;
 import org.junit.jupiter.api.Test;
@@ -165,6 +174,86 @@ class WorkbookWriterTests {
           .isCloseTo(data.demand().board(1L).demandWatts(), within(1e-6 * data.demand().board(1L).demandWatts()));
       assertThat(summary.getRow(WorkbookWriter.HEADER_ROW + 2).getCell(0).getStringCellValue()).as("child indented").isEqualTo("  DB2");
     }
+  }
+
+  @Test
+  void findingsSheetListsEveryProblemAndGathersNotAssessedPerBoardAndReason() throws IOException {
+    // 2 boards of 6 circuits; the generated circuits record no ambient temperature, so one check is not assessed on each
+    ExportData data = ExchangeFixtures.export(ExchangeFixtures.generated(12, 6, 7L), DiversityMethods.UK_SMALL_SHOP);
+    int engineProblems = 0;
+    Map<String, Map<Finding, Integer>> engineNotAssessed = new HashMap<>();
+    for (Finding finding : data.findings().siteFindings()) {
+      engineProblems += finding.isProblem() ? 1 : 0;
+    }
+    for (BoardFindings board : data.findings().boards()) {
+      for (Finding finding : board.findings()) {
+        engineProblems += finding.isProblem() ? 1 : 0;
+      }
+      for (CircuitFindings circuit : board.circuits()) {
+        for (Finding finding : circuit.findings()) {
+          engineProblems += finding.isProblem() ? 1 : 0;
+          if (finding.verdict() == Verdict.NOT_ASSESSED) {
+            engineNotAssessed.computeIfAbsent(board.reference(), b -> new HashMap<>()).merge(finding, 1, Integer::sum);
+          }
+        }
+      }
+    }
+    assertThat(engineNotAssessed.values()).as("the engine leaves a check not assessed on several circuits of a board")
+        .anySatisfy(byFinding -> assertThat(byFinding.values()).anySatisfy(n -> assertThat(n).isGreaterThan(1)));
+    try (XSSFWorkbook workbook = written(data, true)) {
+      Sheet findings = workbook.getSheet("Findings");
+      int problemRows = 0;
+      Map<String, Map<String, String>> notAssessedRows = new HashMap<>();
+      for (Row row : findings) {
+        if (row.getRowNum() <= WorkbookWriter.HEADER_ROW) {
+          continue;
+        }
+        String verdict = row.getCell(3).getStringCellValue();
+        if (verdict.equals(Verdict.NOT_ASSESSED.name())) {
+          String before = notAssessedRows.computeIfAbsent(row.getCell(0).getStringCellValue(), b -> new HashMap<>())
+              .put(row.getCell(2).getStringCellValue() + " | " + row.getCell(4).getStringCellValue(), row.getCell(5).getStringCellValue());
+          assertThat(before).as("one row per board and reason").isNull();
+        } else if (Verdict.valueOf(verdict).isProblem()) {
+          problemRows++;
+        }
+      }
+      assertThat(problemRows).as("every danger, warning and advice on its own row").isEqualTo(engineProblems);
+      engineNotAssessed.forEach((board, byFinding) -> {
+        assertThat(notAssessedRows.get(board)).as("not-assessed rows of %s", board).hasSize(byFinding.size());
+        byFinding.forEach((finding, circuits) -> assertThat(notAssessedRows.get(board).get(finding.check().name() + " | " + finding.summary()))
+            .as("%s %s: how many circuits and which ways", board, finding.check())
+            .isEqualTo(circuits + " circuits, ways 1–2"));
+      });
+    }
+  }
+
+  @Test
+  void wayNumbersAreListedAsRanges() {
+    assertThat(WorkbookWriter.wayRanges(List.of(8, 1, 3, 2, 5, 7, 3))).isEqualTo("1–3, 5, 7–8");
+    assertThat(WorkbookWriter.wayRanges(List.of(4))).isEqualTo("4");
+  }
+
+  /** POI's own escaping, reached through a subclass since it is protected. */
+  private static final class PoiEscaping extends SheetDataWriter {
+    PoiEscaping(Writer out) throws IOException {
+      super(out);
+    }
+
+    void escapeWithPoi(String text) throws IOException {
+      outputEscapedString(text);
+    }
+  }
+
+  @ParameterizedTest
+  @ValueSource(strings = {"plain text", "<a & b> \"q\" 'x'", "tab\there\nline\rcr", "no\u00a0break", "bell\u0007 nul\u0000 esc\u001b",
+      "\ufffe\uffff end", "emoji \ud83d\ude00 ok", "lone \ud800 surrogate \udc00", "=SUM(A1)", "Ω ° ² Δ × –", "", "&amp;"})
+  void runEscapingWritesExactlyWhatPoiWrites(String text) throws IOException {
+    StringWriter poi = new StringWriter();
+    PoiEscaping reference = new PoiEscaping(poi);
+    reference.escapeWithPoi(text);
+    StringWriter ours = new StringWriter();
+    WorkbookWriter.escape(text, ours);
+    assertThat(ours.toString()).isEqualTo(poi.toString());
   }
 
   static Row rowOf(Sheet sheet, String circuit) {
