@@ -64,7 +64,9 @@ public final class WorkbookWriter {
   }
 
   /** Where a board sheet's totals are, so that other sheets can refer to them. */
-  record TotalsCells(String sheetName, String connectedKilowatts, String demandKilowatts, String highestPhaseAmps) {}
+  record TotalsCells(
+      String sheetName, String connectedKilowatts, String demandKilowatts, String highestPhaseAmps,
+      double connectedKilowattsValue, double demandKilowattsValue, double highestPhaseAmpsValue) {}
 
   /**
    * Writes the workbook.
@@ -215,9 +217,20 @@ public final class WorkbookWriter {
     int rowIndex = firstData;
     int lastData = firstData + Math.max(1, countRows(board)) - 1;
     String u0Cell = "$B$2";
+    CachedResults cache = new CachedResults(u0, board.isThreePhase());
     for (CircuitEntry entry : board.circuits()) {
       BoardFigures.CircuitFigures circuitFigures = figures.circuit(entry.circuitId());
       List<LoadForm> loads = entry.loads().isEmpty() ? java.util.Collections.singletonList(null) : entry.loads();
+      boolean threePole = entry.circuit().position() == com.wayledger.engine.PhasePosition.THREE_POLE;
+      Phase phase = threePole ? Phase.L1 : entry.circuit().position().phases().iterator().next();
+      double circuitKw = 0;
+      double circuitKvar = 0;
+      for (LoadForm load : loads) {
+        CachedResults.RowPower power = cache.rowPower(load, threePole);
+        circuitKw += power.kilowatts();
+        circuitKvar += power.kilovars();
+      }
+      double circuitAmps = cache.circuitCurrentAmps(circuitKw, circuitKvar, threePole);
       boolean first = true;
       for (LoadForm load : loads) {
         Row row = sheet.createRow(rowIndex);
@@ -225,7 +238,11 @@ public final class WorkbookWriter {
         if (load != null) {
           writeLoadCells(row, load, styles, widths);
         }
-        writeComputedCells(row, rowIndex + 1, first, circuitFigures, u0Cell, firstData + 1, lastData + 1, styles, widths);
+        CachedResults.RowPower power = cache.rowPower(load, threePole);
+        double[] diversity =
+            writeComputedCells(row, rowIndex + 1, first, circuitFigures, u0Cell, firstData + 1, lastData + 1,
+                power, circuitAmps, styles, widths);
+        cache.add(power, diversity[0], diversity[1], phase, threePole);
         first = false;
         rowIndex++;
       }
@@ -234,7 +251,8 @@ public final class WorkbookWriter {
       rowIndex++; // an empty board keeps one blank data row so the ranges stay valid
     }
     sheet.setAutoFilter(new CellRangeAddress(HEADER_ROW, lastData, 0, ScheduleColumn.values().length - 1));
-    TotalsCells cells = writeTotals(sheet, board, figures, rowIndex + 1, firstData + 1, lastData + 1, styles, widths);
+    TotalsCells cells =
+        writeTotals(sheet, board, figures, rowIndex + 1, firstData + 1, lastData + 1, cache, styles, widths);
 
     widths.apply(sheet);
     sheet.createFreezePane(3, HEADER_ROW + 1);
@@ -287,9 +305,10 @@ public final class WorkbookWriter {
     text(row, CONTINUOUS.ordinal(), Codes.yes(l.continuous()), s.text, w);
   }
 
-  private static void writeComputedCells(
+  /** Writes a row's computed cells; returns the diversity factors written (active, reactive). */
+  private static double[] writeComputedCells(
       Row row, int r, boolean firstOfCircuit, BoardFigures.CircuitFigures figures, String u0, int from, int to,
-      WorkbookStyles s, Widths w) {
+      CachedResults.RowPower power, double circuitAmps, WorkbookStyles s, Widths w) {
     String qty = ref(QUANTITY, r);
     String rating = ref(RATING, r);
     String unit = ref(UNIT, r);
@@ -299,18 +318,21 @@ public final class WorkbookWriter {
     String blank = "OR(" + rating + "=\"\"," + qty + "=\"\"," + pf + "=\"\")";
     formula(row, CONNECTED_KW.ordinal(),
         "IF(" + blank + ",0," + qty + "*" + rating + "*IF(" + unit + "=\"W\",1,IF(" + unit + "=\"VA\"," + pf + "," + perLine + "*" + pf + "))/1000)",
-        s.kilowatts, w);
+        power.kilowatts(), s.kilowatts, w);
     formula(row, CONNECTED_KVAR.ordinal(),
         "IF(" + blank + ",0," + qty + "*" + rating + "*IF(" + unit + "=\"W\",1/" + pf + ",IF(" + unit + "=\"VA\",1," + perLine + "))*SQRT(1-" + pf + "^2)/1000)",
-        s.kilowatts, w);
+        power.kilovars(), s.kilowatts, w);
     double diversityP = figures == null ? 1.0 : figures.assessed() ? figures.diversityActive() : 0.0;
     double diversityQ = figures == null ? 1.0 : figures.assessed() ? figures.diversityReactive() : 0.0;
     number(row, DIVERSITY_P.ordinal(), diversityP, s.factor, w);
     number(row, DIVERSITY_Q.ordinal(), diversityQ, s.factor, w);
-    formula(row, DEMAND_KW.ordinal(), ref(CONNECTED_KW, r) + "*" + ref(DIVERSITY_P, r), s.kilowatts, w);
-    formula(row, DEMAND_KVAR.ordinal(), ref(CONNECTED_KVAR, r) + "*" + ref(DIVERSITY_Q, r), s.kilowatts, w);
+    formula(row, DEMAND_KW.ordinal(), ref(CONNECTED_KW, r) + "*" + ref(DIVERSITY_P, r),
+        power.kilowatts() * diversityP, s.kilowatts, w);
+    formula(row, DEMAND_KVAR.ordinal(), ref(CONNECTED_KVAR, r) + "*" + ref(DIVERSITY_Q, r),
+        power.kilovars() * diversityQ, s.kilowatts, w);
+    double[] diversity = {diversityP, diversityQ};
     if (!firstOfCircuit) {
-      return;
+      return diversity;
     }
     if (figures != null && figures.feedsSubBoard()) {
       number(row, IB_CONNECTED.ordinal(), figures.connectedCurrentAmps(), s.amps, w);
@@ -318,16 +340,19 @@ public final class WorkbookWriter {
       String way = ref(WAY, r);
       String p = "SUMIFS(" + range(CONNECTED_KW, from, to) + "," + range(WAY, from, to) + "," + way + "," + range(LINE, from, to) + "," + line + ")";
       String q = "SUMIFS(" + range(CONNECTED_KVAR, from, to) + "," + range(WAY, from, to) + "," + way + "," + range(LINE, from, to) + "," + line + ")";
-      formula(row, IB_CONNECTED.ordinal(), "SQRT(" + p + "^2+" + q + "^2)*1000/(" + perLine + ")", s.amps, w);
+      formula(row, IB_CONNECTED.ordinal(), "SQRT(" + p + "^2+" + q + "^2)*1000/(" + perLine + ")", circuitAmps,
+          s.amps, w);
     }
     if (figures != null) {
       number(row, IB_DESIGN.ordinal(), figures.designCurrentAmps(), s.amps, w);
       number(row, FINDINGS.ordinal(), figures.problemFindings(), s.integer, w);
     }
+    return diversity;
   }
 
   private TotalsCells writeTotals(
-      SXSSFSheet sheet, BoardEntry board, BoardFigures figures, int startRow, int from, int to, WorkbookStyles s, Widths w) {
+      SXSSFSheet sheet, BoardEntry board, BoardFigures figures, int startRow, int from, int to, CachedResults cache,
+      WorkbookStyles s, Widths w) {
     String[] heads = {"Totals", "Connected kW", "Connected kvar", "Connected A", "Demand kW", "Demand kvar", "Demand A",
         "Sub-boards kW (at export)", "Sub-boards kvar (at export)", "Allowance kW (at export)"};
     Row head = sheet.createRow(startRow);
@@ -337,18 +362,36 @@ public final class WorkbookWriter {
     List<Phase> lines = board.isThreePhase() ? List.of(Phase.values()) : List.of(Phase.L1);
     int first = startRow + 2; // Excel row of the first phase line
     int r = first;
+    double sumConnectedKw = 0;
+    double sumConnectedKvar = 0;
+    double sumDemandKw = 0;
+    double sumDemandKvar = 0;
+    double highestAmps = 0;
+    List<Double> lineAmps = new java.util.ArrayList<>();
     for (Phase phase : lines) {
       Row row = sheet.createRow(r - 1);
       text(row, 0, board.isThreePhase() ? phase.name() : "L–N", s.label, null);
-      formula(row, 1, phaseSum(CONNECTED_KW, phase, board, from, to), s.kilowatts, null);
-      formula(row, 2, phaseSum(CONNECTED_KVAR, phase, board, from, to), s.kilowatts, null);
-      formula(row, 3, "SQRT(B" + r + "^2+C" + r + "^2)*1000/$B$2", s.amps, null);
+      double connectedKw = cache.connectedKilowatts(phase);
+      double connectedKvar = cache.connectedKilovars(phase);
+      double demandKw =
+          cache.demandKilowatts(phase) + figures.carriedWatts(phase) / 1000.0 + figures.allowanceWattsPerLine() / 1000.0;
+      double demandKvar = cache.demandKilovars(phase) + figures.carriedVars(phase) / 1000.0;
+      double demandAmps = cache.amps(demandKw, demandKvar);
+      formula(row, 1, phaseSum(CONNECTED_KW, phase, board, from, to), connectedKw, s.kilowatts, null);
+      formula(row, 2, phaseSum(CONNECTED_KVAR, phase, board, from, to), connectedKvar, s.kilowatts, null);
+      formula(row, 3, "SQRT(B" + r + "^2+C" + r + "^2)*1000/$B$2", cache.amps(connectedKw, connectedKvar), s.amps, null);
       number(row, 7, figures.carriedWatts(phase) / 1000.0, s.kilowatts, null);
       number(row, 8, figures.carriedVars(phase) / 1000.0, s.kilowatts, null);
       number(row, 9, figures.allowanceWattsPerLine() / 1000.0, s.kilowatts, null);
-      formula(row, 4, phaseSum(DEMAND_KW, phase, board, from, to) + "+H" + r + "+J" + r, s.kilowatts, null);
-      formula(row, 5, phaseSum(DEMAND_KVAR, phase, board, from, to) + "+I" + r, s.kilowatts, null);
-      formula(row, 6, "SQRT(E" + r + "^2+F" + r + "^2)*1000/$B$2", s.amps, null);
+      formula(row, 4, phaseSum(DEMAND_KW, phase, board, from, to) + "+H" + r + "+J" + r, demandKw, s.kilowatts, null);
+      formula(row, 5, phaseSum(DEMAND_KVAR, phase, board, from, to) + "+I" + r, demandKvar, s.kilowatts, null);
+      formula(row, 6, "SQRT(E" + r + "^2+F" + r + "^2)*1000/$B$2", demandAmps, s.amps, null);
+      sumConnectedKw += connectedKw;
+      sumConnectedKvar += connectedKvar;
+      sumDemandKw += demandKw;
+      sumDemandKvar += demandKvar;
+      highestAmps = Math.max(highestAmps, demandAmps);
+      lineAmps.add(demandAmps);
       r++;
     }
     int last = r - 1;
@@ -359,27 +402,32 @@ public final class WorkbookWriter {
     int carriedRow = r++;
     Row total = sheet.createRow(r - 1);
     text(total, 0, "Board", s.totalLabel, null);
-    formula(total, 1, "SUM(B" + first + ":B" + last + ")+B" + carriedRow, s.totalKilowatts, null);
-    formula(total, 2, "SUM(C" + first + ":C" + last + ")+C" + carriedRow, s.totalKilowatts, null);
-    formula(total, 4, "SUM(E" + first + ":E" + last + ")", s.totalKilowatts, null);
-    formula(total, 5, "SUM(F" + first + ":F" + last + ")", s.totalKilowatts, null);
-    formula(total, 6, "MAX(G" + first + ":G" + last + ")", s.totalAmps, null);
+    double totalConnectedKw = sumConnectedKw + figures.carriedConnectedWatts() / 1000.0;
+    formula(total, 1, "SUM(B" + first + ":B" + last + ")+B" + carriedRow, totalConnectedKw, s.totalKilowatts, null);
+    formula(total, 2, "SUM(C" + first + ":C" + last + ")+C" + carriedRow,
+        sumConnectedKvar + figures.carriedConnectedVars() / 1000.0, s.totalKilowatts, null);
+    formula(total, 4, "SUM(E" + first + ":E" + last + ")", sumDemandKw, s.totalKilowatts, null);
+    formula(total, 5, "SUM(F" + first + ":F" + last + ")", sumDemandKvar, s.totalKilowatts, null);
+    formula(total, 6, "MAX(G" + first + ":G" + last + ")", highestAmps, s.totalAmps, null);
     text(total, 7, "← highest phase A", s.text, null);
     int totalRow = r++;
     if (board.isThreePhase()) {
       Row unbalance = sheet.createRow(r - 1);
       text(unbalance, 0, "Unbalance %", s.label, null);
       String mean = "AVERAGE(G" + first + ":G" + last + ")";
+      double meanAmps = lineAmps.stream().mapToDouble(Double::doubleValue).average().orElse(0);
+      double deviation = lineAmps.stream().mapToDouble(a -> Math.abs(a - meanAmps)).max().orElse(0);
       formula(unbalance, 6,
           "IF(" + mean + "<=0,0,100*MAX(ABS(G" + first + "-" + mean + "),ABS(G" + (first + 1) + "-" + mean + "),ABS(G" + last + "-" + mean + "))/" + mean + ")",
-          s.percent, null);
+          meanAmps <= 0 ? 0 : 100 * deviation / meanAmps, s.percent, null);
       r++;
     }
     Row note = sheet.createRow(r);
     text(note, 0, "Demand per row = connected × the circuit's diversity factors as worked out at export; change a load and the totals follow, "
         + "but only a fresh export re-applies the diversity method (see the Methods sheet).", s.caution, null);
     String quoted = "'" + sheet.getSheetName().replace("'", "''") + "'!";
-    return new TotalsCells(sheet.getSheetName(), quoted + "$B$" + totalRow, quoted + "$E$" + totalRow, quoted + "$G$" + totalRow);
+    return new TotalsCells(sheet.getSheetName(), quoted + "$B$" + totalRow, quoted + "$E$" + totalRow,
+        quoted + "$G$" + totalRow, totalConnectedKw, sumDemandKw, highestAmps);
   }
 
   private static String phaseSum(ScheduleColumn column, Phase phase, BoardEntry board, int from, int to) {
@@ -418,9 +466,9 @@ public final class WorkbookWriter {
       number(row, 3, board.phases(), s.integer, w);
       number(row, 4, board.wayCount(), s.integer, w);
       number(row, 5, board.circuits().size(), s.integer, w);
-      formula(row, 6, cells.connectedKilowatts(), s.kilowatts, w);
-      formula(row, 7, cells.demandKilowatts(), s.kilowatts, w);
-      formula(row, 8, cells.highestPhaseAmps(), s.amps, w);
+      formula(row, 6, cells.connectedKilowatts(), cells.connectedKilowattsValue(), s.kilowatts, w);
+      formula(row, 7, cells.demandKilowatts(), cells.demandKilowattsValue(), s.kilowatts, w);
+      formula(row, 8, cells.highestPhaseAmps(), cells.highestPhaseAmpsValue(), s.amps, w);
       text(row, 9, board.incomerLabel(), s.text, w);
       if (demand != null && demand.unbalancePercent() != null) {
         number(row, 10, demand.unbalancePercent(), s.percent, w);
@@ -690,9 +738,16 @@ public final class WorkbookWriter {
     }
   }
 
-  private static void formula(Row row, int column, String formula, CellStyle style, Widths widths) {
+  /**
+   * A formula cell with its result stored beside it, so that a program showing stored results without
+   * recalculating still shows the right figure.
+   */
+  private static void formula(Row row, int column, String formula, double result, CellStyle style, Widths widths) {
     Cell cell = row.createCell(column);
     cell.setCellFormula(formula);
+    if (Double.isFinite(result)) {
+      cell.setCellValue(result);
+    }
     cell.setCellStyle(style);
     if (widths != null) {
       widths.see(column, 9);

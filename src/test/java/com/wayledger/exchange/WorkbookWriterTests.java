@@ -132,6 +132,32 @@ class WorkbookWriterTests {
   }
 
   @Test
+  void everyFormulaCellStoresTheResultASpreadsheetWouldCompute() throws IOException {
+    // A program that opens the file without recalculating shows the stored results: they must be right.
+    ExportData data = ExchangeFixtures.shopExport();
+    try (XSSFWorkbook workbook = written(data, true)) {
+      FormulaEvaluator evaluator = workbook.getCreationHelper().createFormulaEvaluator();
+      int formulas = 0;
+      for (org.apache.poi.ss.usermodel.Sheet sheet : workbook) {
+        for (org.apache.poi.ss.usermodel.Row row : sheet) {
+          for (org.apache.poi.ss.usermodel.Cell cell : row) {
+            if (cell.getCellType() != org.apache.poi.ss.usermodel.CellType.FORMULA) {
+              continue;
+            }
+            formulas++;
+            double stored = cell.getNumericCellValue();
+            double computed = evaluator.evaluate(cell).getNumberValue();
+            assertThat(stored)
+                .as("stored result of %s!%s (%s)", sheet.getSheetName(), cell.getAddress(), cell.getCellFormula())
+                .isCloseTo(computed, org.assertj.core.api.Assertions.within(1e-9 + Math.abs(computed) * 1e-9));
+          }
+        }
+      }
+      assertThat(formulas).as("formula cells checked").isGreaterThan(50);
+    }
+  }
+
+  @Test
   void userTextThatLooksLikeAFormulaIsWrittenAsAStringCell() throws IOException {
     try (XSSFWorkbook workbook = written(ExchangeFixtures.shopExport(), false)) {
       Row row = rowOf(workbook.getSheet("Board MDB"), "=HYPERLINK(\"http://example.invalid\",\"x\")");
