@@ -42,7 +42,7 @@ public class SecurityConfig {
     http.securityMatcher("/api/**")
         .authorizeHttpRequests(
             auth ->
-                auth.requestMatchers(HttpMethod.GET, "/api/openapi/**", "/api/docs/**", "/api/docs")
+                auth.requestMatchers(HttpMethod.GET, "/api/openapi", "/api/openapi/**", "/api/docs", "/api/docs/**", "/api/swagger-ui/**")
                     .permitAll()
                     .requestMatchers(HttpMethod.GET, "/api/**")
                     .hasRole("VIEWER")
