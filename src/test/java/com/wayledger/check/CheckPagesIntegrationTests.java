@@ -1,0 +1,97 @@
+package com.wayledger.check;
+
+import static com.wayledger.support.Roles.editor;
+import static com.wayledger.support.Roles.viewer;
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.hamcrest.Matchers.containsString;
+import static org.hamcrest.Matchers.not;
+import static org.springframework.security.test.web.servlet.request.SecurityMockMvcRequestPostProcessors.csrf;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.post;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.content;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
+
+import org.junit.jupiter.api.MethodOrderer;
+import org.junit.jupiter.api.Order;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.TestMethodOrder;
+import org.springframework.beans.factory.annotation.Autowired;
+import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
+import org.springframework.jdbc.core.simple.JdbcClient;
+import org.springframework.test.annotation.DirtiesContext;
+import org.springframework.test.context.ActiveProfiles;
+import org.springframework.test.web.servlet.MockMvc;
+
+/** The circuit page and the site findings page on the demo site, as a viewer and an editor see them. */
+@SpringBootTest
+@AutoConfigureMockMvc
+@ActiveProfiles({"test", "demo"})
+@DirtiesContext
+@TestMethodOrder(MethodOrderer.OrderAnnotation.class)
+class CheckPagesIntegrationTests {
+
+  @Autowired MockMvc mvc;
+  @Autowired JdbcClient jdbc;
+
+  @Test
+  @Order(1) // before the proposal is fitted by the next test
+  void mixerPageShowsTheNuisanceTripTheProposalTheChartAndTheCaution() throws Exception {
+    mvc.perform(get("/circuits/{id}", circuit("Spiral dough mixer")).with(viewer()))
+        .andExpect(status().isOk())
+        .andExpect(content().string(containsString("nuisance trips likely")))
+        .andExpect(content().string(containsString("A device that passes every check")))
+        .andExpect(content().string(containsString("class=\"tcc-chart\"")))
+        .andExpect(content().string(containsString("assist a competent person")))
+        .andExpect(content().string(not(containsString("Fit this device"))));
+  }
+
+  @Test
+  @Order(2)
+  void editorFitsTheProposedDeviceAndTheSurgeFindingIsGoneAndLogged() throws Exception {
+    long mixer = circuit("Spiral dough mixer");
+    long version = jdbc.sql("SELECT version FROM circuit WHERE id = ?").param(mixer).query(Long.class).single();
+    mvc.perform(post("/circuits/{id}/apply-proposal", mixer).param("version", String.valueOf(version)).with(editor()).with(csrf()))
+        .andExpect(status().is3xxRedirection());
+    String curve = jdbc.sql("SELECT device_curve FROM circuit WHERE id = ?").param(mixer).query(String.class).single();
+    assertThat(curve).as("the proposal replaces the type B breaker").isNotEqualTo("B");
+    mvc.perform(get("/circuits/{id}", mixer).with(viewer()))
+        .andExpect(content().string(not(containsString("nuisance trips likely"))));
+    Long logged =
+        jdbc.sql("SELECT COUNT(*) FROM change_log WHERE circuit_id = ? AND kind = 'CIRCUIT_EDITED'").param(mixer)
+            .query(Long.class).single();
+    assertThat(logged).isEqualTo(1L);
+  }
+
+  @Test
+  void viewerCannotFitADevice() throws Exception {
+    long mixer = circuit("Bread slicer");
+    mvc.perform(post("/circuits/{id}/apply-proposal", mixer).param("version", "0").with(viewer()).with(csrf()))
+        .andExpect(status().isForbidden());
+  }
+
+  @Test
+  void staleProposalIsRefusedWithAConflictAndNothingChanges() throws Exception {
+    long slicer = circuit("Bread slicer");
+    String before = jdbc.sql("SELECT device_curve || device_rating_amps FROM circuit WHERE id = ?").param(slicer).query(String.class).single();
+    mvc.perform(post("/circuits/{id}/apply-proposal", slicer).param("version", "999").with(editor()).with(csrf()))
+        .andExpect(status().isConflict());
+    String after = jdbc.sql("SELECT device_curve || device_rating_amps FROM circuit WHERE id = ?").param(slicer).query(String.class).single();
+    assertThat(after).isEqualTo(before);
+  }
+
+  @Test
+  void siteFindingsFilteredToDangerListOnlyDangers() throws Exception {
+    long site = jdbc.sql("SELECT id FROM site").query(Long.class).list().get(0);
+    String page =
+        mvc.perform(get("/sites/{id}/findings", site).param("severity", "DANGER").with(viewer()))
+            .andExpect(status().isOk())
+            .andReturn().getResponse().getContentAsString();
+    assertThat(page).contains("v-DANGER").doesNotContain("class=\"badge v-WARNING\"").doesNotContain("class=\"badge v-ADVICE\"");
+    assertThat(page).contains("cable not protected");
+  }
+
+  private long circuit(String description) {
+    return jdbc.sql("SELECT id FROM circuit WHERE description = ?").param(description).query(Long.class).list().get(0);
+  }
+}
