@@ -293,7 +293,7 @@ class DemoSite implements ApplicationRunner {
         form.deviceRcdType(), form.cableLineCsa(), form.cableCpcCsa(), form.cableMaterial(),
         form.cableInsulation(), form.cableLengthMetres(), form.cableInstallationMethod(),
         form.cableAmbientCelsius(), form.cableGroupedCircuits(), millimetres,
-        form.measuredLoopImpedanceOhms(), null, null, null, null, null, null, null);
+        form.measuredLoopImpedanceOhms(), null, null, null, null, null, null, null, form.ringFinal());
   }
 
   private static CircuitForm spare(int way, PhasePosition position, String description, DeviceKind kind,
