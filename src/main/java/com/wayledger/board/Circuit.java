@@ -47,6 +47,8 @@ public class Circuit {
 
   private boolean lockedForBalancing;
 
+  private boolean ringFinal;
+
   @Embedded
   @AttributeOverrides({
     @AttributeOverride(name = "kind", column = @Column(name = "device_kind")),
@@ -98,6 +100,7 @@ public class Circuit {
     description = form.description().strip();
     status = form.status();
     lockedForBalancing = Boolean.TRUE.equals(form.lockedForBalancing());
+    ringFinal = Boolean.TRUE.equals(form.ringFinal());
     device = status == WayStatus.EMPTY ? null : form.deviceDetails();
     cable = status == WayStatus.IN_USE ? form.cableDetails() : null;
     measuredLoopImpedanceOhms = form.measuredLoopImpedanceOhms();
@@ -151,6 +154,11 @@ public class Circuit {
 
   public boolean isLockedForBalancing() {
     return lockedForBalancing;
+  }
+
+  /** Whether the cable is a ring final circuit: it leaves the board and returns to it. */
+  public boolean isRingFinal() {
+    return ringFinal;
   }
 
   public DeviceDetails getDevice() {

@@ -52,7 +52,37 @@ public record CircuitForm(
     @Positive @DecimalMax("10000000") Double loadRatingValue,
     RatingUnit loadRatingUnit,
     @DecimalMin(value = "0", inclusive = false) @DecimalMax("1") Double loadPowerFactor,
-    Long version) {
+    Long version,
+    Boolean ringFinal) {
+
+  /** A radial circuit (not a ring final circuit): the argument list from before rings were recorded. */
+  public CircuitForm(
+      Integer wayNumber, PhasePosition position, String description, WayStatus status, Boolean lockedForBalancing,
+      DeviceKind deviceKind, TripCurve deviceCurve, Double deviceRatingAmps, Integer devicePoles,
+      Double deviceBreakingCapacityKiloAmps, Double deviceResidualMilliAmps, RcdType deviceRcdType,
+      Double cableLineCsa, Double cableCpcCsa, ConductorMaterial cableMaterial, Insulation cableInsulation,
+      Double cableLengthMetres, InstallationMethod cableInstallationMethod, Double cableAmbientCelsius,
+      Integer cableGroupedCircuits, Integer cableThermalInsulationMm, Double measuredLoopImpedanceOhms,
+      String loadDescription, LoadCategory loadCategory, Integer loadQuantity, Double loadRatingValue,
+      RatingUnit loadRatingUnit, Double loadPowerFactor, Long version) {
+    this(wayNumber, position, description, status, lockedForBalancing, deviceKind, deviceCurve, deviceRatingAmps,
+        devicePoles, deviceBreakingCapacityKiloAmps, deviceResidualMilliAmps, deviceRcdType, cableLineCsa,
+        cableCpcCsa, cableMaterial, cableInsulation, cableLengthMetres, cableInstallationMethod,
+        cableAmbientCelsius, cableGroupedCircuits, cableThermalInsulationMm, measuredLoopImpedanceOhms,
+        loadDescription, loadCategory, loadQuantity, loadRatingValue, loadRatingUnit, loadPowerFactor, version,
+        false);
+  }
+
+  /** The same row marked as a ring final circuit or not. */
+  public CircuitForm withRingFinal(boolean ring) {
+    return new CircuitForm(
+        wayNumber, position, description, status, lockedForBalancing, deviceKind, deviceCurve, deviceRatingAmps,
+        devicePoles, deviceBreakingCapacityKiloAmps, deviceResidualMilliAmps, deviceRcdType, cableLineCsa,
+        cableCpcCsa, cableMaterial, cableInsulation, cableLengthMetres, cableInstallationMethod,
+        cableAmbientCelsius, cableGroupedCircuits, cableThermalInsulationMm, measuredLoopImpedanceOhms,
+        loadDescription, loadCategory, loadQuantity, loadRatingValue, loadRatingUnit, loadPowerFactor, version,
+        ring);
+  }
 
   /** A new in-use circuit at a position, with a type B MCB, copper 70 °C cable and a blank first load. */
   public static CircuitForm blankAt(int wayNumber, PhasePosition position) {
@@ -96,7 +126,8 @@ public record CircuitForm(
         null,
         null,
         null,
-        circuit.getVersion());
+        circuit.getVersion(),
+        circuit.isRingFinal());
   }
 
   DeviceDetails deviceDetails() {

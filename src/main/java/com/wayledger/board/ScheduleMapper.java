@@ -48,7 +48,8 @@ public final class ScheduleMapper {
                       return placement == null ? circuit : new CircuitSpec(circuit.id(), placement.wayNumber(),
                           com.wayledger.engine.PhasePosition.on(placement.phase()), circuit.description(),
                           circuit.status(), circuit.lockedForBalancing(), circuit.device(), circuit.cable(),
-                          circuit.loads(), circuit.feedsBoardId(), circuit.measuredLoopImpedanceOhms());
+                          circuit.loads(), circuit.feedsBoardId(), circuit.measuredLoopImpedanceOhms(),
+                          circuit.ringFinal());
                     })
                     .toList()))
             .toList();
@@ -142,7 +143,8 @@ public final class ScheduleMapper {
         circuit.getCable() == null ? null : circuit.getCable().toSpec(),
         loads,
         feedsBoardId,
-        circuit.getMeasuredLoopImpedanceOhms());
+        circuit.getMeasuredLoopImpedanceOhms(),
+        circuit.isRingFinal());
   }
 
   private static LoadSpec toSpec(LoadItem load) {

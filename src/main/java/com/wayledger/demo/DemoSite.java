@@ -200,8 +200,10 @@ class DemoSite implements ApplicationRunner {
     add(flat, way(2, PhasePosition.L1, "Shower", DeviceKind.MCB, TripCurve.B, second ? 32.0 : 40.0, 6.0,
         10.0, 4.0, 11.0, InstallationMethod.C),
         load("Electric shower", LoadCategory.WATER_HEATING_INSTANTANEOUS, 1, second ? 10800 : 8500, RatingUnit.W, 1.0));
-    add(flat, way(3, PhasePosition.L1, "Sockets radial, living and bedrooms", DeviceKind.MCB, TripCurve.B,
-        20.0, 6.0, 2.5, 1.5, 32.0, InstallationMethod.C),
+    // The usual UK arrangement: a 32 A ring final circuit of 2.5/1.5 mm² twin and earth; the length is the whole
+    // ring, out and back. Judged as a ring (BS 7671 433.1.204), it passes; judged as a radial it would not.
+    add(flat, way(3, PhasePosition.L1, "Sockets ring, living and bedrooms", DeviceKind.RCBO, TripCurve.B,
+        32.0, 6.0, 2.5, 1.5, second ? 58.0 : 64.0, InstallationMethod.C).withRingFinal(true),
         load("General sockets", LoadCategory.SOCKET_OUTLETS, 1, 3500, RatingUnit.W, 0.95));
     // Flat 1's kitchen radial: 32 A breaker on 2.5 mm² run through loft insulation, so the cable is not protected.
     CircuitForm kitchen = way(4, PhasePosition.L1, "Sockets radial, kitchen", DeviceKind.MCB, TripCurve.B,
@@ -293,7 +295,7 @@ class DemoSite implements ApplicationRunner {
         form.deviceRcdType(), form.cableLineCsa(), form.cableCpcCsa(), form.cableMaterial(),
         form.cableInsulation(), form.cableLengthMetres(), form.cableInstallationMethod(),
         form.cableAmbientCelsius(), form.cableGroupedCircuits(), millimetres,
-        form.measuredLoopImpedanceOhms(), null, null, null, null, null, null, null);
+        form.measuredLoopImpedanceOhms(), null, null, null, null, null, null, null, form.ringFinal());
   }
 
   private static CircuitForm spare(int way, PhasePosition position, String description, DeviceKind kind,

@@ -16,6 +16,8 @@ import java.util.List;
  * @param loads load items, possibly none
  * @param feedsBoardId id of the sub-board this circuit feeds as a submain; null for a final circuit
  * @param measuredLoopImpedanceOhms Zs measured at the circuit's far end; null when not measured
+ * @param ringFinal whether the cable is a ring final circuit (leaves the board and returns to it); its recorded
+ *     length is then the whole ring's length
  */
 public record CircuitSpec(
     long id,
@@ -28,9 +30,27 @@ public record CircuitSpec(
     CableSpec cable,
     List<LoadSpec> loads,
     Long feedsBoardId,
-    Double measuredLoopImpedanceOhms) {
+    Double measuredLoopImpedanceOhms,
+    boolean ringFinal) {
 
   public CircuitSpec {
     loads = List.copyOf(loads);
+  }
+
+  /** A radial circuit (not a ring final circuit): the argument list from before rings were recorded. */
+  public CircuitSpec(
+      long id,
+      int wayNumber,
+      PhasePosition position,
+      String description,
+      WayStatus status,
+      boolean lockedForBalancing,
+      DeviceSpec device,
+      CableSpec cable,
+      List<LoadSpec> loads,
+      Long feedsBoardId,
+      Double measuredLoopImpedanceOhms) {
+    this(id, wayNumber, position, description, status, lockedForBalancing, device, cable, loads, feedsBoardId,
+        measuredLoopImpedanceOhms, false);
   }
 }

@@ -58,6 +58,15 @@ final class Codes {
     };
   }
 
+  /** Ring or radial, as yes/no or in words ("ring", "RFC", "radial"); null when unrecognised. */
+  static Boolean parseRing(String text) {
+    return switch (squash(text)) {
+      case "RING", "RFC", "RINGFINAL" -> Boolean.TRUE;
+      case "RADIAL" -> Boolean.FALSE;
+      default -> parseYes(text);
+    };
+  }
+
   /** An enum constant by name, ignoring case, spaces, hyphens and underscores; null when none. */
   static <E extends Enum<E>> E parseEnum(Class<E> type, String text) {
     String t = squash(text);

@@ -64,6 +64,7 @@ public final class CsvWriter {
     cells[CONDUCTOR.ordinal()] = name(c.cableMaterial());
     cells[INSULATION.ordinal()] = name(c.cableInsulation());
     cells[LENGTH_METRES.ordinal()] = num(c.cableLengthMetres());
+    cells[RING.ordinal()] = Codes.yes(Boolean.TRUE.equals(c.ringFinal()));
     cells[INSTALLATION.ordinal()] = name(c.cableInstallationMethod());
     cells[AMBIENT_CELSIUS.ordinal()] = num(c.cableAmbientCelsius());
     cells[GROUPED.ordinal()] = num(c.cableGroupedCircuits());

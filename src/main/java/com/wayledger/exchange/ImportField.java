@@ -25,6 +25,7 @@ public enum ImportField {
   CONDUCTOR(ScheduleColumn.CONDUCTOR, List.of("conductor", "material", "conductor material", "cu al")),
   INSULATION(ScheduleColumn.INSULATION, List.of("insulation", "cable type", "insulation type")),
   LENGTH_METRES(ScheduleColumn.LENGTH_METRES, List.of("length m", "length", "run m", "run", "distance", "route length", "m")),
+  RING(ScheduleColumn.RING, List.of("ring", "ring final", "ring circuit", "ring final circuit", "rfc", "ring or radial")),
   INSTALLATION(ScheduleColumn.INSTALLATION, List.of("installation", "installation method", "reference method", "method", "install")),
   AMBIENT_CELSIUS(ScheduleColumn.AMBIENT_CELSIUS, List.of("ambient c", "ambient", "temperature", "temp")),
   GROUPED(ScheduleColumn.GROUPED, List.of("grouped", "grouping", "group")),

@@ -211,6 +211,7 @@ public final class RowReader {
       }
     }
     Boolean locked = cells.yes(KEEP_LINE, problems);
+    Boolean ring = cells.ring(problems);
 
     DeviceKind kind = cells.choice(DEVICE, DeviceKind.class, problems);
     TripCurve curve = cells.choice(CURVE, TripCurve.class, problems);
@@ -263,7 +264,7 @@ public final class RowReader {
         cells.choice(CONDUCTOR, ConductorMaterial.class, problems), cells.choice(INSULATION, Insulation.class, problems),
         cells.number(LENGTH_METRES, problems), cells.choice(INSTALLATION, InstallationMethod.class, problems),
         cells.number(AMBIENT_CELSIUS, problems), cells.whole(GROUPED, problems), cells.whole(THERMAL_INSULATION_MM, problems),
-        cells.number(MEASURED_ZS, problems), null, null, null, null, null, null, null);
+        cells.number(MEASURED_ZS, problems), null, null, null, null, null, null, null, ring);
     for (ConstraintViolation<CircuitForm> violation : validator.validate(form)) {
       ImportField field = CIRCUIT_PROPERTIES.getOrDefault(violation.getPropertyPath().toString(), CIRCUIT);
       if (!cells.hasError(problems, cells.source(field))) {
@@ -457,6 +458,14 @@ public final class RowReader {
       Boolean value = Codes.parseYes(text(field));
       if (value == null) {
         problems.add(new ImportPlan.Problem(field, "import.cell.unknownYes", new Object[] {text(field)}));
+      }
+      return value;
+    }
+
+    Boolean ring(List<ImportPlan.Problem> problems) {
+      Boolean value = Codes.parseRing(text(RING));
+      if (value == null) {
+        problems.add(new ImportPlan.Problem(RING, "import.cell.unknownRing", new Object[] {text(RING)}));
       }
       return value;
     }

@@ -22,6 +22,7 @@ public enum ScheduleColumn {
   CONDUCTOR("Conductor", true),
   INSULATION("Insulation", true),
   LENGTH_METRES("Length m", true),
+  RING("Ring", true),
   INSTALLATION("Installation", true),
   AMBIENT_CELSIUS("Ambient °C", true),
   GROUPED("Grouped", true),

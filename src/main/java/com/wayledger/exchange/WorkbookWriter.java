@@ -286,6 +286,7 @@ public final class WorkbookWriter {
     text(row, CONDUCTOR.ordinal(), name(c.cableMaterial()), s.text, w);
     text(row, INSULATION.ordinal(), name(c.cableInsulation()), s.text, w);
     number(row, LENGTH_METRES.ordinal(), c.cableLengthMetres(), s.number, w);
+    text(row, RING.ordinal(), Codes.yes(Boolean.TRUE.equals(c.ringFinal())), s.text, w);
     text(row, INSTALLATION.ordinal(), name(c.cableInstallationMethod()), s.text, w);
     number(row, AMBIENT_CELSIUS.ordinal(), c.cableAmbientCelsius(), s.number, w);
     number(row, GROUPED.ordinal(), c.cableGroupedCircuits(), s.integer, w);

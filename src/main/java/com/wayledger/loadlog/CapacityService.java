@@ -99,7 +99,7 @@ public class CapacityService {
         f.deviceResidualMilliAmps(), f.deviceRcdType(), f.cableLineCsa(), f.cableCpcCsa(), f.cableMaterial(),
         f.cableInsulation(), f.cableLengthMetres(), f.cableInstallationMethod(), f.cableAmbientCelsius(),
         f.cableGroupedCircuits(), f.cableThermalInsulationMm(), f.measuredLoopImpedanceOhms(), null, null, null, null,
-        null, null, f.version());
+        null, null, f.version(), f.ringFinal());
   }
 
   /** The form put in use for the load; {@code device}, when given, replaces the form's device. */
@@ -114,6 +114,6 @@ public class CapacityService {
         newDevice ? device.rcdType() : f.deviceRcdType(), f.cableLineCsa(), f.cableCpcCsa(), f.cableMaterial(),
         f.cableInsulation(), f.cableLengthMetres(), f.cableInstallationMethod(), f.cableAmbientCelsius(),
         f.cableGroupedCircuits(), f.cableThermalInsulationMm(), f.measuredLoopImpedanceOhms(), null, null, null, null,
-        null, null, f.version());
+        null, null, f.version(), f.ringFinal());
   }
 }

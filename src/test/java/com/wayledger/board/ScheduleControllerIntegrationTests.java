@@ -131,6 +131,20 @@ class ScheduleControllerIntegrationTests {
   }
 
   @Test
+  void ringTickReachesTheFormAndItsAbsenceMeansRadial() throws Exception {
+    given(schedule.addCircuit(eq(BOARD_ID), any(), any())).willReturn(circuit(board()));
+
+    mvc.perform(postForm("/boards/5/circuits", circuitFields(), "ringFinal", "true", "_ringFinal", "on")
+            .with(editor()).with(csrf()))
+        .andExpect(status().is3xxRedirection());
+    verify(schedule).addCircuit(eq(BOARD_ID), org.mockito.ArgumentMatchers.argThat(f -> Boolean.TRUE.equals(f.ringFinal())), any());
+
+    mvc.perform(postForm("/boards/5/circuits", circuitFields(), "_ringFinal", "on").with(editor()).with(csrf()))
+        .andExpect(status().is3xxRedirection());
+    verify(schedule).addCircuit(eq(BOARD_ID), org.mockito.ArgumentMatchers.argThat(f -> !Boolean.TRUE.equals(f.ringFinal())), any());
+  }
+
+  @Test
   void withoutHtmxASavedCircuitRedirectsToTheBoard() throws Exception {
     given(schedule.addCircuit(eq(BOARD_ID), any(), any())).willReturn(circuit(board()));
 

@@ -86,6 +86,20 @@ class DemoSiteIntegrationTests {
   }
 
   @Test
+  void flatSocketRingsAreJudgedAsRingsAndPass() {
+    for (String flat : List.of("FLAT-1", "FLAT-2")) {
+      assertThat(circuit(flat, "Sockets ring, living and bedrooms").ringFinal()).as(flat + " ring flagged").isTrue();
+      List<Finding> ring = findings(flat, "Sockets ring, living and bedrooms");
+      // BS 7671 433.1.204 (from memory): 2.5/1.5 mm², In 32 A ≤ 32 A, Iz 27 A ≥ 20 A
+      assertThat(ring).as(flat).anyMatch(f -> f.check() == CheckKind.CABLE_PROTECTION && f.verdict() == Verdict.PASS
+          && f.summary().contains("ring final circuit"));
+      assertThat(ring).as(flat + " loop impedance and drop").anyMatch(f -> f.check() == CheckKind.LOOP_IMPEDANCE
+          && f.verdict() == Verdict.PASS && f.summary().contains("ring final circuit"));
+      assertThat(ring).as(flat + ": no problem on the ring: %s", ring).noneMatch(this::isProblem);
+    }
+  }
+
+  @Test
   void cleanersSocketWithoutRcdIsFound() {
     assertThat(findings("LL", "Cleaner's socket, stair cupboard"))
         .anyMatch(f -> f.check() == CheckKind.SOCKET_RCD && isProblem(f));

@@ -74,6 +74,23 @@ class ColumnGuesserTests {
   }
 
   @Test
+  void ringColumnIsGuessedAndReadInWords() throws IOException {
+    byte[] bytes = sheet(null, new Object[][] {
+        {"Way", "Phase", "Description", "Protection", "Ring circuit", "Cable size (mm²)", "Length (m)"},
+        {1, "L1", "Sockets front rooms", "B32", "ring", 2.5, 64},
+        {2, "L2", "Sockets kitchen", "B32", "Y", 2.5, 40},
+        {3, "L3", "Immersion heater", "B16", "radial", 2.5, 12},
+        {4, "L1", "Lights", "B6", "", 1.5, 20}});
+    SheetTable table = SpreadsheetReader.read(bytes, "rings.xlsx", -1);
+    assertThat(ColumnGuesser.guess(table)).containsExactly(
+        ImportField.WAY, ImportField.LINE, ImportField.CIRCUIT, ImportField.DEVICE_SUMMARY, ImportField.RING, ImportField.LINE_CSA,
+        ImportField.LENGTH_METRES);
+    ImportPlan plan = plan(table);
+    assertThat(plan.isAllValid()).as("rows valid: %s", plan.rows()).isTrue();
+    assertThat(plan.circuits()).extracting(c -> c.circuit().ringFinal()).containsExactly(true, true, false, false);
+  }
+
+  @Test
   void facilitySheetInAnotherOrderWithSeparateRatingAndCurve() throws IOException {
     byte[] bytes = sheet(null, new Object[][] {
         {"Serving", "Breaker rating (A)", "Curve", "Type", "Way", "L", "Ib (A)", "Qty", "Power factor"},

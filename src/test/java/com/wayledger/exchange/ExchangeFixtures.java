@@ -56,7 +56,9 @@ public final class ExchangeFixtures {
     long id = 100;
     main.add(new CircuitEntry(id++, circuit(1, PhasePosition.L1, "Shop lights", DeviceKind.MCB, TripCurve.B, 10, null, 1.5, 25.0),
         List.of(load("LED panels", LoadCategory.LIGHTING, 12, 36, RatingUnit.W, 0.9), load("Window spots", LoadCategory.LIGHTING, 6, 50, RatingUnit.VA, 0.85))));
-    main.add(new CircuitEntry(id++, circuit(1, PhasePosition.L2, "Counter sockets", DeviceKind.RCBO, TripCurve.B, 32, 30.0, 2.5, 30.0),
+    // a ring final circuit, so the round trips carry the Ring column
+    main.add(new CircuitEntry(id++, circuit(1, PhasePosition.L2, "Counter sockets", DeviceKind.RCBO, TripCurve.B, 32, 30.0, 2.5, 30.0)
+            .withRingFinal(true),
         List.of(load("Till and scales", LoadCategory.SOCKET_OUTLETS, 1, 1800, RatingUnit.W, 0.95))));
     main.add(new CircuitEntry(id++, circuit(1, PhasePosition.L3, "=HYPERLINK(\"http://example.invalid\",\"x\")", DeviceKind.MCB, TripCurve.C, 20, null, 2.5, 12.0),
         List.of(load("+Water heater", LoadCategory.WATER_HEATING_STORAGE, 1, 3000, RatingUnit.W, 1.0))));
@@ -99,7 +101,7 @@ public final class ExchangeFixtures {
                 c.cableGroupedCircuits(), c.cableThermalInsulationMm()),
             entry.loads().stream().map(l -> new LoadSpec(l.description(), l.category(), l.quantity(), l.ratingValue(),
                 l.ratingUnit(), l.powerFactor(), l.startUpSurgeMultiple(), l.startUpSurgeMillis(), l.continuous())).toList(),
-            feeds, c.measuredLoopImpedanceOhms()));
+            feeds, c.measuredLoopImpedanceOhms(), Boolean.TRUE.equals(c.ringFinal())));
       }
       Long parent = board.parentReference() == null ? null : boards.stream()
           .filter(b -> b.reference().equals(board.parentReference())).map(BoardEntry::id).findFirst().orElse(null);

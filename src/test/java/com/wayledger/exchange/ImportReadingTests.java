@@ -77,6 +77,9 @@ class ImportReadingTests {
     ImportPlan plan = plan(xlsx(data), "shop.xlsx", 3, 12);
     assertThat(plan.rows()).as("rows").allMatch(ImportPlan.PreviewRow::isValid);
     assertThat(imported(plan)).isEqualTo(expected(data.boards().get(0)));
+    assertThat(imported(plan)).as("the ring survives the round trip")
+        .anyMatch(e -> e.circuit().description().equals("Counter sockets") && Boolean.TRUE.equals(e.circuit().ringFinal()))
+        .anyMatch(e -> e.circuit().description().equals("Cooker") && Boolean.FALSE.equals(e.circuit().ringFinal()));
   }
 
   @Test

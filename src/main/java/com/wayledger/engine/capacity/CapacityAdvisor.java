@@ -206,10 +206,10 @@ public final class CapacityAdvisor {
     return switch (candidate.kind()) {
       case SHARED_CIRCUIT -> new CircuitSpec(circuit.id(), circuit.wayNumber(), circuit.position(), circuit.description(),
           WayStatus.IN_USE, circuit.lockedForBalancing(), circuit.device(), circuit.cable(), loads, null,
-          circuit.measuredLoopImpedanceOhms());
+          circuit.measuredLoopImpedanceOhms(), circuit.ringFinal());
       case SPARE_WAY -> new CircuitSpec(circuit.id(), circuit.wayNumber(), circuit.position(), load.description(),
           WayStatus.IN_USE, circuit.lockedForBalancing(), circuit.device(), circuit.cable(), List.of(load.toLoadSpec()),
-          null, circuit.measuredLoopImpedanceOhms());
+          null, circuit.measuredLoopImpedanceOhms(), circuit.ringFinal());
       case EMPTY_POSITION -> new CircuitSpec(circuit.id(), candidate.wayNumber(), candidate.position(), load.description(),
           WayStatus.IN_USE, false, device, null, List.of(load.toLoadSpec()), null, null);
     };

@@ -15,6 +15,7 @@ import com.wayledger.engine.protection.check.BreakingCapacityCheck;
 import com.wayledger.engine.protection.check.CableProtectionCheck;
 import com.wayledger.engine.protection.check.LoopImpedanceCheck;
 import com.wayledger.engine.protection.check.OverloadCheck;
+import com.wayledger.engine.protection.check.RingFinalCheck;
 import com.wayledger.engine.protection.check.SocketRcdCheck;
 import com.wayledger.engine.protection.check.StartUpSurge;
 import com.wayledger.engine.protection.check.SurgeCheck;
@@ -61,7 +62,7 @@ final class CircuitChecks {
     Resolved<CableRating> rating = CurrentCapacity.of(circuit.cable(), threePole ? 3 : 2);
 
     findings.add(overload(designCurrentAmps, device, overcurrent));
-    findings.add(cableProtection(overcurrent, rating));
+    findings.add(circuit.ringFinal() ? ringCableProtection(circuit, overcurrent, rating) : cableProtection(overcurrent, rating));
     findings.add(
         device == null
             ? Finding.notAssessed(CheckKind.BREAKING_CAPACITY, "protective device", BreakingCapacityCheck.REFERENCE)
@@ -72,12 +73,15 @@ final class CircuitChecks {
     boolean finalCircuit = circuit.feedsBoardId() == null
         && (device == null || device.ratedCurrentAmps() == null
             || device.ratedCurrentAmps() <= settings.finalCircuitMaxRatedAmps());
-    findings.add(
-        LoopImpedanceCheck.assess(
-            supply.earthingSystem(), u0, zs, overcurrent, residual, finalCircuit, limits(settings)));
+    Finding loop =
+        LoopImpedanceCheck.assess(supply.earthingSystem(), u0, zs, overcurrent, residual, finalCircuit, limits(settings));
+    findings.add(circuit.ringFinal() ? RingFinalCheck.noted(loop, RingFinalCheck.LOOP_NOTE) : loop);
 
     Double totalDrop = null;
     Finding drop = voltageDrop(circuit, board, designCurrentAmps, u0, threePole, settings);
+    if (circuit.ringFinal()) {
+      drop = RingFinalCheck.noted(drop, RingFinalCheck.DROP_NOTE);
+    }
     findings.add(drop);
     if (drop.verdict() != Verdict.NOT_ASSESSED) {
       totalDrop = drop.value("total drop");
@@ -135,6 +139,23 @@ final class CircuitChecks {
     return CableProtectionCheck.assess(d.overloadSettingAmps(), d.conventionalTrippingAmps(), rating.value());
   }
 
+  private static Finding ringCableProtection(
+      CircuitSpec circuit, Resolved<DeviceCharacteristic> overcurrent, Resolved<CableRating> rating) {
+    DeviceSpec device = circuit.device();
+    Double ratedAmps = overcurrent.isKnown() ? Double.valueOf(overcurrent.value().overloadSettingAmps())
+        : device != null && device.kind() == DeviceKind.FUSE ? device.ratedCurrentAmps() : null;
+    if (ratedAmps == null) {
+      String missing = overcurrent.isKnown() ? "device rating In" : overcurrent.missing();
+      return Finding.notAssessedBecause(
+          CheckKind.CABLE_PROTECTION, "ring final circuit: no " + missing, RingFinalCheck.CABLE_REFERENCE);
+    }
+    if (!rating.isKnown()) {
+      return Finding.notAssessed(
+          CheckKind.CABLE_PROTECTION, rating.missing() + " of the ring final circuit", RingFinalCheck.CABLE_REFERENCE);
+    }
+    return RingFinalCheck.cableProtection(ratedAmps, circuit.cable(), rating.value());
+  }
+
   private static Finding voltageDrop(
       CircuitSpec circuit, BoardFaultLevel board, Double ib, double u0, boolean threePole, ProtectionSettings s) {
     boolean lighting = circuit.loads().stream().anyMatch(l -> l.category() == LoadCategory.LIGHTING);
@@ -158,7 +179,9 @@ final class CircuitChecks {
       return Finding.notAssessed(CheckKind.VOLTAGE_DROP, mv.missing(), VoltageDropCheck.REFERENCE);
     }
     double nominal = threePole ? Math.sqrt(3.0) * u0 : u0;
-    double circuitDrop = VoltageDrop.percent(mv.value(), ib, cable.lengthMetres(), nominal);
+    // a ring fed from both ends with the load at its mid-point: a quarter of the whole ring's resistance
+    double length = cable.lengthMetres() * (circuit.ringFinal() ? RingFinalCheck.MID_POINT_FRACTION : 1.0);
+    double circuitDrop = VoltageDrop.percent(mv.value(), ib, length, nominal);
     return VoltageDropCheck.assess(boardDrop.value(), circuitDrop, s.voltageDropLimitPercent(lighting), lighting);
   }
 

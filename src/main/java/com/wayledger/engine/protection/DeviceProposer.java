@@ -68,6 +68,9 @@ public final class DeviceProposer {
     if (designCurrentAmps == null) {
       return none(id, "missing design current Ib (from the demand calculation)");
     }
+    if (circuit.ringFinal()) {
+      return none(id, "ring final circuit: the proposer chooses devices for radial circuits only");
+    }
     boolean threePole = circuit.position() == PhasePosition.THREE_POLE;
     Resolved<CableRating> rating = CurrentCapacity.of(circuit.cable(), threePole ? 3 : 2);
     if (!rating.isKnown()) {

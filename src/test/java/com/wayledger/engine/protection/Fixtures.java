@@ -56,12 +56,18 @@ final class Fixtures {
 
   static CircuitSpec measured(CircuitSpec c, double zsOhms) {
     return new CircuitSpec(c.id(), c.wayNumber(), c.position(), c.description(), c.status(), c.lockedForBalancing(),
-        c.device(), c.cable(), c.loads(), c.feedsBoardId(), zsOhms);
+        c.device(), c.cable(), c.loads(), c.feedsBoardId(), zsOhms, c.ringFinal());
   }
 
   static CircuitSpec withDevice(CircuitSpec c, DeviceSpec device) {
     return new CircuitSpec(c.id(), c.wayNumber(), c.position(), c.description(), c.status(), c.lockedForBalancing(),
-        device, c.cable(), c.loads(), c.feedsBoardId(), c.measuredLoopImpedanceOhms());
+        device, c.cable(), c.loads(), c.feedsBoardId(), c.measuredLoopImpedanceOhms(), c.ringFinal());
+  }
+
+  /** The same circuit recorded as a ring final circuit (its cable length is then the whole ring). */
+  static CircuitSpec ring(CircuitSpec c) {
+    return new CircuitSpec(c.id(), c.wayNumber(), c.position(), c.description(), c.status(), c.lockedForBalancing(),
+        c.device(), c.cable(), c.loads(), c.feedsBoardId(), c.measuredLoopImpedanceOhms(), true);
   }
 
   /** A single-phase board at the origin (no submain, no incomer recorded), 100 A busbar. */

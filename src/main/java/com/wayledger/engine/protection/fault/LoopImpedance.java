@@ -2,9 +2,14 @@ package com.wayledger.engine.protection.fault;
 
 import com.wayledger.engine.CircuitSpec;
 import com.wayledger.engine.protection.cable.CableImpedance;
+import com.wayledger.engine.protection.check.RingFinalCheck;
 import com.wayledger.engine.protection.result.SourcedValue;
 
-/** A circuit's earth fault loop impedance Zs = Ze(board) + (R1+R2) at operating temperature, or its measured value. */
+/**
+ * A circuit's earth fault loop impedance Zs = Ze(board) + (R1+R2) at operating temperature, or its measured value.
+ * For a ring final circuit whose recorded length is the whole ring, R1+R2 at the mid-point is a quarter of the
+ * end-to-end r1+r2 (common practice; see {@link RingFinalCheck}).
+ */
 public final class LoopImpedance {
 
   private LoopImpedance() {}
@@ -18,6 +23,7 @@ public final class LoopImpedance {
     if (!ze.isKnown()) {
       return ze;
     }
-    return SourcedValue.calculated(CableImpedance.r1PlusR2Ohms(circuit.cable()).map(r -> ze.value() + r));
+    double share = circuit.ringFinal() ? RingFinalCheck.MID_POINT_FRACTION : 1.0;
+    return SourcedValue.calculated(CableImpedance.r1PlusR2Ohms(circuit.cable()).map(r -> ze.value() + r * share));
   }
 }
