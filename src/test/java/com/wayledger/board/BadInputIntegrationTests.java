@@ -141,7 +141,7 @@ class BadInputIntegrationTests {
             "loadDescription", "Loads can only be added to a circuit in use."),
         page("MCCB Ir above In", "three", "deviceKind", "MCCB", "deviceRatingAmps", "100",
             "deviceOverloadSettingAmps", "125", "deviceInstantaneousSettingAmps", "1000",
-            "deviceOverloadSettingAmps", "The overload setting Ir cannot be above the breaker's rating In (100 A)."),
+            "deviceOverloadSettingAmps", "The overload setting Ir cannot be above the rating In (100 A)."),
         page("MCCB Ii without Ir", "three", "deviceKind", "MCCB", "deviceRatingAmps", "100",
             "deviceInstantaneousSettingAmps", "500", "deviceOverloadSettingAmps",
             "Record both MCCB settings, Ir and Ii, or neither (the checks then assume Ir = In and Ii = 10·In)."),

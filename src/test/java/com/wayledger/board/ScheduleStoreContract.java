@@ -130,7 +130,7 @@ abstract class ScheduleStoreContract {
             .query(Double.class).single()).isEqualTo(625.0);
     assertThat(schedule.circuit(saved.getId()).getDevice().label()).isEqualTo("MCCB 125 A (Ir 100 A, Ii 625 A)");
 
-    Board fed = boards.update(board.getId(), BoardForm.of(board).withIncomerMccbSettings(63.0, 315.0));
+    Board fed = boards.update(board.getId(), BoardForm.of(boards.get(board.getId())).withIncomerMccbSettings(63.0, 315.0));
     assertThat(jdbc.sql("SELECT incomer_instantaneous_setting_amps FROM board WHERE id = ?").param(fed.getId())
             .query(Double.class).single()).isEqualTo(315.0);
 
