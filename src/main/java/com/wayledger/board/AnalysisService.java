@@ -13,6 +13,7 @@ import com.wayledger.engine.protection.BoardLoading;
 import com.wayledger.engine.protection.CircuitLoading;
 import com.wayledger.engine.protection.ProtectionEngine;
 import com.wayledger.engine.protection.ProtectionSettings;
+import com.wayledger.engine.protection.RecordedMccbSettings;
 import com.wayledger.engine.protection.SiteFindings;
 import com.wayledger.site.Site;
 import com.wayledger.site.SiteService;
@@ -50,7 +51,15 @@ public class AnalysisService {
     Site site = sites.get(siteId);
     List<Board> onSite = boards.findBySite(siteId);
     onSite.forEach(board -> board.getCircuits().forEach(circuit -> circuit.getLoads().size()));
-    return analyse(ScheduleMapper.toSpec(site, onSite));
+    return analyse(ScheduleMapper.toSpec(site, onSite), methods(), ScheduleMapper.mccbSettingsOf(onSite));
+  }
+
+  /** The MCCB settings recorded on a site's boards, for callers that re-run an engine on the site's spec. */
+  @Transactional(readOnly = true)
+  public RecordedMccbSettings mccbSettingsOfSite(long siteId) {
+    List<Board> onSite = boards.findBySite(siteId);
+    onSite.forEach(board -> board.getCircuits().size());
+    return ScheduleMapper.mccbSettingsOf(onSite);
   }
 
   @Transactional(readOnly = true)
@@ -59,16 +68,32 @@ public class AnalysisService {
     return ofSite(board.getSite().getId());
   }
 
-  /** Both engines on an engine input, with the built-in and user-defined diversity methods. */
+  /**
+   * Both engines on an engine input, with the built-in and user-defined diversity methods and no MCCB settings
+   * recorded (every MCCB assumed Ir = In, Ii = 10·In). For a spec with stored boards behind it, pass their settings
+   * with {@link #analyse(SiteSpec, RecordedMccbSettings)}.
+   */
   public SiteAnalysis analyse(SiteSpec spec) {
-    return analyse(spec, methods());
+    return analyse(spec, methods(), RecordedMccbSettings.NONE);
+  }
+
+  /** Both engines on an engine input with the MCCB settings recorded for it (see ScheduleMapper.mccbSettingsOf). */
+  public SiteAnalysis analyse(SiteSpec spec, RecordedMccbSettings recordedMccbSettings) {
+    return analyse(spec, methods(), recordedMccbSettings);
+  }
+
+  /** Both engines on an engine input with no MCCB settings recorded. */
+  public static SiteAnalysis analyse(SiteSpec spec, DiversityMethodCatalog methods) {
+    return analyse(spec, methods, RecordedMccbSettings.NONE);
   }
 
   /** Both engines on an engine input; the demand engine's currents feed the protection checks. */
-  public static SiteAnalysis analyse(SiteSpec spec, DiversityMethodCatalog methods) {
+  public static SiteAnalysis analyse(
+      SiteSpec spec, DiversityMethodCatalog methods, RecordedMccbSettings recordedMccbSettings) {
     SiteDemand demand = DemandEngine.evaluate(spec, methods);
     SiteFindings findings =
-        ProtectionEngine.check(spec, circuitLoadings(demand), boardLoadings(demand), ProtectionSettings.DEFAULTS);
+        ProtectionEngine.check(
+            spec, circuitLoadings(demand), boardLoadings(demand), recordedMccbSettings, ProtectionSettings.DEFAULTS);
     return new SiteAnalysis(spec, demand, findings);
   }
 

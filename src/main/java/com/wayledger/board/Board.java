@@ -50,7 +50,10 @@ public class Board {
         name = "breakingCapacityKiloAmps",
         column = @Column(name = "incomer_breaking_capacity_kiloamps")),
     @AttributeOverride(name = "residualMilliAmps", column = @Column(name = "incomer_residual_milliamps")),
-    @AttributeOverride(name = "rcdType", column = @Column(name = "incomer_rcd_type"))
+    @AttributeOverride(name = "rcdType", column = @Column(name = "incomer_rcd_type")),
+    @AttributeOverride(name = "overloadSettingAmps", column = @Column(name = "incomer_overload_setting_amps")),
+    @AttributeOverride(
+        name = "instantaneousSettingAmps", column = @Column(name = "incomer_instantaneous_setting_amps"))
   })
   private DeviceDetails incomer;
 

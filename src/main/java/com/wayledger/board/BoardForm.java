@@ -45,7 +45,39 @@ public record BoardForm(
     @Size(max = 60) String diversityMethod,
     @Positive @DecimalMax("100") Double measuredExternalLoopImpedanceOhms,
     @Positive @DecimalMax("200") Double measuredFaultCurrentKiloAmps,
-    Long version) {
+    Long version,
+    @Positive @DecimalMax("63000") Double incomerOverloadSettingAmps,
+    @Positive @DecimalMax("63000") Double incomerInstantaneousSettingAmps) {
+
+  /** A board whose incomer has no moulded-case breaker settings: the argument list from before Ir and Ii. */
+  public BoardForm(
+      String reference, String location, Integer phases, Integer wayCount, Double busbarRatingAmps,
+      DeviceKind incomerKind, TripCurve incomerCurve, Double incomerRatingAmps, Integer incomerPoles,
+      Double incomerBreakingCapacityKiloAmps, Double incomerResidualMilliAmps, RcdType incomerRcdType,
+      Long parentBoardId, Long fedFromCircuitId, Double submainLineCsa, Double submainCpcCsa,
+      ConductorMaterial submainMaterial, Insulation submainInsulation, Double submainLengthMetres,
+      InstallationMethod submainInstallationMethod, Double submainAmbientCelsius, Integer submainGroupedCircuits,
+      Integer submainThermalInsulationMm, Double unbalanceLimitPercent, Double coincidenceFactor,
+      String diversityMethod, Double measuredExternalLoopImpedanceOhms, Double measuredFaultCurrentKiloAmps,
+      Long version) {
+    this(reference, location, phases, wayCount, busbarRatingAmps, incomerKind, incomerCurve, incomerRatingAmps,
+        incomerPoles, incomerBreakingCapacityKiloAmps, incomerResidualMilliAmps, incomerRcdType, parentBoardId,
+        fedFromCircuitId, submainLineCsa, submainCpcCsa, submainMaterial, submainInsulation, submainLengthMetres,
+        submainInstallationMethod, submainAmbientCelsius, submainGroupedCircuits, submainThermalInsulationMm,
+        unbalanceLimitPercent, coincidenceFactor, diversityMethod, measuredExternalLoopImpedanceOhms,
+        measuredFaultCurrentKiloAmps, version, null, null);
+  }
+
+  /** The same board with its incomer's moulded-case breaker settings Ir and Ii (A; null when not recorded). */
+  public BoardForm withIncomerMccbSettings(Double overloadSettingAmps, Double instantaneousSettingAmps) {
+    return new BoardForm(reference, location, phases, wayCount, busbarRatingAmps, incomerKind, incomerCurve,
+        incomerRatingAmps, incomerPoles, incomerBreakingCapacityKiloAmps, incomerResidualMilliAmps, incomerRcdType,
+        parentBoardId, fedFromCircuitId, submainLineCsa, submainCpcCsa, submainMaterial, submainInsulation,
+        submainLengthMetres, submainInstallationMethod, submainAmbientCelsius, submainGroupedCircuits,
+        submainThermalInsulationMm, unbalanceLimitPercent, coincidenceFactor, diversityMethod,
+        measuredExternalLoopImpedanceOhms, measuredFaultCurrentKiloAmps, version, overloadSettingAmps,
+        instantaneousSettingAmps);
+  }
 
   /** Default unbalance limit for a new board, %. Common practice: 10 % keeps neutral current modest. */
   public static final double DEFAULT_UNBALANCE_LIMIT_PERCENT = 10.0;
@@ -91,7 +123,9 @@ public record BoardForm(
         board.getDiversityMethod(),
         board.getMeasuredExternalLoopImpedanceOhms(),
         board.getMeasuredFaultCurrentKiloAmps(),
-        board.getVersion());
+        board.getVersion(),
+        hasIncomer ? incomer.getOverloadSettingAmps() : null,
+        hasIncomer ? incomer.getInstantaneousSettingAmps() : null);
   }
 
   DeviceDetails incomerDevice() {
@@ -100,7 +134,7 @@ public record BoardForm(
     }
     return new DeviceDetails(
         incomerKind, incomerCurve, incomerRatingAmps, incomerPoles, incomerBreakingCapacityKiloAmps,
-        incomerResidualMilliAmps, incomerRcdType);
+        incomerResidualMilliAmps, incomerRcdType, incomerOverloadSettingAmps, incomerInstantaneousSettingAmps);
   }
 
   CableDetails submainCable() {

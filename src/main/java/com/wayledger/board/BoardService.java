@@ -147,6 +147,9 @@ public class BoardService {
         && methods.catalog().find(form.diversityMethod()).isEmpty()) {
       throw new RuleViolation("diversityMethod", "method.unknown");
     }
+    MccbSettingRules.check(
+        form.incomerKind(), form.incomerRatingAmps(), form.incomerOverloadSettingAmps(),
+        form.incomerInstantaneousSettingAmps(), "incomerOverloadSettingAmps", "incomerInstantaneousSettingAmps");
     String reference = form.reference().strip();
     boolean taken =
         existing == null

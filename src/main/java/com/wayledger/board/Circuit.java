@@ -59,7 +59,10 @@ public class Circuit {
         name = "breakingCapacityKiloAmps",
         column = @Column(name = "device_breaking_capacity_kiloamps")),
     @AttributeOverride(name = "residualMilliAmps", column = @Column(name = "device_residual_milliamps")),
-    @AttributeOverride(name = "rcdType", column = @Column(name = "device_rcd_type"))
+    @AttributeOverride(name = "rcdType", column = @Column(name = "device_rcd_type")),
+    @AttributeOverride(name = "overloadSettingAmps", column = @Column(name = "device_overload_setting_amps")),
+    @AttributeOverride(
+        name = "instantaneousSettingAmps", column = @Column(name = "device_instantaneous_setting_amps"))
   })
   private DeviceDetails device;
 

@@ -53,7 +53,27 @@ public record CircuitForm(
     RatingUnit loadRatingUnit,
     @DecimalMin(value = "0", inclusive = false) @DecimalMax("1") Double loadPowerFactor,
     Long version,
-    Boolean ringFinal) {
+    Boolean ringFinal,
+    @Positive @DecimalMax("63000") Double deviceOverloadSettingAmps,
+    @Positive @DecimalMax("63000") Double deviceInstantaneousSettingAmps) {
+
+  /** A circuit with no moulded-case breaker settings: the argument list from before Ir and Ii were recorded. */
+  public CircuitForm(
+      Integer wayNumber, PhasePosition position, String description, WayStatus status, Boolean lockedForBalancing,
+      DeviceKind deviceKind, TripCurve deviceCurve, Double deviceRatingAmps, Integer devicePoles,
+      Double deviceBreakingCapacityKiloAmps, Double deviceResidualMilliAmps, RcdType deviceRcdType,
+      Double cableLineCsa, Double cableCpcCsa, ConductorMaterial cableMaterial, Insulation cableInsulation,
+      Double cableLengthMetres, InstallationMethod cableInstallationMethod, Double cableAmbientCelsius,
+      Integer cableGroupedCircuits, Integer cableThermalInsulationMm, Double measuredLoopImpedanceOhms,
+      String loadDescription, LoadCategory loadCategory, Integer loadQuantity, Double loadRatingValue,
+      RatingUnit loadRatingUnit, Double loadPowerFactor, Long version, Boolean ringFinal) {
+    this(wayNumber, position, description, status, lockedForBalancing, deviceKind, deviceCurve, deviceRatingAmps,
+        devicePoles, deviceBreakingCapacityKiloAmps, deviceResidualMilliAmps, deviceRcdType, cableLineCsa,
+        cableCpcCsa, cableMaterial, cableInsulation, cableLengthMetres, cableInstallationMethod,
+        cableAmbientCelsius, cableGroupedCircuits, cableThermalInsulationMm, measuredLoopImpedanceOhms,
+        loadDescription, loadCategory, loadQuantity, loadRatingValue, loadRatingUnit, loadPowerFactor, version,
+        ringFinal, null, null);
+  }
 
   /** A radial circuit (not a ring final circuit): the argument list from before rings were recorded. */
   public CircuitForm(
@@ -81,7 +101,18 @@ public record CircuitForm(
         cableCpcCsa, cableMaterial, cableInsulation, cableLengthMetres, cableInstallationMethod,
         cableAmbientCelsius, cableGroupedCircuits, cableThermalInsulationMm, measuredLoopImpedanceOhms,
         loadDescription, loadCategory, loadQuantity, loadRatingValue, loadRatingUnit, loadPowerFactor, version,
-        ring);
+        ring, deviceOverloadSettingAmps, deviceInstantaneousSettingAmps);
+  }
+
+  /** The same row with moulded-case breaker settings Ir and Ii (A; null when not recorded). */
+  public CircuitForm withMccbSettings(Double overloadSettingAmps, Double instantaneousSettingAmps) {
+    return new CircuitForm(
+        wayNumber, position, description, status, lockedForBalancing, deviceKind, deviceCurve, deviceRatingAmps,
+        devicePoles, deviceBreakingCapacityKiloAmps, deviceResidualMilliAmps, deviceRcdType, cableLineCsa,
+        cableCpcCsa, cableMaterial, cableInsulation, cableLengthMetres, cableInstallationMethod,
+        cableAmbientCelsius, cableGroupedCircuits, cableThermalInsulationMm, measuredLoopImpedanceOhms,
+        loadDescription, loadCategory, loadQuantity, loadRatingValue, loadRatingUnit, loadPowerFactor, version,
+        ringFinal, overloadSettingAmps, instantaneousSettingAmps);
   }
 
   /** A new in-use circuit at a position, with a type B MCB, copper 70 °C cable and a blank first load. */
@@ -127,7 +158,9 @@ public record CircuitForm(
         null,
         null,
         circuit.getVersion(),
-        circuit.isRingFinal());
+        circuit.isRingFinal(),
+        hasDevice ? device.getOverloadSettingAmps() : null,
+        hasDevice ? device.getInstantaneousSettingAmps() : null);
   }
 
   DeviceDetails deviceDetails() {
@@ -136,7 +169,7 @@ public record CircuitForm(
     }
     return new DeviceDetails(
         deviceKind, deviceCurve, deviceRatingAmps, devicePoles, deviceBreakingCapacityKiloAmps,
-        deviceResidualMilliAmps, deviceRcdType);
+        deviceResidualMilliAmps, deviceRcdType, deviceOverloadSettingAmps, deviceInstantaneousSettingAmps);
   }
 
   CableDetails cableDetails() {

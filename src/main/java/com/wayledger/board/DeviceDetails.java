@@ -4,6 +4,7 @@ import com.wayledger.engine.DeviceKind;
 import com.wayledger.engine.DeviceSpec;
 import com.wayledger.engine.RcdType;
 import com.wayledger.engine.TripCurve;
+import com.wayledger.engine.protection.device.MccbSettings;
 import jakarta.persistence.Column;
 import jakarta.persistence.Embeddable;
 import jakarta.persistence.EnumType;
@@ -31,6 +32,12 @@ public class DeviceDetails {
   @Enumerated(EnumType.STRING)
   private RcdType rcdType;
 
+  /** Ir of a moulded-case breaker, A; null for any other kind or when not recorded. */
+  private Double overloadSettingAmps;
+
+  /** Ii of a moulded-case breaker, A; null for any other kind or when not recorded. */
+  private Double instantaneousSettingAmps;
+
   protected DeviceDetails() {}
 
   public DeviceDetails(
@@ -41,7 +48,23 @@ public class DeviceDetails {
       Double breakingCapacityKiloAmps,
       Double residualMilliAmps,
       RcdType rcdType) {
+    this(kind, curve, ratingAmps, poles, breakingCapacityKiloAmps, residualMilliAmps, rcdType, null, null);
+  }
+
+  /** A device with moulded-case breaker settings Ir and Ii (kept only when the kind is MCCB). */
+  public DeviceDetails(
+      DeviceKind kind,
+      TripCurve curve,
+      Double ratingAmps,
+      Integer poles,
+      Double breakingCapacityKiloAmps,
+      Double residualMilliAmps,
+      RcdType rcdType,
+      Double overloadSettingAmps,
+      Double instantaneousSettingAmps) {
     this.kind = kind;
+    this.overloadSettingAmps = kind == DeviceKind.MCCB ? overloadSettingAmps : null;
+    this.instantaneousSettingAmps = kind == DeviceKind.MCCB ? instantaneousSettingAmps : null;
     this.curve = kind != null && kind.hasCurve() ? curve : null;
     this.ratingAmps = ratingAmps;
     this.poles = poles;
@@ -67,7 +90,19 @@ public class DeviceDetails {
         residualMilliAmps, rcdType);
   }
 
-  /** Short text such as "MCB C32 6 kA" or "RCBO B16 30 mA". */
+  /**
+   * The recorded Ir/Ii for the engine, or null (the engine then assumes Ir = In, Ii = 10·In and says so) when this
+   * is no MCCB or the two settings are not both recorded. The services refuse one without the other, so a half
+   * record can only come from old data; it is not completed with an assumption that would then read as recorded.
+   */
+  public MccbSettings mccbSettings() {
+    if (kind != DeviceKind.MCCB || overloadSettingAmps == null || instantaneousSettingAmps == null) {
+      return null;
+    }
+    return new MccbSettings(overloadSettingAmps, instantaneousSettingAmps);
+  }
+
+  /** Short text such as "MCB C32 6 kA", "RCBO B16 30 mA" or "MCCB 125 A (Ir 100 A, Ii 800 A)". */
   public String label() {
     if (kind == null) {
       return "";
@@ -81,6 +116,17 @@ public class DeviceDetails {
     }
     if (residualMilliAmps != null) {
       text.append(' ').append(Numbers.plain(residualMilliAmps)).append(" mA");
+    }
+    if (overloadSettingAmps != null || instantaneousSettingAmps != null) {
+      text.append(" (");
+      if (overloadSettingAmps != null) {
+        text.append("Ir ").append(Numbers.plain(overloadSettingAmps)).append(" A");
+      }
+      if (instantaneousSettingAmps != null) {
+        text.append(overloadSettingAmps != null ? ", " : "").append("Ii ")
+            .append(Numbers.plain(instantaneousSettingAmps)).append(" A");
+      }
+      text.append(')');
     }
     return text.toString().strip();
   }
@@ -111,5 +157,13 @@ public class DeviceDetails {
 
   public RcdType getRcdType() {
     return rcdType;
+  }
+
+  public Double getOverloadSettingAmps() {
+    return overloadSettingAmps;
+  }
+
+  public Double getInstantaneousSettingAmps() {
+    return instantaneousSettingAmps;
   }
 }

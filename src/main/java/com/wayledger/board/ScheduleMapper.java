@@ -5,7 +5,10 @@ import com.wayledger.engine.CircuitSpec;
 import com.wayledger.engine.LoadSpec;
 import com.wayledger.engine.SiteSpec;
 import com.wayledger.engine.SupplySpec;
+import com.wayledger.engine.protection.RecordedMccbSettings;
+import com.wayledger.engine.protection.device.MccbSettings;
 import com.wayledger.site.Site;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.stream.Collectors;
@@ -27,6 +30,28 @@ public final class ScheduleMapper {
     List<BoardSpec> boardSpecs =
         boards.stream().map(board -> toSpec(board, childByFeedingCircuit)).toList();
     return new SiteSpec(site.getId(), site.getName(), supplyOf(site), site.getDefaultDiversityMethod(), boardSpecs);
+  }
+
+  /**
+   * The moulded-case breaker settings recorded on these boards (their circuits' devices and their incomers), keyed
+   * by circuit and board id. A device is included only when it is an MCCB with both Ir and Ii recorded (the services
+   * refuse one without the other); any other MCCB is left out, so the protection engine assumes Ir = In and
+   * Ii = 10·In for it and its findings say "assumed".
+   */
+  public static RecordedMccbSettings mccbSettingsOf(List<Board> boards) {
+    Map<Long, MccbSettings> byCircuit = new HashMap<>();
+    Map<Long, MccbSettings> byBoard = new HashMap<>();
+    for (Board board : boards) {
+      if (board.getIncomer() != null && board.getIncomer().mccbSettings() != null) {
+        byBoard.put(board.getId(), board.getIncomer().mccbSettings());
+      }
+      for (Circuit circuit : board.getCircuits()) {
+        if (circuit.getDevice() != null && circuit.getDevice().mccbSettings() != null) {
+          byCircuit.put(circuit.getId(), circuit.getDevice().mccbSettings());
+        }
+      }
+    }
+    return new RecordedMccbSettings(byCircuit, byBoard);
   }
 
   /**

@@ -304,6 +304,9 @@ public class ScheduleService {
     if (form.deviceKind() == DeviceKind.RCD && form.deviceResidualMilliAmps() == null) {
       throw new RuleViolation("deviceResidualMilliAmps", "circuit.device.residualRequired");
     }
+    MccbSettingRules.check(
+        form.deviceKind(), form.deviceRatingAmps(), form.deviceOverloadSettingAmps(),
+        form.deviceInstantaneousSettingAmps(), "deviceOverloadSettingAmps", "deviceInstantaneousSettingAmps");
     for (Phase phase : form.position().phases()) {
       Long holder =
           jdbc.sql(

@@ -61,7 +61,9 @@ public class CircuitCheckController {
     CircuitSpec spec = specOf(results, id);
     if (spec != null && spec.device() != null && spec.device().ratedCurrentAmps() != null) {
       Resolved<DeviceCharacteristic> characteristic =
-          DeviceCharacteristic.of(spec.device(), null, ProtectionSettings.DEFAULT_MCCB_INSTANTANEOUS_MULTIPLE);
+          DeviceCharacteristic.of(
+              spec.device(), circuit.getDevice() == null ? null : circuit.getDevice().mccbSettings(),
+              ProtectionSettings.DEFAULT_MCCB_INSTANTANEOUS_MULTIPLE);
       Double surgeSeconds =
           loads.stream()
               .map(LoadItem::getStartUpSurgeMillis)

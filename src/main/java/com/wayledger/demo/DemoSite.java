@@ -104,14 +104,17 @@ class DemoSite implements ApplicationRunner {
                 null));
     long siteId = site.getId();
 
+    // MCCB settings (Ir, Ii) are invented for the demo: the intake breaker turned down to 180 A, the feeders'
+    // magnetic pick-up set low (5·In) so that the long submains still disconnect in time.
     Board main = boards.create(siteId, board("MDB", "Ground floor intake cupboard", 3, 8, 250.0,
-        DeviceKind.MCCB, null, 200.0, 25.0, null, null, 70.0, 35.0, 6.0, InstallationMethod.C));
+        DeviceKind.MCCB, null, 200.0, 25.0, null, null, 70.0, 35.0, 6.0, InstallationMethod.C)
+        .withIncomerMccbSettings(180.0, 1600.0));
     Circuit feedBakery = add(main, way(1, PhasePosition.THREE_POLE, "Submain to bakery board KB1",
-        DeviceKind.MCCB, null, 125.0, 25.0, 50.0, 25.0, 18.0, InstallationMethod.C));
+        DeviceKind.MCCB, null, 125.0, 25.0, 50.0, 25.0, 18.0, InstallationMethod.C).withMccbSettings(125.0, 625.0));
     Circuit feedFlat1 = add(main, way(2, PhasePosition.L1, "Submain to flat 1 board",
-        DeviceKind.MCCB, null, 100.0, 16.0, 25.0, 16.0, 22.0, InstallationMethod.C));
+        DeviceKind.MCCB, null, 100.0, 16.0, 25.0, 16.0, 22.0, InstallationMethod.C).withMccbSettings(100.0, 500.0));
     Circuit feedFlat2 = add(main, way(2, PhasePosition.L2, "Submain to flat 2 board",
-        DeviceKind.MCCB, null, 100.0, 16.0, 25.0, 16.0, 26.0, InstallationMethod.C));
+        DeviceKind.MCCB, null, 100.0, 16.0, 25.0, 16.0, 26.0, InstallationMethod.C).withMccbSettings(100.0, 500.0));
     Circuit feedLandlord = add(main, way(2, PhasePosition.L3, "Submain to landlord board",
         DeviceKind.MCB, TripCurve.C, 63.0, 15.0, 16.0, 16.0, 14.0, InstallationMethod.C));
     add(main, way(3, PhasePosition.L1, "Intake cupboard lighting", DeviceKind.MCB, TripCurve.B, 6.0,
@@ -121,14 +124,17 @@ class DemoSite implements ApplicationRunner {
     add(main, spare(3, PhasePosition.L3, "Spare", DeviceKind.MCB, TripCurve.B, 16.0));
 
     Board bakery = boards.create(siteId, subBoard("KB1", "Bakery, behind the proving room", 3, 12,
-        160.0, DeviceKind.MCCB, null, 125.0, main, feedBakery, 35.0, 16.0, 18.0, 0.9));
+        160.0, DeviceKind.MCCB, null, 125.0, main, feedBakery, 35.0, 16.0, 18.0, 0.9)
+        .withIncomerMccbSettings(125.0, 1000.0));
     bakeryCircuits(bakery);
 
     Board flat1 = boards.create(siteId, withMethod(subBoard("FLAT-1", "Flat 1 hallway cupboard", 1, 10, 100.0,
-        DeviceKind.MCCB, null, 100.0, main, feedFlat1, 25.0, 16.0, 22.0, 0.8), "uk-household"));
+        DeviceKind.MCCB, null, 100.0, main, feedFlat1, 25.0, 16.0, 22.0, 0.8), "uk-household")
+        .withIncomerMccbSettings(100.0, 800.0));
     flatCircuits(flat1, 1);
     Board flat2 = boards.create(siteId, withMethod(subBoard("FLAT-2", "Flat 2 hallway cupboard", 1, 10, 100.0,
-        DeviceKind.MCCB, null, 100.0, main, feedFlat2, 25.0, 16.0, 26.0, 0.8), "uk-household"));
+        DeviceKind.MCCB, null, 100.0, main, feedFlat2, 25.0, 16.0, 26.0, 0.8), "uk-household")
+        .withIncomerMccbSettings(100.0, 800.0));
     flatCircuits(flat2, 2);
 
     Board landlord = boards.create(siteId, subBoard("LL", "Stair well, ground floor", 1, 8, 80.0,

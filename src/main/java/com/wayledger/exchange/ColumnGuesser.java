@@ -115,7 +115,7 @@ public final class ColumnGuesser {
       case CATEGORY -> all(sample, v -> Codes.parseEnum(LoadCategory.class, v) != null) ? 35 : 0;
       case UNIT -> all(sample, v -> Codes.parseEnum(RatingUnit.class, v) != null) ? 35 : 0;
       case WAY -> all(sample, v -> v.strip().matches("\\d+")) ? 5 : -60;
-      case RATING_AMPS, BREAKING_KILOAMPS, RESIDUAL_MILLIAMPS, LINE_CSA, CPC_CSA, LENGTH_METRES, AMBIENT_CELSIUS,
+      case RATING_AMPS, BREAKING_KILOAMPS, RESIDUAL_MILLIAMPS, OVERLOAD_SETTING_AMPS, INSTANTANEOUS_SETTING_AMPS, LINE_CSA, CPC_CSA, LENGTH_METRES, AMBIENT_CELSIUS,
           GROUPED, THERMAL_INSULATION_MM, MEASURED_ZS, QUANTITY, RATING, SURGE_MULTIPLE, SURGE_MILLIS, POLES,
           LOAD_KILOWATTS, LOAD_WATTS, LOAD_AMPS -> all(sample, v -> NUMBER.matcher(v.strip()).matches()) ? 0 : -60;
       case POWER_FACTOR -> all(sample, v -> v.strip().matches("0?[.,]\\d+|1([.,]0+)?")) ? 5 : -60;

@@ -59,6 +59,8 @@ public final class CsvWriter {
     cells[BREAKING_KILOAMPS.ordinal()] = num(c.deviceBreakingCapacityKiloAmps());
     cells[RESIDUAL_MILLIAMPS.ordinal()] = num(c.deviceResidualMilliAmps());
     cells[RCD_TYPE.ordinal()] = name(c.deviceRcdType());
+    cells[OVERLOAD_SETTING_AMPS.ordinal()] = num(c.deviceOverloadSettingAmps());
+    cells[INSTANTANEOUS_SETTING_AMPS.ordinal()] = num(c.deviceInstantaneousSettingAmps());
     cells[LINE_CSA.ordinal()] = num(c.cableLineCsa());
     cells[CPC_CSA.ordinal()] = num(c.cableCpcCsa());
     cells[CONDUCTOR.ordinal()] = name(c.cableMaterial());

@@ -53,7 +53,7 @@ public class ExportReader {
   private ExportData read(Site site, Long onlyBoardId) {
     List<BoardTreeNode> tree = boards.tree(site.getId());
     List<Board> all = tree.stream().map(BoardTreeNode::board).toList();
-    SiteAnalysis analysis = analyses.analyse(ScheduleMapper.toSpec(site, all));
+    SiteAnalysis analysis = analyses.analyse(ScheduleMapper.toSpec(site, all), ScheduleMapper.mccbSettingsOf(all));
     List<BoardEntry> entries =
         tree.stream()
             .filter(node -> onlyBoardId == null || node.board().getId().equals(onlyBoardId))

@@ -20,6 +20,8 @@ public enum ImportField {
   BREAKING_KILOAMPS(ScheduleColumn.BREAKING_KILOAMPS, List.of("icn ka", "icn", "icu", "ka", "breaking capacity", "breaking")),
   RESIDUAL_MILLIAMPS(ScheduleColumn.RESIDUAL_MILLIAMPS, List.of("iδn ma", "idn", "ma", "residual", "rcd ma", "sensitivity", "trip ma")),
   RCD_TYPE(ScheduleColumn.RCD_TYPE, List.of("rcd type", "rcd class")),
+  OVERLOAD_SETTING_AMPS(ScheduleColumn.OVERLOAD_SETTING_AMPS, List.of("ir a", "ir", "ir setting", "overload setting", "long time setting", "thermal setting", "mccb ir")),
+  INSTANTANEOUS_SETTING_AMPS(ScheduleColumn.INSTANTANEOUS_SETTING_AMPS, List.of("ii a", "ii", "ii setting", "instantaneous setting", "magnetic setting", "instantaneous", "mccb ii")),
   LINE_CSA(ScheduleColumn.LINE_CSA, List.of("line mm2", "mm2", "mm", "csa", "cable size", "conductor size", "live mm2", "cable mm2", "size mm2", "cable")),
   CPC_CSA(ScheduleColumn.CPC_CSA, List.of("cpc mm2", "cpc", "earth mm2", "earth", "protective conductor")),
   CONDUCTOR(ScheduleColumn.CONDUCTOR, List.of("conductor", "material", "conductor material", "cu al")),

@@ -59,6 +59,8 @@ public final class RowReader {
       Map.entry("status", STATE), Map.entry("deviceKind", DEVICE), Map.entry("deviceCurve", CURVE),
       Map.entry("deviceRatingAmps", RATING_AMPS), Map.entry("devicePoles", POLES),
       Map.entry("deviceBreakingCapacityKiloAmps", BREAKING_KILOAMPS), Map.entry("deviceResidualMilliAmps", RESIDUAL_MILLIAMPS),
+      Map.entry("deviceOverloadSettingAmps", OVERLOAD_SETTING_AMPS),
+      Map.entry("deviceInstantaneousSettingAmps", INSTANTANEOUS_SETTING_AMPS),
       Map.entry("cableLineCsa", LINE_CSA), Map.entry("cableCpcCsa", CPC_CSA), Map.entry("cableLengthMetres", LENGTH_METRES),
       Map.entry("cableAmbientCelsius", AMBIENT_CELSIUS), Map.entry("cableGroupedCircuits", GROUPED),
       Map.entry("cableThermalInsulationMm", THERMAL_INSULATION_MM), Map.entry("measuredLoopImpedanceOhms", MEASURED_ZS));
@@ -257,6 +259,17 @@ public final class RowReader {
     if (way != null && way > board.wayCount()) {
       problems.add(new ImportPlan.Problem(WAY, "import.cell.beyondBoard", new Object[] {board.wayCount()}));
     }
+    Double overload = cells.number(OVERLOAD_SETTING_AMPS, problems);
+    Double instantaneous = cells.number(INSTANTANEOUS_SETTING_AMPS, problems);
+    if (kind == DeviceKind.MCCB) {
+      if (overload != null && rating != null && overload > rating) {
+        problems.add(new ImportPlan.Problem(OVERLOAD_SETTING_AMPS, "import.cell.overloadAboveRating", new Object[] {rating}));
+      } else if ((overload == null) != (instantaneous == null)) {
+        problems.add(new ImportPlan.Problem(
+            overload == null ? OVERLOAD_SETTING_AMPS : INSTANTANEOUS_SETTING_AMPS, "import.cell.mccbBothSettings",
+            new Object[0]));
+      }
+    }
     CircuitForm form = new CircuitForm(
         way, position, description, status, locked, kind, curve, rating, cells.whole(POLES, problems),
         cells.number(BREAKING_KILOAMPS, problems), residual, cells.choice(RCD_TYPE, RcdType.class, problems),
@@ -264,7 +277,8 @@ public final class RowReader {
         cells.choice(CONDUCTOR, ConductorMaterial.class, problems), cells.choice(INSULATION, Insulation.class, problems),
         cells.number(LENGTH_METRES, problems), cells.choice(INSTALLATION, InstallationMethod.class, problems),
         cells.number(AMBIENT_CELSIUS, problems), cells.whole(GROUPED, problems), cells.whole(THERMAL_INSULATION_MM, problems),
-        cells.number(MEASURED_ZS, problems), null, null, null, null, null, null, null, ring);
+        cells.number(MEASURED_ZS, problems), null, null, null, null, null, null, null, ring,
+        overload, instantaneous);
     for (ConstraintViolation<CircuitForm> violation : validator.validate(form)) {
       ImportField field = CIRCUIT_PROPERTIES.getOrDefault(violation.getPropertyPath().toString(), CIRCUIT);
       if (!cells.hasError(problems, cells.source(field))) {

@@ -17,6 +17,8 @@ public enum ScheduleColumn {
   BREAKING_KILOAMPS("Icn kA", true),
   RESIDUAL_MILLIAMPS("IΔn mA", true),
   RCD_TYPE("RCD type", true),
+  OVERLOAD_SETTING_AMPS("Ir A", true),
+  INSTANTANEOUS_SETTING_AMPS("Ii A", true),
   LINE_CSA("Line mm²", true),
   CPC_CSA("CPC mm²", true),
   CONDUCTOR("Conductor", true),

@@ -281,6 +281,8 @@ public final class WorkbookWriter {
     number(row, BREAKING_KILOAMPS.ordinal(), c.deviceBreakingCapacityKiloAmps(), s.number, w);
     number(row, RESIDUAL_MILLIAMPS.ordinal(), c.deviceResidualMilliAmps(), s.number, w);
     text(row, RCD_TYPE.ordinal(), name(c.deviceRcdType()), s.text, w);
+    number(row, OVERLOAD_SETTING_AMPS.ordinal(), c.deviceOverloadSettingAmps(), s.number, w);
+    number(row, INSTANTANEOUS_SETTING_AMPS.ordinal(), c.deviceInstantaneousSettingAmps(), s.number, w);
     number(row, LINE_CSA.ordinal(), c.cableLineCsa(), s.number, w);
     number(row, CPC_CSA.ordinal(), c.cableCpcCsa(), s.number, w);
     text(row, CONDUCTOR.ordinal(), name(c.cableMaterial()), s.text, w);

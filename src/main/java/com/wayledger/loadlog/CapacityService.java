@@ -39,7 +39,7 @@ public class CapacityService {
   public CapacityAnswer ask(long siteId, Long boardId, CapacityForm form) {
     var spec = analysis.ofSite(siteId).spec();
     return CapacityAdvisor.ask(spec, boardId == null ? Set.of() : Set.of(boardId), form.toNewLoad(), analysis.methods(),
-        ProtectionSettings.DEFAULTS);
+        analysis.mccbSettingsOfSite(siteId), ProtectionSettings.DEFAULTS);
   }
 
   /**

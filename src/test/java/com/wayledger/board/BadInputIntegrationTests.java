@@ -138,7 +138,16 @@ class BadInputIntegrationTests {
             "position", "A single-phase board has only line L1."),
         page("unknown line", "three", "position", "L4", "position", "Not a valid value here."),
         page("first load on an empty position", "three", "status", "EMPTY", "deviceKind", "",
-            "loadDescription", "Loads can only be added to a circuit in use."));
+            "loadDescription", "Loads can only be added to a circuit in use."),
+        page("MCCB Ir above In", "three", "deviceKind", "MCCB", "deviceRatingAmps", "100",
+            "deviceOverloadSettingAmps", "125", "deviceInstantaneousSettingAmps", "1000",
+            "deviceOverloadSettingAmps", "The overload setting Ir cannot be above the rating In (100 A)."),
+        page("MCCB Ii without Ir", "three", "deviceKind", "MCCB", "deviceRatingAmps", "100",
+            "deviceInstantaneousSettingAmps", "500", "deviceOverloadSettingAmps",
+            "Record both MCCB settings, Ir and Ii, or neither (the checks then assume Ir = In and Ii = 10·In)."),
+        page("MCCB Ii above 63 kA", "three", "deviceKind", "MCCB", "deviceRatingAmps", "100",
+            "deviceOverloadSettingAmps", "100", "deviceInstantaneousSettingAmps", "70000",
+            "deviceInstantaneousSettingAmps", "Must be at most 63000."));
   }
 
   private static Arguments page(String name, String board, String... replacedThenFieldAndMessage) {
@@ -286,7 +295,11 @@ class BadInputIntegrationTests {
         api("unknown line", "three", 400, "position", "position", "L4"),
         api("way beyond the board", "three", 422, "wayNumber", "wayNumber", 7),
         api("occupied position", "three", 422, "wayNumber", "wayNumber", 1, "position", "L1"),
-        api("three-pole on a single-phase board", "single", 422, "position", "position", "THREE_POLE"));
+        api("three-pole on a single-phase board", "single", 422, "position", "position", "THREE_POLE"),
+        api("MCCB Ir above In", "three", 422, "deviceOverloadSettingAmps", "deviceKind", "MCCB",
+            "deviceRatingAmps", 100, "deviceOverloadSettingAmps", 125, "deviceInstantaneousSettingAmps", 1000),
+        api("MCCB Ir of zero", "three", 400, "deviceOverloadSettingAmps", "deviceKind", "MCCB",
+            "deviceRatingAmps", 100, "deviceOverloadSettingAmps", 0, "deviceInstantaneousSettingAmps", 1000));
   }
 
   private static Arguments api(String name, String board, int status, String field, Object... replaced) {

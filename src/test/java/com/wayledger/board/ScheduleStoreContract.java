@@ -118,6 +118,35 @@ abstract class ScheduleStoreContract {
   }
 
   @Test
+  void mccbSettingsAreStoredReadBackAndRefusedAtZeroByTheDatabase() {
+    CircuitForm mccb =
+        new CircuitForm(1, PhasePosition.THREE_POLE, "Feeder", WayStatus.IN_USE, false, DeviceKind.MCCB, null,
+            125.0, 3, 25.0, null, null, 35.0, 16.0, null, null, 20.0, null, null, null, null, null, null, null, null,
+            null, null, null, null, false, 100.0, 625.0);
+    Circuit saved = schedule.addCircuit(board.getId(), mccb);
+    assertThat(jdbc.sql("SELECT device_overload_setting_amps FROM circuit WHERE id = ?").param(saved.getId())
+            .query(Double.class).single()).isEqualTo(100.0);
+    assertThat(jdbc.sql("SELECT device_instantaneous_setting_amps FROM circuit WHERE id = ?").param(saved.getId())
+            .query(Double.class).single()).isEqualTo(625.0);
+    assertThat(schedule.circuit(saved.getId()).getDevice().label()).isEqualTo("MCCB 125 A (Ir 100 A, Ii 625 A)");
+
+    Board fed = boards.update(board.getId(), BoardForm.of(boards.get(board.getId())).withIncomerMccbSettings(63.0, 315.0));
+    assertThat(jdbc.sql("SELECT incomer_instantaneous_setting_amps FROM board WHERE id = ?").param(fed.getId())
+            .query(Double.class).single()).isEqualTo(315.0);
+
+    assertThatThrownBy(
+            () -> jdbc.sql("UPDATE circuit SET device_overload_setting_amps = 0 WHERE id = ?").param(saved.getId())
+                .update())
+        .as("Ir 0 A")
+        .isInstanceOf(DataIntegrityViolationException.class);
+    assertThatThrownBy(
+            () -> jdbc.sql("UPDATE board SET incomer_instantaneous_setting_amps = -5 WHERE id = ?").param(board.getId())
+                .update())
+        .as("Ii -5 A")
+        .isInstanceOf(DataIntegrityViolationException.class);
+  }
+
+  @Test
   void databaseRefusesZeroRatingAndPowerFactorAboveOne() {
     assertThatThrownBy(
             () ->

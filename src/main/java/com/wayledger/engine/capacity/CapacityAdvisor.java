@@ -22,6 +22,7 @@ import com.wayledger.engine.protection.CircuitLoading;
 import com.wayledger.engine.protection.DeviceProposal;
 import com.wayledger.engine.protection.DeviceProposer;
 import com.wayledger.engine.protection.ProtectionEngine;
+import com.wayledger.engine.protection.RecordedMccbSettings;
 import com.wayledger.engine.protection.ProtectionSettings;
 import com.wayledger.engine.protection.SiteFindings;
 import com.wayledger.engine.protection.device.McbStandard;
@@ -57,7 +58,14 @@ public final class CapacityAdvisor {
    */
   public static CapacityAnswer ask(
       SiteSpec site, Set<Long> boardIds, NewLoad load, DiversityMethodCatalog methods, ProtectionSettings settings) {
-    Analysis before = Analysis.of(site, methods, settings);
+    return ask(site, boardIds, load, methods, RecordedMccbSettings.NONE, settings);
+  }
+
+  /** As above, with the MCCB settings recorded on the site (a new trial circuit has none, so it is assumed). */
+  public static CapacityAnswer ask(
+      SiteSpec site, Set<Long> boardIds, NewLoad load, DiversityMethodCatalog methods, RecordedMccbSettings mccb,
+      ProtectionSettings settings) {
+    Analysis before = Analysis.of(site, methods, mccb, settings);
     List<String> notes = new ArrayList<>();
     List<CandidateOutcome> outcomes = new ArrayList<>();
     for (BoardSpec board : site.boards()) {
@@ -73,7 +81,7 @@ public final class CapacityAdvisor {
         notes.add(board.reference() + ": no spare way, free position or circuit of the same kind");
       }
       for (Candidate candidate : candidates) {
-        outcomes.add(evaluate(site, board, candidate, load, before, methods, settings));
+        outcomes.add(evaluate(site, board, candidate, load, before, methods, mccb, settings));
       }
     }
     outcomes.sort(RANKING);
@@ -217,7 +225,7 @@ public final class CapacityAdvisor {
 
   private static CandidateOutcome evaluate(
       SiteSpec site, BoardSpec board, Candidate candidate, NewLoad load, Analysis before,
-      DiversityMethodCatalog methods, ProtectionSettings settings) {
+      DiversityMethodCatalog methods, RecordedMccbSettings mccb, ProtectionSettings settings) {
     long newId = trialId(site);
     long wayId = candidate.circuitId() != null ? candidate.circuitId() : newId;
     Candidate placed = candidate;
@@ -228,7 +236,7 @@ public final class CapacityAdvisor {
       placed = proposeDevice(trial, candidate, wayId, ib, load, settings);
     }
     SiteSpec trial = withLoad(site, board, placed, load, placed.device(), newId);
-    Analysis after = Analysis.of(trial, methods, settings);
+    Analysis after = Analysis.of(trial, methods, mccb, settings);
     BoardDemand boardBefore = before.demand().board(board.id());
     BoardDemand boardAfter = after.demand().board(board.id());
     double ib = designCurrent(after.demand(), board.id(), wayId);
@@ -383,7 +391,8 @@ public final class CapacityAdvisor {
   /** Demand and protection results of one site, as the stored-site analysis computes them. */
   record Analysis(SiteDemand demand, SiteFindings findings) {
 
-    static Analysis of(SiteSpec site, DiversityMethodCatalog methods, ProtectionSettings settings) {
+    static Analysis of(
+        SiteSpec site, DiversityMethodCatalog methods, RecordedMccbSettings mccb, ProtectionSettings settings) {
       SiteDemand demand = DemandEngine.evaluate(site, methods);
       Map<Long, CircuitLoading> circuits = new HashMap<>();
       Map<Long, BoardLoading> boards = new HashMap<>();
@@ -396,7 +405,7 @@ public final class CapacityAdvisor {
         board.phases().forEach(p -> currents.put(p.phase(), p.currentAmps()));
         boards.put(board.boardId(), new BoardLoading(board.boardId(), currents, board.unbalancePercent()));
       }
-      return new Analysis(demand, ProtectionEngine.check(site, circuits, boards, settings));
+      return new Analysis(demand, ProtectionEngine.check(site, circuits, boards, mccb, settings));
     }
   }
 }

@@ -116,13 +116,17 @@ public record DeviceCharacteristic(
     return amps >= lowestInstantaneousAmps;
   }
 
-  /** A short label such as "C20" or "MCCB 160 A (Ir 125 A)". */
+  /**
+   * A short label such as "C20", "MCCB 160 A (Ir 125 A, Ii 800 A, recorded)" or "MCCB 160 A (Ir 160 A, Ii 1600 A,
+   * assumed)": a moulded-case breaker's label says whether its settings were recorded or assumed.
+   */
   public String label() {
     String amps = trim(ratedCurrentAmps);
     if (curve != null) {
       return curve + amps;
     }
-    return "MCCB " + amps + " A (Ir " + trim(overloadSettingAmps) + " A, Ii " + trim(highestInstantaneousAmps / 1.2) + " A)";
+    return "MCCB " + amps + " A (Ir " + trim(overloadSettingAmps) + " A, Ii " + trim(Math.round(10 * highestInstantaneousAmps / (1.0 + MccbStandard.INSTANTANEOUS_TOLERANCE)) / 10.0)
+        + " A, " + (settingsAssumed ? "assumed" : "recorded") + ")";
   }
 
   private static String trim(double v) {
