@@ -1,11 +1,5 @@
 package com.wayledger.board;
 
-import com.wayledger.engine.ConductorMaterial;
-import com.wayledger.engine.DeviceKind;
-import com.wayledger.engine.InstallationMethod;
-import com.wayledger.engine.Insulation;
-import com.wayledger.engine.RcdType;
-import com.wayledger.engine.TripCurve;
 import com.wayledger.site.Site;
 import com.wayledger.site.SiteService;
 import com.wayledger.system.FormRecovery;
@@ -52,12 +46,7 @@ public class BoardController {
 
   @ModelAttribute
   void choices(Model model) {
-    model.addAttribute("deviceKinds", DeviceKind.values());
-    model.addAttribute("tripCurves", TripCurve.values());
-    model.addAttribute("rcdTypes", RcdType.values());
-    model.addAttribute("materials", ConductorMaterial.values());
-    model.addAttribute("insulations", Insulation.values());
-    model.addAttribute("installationMethods", InstallationMethod.values());
+    FormChoices.addDeviceAndCable(model);
     model.addAttribute("methods", methods.entries());
   }
 

@@ -1,15 +1,6 @@
 package com.wayledger.board;
 
-import com.wayledger.engine.ConductorMaterial;
-import com.wayledger.engine.DeviceKind;
-import com.wayledger.engine.InstallationMethod;
-import com.wayledger.engine.Insulation;
-import com.wayledger.engine.LoadCategory;
 import com.wayledger.engine.PhasePosition;
-import com.wayledger.engine.RatingUnit;
-import com.wayledger.engine.RcdType;
-import com.wayledger.engine.TripCurve;
-import com.wayledger.engine.WayStatus;
 import com.wayledger.system.FormRecovery;
 import com.wayledger.system.FormStatus;
 import com.wayledger.system.RecordDiff;
@@ -53,16 +44,7 @@ public class ScheduleController {
 
   @ModelAttribute
   void choices(Model model) {
-    model.addAttribute("positions", PhasePosition.values());
-    model.addAttribute("statuses", WayStatus.values());
-    model.addAttribute("deviceKinds", DeviceKind.values());
-    model.addAttribute("tripCurves", TripCurve.values());
-    model.addAttribute("rcdTypes", RcdType.values());
-    model.addAttribute("materials", ConductorMaterial.values());
-    model.addAttribute("insulations", Insulation.values());
-    model.addAttribute("installationMethods", InstallationMethod.values());
-    model.addAttribute("categories", LoadCategory.values());
-    model.addAttribute("ratingUnits", RatingUnit.values());
+    FormChoices.addCircuit(model);
   }
 
   @GetMapping("/boards/{boardId}/schedule")
