@@ -64,7 +64,9 @@ public class AccountService implements UserDetailsService {
   @Transactional
   public void changeRole(long userId, Role role) {
     AppUser user = users.findById(userId).orElseThrow(() -> new NotFoundException("User", userId));
-    if (user.getRole() == Role.ADMIN && role != Role.ADMIN && users.countByRoleAndEnabledTrue(Role.ADMIN) <= 1) {
+    if (user.getRole() == Role.ADMIN
+        && role != Role.ADMIN
+        && users.countByRoleAndEnabledTrue(Role.ADMIN) <= 1) {
       throw new RuleViolation("role", "user.role.lastAdmin");
     }
     user.changeRole(role);

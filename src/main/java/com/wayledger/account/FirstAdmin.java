@@ -11,8 +11,8 @@ import org.springframework.dao.DataIntegrityViolationException;
 import org.springframework.stereotype.Component;
 
 /**
- * Outside the demo there is no default password: when no user exists, the first admin is created from
- * WAYLEDGER_ADMIN_USERNAME and WAYLEDGER_ADMIN_PASSWORD, or the log says how to create one.
+ * Outside the demo there is no default password: when no user exists, the first admin is created
+ * from WAYLEDGER_ADMIN_USERNAME and WAYLEDGER_ADMIN_PASSWORD, or the log says how to create one.
  */
 @Component
 @Order(10)
@@ -45,14 +45,16 @@ class FirstAdmin implements ApplicationRunner {
       return;
     }
     if (password.length() < 10) {
-      LOG.error("WAYLEDGER_ADMIN_PASSWORD is shorter than 10 characters; no administrator was created.");
+      LOG.error(
+          "WAYLEDGER_ADMIN_PASSWORD is shorter than 10 characters; no administrator was created.");
       return;
     }
     try {
       accounts.create(new UserForm(username, username, password, Role.ADMIN));
       LOG.info("Created the first administrator '{}'.", username);
     } catch (RuleViolation | DataIntegrityViolationException createdElsewhere) {
-      // Two replicas starting together on one database: the other one created the administrator first.
+      // Two replicas starting together on one database: the other one created the administrator
+      // first.
       LOG.info("The first administrator '{}' was created by another instance.", username);
     }
   }

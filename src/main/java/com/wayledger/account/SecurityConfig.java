@@ -15,9 +15,10 @@ import org.springframework.security.web.SecurityFilterChain;
 import org.springframework.security.web.context.RequestAttributeSecurityContextRepository;
 
 /**
- * Who may do what. Pages: form sign-in, session in the database, CSRF on every form. API: HTTP Basic on each
- * request and no session, so a browser's cookie never authorises an API call (and CSRF cannot apply there).
- * Reading needs any role; changing needs editor; managing users needs admin.
+ * Who may do what. Pages: form sign-in, session in the database, CSRF on every form. API: HTTP
+ * Basic on each request and no session, so a browser's cookie never authorises an API call (and
+ * CSRF cannot apply there). Reading needs any role; changing needs editor; managing users needs
+ * admin.
  */
 @Configuration
 public class SecurityConfig {
@@ -42,7 +43,13 @@ public class SecurityConfig {
     http.securityMatcher("/api/**")
         .authorizeHttpRequests(
             auth ->
-                auth.requestMatchers(HttpMethod.GET, "/api/openapi", "/api/openapi/**", "/api/docs", "/api/docs/**", "/api/swagger-ui/**")
+                auth.requestMatchers(
+                        HttpMethod.GET,
+                        "/api/openapi",
+                        "/api/openapi/**",
+                        "/api/docs",
+                        "/api/docs/**",
+                        "/api/swagger-ui/**")
                     .permitAll()
                     .requestMatchers(HttpMethod.GET, "/api/**")
                     .hasRole("VIEWER")
@@ -50,8 +57,11 @@ public class SecurityConfig {
                     .hasRole("EDITOR"))
         .httpBasic(Customizer.withDefaults())
         .csrf(csrf -> csrf.disable())
-        .sessionManagement(session -> session.sessionCreationPolicy(SessionCreationPolicy.STATELESS))
-        .securityContext(context -> context.securityContextRepository(new RequestAttributeSecurityContextRepository()));
+        .sessionManagement(
+            session -> session.sessionCreationPolicy(SessionCreationPolicy.STATELESS))
+        .securityContext(
+            context ->
+                context.securityContextRepository(new RequestAttributeSecurityContextRepository()));
     return http.build();
   }
 
@@ -60,13 +70,30 @@ public class SecurityConfig {
   SecurityFilterChain pages(HttpSecurity http) throws Exception {
     http.authorizeHttpRequests(
             auth ->
-                auth.requestMatchers("/login", "/css/**", "/js/**", "/webjars/**", "/favicon.svg", "/actuator/health", "/error")
+                auth.requestMatchers(
+                        "/login",
+                        "/css/**",
+                        "/js/**",
+                        "/webjars/**",
+                        "/favicon.svg",
+                        "/actuator/health",
+                        "/error")
                     .permitAll()
                     .requestMatchers("/admin/**")
                     .hasRole("ADMIN")
                     .requestMatchers(HttpMethod.POST, CHANGES)
                     .hasRole("EDITOR")
-                    .requestMatchers(HttpMethod.GET, "/sites/new", "/sites/*/edit", "/sites/*/boards/new", "/boards/*/edit", "/boards/*/circuits/new", "/circuits/*/edit", "/loads/*/edit", "/boards/*/import", "/boards/*/import/**")
+                    .requestMatchers(
+                        HttpMethod.GET,
+                        "/sites/new",
+                        "/sites/*/edit",
+                        "/sites/*/boards/new",
+                        "/boards/*/edit",
+                        "/boards/*/circuits/new",
+                        "/circuits/*/edit",
+                        "/loads/*/edit",
+                        "/boards/*/import",
+                        "/boards/*/import/**")
                     .hasRole("EDITOR")
                     .anyRequest()
                     .hasRole("VIEWER"))

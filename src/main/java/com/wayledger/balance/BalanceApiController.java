@@ -18,7 +18,9 @@ import org.springframework.web.bind.annotation.RequestMapping;
 import org.springframework.web.bind.annotation.RequestParam;
 import org.springframework.web.bind.annotation.RestController;
 
-/** Phase balancing over JSON: plans for a stored board, or a stateless solve of a described board. */
+/**
+ * Phase balancing over JSON: plans for a stored board, or a stateless solve of a described board.
+ */
 @RestController
 @RequestMapping("/api")
 @Tag(name = "Phase balancing", description = "Proved-optimal and fewest-moves phase assignments")
@@ -37,7 +39,8 @@ public class BalanceApiController {
   @Operation(summary = "Balancing plans for a stored board (nothing is changed)")
   public Plans plans(@PathVariable long id, @RequestParam(defaultValue = "DEMAND") Basis basis) {
     BalancePlans plans = balancing.plans(id, basis, null);
-    return new Plans(plans.optimal(), plans.fewestMoves(), com.wayledger.board.AnalysisApiController.CAUTION);
+    return new Plans(
+        plans.optimal(), plans.fewestMoves(), com.wayledger.board.AnalysisApiController.CAUTION);
   }
 
   @PostMapping("/balance")
@@ -65,6 +68,8 @@ public class BalanceApiController {
   public Plans solve(@RequestBody @NotNull BalanceProblem problem) {
     PhaseBalancer balancer = new PhaseBalancer();
     return new Plans(
-        balancer.optimise(problem), balancer.fewestMoves(problem), com.wayledger.board.AnalysisApiController.CAUTION);
+        balancer.optimise(problem),
+        balancer.fewestMoves(problem),
+        com.wayledger.board.AnalysisApiController.CAUTION);
   }
 }

@@ -17,7 +17,10 @@ import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestParam;
 import org.springframework.web.servlet.mvc.support.RedirectAttributes;
 
-/** The balancing page of a board: current against proposed, the move list, the k-moves table, apply and undo. */
+/**
+ * The balancing page of a board: current against proposed, the move list, the k-moves table, apply
+ * and undo.
+ */
 @Controller
 public class BalanceController {
 
@@ -25,7 +28,8 @@ public class BalanceController {
   private final BoardService boards;
   private final ScheduleService schedule;
 
-  public BalanceController(BalanceService balancing, BoardService boards, ScheduleService schedule) {
+  public BalanceController(
+      BalanceService balancing, BoardService boards, ScheduleService schedule) {
     this.balancing = balancing;
     this.boards = boards;
     this.schedule = schedule;

@@ -37,7 +37,10 @@ public record BalancePlans(
     CONNECTED
   }
 
-  /** Top of the bar charts, A: the largest line current before or after, plus a margin, at least 1 A. */
+  /**
+   * Top of the bar charts, A: the largest line current before or after, plus a margin, at least 1
+   * A.
+   */
   public double chartScaleAmps() {
     double largest = 1.0;
     for (BoardDemand side : new BoardDemand[] {before, after}) {

@@ -29,9 +29,9 @@ import java.util.Set;
 import org.springframework.stereotype.Service;
 
 /**
- * Turns a stored board into a balancing problem and its plans into placements. Single-pole circuits in use
- * and not locked may move; three-pole and locked circuits are fixed loads; a position is free when no
- * circuit, spare device or empty-space record holds it.
+ * Turns a stored board into a balancing problem and its plans into placements. Single-pole circuits
+ * in use and not locked may move; three-pole and locked circuits are fixed loads; a position is
+ * free when no circuit, spare device or empty-space record holds it.
  */
 @Service
 public class BalanceService {
@@ -45,12 +45,15 @@ public class BalanceService {
   /**
    * The plans for a board.
    *
-   * @param movesChoice null for the optimal plan, else the number of moves of the fewest-moves row to preview
+   * @param movesChoice null for the optimal plan, else the number of moves of the fewest-moves row
+   *     to preview
    */
   public BalancePlans plans(long boardId, Basis basis, Integer movesChoice) {
     SiteAnalysis results = analysis.ofBoard(boardId);
     BoardSpec board =
-        results.spec().boards().stream().filter(b -> b.id() == boardId).findFirst()
+        results.spec().boards().stream()
+            .filter(b -> b.id() == boardId)
+            .findFirst()
             .orElseThrow(() -> new NotFoundException("Board", boardId));
     BoardDemand before = results.boardDemand(boardId);
     BalanceProblem problem = problemOf(board, before, basis);
@@ -72,7 +75,9 @@ public class BalanceService {
     BoardDemand after =
         placements.isEmpty()
             ? before
-            : analysis.analyse(ScheduleMapper.withPlacements(results.spec(), placements)).boardDemand(boardId);
+            : analysis
+                .analyse(ScheduleMapper.withPlacements(results.spec(), placements))
+                .boardDemand(boardId);
     return new BalancePlans(basis, optimal, fewest, chosen, label, before, after, placements, undo);
   }
 
@@ -107,8 +112,14 @@ public class BalanceService {
         continue;
       }
       Phase phase = circuit.position().phases().iterator().next();
-      items.add(new BalanceItem(circuit.id(), circuit.description(), amps, phase, circuit.wayNumber(),
-          !circuit.lockedForBalancing()));
+      items.add(
+          new BalanceItem(
+              circuit.id(),
+              circuit.description(),
+              amps,
+              phase,
+              circuit.wayNumber(),
+              !circuit.lockedForBalancing()));
     }
     Map<Phase, List<Integer>> freeWays = new EnumMap<>(Phase.class);
     for (Phase phase : Phase.values()) {
@@ -120,7 +131,8 @@ public class BalanceService {
       }
       freeWays.put(phase, ways);
     }
-    return new BalanceProblem(items, fixed, null, freeWays, board.unbalanceLimitPercent(), board.isThreePhase());
+    return new BalanceProblem(
+        items, fixed, null, freeWays, board.unbalanceLimitPercent(), board.isThreePhase());
   }
 
   /** A circuit's weight in amps: its share of demand on its line, or its connected current. */

@@ -21,12 +21,14 @@ import org.springframework.web.bind.annotation.RequestMapping;
 import org.springframework.web.bind.annotation.RestController;
 
 /**
- * Demand and findings over JSON. Results are computed on every request from the stored schedule; the
- * stateless endpoint computes a board description sent in the request and stores nothing.
+ * Demand and findings over JSON. Results are computed on every request from the stored schedule;
+ * the stateless endpoint computes a board description sent in the request and stores nothing.
  */
 @RestController
 @RequestMapping("/api")
-@Tag(name = "Demand and checks", description = "Demand after diversity, per-line currents and protection findings")
+@Tag(
+    name = "Demand and checks",
+    description = "Demand after diversity, per-line currents and protection findings")
 public class AnalysisApiController {
 
   /** The caution that travels with every computed result. */
@@ -48,7 +50,8 @@ public class AnalysisApiController {
   }
 
   /** A board described in full, with the supply it hangs from, for the stateless calculation. */
-  public record BoardRequest(@NotNull SupplySpec supply, @NotNull BoardSpec board, String siteDefaultMethodKey) {}
+  public record BoardRequest(
+      @NotNull SupplySpec supply, @NotNull BoardSpec board, String siteDefaultMethodKey) {}
 
   @GetMapping("/sites/{id}/demand")
   @Operation(summary = "Demand on every board of a stored site")
@@ -57,7 +60,8 @@ public class AnalysisApiController {
   }
 
   @GetMapping("/boards/{id}/demand")
-  @Operation(summary = "Demand on a stored board: per circuit, per line, neutral, unbalance, loading")
+  @Operation(
+      summary = "Demand on a stored board: per circuit, per line, neutral, unbalance, loading")
   public Result<BoardDemand> boardDemand(@PathVariable long id) {
     BoardDemand demand = analysis.ofBoard(id).boardDemand(id);
     if (demand == null) {
@@ -75,7 +79,11 @@ public class AnalysisApiController {
   @GetMapping("/boards/{id}/findings")
   @Operation(summary = "Protection and cable findings of a stored board and its circuits")
   public Result<BoardFindings> boardFindings(@PathVariable long id) {
-    return Result.of(analysis.ofBoard(id).boardFindings(id).orElseThrow(() -> new NotFoundException("Board", id)));
+    return Result.of(
+        analysis
+            .ofBoard(id)
+            .boardFindings(id)
+            .orElseThrow(() -> new NotFoundException("Board", id)));
   }
 
   @PostMapping("/demand")
@@ -108,7 +116,8 @@ public class AnalysisApiController {
                                       "loads": [{"description": "Sockets", "category": "SOCKET_OUTLETS", "quantity": 1,
                                                  "ratingValue": 3000, "ratingUnit": "W", "powerFactor": 0.95, "continuous": false}]}]}}
                                   """))))
-  public Result<BoardDemand> computeDemand(@Valid @org.springframework.web.bind.annotation.RequestBody BoardRequest request) {
+  public Result<BoardDemand> computeDemand(
+      @Valid @org.springframework.web.bind.annotation.RequestBody BoardRequest request) {
     return Result.of(
         DemandEngine.evaluateBoard(
             request.board(), request.supply(), analysis.methods(), request.siteDefaultMethodKey()));

@@ -25,8 +25,8 @@ import org.springframework.stereotype.Service;
 import org.springframework.transaction.annotation.Transactional;
 
 /**
- * Runs the demand and protection engines on a stored site. Results are recomputed on every read, so they
- * can never disagree with the schedule they came from.
+ * Runs the demand and protection engines on a stored site. Results are recomputed on every read, so
+ * they can never disagree with the schedule they came from.
  */
 @Service
 public class AnalysisService {
@@ -51,10 +51,14 @@ public class AnalysisService {
     Site site = sites.get(siteId);
     List<Board> onSite = boards.findBySite(siteId);
     onSite.forEach(board -> board.getCircuits().forEach(circuit -> circuit.getLoads().size()));
-    return analyse(ScheduleMapper.toSpec(site, onSite), methods(), ScheduleMapper.mccbSettingsOf(onSite));
+    return analyse(
+        ScheduleMapper.toSpec(site, onSite), methods(), ScheduleMapper.mccbSettingsOf(onSite));
   }
 
-  /** The MCCB settings recorded on a site's boards, for callers that re-run an engine on the site's spec. */
+  /**
+   * The MCCB settings recorded on a site's boards, for callers that re-run an engine on the site's
+   * spec.
+   */
   @Transactional(readOnly = true)
   public RecordedMccbSettings mccbSettingsOfSite(long siteId) {
     List<Board> onSite = boards.findBySite(siteId);
@@ -64,20 +68,26 @@ public class AnalysisService {
 
   @Transactional(readOnly = true)
   public SiteAnalysis ofBoard(long boardId) {
-    Board board = boards.findById(boardId).orElseThrow(() -> new com.wayledger.system.NotFoundException("Board", boardId));
+    Board board =
+        boards
+            .findById(boardId)
+            .orElseThrow(() -> new com.wayledger.system.NotFoundException("Board", boardId));
     return ofSite(board.getSite().getId());
   }
 
   /**
-   * Both engines on an engine input, with the built-in and user-defined diversity methods and no MCCB settings
-   * recorded (every MCCB assumed Ir = In, Ii = 10·In). For a spec with stored boards behind it, pass their settings
-   * with {@link #analyse(SiteSpec, RecordedMccbSettings)}.
+   * Both engines on an engine input, with the built-in and user-defined diversity methods and no
+   * MCCB settings recorded (every MCCB assumed Ir = In, Ii = 10·In). For a spec with stored boards
+   * behind it, pass their settings with {@link #analyse(SiteSpec, RecordedMccbSettings)}.
    */
   public SiteAnalysis analyse(SiteSpec spec) {
     return analyse(spec, methods(), RecordedMccbSettings.NONE);
   }
 
-  /** Both engines on an engine input with the MCCB settings recorded for it (see ScheduleMapper.mccbSettingsOf). */
+  /**
+   * Both engines on an engine input with the MCCB settings recorded for it (see
+   * ScheduleMapper.mccbSettingsOf).
+   */
   public SiteAnalysis analyse(SiteSpec spec, RecordedMccbSettings recordedMccbSettings) {
     return analyse(spec, methods(), recordedMccbSettings);
   }
@@ -93,7 +103,11 @@ public class AnalysisService {
     SiteDemand demand = DemandEngine.evaluate(spec, methods);
     SiteFindings findings =
         ProtectionEngine.check(
-            spec, circuitLoadings(demand), boardLoadings(demand), recordedMccbSettings, ProtectionSettings.DEFAULTS);
+            spec,
+            circuitLoadings(demand),
+            boardLoadings(demand),
+            recordedMccbSettings,
+            ProtectionSettings.DEFAULTS);
     return new SiteAnalysis(spec, demand, findings);
   }
 
@@ -115,7 +129,8 @@ public class AnalysisService {
       for (PhaseDemand phase : board.phases()) {
         currents.put(phase.phase(), phase.currentAmps());
       }
-      loadings.put(board.boardId(), new BoardLoading(board.boardId(), currents, board.unbalancePercent()));
+      loadings.put(
+          board.boardId(), new BoardLoading(board.boardId(), currents, board.unbalancePercent()));
     }
     return loadings;
   }

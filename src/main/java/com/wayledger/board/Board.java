@@ -49,11 +49,16 @@ public class Board {
     @AttributeOverride(
         name = "breakingCapacityKiloAmps",
         column = @Column(name = "incomer_breaking_capacity_kiloamps")),
-    @AttributeOverride(name = "residualMilliAmps", column = @Column(name = "incomer_residual_milliamps")),
-    @AttributeOverride(name = "rcdType", column = @Column(name = "incomer_rcd_type")),
-    @AttributeOverride(name = "overloadSettingAmps", column = @Column(name = "incomer_overload_setting_amps")),
     @AttributeOverride(
-        name = "instantaneousSettingAmps", column = @Column(name = "incomer_instantaneous_setting_amps"))
+        name = "residualMilliAmps",
+        column = @Column(name = "incomer_residual_milliamps")),
+    @AttributeOverride(name = "rcdType", column = @Column(name = "incomer_rcd_type")),
+    @AttributeOverride(
+        name = "overloadSettingAmps",
+        column = @Column(name = "incomer_overload_setting_amps")),
+    @AttributeOverride(
+        name = "instantaneousSettingAmps",
+        column = @Column(name = "incomer_instantaneous_setting_amps"))
   })
   private DeviceDetails incomer;
 
@@ -65,18 +70,25 @@ public class Board {
 
   @Embedded
   @AttributeOverrides({
-    @AttributeOverride(name = "lineCsaSquareMillimetres", column = @Column(name = "submain_line_csa_mm2")),
     @AttributeOverride(
-        name = "protectiveCsaSquareMillimetres", column = @Column(name = "submain_cpc_csa_mm2")),
+        name = "lineCsaSquareMillimetres",
+        column = @Column(name = "submain_line_csa_mm2")),
+    @AttributeOverride(
+        name = "protectiveCsaSquareMillimetres",
+        column = @Column(name = "submain_cpc_csa_mm2")),
     @AttributeOverride(name = "material", column = @Column(name = "submain_material")),
     @AttributeOverride(name = "insulation", column = @Column(name = "submain_insulation")),
     @AttributeOverride(name = "lengthMetres", column = @Column(name = "submain_length_metres")),
     @AttributeOverride(
-        name = "installationMethod", column = @Column(name = "submain_installation_method")),
+        name = "installationMethod",
+        column = @Column(name = "submain_installation_method")),
     @AttributeOverride(name = "ambientCelsius", column = @Column(name = "submain_ambient_celsius")),
-    @AttributeOverride(name = "groupedCircuits", column = @Column(name = "submain_grouped_circuits")),
     @AttributeOverride(
-        name = "thermalInsulationMillimetres", column = @Column(name = "submain_thermal_insulation_mm"))
+        name = "groupedCircuits",
+        column = @Column(name = "submain_grouped_circuits")),
+    @AttributeOverride(
+        name = "thermalInsulationMillimetres",
+        column = @Column(name = "submain_thermal_insulation_mm"))
   })
   private CableDetails submain;
 
@@ -117,7 +129,8 @@ public class Board {
   /** Copies every editable field from a validated form; the parent is resolved by the service. */
   void apply(BoardForm form, Board parentBoard) {
     reference = form.reference().strip();
-    location = form.location() == null || form.location().isBlank() ? null : form.location().strip();
+    location =
+        form.location() == null || form.location().isBlank() ? null : form.location().strip();
     phases = form.phases();
     wayCount = form.wayCount();
     busbarRatingAmps = form.busbarRatingAmps();
@@ -128,7 +141,9 @@ public class Board {
     unbalanceLimitPercent = form.unbalanceLimitPercent();
     coincidenceFactor = form.coincidenceFactor();
     diversityMethod =
-        form.diversityMethod() == null || form.diversityMethod().isBlank() ? null : form.diversityMethod();
+        form.diversityMethod() == null || form.diversityMethod().isBlank()
+            ? null
+            : form.diversityMethod();
     measuredExternalLoopImpedanceOhms = form.measuredExternalLoopImpedanceOhms();
     measuredFaultCurrentKiloAmps = form.measuredFaultCurrentKiloAmps();
   }

@@ -30,47 +30,86 @@ public class BoardApiController {
   private final ScheduleService schedule;
   private final BoardRepository boardRepository;
 
-  public BoardApiController(BoardService boards, ScheduleService schedule, BoardRepository boardRepository) {
+  public BoardApiController(
+      BoardService boards, ScheduleService schedule, BoardRepository boardRepository) {
     this.boards = boards;
     this.schedule = schedule;
     this.boardRepository = boardRepository;
   }
 
   public record BoardSummary(
-      long id, String reference, String location, int phases, int wayCount, Long parentBoardId,
-      Double incomerRatingAmps, long version) {
+      long id,
+      String reference,
+      String location,
+      int phases,
+      int wayCount,
+      Long parentBoardId,
+      Double incomerRatingAmps,
+      long version) {
 
     static BoardSummary of(Board board) {
       return new BoardSummary(
-          board.getId(), board.getReference(), board.getLocation(), board.getPhases(), board.getWayCount(),
+          board.getId(),
+          board.getReference(),
+          board.getLocation(),
+          board.getPhases(),
+          board.getWayCount(),
           board.getParent() == null ? null : board.getParent().getId(),
-          board.getIncomer() == null ? null : board.getIncomer().getRatingAmps(), board.getVersion());
+          board.getIncomer() == null ? null : board.getIncomer().getRatingAmps(),
+          board.getVersion());
     }
   }
 
   public record LoadView(
-      long id, String description, LoadCategory category, int quantity, double ratingValue,
-      RatingUnit ratingUnit, double powerFactor, Double startUpSurgeMultiple, Double startUpSurgeMillis,
+      long id,
+      String description,
+      LoadCategory category,
+      int quantity,
+      double ratingValue,
+      RatingUnit ratingUnit,
+      double powerFactor,
+      Double startUpSurgeMultiple,
+      Double startUpSurgeMillis,
       boolean continuous) {
 
     static LoadView of(LoadItem load) {
       return new LoadView(
-          load.getId(), load.getDescription(), load.getCategory(), load.getQuantity(), load.getRatingValue(),
-          load.getRatingUnit(), load.getPowerFactor(), load.getStartUpSurgeMultiple(),
-          load.getStartUpSurgeMillis(), load.isContinuous());
+          load.getId(),
+          load.getDescription(),
+          load.getCategory(),
+          load.getQuantity(),
+          load.getRatingValue(),
+          load.getRatingUnit(),
+          load.getPowerFactor(),
+          load.getStartUpSurgeMultiple(),
+          load.getStartUpSurgeMillis(),
+          load.isContinuous());
     }
   }
 
   public record CircuitView(
-      long id, int wayNumber, PhasePosition position, String description, WayStatus status,
-      boolean lockedForBalancing, String device, String cable, CircuitForm fields, List<LoadView> loads) {
+      long id,
+      int wayNumber,
+      PhasePosition position,
+      String description,
+      WayStatus status,
+      boolean lockedForBalancing,
+      String device,
+      String cable,
+      CircuitForm fields,
+      List<LoadView> loads) {
 
     static CircuitView of(Circuit circuit) {
       return new CircuitView(
-          circuit.getId(), circuit.getWayNumber(), circuit.getPosition(), circuit.getDescription(),
-          circuit.getStatus(), circuit.isLockedForBalancing(),
+          circuit.getId(),
+          circuit.getWayNumber(),
+          circuit.getPosition(),
+          circuit.getDescription(),
+          circuit.getStatus(),
+          circuit.isLockedForBalancing(),
           circuit.getDevice() == null ? null : circuit.getDevice().label(),
-          circuit.getCable() == null ? null : circuit.getCable().label(), CircuitForm.of(circuit),
+          circuit.getCable() == null ? null : circuit.getCable().label(),
+          CircuitForm.of(circuit),
           circuit.getLoads().stream().map(LoadView::of).toList());
     }
   }
@@ -88,9 +127,13 @@ public class BoardApiController {
   @Operation(summary = "A board with its circuits and loads")
   public BoardDetail get(@PathVariable long id) {
     Board board =
-        boardRepository.findWithCircuits(id).orElseThrow(() -> new com.wayledger.system.NotFoundException("Board", id));
+        boardRepository
+            .findWithCircuits(id)
+            .orElseThrow(() -> new com.wayledger.system.NotFoundException("Board", id));
     return new BoardDetail(
-        BoardSummary.of(board), BoardForm.of(board), board.getCircuits().stream().map(CircuitView::of).toList());
+        BoardSummary.of(board),
+        BoardForm.of(board),
+        board.getCircuits().stream().map(CircuitView::of).toList());
   }
 
   @PostMapping("/sites/{siteId}/boards")

@@ -1,5 +1,6 @@
 package com.wayledger.board;
 
+import com.wayledger.diversity.MethodLibrary;
 import com.wayledger.site.Site;
 import com.wayledger.site.SiteService;
 import com.wayledger.system.FormRecovery;
@@ -8,7 +9,6 @@ import com.wayledger.system.RuleViolation;
 import jakarta.servlet.http.HttpServletRequest;
 import jakarta.servlet.http.HttpServletResponse;
 import jakarta.validation.Valid;
-import com.wayledger.diversity.MethodLibrary;
 import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
 import org.springframework.validation.BindingResult;
@@ -136,7 +136,9 @@ public class BoardController {
 
   @PostMapping("/boards/{id}/delete")
   public String delete(
-      @PathVariable long id, @RequestParam(required = false) String reason, RedirectAttributes redirect) {
+      @PathVariable long id,
+      @RequestParam(required = false) String reason,
+      RedirectAttributes redirect) {
     try {
       return "redirect:/sites/" + boards.delete(id, reason);
     } catch (RuleViolation violation) {

@@ -40,7 +40,8 @@ public record BoardForm(
     @DecimalMin("-30") @DecimalMax("90") Double submainAmbientCelsius,
     @Min(1) @Max(100) Integer submainGroupedCircuits,
     @Min(0) @Max(100000) Integer submainThermalInsulationMm,
-    @NotNull @DecimalMin(value = "0", inclusive = false) @DecimalMax("100") Double unbalanceLimitPercent,
+    @NotNull @DecimalMin(value = "0", inclusive = false) @DecimalMax("100")
+        Double unbalanceLimitPercent,
     @NotNull @DecimalMin(value = "0", inclusive = false) @DecimalMax("1") Double coincidenceFactor,
     @Size(max = 60) String diversityMethod,
     @Positive @DecimalMax("100") Double measuredExternalLoopImpedanceOhms,
@@ -49,44 +50,150 @@ public record BoardForm(
     @Positive @DecimalMax("63000") Double incomerOverloadSettingAmps,
     @Positive @DecimalMax("63000") Double incomerInstantaneousSettingAmps) {
 
-  /** A board whose incomer has no moulded-case breaker settings: the argument list from before Ir and Ii. */
+  /**
+   * A board whose incomer has no moulded-case breaker settings: the argument list from before Ir
+   * and Ii.
+   */
   public BoardForm(
-      String reference, String location, Integer phases, Integer wayCount, Double busbarRatingAmps,
-      DeviceKind incomerKind, TripCurve incomerCurve, Double incomerRatingAmps, Integer incomerPoles,
-      Double incomerBreakingCapacityKiloAmps, Double incomerResidualMilliAmps, RcdType incomerRcdType,
-      Long parentBoardId, Long fedFromCircuitId, Double submainLineCsa, Double submainCpcCsa,
-      ConductorMaterial submainMaterial, Insulation submainInsulation, Double submainLengthMetres,
-      InstallationMethod submainInstallationMethod, Double submainAmbientCelsius, Integer submainGroupedCircuits,
-      Integer submainThermalInsulationMm, Double unbalanceLimitPercent, Double coincidenceFactor,
-      String diversityMethod, Double measuredExternalLoopImpedanceOhms, Double measuredFaultCurrentKiloAmps,
+      String reference,
+      String location,
+      Integer phases,
+      Integer wayCount,
+      Double busbarRatingAmps,
+      DeviceKind incomerKind,
+      TripCurve incomerCurve,
+      Double incomerRatingAmps,
+      Integer incomerPoles,
+      Double incomerBreakingCapacityKiloAmps,
+      Double incomerResidualMilliAmps,
+      RcdType incomerRcdType,
+      Long parentBoardId,
+      Long fedFromCircuitId,
+      Double submainLineCsa,
+      Double submainCpcCsa,
+      ConductorMaterial submainMaterial,
+      Insulation submainInsulation,
+      Double submainLengthMetres,
+      InstallationMethod submainInstallationMethod,
+      Double submainAmbientCelsius,
+      Integer submainGroupedCircuits,
+      Integer submainThermalInsulationMm,
+      Double unbalanceLimitPercent,
+      Double coincidenceFactor,
+      String diversityMethod,
+      Double measuredExternalLoopImpedanceOhms,
+      Double measuredFaultCurrentKiloAmps,
       Long version) {
-    this(reference, location, phases, wayCount, busbarRatingAmps, incomerKind, incomerCurve, incomerRatingAmps,
-        incomerPoles, incomerBreakingCapacityKiloAmps, incomerResidualMilliAmps, incomerRcdType, parentBoardId,
-        fedFromCircuitId, submainLineCsa, submainCpcCsa, submainMaterial, submainInsulation, submainLengthMetres,
-        submainInstallationMethod, submainAmbientCelsius, submainGroupedCircuits, submainThermalInsulationMm,
-        unbalanceLimitPercent, coincidenceFactor, diversityMethod, measuredExternalLoopImpedanceOhms,
-        measuredFaultCurrentKiloAmps, version, null, null);
+    this(
+        reference,
+        location,
+        phases,
+        wayCount,
+        busbarRatingAmps,
+        incomerKind,
+        incomerCurve,
+        incomerRatingAmps,
+        incomerPoles,
+        incomerBreakingCapacityKiloAmps,
+        incomerResidualMilliAmps,
+        incomerRcdType,
+        parentBoardId,
+        fedFromCircuitId,
+        submainLineCsa,
+        submainCpcCsa,
+        submainMaterial,
+        submainInsulation,
+        submainLengthMetres,
+        submainInstallationMethod,
+        submainAmbientCelsius,
+        submainGroupedCircuits,
+        submainThermalInsulationMm,
+        unbalanceLimitPercent,
+        coincidenceFactor,
+        diversityMethod,
+        measuredExternalLoopImpedanceOhms,
+        measuredFaultCurrentKiloAmps,
+        version,
+        null,
+        null);
   }
 
-  /** The same board with its incomer's moulded-case breaker settings Ir and Ii (A; null when not recorded). */
-  public BoardForm withIncomerMccbSettings(Double overloadSettingAmps, Double instantaneousSettingAmps) {
-    return new BoardForm(reference, location, phases, wayCount, busbarRatingAmps, incomerKind, incomerCurve,
-        incomerRatingAmps, incomerPoles, incomerBreakingCapacityKiloAmps, incomerResidualMilliAmps, incomerRcdType,
-        parentBoardId, fedFromCircuitId, submainLineCsa, submainCpcCsa, submainMaterial, submainInsulation,
-        submainLengthMetres, submainInstallationMethod, submainAmbientCelsius, submainGroupedCircuits,
-        submainThermalInsulationMm, unbalanceLimitPercent, coincidenceFactor, diversityMethod,
-        measuredExternalLoopImpedanceOhms, measuredFaultCurrentKiloAmps, version, overloadSettingAmps,
+  /**
+   * The same board with its incomer's moulded-case breaker settings Ir and Ii (A; null when not
+   * recorded).
+   */
+  public BoardForm withIncomerMccbSettings(
+      Double overloadSettingAmps, Double instantaneousSettingAmps) {
+    return new BoardForm(
+        reference,
+        location,
+        phases,
+        wayCount,
+        busbarRatingAmps,
+        incomerKind,
+        incomerCurve,
+        incomerRatingAmps,
+        incomerPoles,
+        incomerBreakingCapacityKiloAmps,
+        incomerResidualMilliAmps,
+        incomerRcdType,
+        parentBoardId,
+        fedFromCircuitId,
+        submainLineCsa,
+        submainCpcCsa,
+        submainMaterial,
+        submainInsulation,
+        submainLengthMetres,
+        submainInstallationMethod,
+        submainAmbientCelsius,
+        submainGroupedCircuits,
+        submainThermalInsulationMm,
+        unbalanceLimitPercent,
+        coincidenceFactor,
+        diversityMethod,
+        measuredExternalLoopImpedanceOhms,
+        measuredFaultCurrentKiloAmps,
+        version,
+        overloadSettingAmps,
         instantaneousSettingAmps);
   }
 
-  /** Default unbalance limit for a new board, %. Common practice: 10 % keeps neutral current modest. */
+  /**
+   * Default unbalance limit for a new board, %. Common practice: 10 % keeps neutral current modest.
+   */
   public static final double DEFAULT_UNBALANCE_LIMIT_PERCENT = 10.0;
 
   public static BoardForm blank(int sitePhases) {
     return new BoardForm(
-        "", "", sitePhases, sitePhases == 3 ? 12 : 10, null, DeviceKind.MCCB, null, null, null, null,
-        null, null, null, null, null, null, ConductorMaterial.COPPER, Insulation.THERMOPLASTIC_70, null,
-        null, null, null, null, DEFAULT_UNBALANCE_LIMIT_PERCENT, 1.0, null, null, null, null);
+        "",
+        "",
+        sitePhases,
+        sitePhases == 3 ? 12 : 10,
+        null,
+        DeviceKind.MCCB,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        ConductorMaterial.COPPER,
+        Insulation.THERMOPLASTIC_70,
+        null,
+        null,
+        null,
+        null,
+        null,
+        DEFAULT_UNBALANCE_LIMIT_PERCENT,
+        1.0,
+        null,
+        null,
+        null,
+        null);
   }
 
   public static BoardForm of(Board board) {
@@ -133,14 +240,27 @@ public record BoardForm(
       return null;
     }
     return new DeviceDetails(
-        incomerKind, incomerCurve, incomerRatingAmps, incomerPoles, incomerBreakingCapacityKiloAmps,
-        incomerResidualMilliAmps, incomerRcdType, incomerOverloadSettingAmps, incomerInstantaneousSettingAmps);
+        incomerKind,
+        incomerCurve,
+        incomerRatingAmps,
+        incomerPoles,
+        incomerBreakingCapacityKiloAmps,
+        incomerResidualMilliAmps,
+        incomerRcdType,
+        incomerOverloadSettingAmps,
+        incomerInstantaneousSettingAmps);
   }
 
   CableDetails submainCable() {
     return new CableDetails(
-        submainLineCsa, submainCpcCsa, submainMaterial, submainInsulation, submainLengthMetres,
-        submainInstallationMethod, submainAmbientCelsius, submainGroupedCircuits,
+        submainLineCsa,
+        submainCpcCsa,
+        submainMaterial,
+        submainInsulation,
+        submainLengthMetres,
+        submainInstallationMethod,
+        submainAmbientCelsius,
+        submainGroupedCircuits,
         submainThermalInsulationMm);
   }
 }

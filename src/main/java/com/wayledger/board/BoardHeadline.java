@@ -6,17 +6,22 @@ import com.wayledger.engine.protection.result.Verdict;
 import java.util.Map;
 
 /**
- * One board's line in a site's tree: its demand, how loaded its incomer is, its busiest line and how many
- * problems the checks found.
+ * One board's line in a site's tree: its demand, how loaded its incomer is, its busiest line and
+ * how many problems the checks found.
  *
  * @param demandKilowatts active demand after diversity, kW
- * @param loadingPercent largest line current as a percentage of the incomer rating; null when unknown
+ * @param loadingPercent largest line current as a percentage of the incomer rating; null when
+ *     unknown
  * @param worstPhase the busiest line; null when the board carries nothing
  * @param headroom a word for the headroom left
  * @param problems number of problem findings per verdict
  */
 public record BoardHeadline(
-    double demandKilowatts, Double loadingPercent, Phase worstPhase, Headroom headroom, Map<Verdict, Long> problems) {
+    double demandKilowatts,
+    Double loadingPercent,
+    Phase worstPhase,
+    Headroom headroom,
+    Map<Verdict, Long> problems) {
 
   /** Loading above which a board is shown as having little headroom, % of the incomer rating. */
   public static final double DEFAULT_LOW_HEADROOM_PERCENT = 80.0;
@@ -40,6 +45,7 @@ public record BoardHeadline(
     } else {
       headroom = Headroom.AMPLE;
     }
-    return new BoardHeadline(demand.demandWatts() / 1000.0, loading, worstPhase, headroom, problems);
+    return new BoardHeadline(
+        demand.demandWatts() / 1000.0, loading, worstPhase, headroom, problems);
   }
 }

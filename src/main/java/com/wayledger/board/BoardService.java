@@ -19,8 +19,8 @@ import org.springframework.stereotype.Service;
 import org.springframework.transaction.annotation.Transactional;
 
 /**
- * Creates, edits and finds boards, and keeps the board tree of a site a tree. Each change publishes a
- * {@link ScheduleChanged} event for the change log, with the optional reason the user gave.
+ * Creates, edits and finds boards, and keeps the board tree of a site a tree. Each change publishes
+ * a {@link ScheduleChanged} event for the change log, with the optional reason the user gave.
  */
 @Service
 public class BoardService {
@@ -32,7 +32,10 @@ public class BoardService {
   private final ApplicationEventPublisher events;
 
   public BoardService(
-      BoardRepository boards, CircuitRepository circuits, SiteService sites, MethodLibrary methods,
+      BoardRepository boards,
+      CircuitRepository circuits,
+      SiteService sites,
+      MethodLibrary methods,
       ApplicationEventPublisher events) {
     this.events = events;
     this.boards = boards;
@@ -106,7 +109,8 @@ public class BoardService {
     var before = ScheduleMapper.headerOf(board);
     board.apply(form, parent);
     Board saved = boards.saveAndFlush(board);
-    logged(saved, ChangeKind.BOARD_EDITED, "changed", before, ScheduleMapper.headerOf(saved), reason);
+    logged(
+        saved, ChangeKind.BOARD_EDITED, "changed", before, ScheduleMapper.headerOf(saved), reason);
     return saved;
   }
 
@@ -124,16 +128,24 @@ public class BoardService {
       throw new RuleViolation("reference", "board.delete.hasChildren");
     }
     long siteId = board.getSite().getId();
-    logged(board, ChangeKind.BOARD_REMOVED, "removed", ScheduleMapper.headerOf(board), null, reason);
+    logged(
+        board, ChangeKind.BOARD_REMOVED, "removed", ScheduleMapper.headerOf(board), null, reason);
     boards.delete(board);
     return siteId;
   }
 
-  private void logged(Board board, ChangeKind kind, String what, Object before, Object after, String reason) {
+  private void logged(
+      Board board, ChangeKind kind, String what, Object before, Object after, String reason) {
     events.publishEvent(
         new ScheduleChanged(
-            board.getSite().getId(), board.getId(), null, kind,
-            "Board “" + board.getReference() + "”: " + what, before, after, reason));
+            board.getSite().getId(),
+            board.getId(),
+            null,
+            kind,
+            "Board “" + board.getReference() + "”: " + what,
+            before,
+            after,
+            reason));
   }
 
   private Board checkRules(Site site, BoardForm form, Board existing) {
@@ -143,18 +155,24 @@ public class BoardService {
     if (form.phases() == 3 && site.getPhases() == 1) {
       throw new RuleViolation("phases", "board.phases.beyondSupply");
     }
-    if (form.diversityMethod() != null && !form.diversityMethod().isBlank()
+    if (form.diversityMethod() != null
+        && !form.diversityMethod().isBlank()
         && methods.catalog().find(form.diversityMethod()).isEmpty()) {
       throw new RuleViolation("diversityMethod", "method.unknown");
     }
     MccbSettingRules.check(
-        form.incomerKind(), form.incomerRatingAmps(), form.incomerOverloadSettingAmps(),
-        form.incomerInstantaneousSettingAmps(), "incomerOverloadSettingAmps", "incomerInstantaneousSettingAmps");
+        form.incomerKind(),
+        form.incomerRatingAmps(),
+        form.incomerOverloadSettingAmps(),
+        form.incomerInstantaneousSettingAmps(),
+        "incomerOverloadSettingAmps",
+        "incomerInstantaneousSettingAmps");
     String reference = form.reference().strip();
     boolean taken =
         existing == null
             ? boards.existsBySiteIdAndReferenceIgnoreCase(site.getId(), reference)
-            : boards.existsBySiteIdAndReferenceIgnoreCaseAndIdNot(site.getId(), reference, existing.getId());
+            : boards.existsBySiteIdAndReferenceIgnoreCaseAndIdNot(
+                site.getId(), reference, existing.getId());
     if (taken) {
       throw new RuleViolation("reference", "board.reference.taken");
     }

@@ -64,7 +64,10 @@ public class CableDetails {
     return lineCsaSquareMillimetres != null || lengthMetres != null || material != null;
   }
 
-  /** The engine's view of this cable, or null when nothing is recorded. Copper and 70 °C when unstated. */
+  /**
+   * The engine's view of this cable, or null when nothing is recorded. Copper and 70 °C when
+   * unstated.
+   */
   CableSpec toSpec() {
     if (!isRecorded()) {
       return null;

@@ -58,26 +58,38 @@ public class Circuit {
     @AttributeOverride(
         name = "breakingCapacityKiloAmps",
         column = @Column(name = "device_breaking_capacity_kiloamps")),
-    @AttributeOverride(name = "residualMilliAmps", column = @Column(name = "device_residual_milliamps")),
-    @AttributeOverride(name = "rcdType", column = @Column(name = "device_rcd_type")),
-    @AttributeOverride(name = "overloadSettingAmps", column = @Column(name = "device_overload_setting_amps")),
     @AttributeOverride(
-        name = "instantaneousSettingAmps", column = @Column(name = "device_instantaneous_setting_amps"))
+        name = "residualMilliAmps",
+        column = @Column(name = "device_residual_milliamps")),
+    @AttributeOverride(name = "rcdType", column = @Column(name = "device_rcd_type")),
+    @AttributeOverride(
+        name = "overloadSettingAmps",
+        column = @Column(name = "device_overload_setting_amps")),
+    @AttributeOverride(
+        name = "instantaneousSettingAmps",
+        column = @Column(name = "device_instantaneous_setting_amps"))
   })
   private DeviceDetails device;
 
   @Embedded
   @AttributeOverrides({
-    @AttributeOverride(name = "lineCsaSquareMillimetres", column = @Column(name = "cable_line_csa_mm2")),
-    @AttributeOverride(name = "protectiveCsaSquareMillimetres", column = @Column(name = "cable_cpc_csa_mm2")),
+    @AttributeOverride(
+        name = "lineCsaSquareMillimetres",
+        column = @Column(name = "cable_line_csa_mm2")),
+    @AttributeOverride(
+        name = "protectiveCsaSquareMillimetres",
+        column = @Column(name = "cable_cpc_csa_mm2")),
     @AttributeOverride(name = "material", column = @Column(name = "cable_material")),
     @AttributeOverride(name = "insulation", column = @Column(name = "cable_insulation")),
     @AttributeOverride(name = "lengthMetres", column = @Column(name = "cable_length_metres")),
-    @AttributeOverride(name = "installationMethod", column = @Column(name = "cable_installation_method")),
+    @AttributeOverride(
+        name = "installationMethod",
+        column = @Column(name = "cable_installation_method")),
     @AttributeOverride(name = "ambientCelsius", column = @Column(name = "cable_ambient_celsius")),
     @AttributeOverride(name = "groupedCircuits", column = @Column(name = "cable_grouped_circuits")),
     @AttributeOverride(
-        name = "thermalInsulationMillimetres", column = @Column(name = "cable_thermal_insulation_mm"))
+        name = "thermalInsulationMillimetres",
+        column = @Column(name = "cable_thermal_insulation_mm"))
   })
   private CableDetails cable;
 
@@ -123,7 +135,10 @@ public class Circuit {
     loads.add(load);
   }
 
-  /** Label of the position: "3 L2", or "3 L1–L3" for a three-pole device, or "3" on a single-phase board. */
+  /**
+   * Label of the position: "3 L2", or "3 L1–L3" for a three-pole device, or "3" on a single-phase
+   * board.
+   */
   public String positionLabel() {
     if (!board.isThreePhase()) {
       return Integer.toString(wayNumber);

@@ -20,8 +20,8 @@ import jakarta.validation.constraints.Positive;
 import jakarta.validation.constraints.Size;
 
 /**
- * A circuit row as typed on the schedule: position, device, cable and, when the circuit is new, an optional
- * first load so that a schedule can be typed one row per circuit.
+ * A circuit row as typed on the schedule: position, device, cable and, when the circuit is new, an
+ * optional first load so that a schedule can be typed one row per circuit.
  */
 public record CircuitForm(
     @NotNull @Min(1) @Max(96) Integer wayNumber,
@@ -57,70 +57,251 @@ public record CircuitForm(
     @Positive @DecimalMax("63000") Double deviceOverloadSettingAmps,
     @Positive @DecimalMax("63000") Double deviceInstantaneousSettingAmps) {
 
-  /** A circuit with no moulded-case breaker settings: the argument list from before Ir and Ii were recorded. */
+  /**
+   * A circuit with no moulded-case breaker settings: the argument list from before Ir and Ii were
+   * recorded.
+   */
   public CircuitForm(
-      Integer wayNumber, PhasePosition position, String description, WayStatus status, Boolean lockedForBalancing,
-      DeviceKind deviceKind, TripCurve deviceCurve, Double deviceRatingAmps, Integer devicePoles,
-      Double deviceBreakingCapacityKiloAmps, Double deviceResidualMilliAmps, RcdType deviceRcdType,
-      Double cableLineCsa, Double cableCpcCsa, ConductorMaterial cableMaterial, Insulation cableInsulation,
-      Double cableLengthMetres, InstallationMethod cableInstallationMethod, Double cableAmbientCelsius,
-      Integer cableGroupedCircuits, Integer cableThermalInsulationMm, Double measuredLoopImpedanceOhms,
-      String loadDescription, LoadCategory loadCategory, Integer loadQuantity, Double loadRatingValue,
-      RatingUnit loadRatingUnit, Double loadPowerFactor, Long version, Boolean ringFinal) {
-    this(wayNumber, position, description, status, lockedForBalancing, deviceKind, deviceCurve, deviceRatingAmps,
-        devicePoles, deviceBreakingCapacityKiloAmps, deviceResidualMilliAmps, deviceRcdType, cableLineCsa,
-        cableCpcCsa, cableMaterial, cableInsulation, cableLengthMetres, cableInstallationMethod,
-        cableAmbientCelsius, cableGroupedCircuits, cableThermalInsulationMm, measuredLoopImpedanceOhms,
-        loadDescription, loadCategory, loadQuantity, loadRatingValue, loadRatingUnit, loadPowerFactor, version,
-        ringFinal, null, null);
+      Integer wayNumber,
+      PhasePosition position,
+      String description,
+      WayStatus status,
+      Boolean lockedForBalancing,
+      DeviceKind deviceKind,
+      TripCurve deviceCurve,
+      Double deviceRatingAmps,
+      Integer devicePoles,
+      Double deviceBreakingCapacityKiloAmps,
+      Double deviceResidualMilliAmps,
+      RcdType deviceRcdType,
+      Double cableLineCsa,
+      Double cableCpcCsa,
+      ConductorMaterial cableMaterial,
+      Insulation cableInsulation,
+      Double cableLengthMetres,
+      InstallationMethod cableInstallationMethod,
+      Double cableAmbientCelsius,
+      Integer cableGroupedCircuits,
+      Integer cableThermalInsulationMm,
+      Double measuredLoopImpedanceOhms,
+      String loadDescription,
+      LoadCategory loadCategory,
+      Integer loadQuantity,
+      Double loadRatingValue,
+      RatingUnit loadRatingUnit,
+      Double loadPowerFactor,
+      Long version,
+      Boolean ringFinal) {
+    this(
+        wayNumber,
+        position,
+        description,
+        status,
+        lockedForBalancing,
+        deviceKind,
+        deviceCurve,
+        deviceRatingAmps,
+        devicePoles,
+        deviceBreakingCapacityKiloAmps,
+        deviceResidualMilliAmps,
+        deviceRcdType,
+        cableLineCsa,
+        cableCpcCsa,
+        cableMaterial,
+        cableInsulation,
+        cableLengthMetres,
+        cableInstallationMethod,
+        cableAmbientCelsius,
+        cableGroupedCircuits,
+        cableThermalInsulationMm,
+        measuredLoopImpedanceOhms,
+        loadDescription,
+        loadCategory,
+        loadQuantity,
+        loadRatingValue,
+        loadRatingUnit,
+        loadPowerFactor,
+        version,
+        ringFinal,
+        null,
+        null);
   }
 
-  /** A radial circuit (not a ring final circuit): the argument list from before rings were recorded. */
+  /**
+   * A radial circuit (not a ring final circuit): the argument list from before rings were recorded.
+   */
   public CircuitForm(
-      Integer wayNumber, PhasePosition position, String description, WayStatus status, Boolean lockedForBalancing,
-      DeviceKind deviceKind, TripCurve deviceCurve, Double deviceRatingAmps, Integer devicePoles,
-      Double deviceBreakingCapacityKiloAmps, Double deviceResidualMilliAmps, RcdType deviceRcdType,
-      Double cableLineCsa, Double cableCpcCsa, ConductorMaterial cableMaterial, Insulation cableInsulation,
-      Double cableLengthMetres, InstallationMethod cableInstallationMethod, Double cableAmbientCelsius,
-      Integer cableGroupedCircuits, Integer cableThermalInsulationMm, Double measuredLoopImpedanceOhms,
-      String loadDescription, LoadCategory loadCategory, Integer loadQuantity, Double loadRatingValue,
-      RatingUnit loadRatingUnit, Double loadPowerFactor, Long version) {
-    this(wayNumber, position, description, status, lockedForBalancing, deviceKind, deviceCurve, deviceRatingAmps,
-        devicePoles, deviceBreakingCapacityKiloAmps, deviceResidualMilliAmps, deviceRcdType, cableLineCsa,
-        cableCpcCsa, cableMaterial, cableInsulation, cableLengthMetres, cableInstallationMethod,
-        cableAmbientCelsius, cableGroupedCircuits, cableThermalInsulationMm, measuredLoopImpedanceOhms,
-        loadDescription, loadCategory, loadQuantity, loadRatingValue, loadRatingUnit, loadPowerFactor, version,
+      Integer wayNumber,
+      PhasePosition position,
+      String description,
+      WayStatus status,
+      Boolean lockedForBalancing,
+      DeviceKind deviceKind,
+      TripCurve deviceCurve,
+      Double deviceRatingAmps,
+      Integer devicePoles,
+      Double deviceBreakingCapacityKiloAmps,
+      Double deviceResidualMilliAmps,
+      RcdType deviceRcdType,
+      Double cableLineCsa,
+      Double cableCpcCsa,
+      ConductorMaterial cableMaterial,
+      Insulation cableInsulation,
+      Double cableLengthMetres,
+      InstallationMethod cableInstallationMethod,
+      Double cableAmbientCelsius,
+      Integer cableGroupedCircuits,
+      Integer cableThermalInsulationMm,
+      Double measuredLoopImpedanceOhms,
+      String loadDescription,
+      LoadCategory loadCategory,
+      Integer loadQuantity,
+      Double loadRatingValue,
+      RatingUnit loadRatingUnit,
+      Double loadPowerFactor,
+      Long version) {
+    this(
+        wayNumber,
+        position,
+        description,
+        status,
+        lockedForBalancing,
+        deviceKind,
+        deviceCurve,
+        deviceRatingAmps,
+        devicePoles,
+        deviceBreakingCapacityKiloAmps,
+        deviceResidualMilliAmps,
+        deviceRcdType,
+        cableLineCsa,
+        cableCpcCsa,
+        cableMaterial,
+        cableInsulation,
+        cableLengthMetres,
+        cableInstallationMethod,
+        cableAmbientCelsius,
+        cableGroupedCircuits,
+        cableThermalInsulationMm,
+        measuredLoopImpedanceOhms,
+        loadDescription,
+        loadCategory,
+        loadQuantity,
+        loadRatingValue,
+        loadRatingUnit,
+        loadPowerFactor,
+        version,
         false);
   }
 
   /** The same row marked as a ring final circuit or not. */
   public CircuitForm withRingFinal(boolean ring) {
     return new CircuitForm(
-        wayNumber, position, description, status, lockedForBalancing, deviceKind, deviceCurve, deviceRatingAmps,
-        devicePoles, deviceBreakingCapacityKiloAmps, deviceResidualMilliAmps, deviceRcdType, cableLineCsa,
-        cableCpcCsa, cableMaterial, cableInsulation, cableLengthMetres, cableInstallationMethod,
-        cableAmbientCelsius, cableGroupedCircuits, cableThermalInsulationMm, measuredLoopImpedanceOhms,
-        loadDescription, loadCategory, loadQuantity, loadRatingValue, loadRatingUnit, loadPowerFactor, version,
-        ring, deviceOverloadSettingAmps, deviceInstantaneousSettingAmps);
+        wayNumber,
+        position,
+        description,
+        status,
+        lockedForBalancing,
+        deviceKind,
+        deviceCurve,
+        deviceRatingAmps,
+        devicePoles,
+        deviceBreakingCapacityKiloAmps,
+        deviceResidualMilliAmps,
+        deviceRcdType,
+        cableLineCsa,
+        cableCpcCsa,
+        cableMaterial,
+        cableInsulation,
+        cableLengthMetres,
+        cableInstallationMethod,
+        cableAmbientCelsius,
+        cableGroupedCircuits,
+        cableThermalInsulationMm,
+        measuredLoopImpedanceOhms,
+        loadDescription,
+        loadCategory,
+        loadQuantity,
+        loadRatingValue,
+        loadRatingUnit,
+        loadPowerFactor,
+        version,
+        ring,
+        deviceOverloadSettingAmps,
+        deviceInstantaneousSettingAmps);
   }
 
   /** The same row with moulded-case breaker settings Ir and Ii (A; null when not recorded). */
   public CircuitForm withMccbSettings(Double overloadSettingAmps, Double instantaneousSettingAmps) {
     return new CircuitForm(
-        wayNumber, position, description, status, lockedForBalancing, deviceKind, deviceCurve, deviceRatingAmps,
-        devicePoles, deviceBreakingCapacityKiloAmps, deviceResidualMilliAmps, deviceRcdType, cableLineCsa,
-        cableCpcCsa, cableMaterial, cableInsulation, cableLengthMetres, cableInstallationMethod,
-        cableAmbientCelsius, cableGroupedCircuits, cableThermalInsulationMm, measuredLoopImpedanceOhms,
-        loadDescription, loadCategory, loadQuantity, loadRatingValue, loadRatingUnit, loadPowerFactor, version,
-        ringFinal, overloadSettingAmps, instantaneousSettingAmps);
+        wayNumber,
+        position,
+        description,
+        status,
+        lockedForBalancing,
+        deviceKind,
+        deviceCurve,
+        deviceRatingAmps,
+        devicePoles,
+        deviceBreakingCapacityKiloAmps,
+        deviceResidualMilliAmps,
+        deviceRcdType,
+        cableLineCsa,
+        cableCpcCsa,
+        cableMaterial,
+        cableInsulation,
+        cableLengthMetres,
+        cableInstallationMethod,
+        cableAmbientCelsius,
+        cableGroupedCircuits,
+        cableThermalInsulationMm,
+        measuredLoopImpedanceOhms,
+        loadDescription,
+        loadCategory,
+        loadQuantity,
+        loadRatingValue,
+        loadRatingUnit,
+        loadPowerFactor,
+        version,
+        ringFinal,
+        overloadSettingAmps,
+        instantaneousSettingAmps);
   }
 
-  /** A new in-use circuit at a position, with a type B MCB, copper 70 °C cable and a blank first load. */
+  /**
+   * A new in-use circuit at a position, with a type B MCB, copper 70 °C cable and a blank first
+   * load.
+   */
   public static CircuitForm blankAt(int wayNumber, PhasePosition position) {
     return new CircuitForm(
-        wayNumber, position, "", WayStatus.IN_USE, false, DeviceKind.MCB, TripCurve.B, null, null, 6.0,
-        null, null, null, null, ConductorMaterial.COPPER, Insulation.THERMOPLASTIC_70, null, null, null,
-        null, null, null, "", LoadCategory.SOCKET_OUTLETS, 1, null, RatingUnit.W, 1.0, null);
+        wayNumber,
+        position,
+        "",
+        WayStatus.IN_USE,
+        false,
+        DeviceKind.MCB,
+        TripCurve.B,
+        null,
+        null,
+        6.0,
+        null,
+        null,
+        null,
+        null,
+        ConductorMaterial.COPPER,
+        Insulation.THERMOPLASTIC_70,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        "",
+        LoadCategory.SOCKET_OUTLETS,
+        1,
+        null,
+        RatingUnit.W,
+        1.0,
+        null);
   }
 
   public static CircuitForm of(Circuit circuit) {
@@ -168,14 +349,28 @@ public record CircuitForm(
       return null;
     }
     return new DeviceDetails(
-        deviceKind, deviceCurve, deviceRatingAmps, devicePoles, deviceBreakingCapacityKiloAmps,
-        deviceResidualMilliAmps, deviceRcdType, deviceOverloadSettingAmps, deviceInstantaneousSettingAmps);
+        deviceKind,
+        deviceCurve,
+        deviceRatingAmps,
+        devicePoles,
+        deviceBreakingCapacityKiloAmps,
+        deviceResidualMilliAmps,
+        deviceRcdType,
+        deviceOverloadSettingAmps,
+        deviceInstantaneousSettingAmps);
   }
 
   CableDetails cableDetails() {
     return new CableDetails(
-        cableLineCsa, cableCpcCsa, cableMaterial, cableInsulation, cableLengthMetres,
-        cableInstallationMethod, cableAmbientCelsius, cableGroupedCircuits, cableThermalInsulationMm);
+        cableLineCsa,
+        cableCpcCsa,
+        cableMaterial,
+        cableInsulation,
+        cableLengthMetres,
+        cableInstallationMethod,
+        cableAmbientCelsius,
+        cableGroupedCircuits,
+        cableThermalInsulationMm);
   }
 
   /** Whether the user started typing a first load (any of its value fields filled). */
@@ -187,7 +382,13 @@ public record CircuitForm(
   LoadForm firstLoad() {
     return new LoadForm(
         loadDescription == null || loadDescription.isBlank() ? description : loadDescription,
-        loadCategory, loadQuantity == null ? 1 : loadQuantity, loadRatingValue, loadRatingUnit,
-        loadPowerFactor, null, null, false);
+        loadCategory,
+        loadQuantity == null ? 1 : loadQuantity,
+        loadRatingValue,
+        loadRatingUnit,
+        loadPowerFactor,
+        null,
+        null,
+        false);
   }
 }

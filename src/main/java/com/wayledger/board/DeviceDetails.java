@@ -10,7 +10,10 @@ import jakarta.persistence.Embeddable;
 import jakarta.persistence.EnumType;
 import jakarta.persistence.Enumerated;
 
-/** A protective device as stored on a circuit or as a board's incomer (columns prefixed by the owner). */
+/**
+ * A protective device as stored on a circuit or as a board's incomer (columns prefixed by the
+ * owner).
+ */
 @Embeddable
 public class DeviceDetails {
 
@@ -48,7 +51,16 @@ public class DeviceDetails {
       Double breakingCapacityKiloAmps,
       Double residualMilliAmps,
       RcdType rcdType) {
-    this(kind, curve, ratingAmps, poles, breakingCapacityKiloAmps, residualMilliAmps, rcdType, null, null);
+    this(
+        kind,
+        curve,
+        ratingAmps,
+        poles,
+        breakingCapacityKiloAmps,
+        residualMilliAmps,
+        rcdType,
+        null,
+        null);
   }
 
   /** A device with moulded-case breaker settings Ir and Ii (kept only when the kind is MCCB). */
@@ -76,8 +88,13 @@ public class DeviceDetails {
   /** A stored device from the engine's description of one (for instance a proposed device). */
   public static DeviceDetails fromSpec(DeviceSpec spec) {
     return new DeviceDetails(
-        spec.kind(), spec.curve(), spec.ratedCurrentAmps(), spec.poles(), spec.breakingCapacityKiloAmps(),
-        spec.residualCurrentMilliAmps(), spec.rcdType());
+        spec.kind(),
+        spec.curve(),
+        spec.ratedCurrentAmps(),
+        spec.poles(),
+        spec.breakingCapacityKiloAmps(),
+        spec.residualCurrentMilliAmps(),
+        spec.rcdType());
   }
 
   /** The engine's view of this device, or null when no device kind is recorded. */
@@ -86,17 +103,25 @@ public class DeviceDetails {
       return null;
     }
     return new DeviceSpec(
-        kind, curve, ratingAmps, poles == null ? defaultPoles : poles, breakingCapacityKiloAmps,
-        residualMilliAmps, rcdType);
+        kind,
+        curve,
+        ratingAmps,
+        poles == null ? defaultPoles : poles,
+        breakingCapacityKiloAmps,
+        residualMilliAmps,
+        rcdType);
   }
 
   /**
-   * The recorded Ir/Ii for the engine, or null (the engine then assumes Ir = In, Ii = 10·In and says so) when this
-   * is no MCCB or the two settings are not both recorded. The services refuse one without the other, so a half
-   * record can only come from old data; it is not completed with an assumption that would then read as recorded.
+   * The recorded Ir/Ii for the engine, or null (the engine then assumes Ir = In, Ii = 10·In and
+   * says so) when this is no MCCB or the two settings are not both recorded. The services refuse
+   * one without the other, so a half record can only come from old data; it is not completed with
+   * an assumption that would then read as recorded.
    */
   public MccbSettings mccbSettings() {
-    if (kind != DeviceKind.MCCB || overloadSettingAmps == null || instantaneousSettingAmps == null) {
+    if (kind != DeviceKind.MCCB
+        || overloadSettingAmps == null
+        || instantaneousSettingAmps == null) {
       return null;
     }
     return new MccbSettings(overloadSettingAmps, instantaneousSettingAmps);
@@ -123,8 +148,10 @@ public class DeviceDetails {
         text.append("Ir ").append(Numbers.plain(overloadSettingAmps)).append(" A");
       }
       if (instantaneousSettingAmps != null) {
-        text.append(overloadSettingAmps != null ? ", " : "").append("Ii ")
-            .append(Numbers.plain(instantaneousSettingAmps)).append(" A");
+        text.append(overloadSettingAmps != null ? ", " : "")
+            .append("Ii ")
+            .append(Numbers.plain(instantaneousSettingAmps))
+            .append(" A");
       }
       text.append(')');
     }

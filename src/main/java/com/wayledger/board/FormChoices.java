@@ -12,7 +12,10 @@ import com.wayledger.engine.TripCurve;
 import com.wayledger.engine.WayStatus;
 import org.springframework.ui.Model;
 
-/** The closed vocabularies the board and circuit forms offer in their drop-downs, named once for both. */
+/**
+ * The closed vocabularies the board and circuit forms offer in their drop-downs, named once for
+ * both.
+ */
 final class FormChoices {
 
   private FormChoices() {}

@@ -24,7 +24,8 @@ public record LoadForm(
     boolean continuous) {
 
   public static LoadForm blank() {
-    return new LoadForm("", LoadCategory.SOCKET_OUTLETS, 1, null, RatingUnit.W, 1.0, null, null, false);
+    return new LoadForm(
+        "", LoadCategory.SOCKET_OUTLETS, 1, null, RatingUnit.W, 1.0, null, null, false);
   }
 
   public static LoadForm of(LoadItem load) {

@@ -74,11 +74,12 @@ public class LoadItem {
 
   /** "2 × 3 kW" style summary for the schedule. */
   public String ratingLabel() {
-    String unit = switch (ratingUnit) {
-      case W -> " W";
-      case VA -> " VA";
-      case A -> " A";
-    };
+    String unit =
+        switch (ratingUnit) {
+          case W -> " W";
+          case VA -> " VA";
+          case A -> " A";
+        };
     return (quantity > 1 ? quantity + " × " : "") + Numbers.plain(ratingValue) + unit;
   }
 

@@ -11,9 +11,9 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * Geometry of the server-drawn phase chart: for each line, a bar of connected current (before diversity)
- * and a bar of demand current (after), against a dashed line at the incomer rating. Coordinates are in the
- * SVG's own units (width {@link #WIDTH}, height {@link #HEIGHT}).
+ * Geometry of the server-drawn phase chart: for each line, a bar of connected current (before
+ * diversity) and a bar of demand current (after), against a dashed line at the incomer rating.
+ * Coordinates are in the SVG's own units (width {@link #WIDTH}, height {@link #HEIGHT}).
  *
  * @param bars one pair of bars per line
  * @param ratingAmps incomer rating, or null when unknown
@@ -21,7 +21,8 @@ import java.util.Map;
  * @param scaleMaxAmps current at the top of the plot area
  * @param ticks axis ticks
  */
-public record PhaseChart(List<Bar> bars, Double ratingAmps, Double ratingY, double scaleMaxAmps, List<Tick> ticks) {
+public record PhaseChart(
+    List<Bar> bars, Double ratingAmps, Double ratingY, double scaleMaxAmps, List<Tick> ticks) {
 
   public static final int WIDTH = 420;
   public static final int HEIGHT = 240;
@@ -31,12 +32,22 @@ public record PhaseChart(List<Bar> bars, Double ratingAmps, Double ratingY, doub
 
   /** Bars of one line: connected and demand current with their rectangles. */
   public record Bar(
-      Phase phase, double connectedAmps, double demandAmps, double x, double connectedY, double connectedHeight,
-      double demandY, double demandHeight, boolean overRating) {}
+      Phase phase,
+      double connectedAmps,
+      double demandAmps,
+      double x,
+      double connectedY,
+      double connectedHeight,
+      double demandY,
+      double demandHeight,
+      boolean overRating) {}
 
   public record Tick(double amps, double y) {}
 
-  /** Connected current per line from the circuits' connected power (a three-pole circuit shares it equally). */
+  /**
+   * Connected current per line from the circuits' connected power (a three-pole circuit shares it
+   * equally).
+   */
   static Map<Phase, Double> connectedAmps(BoardDemand demand) {
     Map<Phase, double[]> power = new EnumMap<>(Phase.class);
     for (Phase phase : Phase.values()) {
@@ -53,7 +64,8 @@ public record PhaseChart(List<Bar> bars, Double ratingAmps, Double ratingY, doub
       }
     }
     Map<Phase, Double> amps = new EnumMap<>(Phase.class);
-    power.forEach((phase, pq) -> amps.put(phase, Math.hypot(pq[0], pq[1]) / demand.nominalVoltageVolts()));
+    power.forEach(
+        (phase, pq) -> amps.put(phase, Math.hypot(pq[0], pq[1]) / demand.nominalVoltageVolts()));
     return amps;
   }
 
@@ -74,16 +86,25 @@ public record PhaseChart(List<Bar> bars, Double ratingAmps, Double ratingY, doub
       double demandAmps = demandOf(demand, phase);
       double connectedHeight = plotHeight * connectedAmps / scaleMax;
       double demandHeight = plotHeight * demandAmps / scaleMax;
-      bars.add(new Bar(phase, connectedAmps, demandAmps, LEFT + i * slot + slot * 0.15,
-          BOTTOM - connectedHeight, connectedHeight, BOTTOM - demandHeight, demandHeight,
-          incomerRatingAmps != null && demandAmps > incomerRatingAmps));
+      bars.add(
+          new Bar(
+              phase,
+              connectedAmps,
+              demandAmps,
+              LEFT + i * slot + slot * 0.15,
+              BOTTOM - connectedHeight,
+              connectedHeight,
+              BOTTOM - demandHeight,
+              demandHeight,
+              incomerRatingAmps != null && demandAmps > incomerRatingAmps));
     }
     List<Tick> ticks = new ArrayList<>();
     for (int i = 0; i <= 4; i++) {
       double amps = scaleMax * i / 4;
       ticks.add(new Tick(amps, BOTTOM - plotHeight * i / 4));
     }
-    Double ratingY = incomerRatingAmps == null ? null : BOTTOM - plotHeight * incomerRatingAmps / scaleMax;
+    Double ratingY =
+        incomerRatingAmps == null ? null : BOTTOM - plotHeight * incomerRatingAmps / scaleMax;
     return new PhaseChart(bars, incomerRatingAmps, ratingY, scaleMax, ticks);
   }
 

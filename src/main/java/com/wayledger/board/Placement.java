@@ -3,8 +3,8 @@ package com.wayledger.board;
 import com.wayledger.engine.Phase;
 
 /**
- * Where one single-pole circuit should sit: a way and a line. Written and read as "circuitId:way:phase" so that
- * a page can carry a whole rearrangement (and its undo) in a form.
+ * Where one single-pole circuit should sit: a way and a line. Written and read as
+ * "circuitId:way:phase" so that a page can carry a whole rearrangement (and its undo) in a form.
  */
 public record Placement(long circuitId, int wayNumber, Phase phase) {
 
@@ -19,7 +19,8 @@ public record Placement(long circuitId, int wayNumber, Phase phase) {
       return null;
     }
     try {
-      return new Placement(Long.parseLong(parts[0]), Integer.parseInt(parts[1]), Phase.valueOf(parts[2]));
+      return new Placement(
+          Long.parseLong(parts[0]), Integer.parseInt(parts[1]), Phase.valueOf(parts[2]));
     } catch (IllegalArgumentException malformed) {
       return null;
     }

@@ -21,8 +21,9 @@ import org.springframework.web.bind.annotation.RequestHeader;
 import org.springframework.web.bind.annotation.RequestParam;
 
 /**
- * Inline editing of a board's schedule. With htmx each request answers with the fragment to swap in (the
- * schedule table, or the editor row with its messages and status 422); without it, with a whole page.
+ * Inline editing of a board's schedule. With htmx each request answers with the fragment to swap in
+ * (the schedule table, or the editor row with its messages and status 422); without it, with a
+ * whole page.
  */
 @Controller
 public class ScheduleController {
@@ -36,7 +37,8 @@ public class ScheduleController {
   private final SchedulePage schedulePage;
   private final BoardService boards;
 
-  public ScheduleController(ScheduleService schedule, SchedulePage schedulePage, BoardService boards) {
+  public ScheduleController(
+      ScheduleService schedule, SchedulePage schedulePage, BoardService boards) {
     this.schedule = schedule;
     this.schedulePage = schedulePage;
     this.boards = boards;
@@ -90,7 +92,9 @@ public class ScheduleController {
 
   @GetMapping("/circuits/{id}/edit")
   public String edit(
-      @PathVariable long id, @RequestHeader(value = HX, required = false) String htmx, Model model) {
+      @PathVariable long id,
+      @RequestHeader(value = HX, required = false) String htmx,
+      Model model) {
     fillEditor(model, id, CircuitForm.of(schedule.circuit(id)));
     return htmx != null ? EDITOR_FRAGMENT : EDITOR_PAGE;
   }
@@ -123,8 +127,10 @@ public class ScheduleController {
 
   @PostMapping("/circuits/{id}/delete")
   public String delete(
-      @PathVariable long id, @RequestHeader(value = HX, required = false) String htmx,
-      @RequestParam(required = false) String reason, Model model) {
+      @PathVariable long id,
+      @RequestHeader(value = HX, required = false) String htmx,
+      @RequestParam(required = false) String reason,
+      Model model) {
     long boardId = schedule.deleteCircuit(id, reason);
     return savedSchedule(boardId, null, htmx, model, null);
   }
@@ -186,8 +192,10 @@ public class ScheduleController {
 
   @PostMapping("/loads/{id}/delete")
   public String deleteLoad(
-      @PathVariable long id, @RequestHeader(value = HX, required = false) String htmx,
-      @RequestParam(required = false) String reason, Model model) {
+      @PathVariable long id,
+      @RequestHeader(value = HX, required = false) String htmx,
+      @RequestParam(required = false) String reason,
+      Model model) {
     long circuitId = schedule.deleteLoad(id, reason);
     if (htmx == null) {
       return "redirect:/circuits/" + circuitId + "/edit";
@@ -197,11 +205,13 @@ public class ScheduleController {
   }
 
   /**
-   * Someone saved the circuit after this editor was opened: 409, the editor again holding the values saved
-   * now (and their version, so a second save is a deliberate overwrite), with the user's own values listed
-   * beside them so nothing typed is lost. Same answer for htmx (swapped into the row) and plain requests.
+   * Someone saved the circuit after this editor was opened: 409, the editor again holding the
+   * values saved now (and their version, so a second save is a deliberate overwrite), with the
+   * user's own values listed beside them so nothing typed is lost. Same answer for htmx (swapped
+   * into the row) and plain requests.
    */
-  private String conflict(long id, CircuitForm yours, String htmx, Model model, HttpServletResponse response) {
+  private String conflict(
+      long id, CircuitForm yours, String htmx, Model model, HttpServletResponse response) {
     CircuitForm saved = CircuitForm.of(schedule.circuit(id));
     model.asMap().remove(BindingResult.MODEL_KEY_PREFIX + "form");
     model.addAttribute("conflict", RecordDiff.between(yours, saved, java.util.Set.of("version")));
@@ -225,8 +235,9 @@ public class ScheduleController {
   }
 
   /**
-   * After a successful change: with htmx the whole schedule table replaces the editor row (the form aims
-   * its response at its own row, for messages; success re-aims it at the table); without, a redirect.
+   * After a successful change: with htmx the whole schedule table replaces the editor row (the form
+   * aims its response at its own row, for messages; success re-aims it at the table); without, a
+   * redirect.
    */
   private String savedSchedule(
       long boardId, Integer focusAfterWay, String htmx, Model model, HttpServletResponse response) {

@@ -14,14 +14,17 @@ import java.util.Map;
 import java.util.stream.Collectors;
 
 /**
- * The one place where stored sites, boards, circuits and loads become engine inputs. Entities never reach
- * calculation code; every screen, export and API result that computes anything goes through here.
+ * The one place where stored sites, boards, circuits and loads become engine inputs. Entities never
+ * reach calculation code; every screen, export and API result that computes anything goes through
+ * here.
  */
 public final class ScheduleMapper {
 
   private ScheduleMapper() {}
 
-  /** The whole site as the engine sees it; {@code boards} are the site's boards with their circuits. */
+  /**
+   * The whole site as the engine sees it; {@code boards} are the site's boards with their circuits.
+   */
   public static SiteSpec toSpec(Site site, List<Board> boards) {
     Map<Long, Long> childByFeedingCircuit =
         boards.stream()
@@ -29,14 +32,16 @@ public final class ScheduleMapper {
             .collect(Collectors.toMap(Board::getFedFromCircuitId, Board::getId, (a, b) -> a));
     List<BoardSpec> boardSpecs =
         boards.stream().map(board -> toSpec(board, childByFeedingCircuit)).toList();
-    return new SiteSpec(site.getId(), site.getName(), supplyOf(site), site.getDefaultDiversityMethod(), boardSpecs);
+    return new SiteSpec(
+        site.getId(), site.getName(), supplyOf(site), site.getDefaultDiversityMethod(), boardSpecs);
   }
 
   /**
-   * The moulded-case breaker settings recorded on these boards (their circuits' devices and their incomers), keyed
-   * by circuit and board id. A device is included only when it is an MCCB with both Ir and Ii recorded (the services
-   * refuse one without the other); any other MCCB is left out, so the protection engine assumes Ir = In and
-   * Ii = 10·In for it and its findings say "assumed".
+   * The moulded-case breaker settings recorded on these boards (their circuits' devices and their
+   * incomers), keyed by circuit and board id. A device is included only when it is an MCCB with
+   * both Ir and Ii recorded (the services refuse one without the other); any other MCCB is left
+   * out, so the protection engine assumes Ir = In and Ii = 10·In for it and its findings say
+   * "assumed".
    */
   public static RecordedMccbSettings mccbSettingsOf(List<Board> boards) {
     Map<Long, MccbSettings> byCircuit = new HashMap<>();
@@ -55,30 +60,54 @@ public final class ScheduleMapper {
   }
 
   /**
-   * The same site with some single-pole circuits placed elsewhere (a balancing plan), so the engines can say
-   * what the board would carry after the moves without anything being stored.
+   * The same site with some single-pole circuits placed elsewhere (a balancing plan), so the
+   * engines can say what the board would carry after the moves without anything being stored.
    */
   public static SiteSpec withPlacements(SiteSpec site, List<Placement> placements) {
     Map<Long, Placement> byCircuit =
         placements.stream().collect(Collectors.toMap(Placement::circuitId, p -> p, (a, b) -> b));
     List<BoardSpec> boards =
         site.boards().stream()
-            .map(board -> new BoardSpec(board.id(), board.reference(), board.phases(), board.wayCount(),
-                board.busbarRatingAmps(), board.incomer(), board.parentBoardId(), board.submainCable(),
-                board.unbalanceLimitPercent(), board.coincidenceFactor(), board.diversityMethodKey(),
-                board.measuredExternalLoopImpedanceOhms(), board.measuredFaultCurrentKiloAmps(),
-                board.circuits().stream()
-                    .map(circuit -> {
-                      Placement placement = byCircuit.get(circuit.id());
-                      return placement == null ? circuit : new CircuitSpec(circuit.id(), placement.wayNumber(),
-                          com.wayledger.engine.PhasePosition.on(placement.phase()), circuit.description(),
-                          circuit.status(), circuit.lockedForBalancing(), circuit.device(), circuit.cable(),
-                          circuit.loads(), circuit.feedsBoardId(), circuit.measuredLoopImpedanceOhms(),
-                          circuit.ringFinal());
-                    })
-                    .toList()))
+            .map(
+                board ->
+                    new BoardSpec(
+                        board.id(),
+                        board.reference(),
+                        board.phases(),
+                        board.wayCount(),
+                        board.busbarRatingAmps(),
+                        board.incomer(),
+                        board.parentBoardId(),
+                        board.submainCable(),
+                        board.unbalanceLimitPercent(),
+                        board.coincidenceFactor(),
+                        board.diversityMethodKey(),
+                        board.measuredExternalLoopImpedanceOhms(),
+                        board.measuredFaultCurrentKiloAmps(),
+                        board.circuits().stream()
+                            .map(
+                                circuit -> {
+                                  Placement placement = byCircuit.get(circuit.id());
+                                  return placement == null
+                                      ? circuit
+                                      : new CircuitSpec(
+                                          circuit.id(),
+                                          placement.wayNumber(),
+                                          com.wayledger.engine.PhasePosition.on(placement.phase()),
+                                          circuit.description(),
+                                          circuit.status(),
+                                          circuit.lockedForBalancing(),
+                                          circuit.device(),
+                                          circuit.cable(),
+                                          circuit.loads(),
+                                          circuit.feedsBoardId(),
+                                          circuit.measuredLoopImpedanceOhms(),
+                                          circuit.ringFinal());
+                                })
+                            .toList()))
             .toList();
-    return new SiteSpec(site.id(), site.name(), site.supply(), site.defaultDiversityMethodKey(), boards);
+    return new SiteSpec(
+        site.id(), site.name(), site.supply(), site.defaultDiversityMethodKey(), boards);
   }
 
   public static SupplySpec supplyOf(Site site) {
@@ -92,7 +121,8 @@ public final class ScheduleMapper {
         site.getSupplyFuseRatingAmps());
   }
 
-  // --- change log (loadlog) support: snapshots are engine records, so a replay maps nothing twice ---
+  // --- change log (loadlog) support: snapshots are engine records, so a replay maps nothing twice
+  // ---
 
   /** A circuit as the engine sees it, kept as the change log's before/after snapshot. */
   public static CircuitSpec snapshotOf(Circuit circuit, Long feedsBoardId) {
@@ -101,14 +131,17 @@ public final class ScheduleMapper {
 
   /** A board without its circuits, kept as the change log's before/after snapshot. */
   public static BoardSpec headerOf(Board board) {
-    // never touches board.getCircuits(): loading them would keep them in the session of a board being deleted
+    // never touches board.getCircuits(): loading them would keep them in the session of a board
+    // being deleted
     return new BoardSpec(
         board.getId(),
         board.getReference(),
         board.getPhases(),
         board.getWayCount(),
         board.getBusbarRatingAmps(),
-        board.getIncomer() == null ? null : board.getIncomer().toSpec(board.getPhases() == 3 ? 3 : 1),
+        board.getIncomer() == null
+            ? null
+            : board.getIncomer().toSpec(board.getPhases() == 3 ? 3 : 1),
         board.getParent() == null ? null : board.getParent().getId(),
         board.getSubmain() == null ? null : board.getSubmain().toSpec(),
         board.getUnbalanceLimitPercent(),
@@ -119,16 +152,28 @@ public final class ScheduleMapper {
         List.of());
   }
 
-  /** A board rebuilt from a logged header and the circuits it held at one moment (the log's replay). */
+  /**
+   * A board rebuilt from a logged header and the circuits it held at one moment (the log's replay).
+   */
   public static BoardSpec replayed(BoardSpec header, java.util.Collection<CircuitSpec> circuits) {
     return new BoardSpec(
-        header.id(), header.reference(), header.phases(), header.wayCount(), header.busbarRatingAmps(),
-        header.incomer(), header.parentBoardId(), header.submainCable(), header.unbalanceLimitPercent(),
-        header.coincidenceFactor(), header.diversityMethodKey(), header.measuredExternalLoopImpedanceOhms(),
+        header.id(),
+        header.reference(),
+        header.phases(),
+        header.wayCount(),
+        header.busbarRatingAmps(),
+        header.incomer(),
+        header.parentBoardId(),
+        header.submainCable(),
+        header.unbalanceLimitPercent(),
+        header.coincidenceFactor(),
+        header.diversityMethodKey(),
+        header.measuredExternalLoopImpedanceOhms(),
         header.measuredFaultCurrentKiloAmps(),
         circuits.stream()
-            .sorted(java.util.Comparator.comparingInt(CircuitSpec::wayNumber)
-                .thenComparing(CircuitSpec::position))
+            .sorted(
+                java.util.Comparator.comparingInt(CircuitSpec::wayNumber)
+                    .thenComparing(CircuitSpec::position))
             .toList());
   }
 
@@ -143,7 +188,9 @@ public final class ScheduleMapper {
         board.getPhases(),
         board.getWayCount(),
         board.getBusbarRatingAmps(),
-        board.getIncomer() == null ? null : board.getIncomer().toSpec(board.getPhases() == 3 ? 3 : 1),
+        board.getIncomer() == null
+            ? null
+            : board.getIncomer().toSpec(board.getPhases() == 3 ? 3 : 1),
         board.getParent() == null ? null : board.getParent().getId(),
         board.getSubmain() == null ? null : board.getSubmain().toSpec(),
         board.getUnbalanceLimitPercent(),

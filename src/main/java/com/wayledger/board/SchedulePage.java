@@ -5,7 +5,9 @@ import org.springframework.stereotype.Component;
 import org.springframework.transaction.annotation.Transactional;
 import org.springframework.ui.Model;
 
-/** Gathers what the schedule table of a board needs, for the full page and for its htmx fragments. */
+/**
+ * Gathers what the schedule table of a board needs, for the full page and for its htmx fragments.
+ */
 @Component
 class SchedulePage {
 
@@ -25,12 +27,13 @@ class SchedulePage {
   }
 
   /**
-   * As {@link #fill(Model, long)}, and puts the keyboard focus on the first free position after the given
-   * way, so that after saving one row the next is one keystroke away.
+   * As {@link #fill(Model, long)}, and puts the keyboard focus on the first free position after the
+   * given way, so that after saving one row the next is one keystroke away.
    */
   @Transactional(readOnly = true)
   public Board fill(Model model, long boardId, Integer focusAfterWay) {
-    Board board = boards.findById(boardId).orElseThrow(() -> new NotFoundException("Board", boardId));
+    Board board =
+        boards.findById(boardId).orElseThrow(() -> new NotFoundException("Board", boardId));
     var onBoard = circuits.findByBoard(boardId);
     onBoard.forEach(circuit -> circuit.getLoads().size());
     model.addAttribute("board", board);
@@ -64,7 +67,8 @@ class SchedulePage {
     if (demand != null) {
       model.addAttribute(
           "phaseChart",
-          PhaseChart.of(demand, board.getIncomer() == null ? null : board.getIncomer().getRatingAmps()));
+          PhaseChart.of(
+              demand, board.getIncomer() == null ? null : board.getIncomer().getRatingAmps()));
       model.addAttribute("connectedAmps", PhaseChart.connectedAmps(demand));
     }
     return board;

@@ -21,11 +21,12 @@ import org.springframework.stereotype.Service;
 import org.springframework.transaction.annotation.Transactional;
 
 /**
- * Every change to a board's circuits and loads goes through here, so that the rules of a schedule (one
- * circuit per position, ways within the board, a device wherever the position is not empty) live in one
- * place. Each method is one transaction: a change is stored whole or not at all, together with its entry in
- * the change log (a {@link ScheduleChanged} event, recorded by the loadlog package in the same transaction).
- * The optional {@code reason} (a work order, say) goes into that entry.
+ * Every change to a board's circuits and loads goes through here, so that the rules of a schedule
+ * (one circuit per position, ways within the board, a device wherever the position is not empty)
+ * live in one place. Each method is one transaction: a change is stored whole or not at all,
+ * together with its entry in the change log (a {@link ScheduleChanged} event, recorded by the
+ * loadlog package in the same transaction). The optional {@code reason} (a work order, say) goes
+ * into that entry.
  */
 @Service
 public class ScheduleService {
@@ -78,7 +79,8 @@ public class ScheduleService {
 
   @Transactional
   public Circuit addCircuit(long boardId, CircuitForm form, String reason) {
-    Board board = boards.findById(boardId).orElseThrow(() -> new NotFoundException("Board", boardId));
+    Board board =
+        boards.findById(boardId).orElseThrow(() -> new NotFoundException("Board", boardId));
     checkCircuitRules(board, form, null);
     LoadForm firstLoad = form.hasFirstLoad() ? checkedFirstLoad(form) : null;
     Circuit circuit = new Circuit(board);
@@ -118,11 +120,12 @@ public class ScheduleService {
   }
 
   /**
-   * Fits another protective device to an in-use circuit (for instance an accepted proposal), keeping its
-   * cable and loads; refused when the circuit changed since the proposal was shown.
+   * Fits another protective device to an in-use circuit (for instance an accepted proposal),
+   * keeping its cable and loads; refused when the circuit changed since the proposal was shown.
    */
   @Transactional
-  public Circuit replaceDevice(long circuitId, long expectedVersion, com.wayledger.engine.DeviceSpec device) {
+  public Circuit replaceDevice(
+      long circuitId, long expectedVersion, com.wayledger.engine.DeviceSpec device) {
     Circuit circuit = circuit(circuitId);
     if (circuit.getVersion() != expectedVersion) {
       throw new StaleEditException("Circuit " + circuit.getDescription());
@@ -134,26 +137,39 @@ public class ScheduleService {
     circuit.replaceDevice(DeviceDetails.fromSpec(device));
     circuit.getBoard().markScheduleChanged();
     entityManager.flush();
-    logged(circuit, ChangeKind.CIRCUIT_EDITED, "device replaced by the proposal " + circuit.getDevice().label(),
-        before, snapshot(circuit), "device proposal accepted");
+    logged(
+        circuit,
+        ChangeKind.CIRCUIT_EDITED,
+        "device replaced by the proposal " + circuit.getDevice().label(),
+        before,
+        snapshot(circuit),
+        "device proposal accepted");
     return circuit;
   }
 
   /**
-   * Moves single-pole circuits of one board to other ways and lines in one transaction (a balancing plan or
-   * its undo): all of them or none. Refused when the board changed since the plan was shown, when a circuit
-   * is locked, three-pole or on another board, or when a target position is taken by a circuit that stays.
+   * Moves single-pole circuits of one board to other ways and lines in one transaction (a balancing
+   * plan or its undo): all of them or none. Refused when the board changed since the plan was
+   * shown, when a circuit is locked, three-pole or on another board, or when a target position is
+   * taken by a circuit that stays.
    */
   @Transactional
-  public void rearrange(long boardId, long expectedBoardVersion, java.util.List<Placement> placements) {
+  public void rearrange(
+      long boardId, long expectedBoardVersion, java.util.List<Placement> placements) {
     rearrange(boardId, expectedBoardVersion, placements, null);
   }
 
-  /** As {@link #rearrange(long, long, java.util.List)}, with the reason recorded in the change log. */
+  /**
+   * As {@link #rearrange(long, long, java.util.List)}, with the reason recorded in the change log.
+   */
   @Transactional
   public void rearrange(
-      long boardId, long expectedBoardVersion, java.util.List<Placement> placements, String reason) {
-    Board board = boards.findById(boardId).orElseThrow(() -> new NotFoundException("Board", boardId));
+      long boardId,
+      long expectedBoardVersion,
+      java.util.List<Placement> placements,
+      String reason) {
+    Board board =
+        boards.findById(boardId).orElseThrow(() -> new NotFoundException("Board", boardId));
     if (board.getVersion() != expectedBoardVersion) {
       throw new StaleEditException("Board " + board.getReference());
     }
@@ -174,22 +190,33 @@ public class ScheduleService {
       }
       moving.add(circuit);
     }
-    java.util.List<com.wayledger.engine.CircuitSpec> before = moving.stream().map(this::snapshot).toList();
+    java.util.List<com.wayledger.engine.CircuitSpec> before =
+        moving.stream().map(this::snapshot).toList();
     for (Circuit circuit : moving) {
       jdbc.sql("DELETE FROM way_slot WHERE circuit_id = ?").param(circuit.getId()).update();
     }
     for (int i = 0; i < moving.size(); i++) {
-      moving.get(i).moveTo(placements.get(i).wayNumber(), PhasePosition.on(placements.get(i).phase()));
+      moving
+          .get(i)
+          .moveTo(placements.get(i).wayNumber(), PhasePosition.on(placements.get(i).phase()));
     }
     for (Circuit circuit : moving) {
       occupy(board, circuit);
     }
     board.markScheduleChanged();
     entityManager.flush();
-    java.util.List<com.wayledger.engine.CircuitSpec> after = moving.stream().map(this::snapshot).toList();
+    java.util.List<com.wayledger.engine.CircuitSpec> after =
+        moving.stream().map(this::snapshot).toList();
     events.publishEvent(
-        new ScheduleChanged(board.getSite().getId(), board.getId(), null, ChangeKind.BALANCING_APPLIED,
-            "Phase balancing: " + moving.size() + " circuit(s) moved", before, after, reason));
+        new ScheduleChanged(
+            board.getSite().getId(),
+            board.getId(),
+            null,
+            ChangeKind.BALANCING_APPLIED,
+            "Phase balancing: " + moving.size() + " circuit(s) moved",
+            before,
+            after,
+            reason));
   }
 
   /** Deletes a circuit with its loads; returns the id of the board it was on. */
@@ -228,8 +255,13 @@ public class ScheduleService {
     circuit.addLoad(load);
     circuit.getBoard().markScheduleChanged();
     entityManager.flush();
-    logged(circuit, ChangeKind.LOAD_ADDED, "load “" + load.getDescription() + "” added", before,
-        snapshot(circuit), reason);
+    logged(
+        circuit,
+        ChangeKind.LOAD_ADDED,
+        "load “" + load.getDescription() + "” added",
+        before,
+        snapshot(circuit),
+        reason);
     return load;
   }
 
@@ -244,8 +276,13 @@ public class ScheduleService {
     var before = snapshot(load.getCircuit());
     load.apply(form);
     load.getCircuit().getBoard().markScheduleChanged();
-    logged(load.getCircuit(), ChangeKind.LOAD_EDITED, "load “" + load.getDescription() + "” changed", before,
-        snapshot(load.getCircuit()), reason);
+    logged(
+        load.getCircuit(),
+        ChangeKind.LOAD_EDITED,
+        "load “" + load.getDescription() + "” changed",
+        before,
+        snapshot(load.getCircuit()),
+        reason);
     return load;
   }
 
@@ -263,8 +300,13 @@ public class ScheduleService {
     var before = snapshot(circuit);
     circuit.getLoads().remove(load);
     circuit.getBoard().markScheduleChanged();
-    logged(circuit, ChangeKind.LOAD_REMOVED, "load “" + load.getDescription() + "” removed", before,
-        snapshot(circuit), reason);
+    logged(
+        circuit,
+        ChangeKind.LOAD_REMOVED,
+        "load “" + load.getDescription() + "” removed",
+        before,
+        snapshot(circuit),
+        reason);
     return circuit.getId();
   }
 
@@ -282,13 +324,21 @@ public class ScheduleService {
     return ScheduleMapper.snapshotOf(circuit, feeds);
   }
 
-  private void logged(Circuit circuit, ChangeKind kind, String what, Object before, Object after, String reason) {
+  private void logged(
+      Circuit circuit, ChangeKind kind, String what, Object before, Object after, String reason) {
     Board board = circuit.getBoard();
     String summary =
         "Way " + circuit.positionLabel() + " “" + circuit.getDescription() + "”: " + what;
     events.publishEvent(
         new ScheduleChanged(
-            board.getSite().getId(), board.getId(), circuit.getId(), kind, summary, before, after, reason));
+            board.getSite().getId(),
+            board.getId(),
+            circuit.getId(),
+            kind,
+            summary,
+            before,
+            after,
+            reason));
   }
 
   private void checkCircuitRules(Board board, CircuitForm form, Long circuitId) {
@@ -305,8 +355,12 @@ public class ScheduleService {
       throw new RuleViolation("deviceResidualMilliAmps", "circuit.device.residualRequired");
     }
     MccbSettingRules.check(
-        form.deviceKind(), form.deviceRatingAmps(), form.deviceOverloadSettingAmps(),
-        form.deviceInstantaneousSettingAmps(), "deviceOverloadSettingAmps", "deviceInstantaneousSettingAmps");
+        form.deviceKind(),
+        form.deviceRatingAmps(),
+        form.deviceOverloadSettingAmps(),
+        form.deviceInstantaneousSettingAmps(),
+        "deviceOverloadSettingAmps",
+        "deviceInstantaneousSettingAmps");
     for (Phase phase : form.position().phases()) {
       Long holder =
           jdbc.sql(
@@ -316,7 +370,8 @@ public class ScheduleService {
               .optional()
               .orElse(null);
       if (holder != null && !holder.equals(circuitId)) {
-        throw new RuleViolation("wayNumber", "circuit.position.occupied", form.wayNumber(), phase.name());
+        throw new RuleViolation(
+            "wayNumber", "circuit.position.occupied", form.wayNumber(), phase.name());
       }
     }
   }
@@ -327,12 +382,15 @@ public class ScheduleService {
     if (!problems.isEmpty()) {
       ConstraintViolation<LoadForm> first =
           problems.stream()
-              .sorted((a, b) -> a.getPropertyPath().toString().compareTo(b.getPropertyPath().toString()))
+              .sorted(
+                  (a, b) ->
+                      a.getPropertyPath().toString().compareTo(b.getPropertyPath().toString()))
               .findFirst()
               .orElseThrow();
       String field = first.getPropertyPath().toString();
       throw new RuleViolation(
-          "load" + Character.toUpperCase(field.charAt(0)) + field.substring(1), "load.invalid",
+          "load" + Character.toUpperCase(field.charAt(0)) + field.substring(1),
+          "load.invalid",
           first.getMessage());
     }
     if (form.status() != WayStatus.IN_USE) {
@@ -341,19 +399,26 @@ public class ScheduleService {
     return load;
   }
 
-  /** Rewrites the circuit's rows in way_slot; the primary key there refuses a second circuit per position. */
+  /**
+   * Rewrites the circuit's rows in way_slot; the primary key there refuses a second circuit per
+   * position.
+   */
   private void occupy(Board board, Circuit circuit) {
     try {
       entityManager.flush();
       jdbc.sql("DELETE FROM way_slot WHERE circuit_id = ?").param(circuit.getId()).update();
       for (Phase phase : circuit.getPosition().phases()) {
-        jdbc.sql("INSERT INTO way_slot (board_id, way_number, phase, circuit_id) VALUES (?, ?, ?, ?)")
+        jdbc.sql(
+                "INSERT INTO way_slot (board_id, way_number, phase, circuit_id) VALUES (?, ?, ?, ?)")
             .params(board.getId(), circuit.getWayNumber(), phase.name(), circuit.getId())
             .update();
       }
     } catch (DataIntegrityViolationException raced) {
       throw new RuleViolation(
-          "wayNumber", "circuit.position.occupied", circuit.getWayNumber(), circuit.getPosition().name());
+          "wayNumber",
+          "circuit.position.occupied",
+          circuit.getWayNumber(),
+          circuit.getPosition().name());
     }
   }
 }

@@ -17,8 +17,9 @@ import java.util.Map;
 import java.util.Optional;
 
 /**
- * Everything the engines say about one stored site, computed on read (no stored totals): the engine input it
- * was computed from, the demand on every circuit, phase and board, and the protection findings.
+ * Everything the engines say about one stored site, computed on read (no stored totals): the engine
+ * input it was computed from, the demand on every circuit, phase and board, and the protection
+ * findings.
  */
 public record SiteAnalysis(SiteSpec spec, SiteDemand demand, SiteFindings findings) {
 
@@ -36,25 +37,33 @@ public record SiteAnalysis(SiteSpec spec, SiteDemand demand, SiteFindings findin
     return board == null
         ? Map.of()
         : board.circuits().stream()
-            .collect(java.util.stream.Collectors.toMap(CircuitDemand::circuitId, c -> c, (a, b) -> a));
+            .collect(
+                java.util.stream.Collectors.toMap(CircuitDemand::circuitId, c -> c, (a, b) -> a));
   }
 
   /** Findings of a board's circuits by circuit id. */
   public Map<Long, CircuitFindings> circuitFindings(long boardId) {
     return boardFindings(boardId)
-        .map(board -> board.circuits().stream()
-            .collect(java.util.stream.Collectors.toMap(CircuitFindings::circuitId, c -> c, (a, b) -> a)))
+        .map(
+            board ->
+                board.circuits().stream()
+                    .collect(
+                        java.util.stream.Collectors.toMap(
+                            CircuitFindings::circuitId, c -> c, (a, b) -> a)))
         .orElse(Map.of());
   }
 
   /** Every finding of a board (its own and its circuits') that is a problem, danger first. */
   public List<Finding> problems(long boardId) {
     return boardFindings(boardId)
-        .map(board -> java.util.stream.Stream.concat(
-                board.findings().stream(), board.circuits().stream().flatMap(c -> c.findings().stream()))
-            .filter(SiteAnalysis::isProblem)
-            .sorted(java.util.Comparator.comparing(Finding::verdict))
-            .toList())
+        .map(
+            board ->
+                java.util.stream.Stream.concat(
+                        board.findings().stream(),
+                        board.circuits().stream().flatMap(c -> c.findings().stream()))
+                    .filter(SiteAnalysis::isProblem)
+                    .sorted(java.util.Comparator.comparing(Finding::verdict))
+                    .toList())
         .orElse(List.of());
   }
 
@@ -70,13 +79,20 @@ public record SiteAnalysis(SiteSpec spec, SiteDemand demand, SiteFindings findin
   /** Problem counts per verdict for each circuit of a board, by circuit id. */
   public Map<Long, Map<Verdict, Long>> circuitProblemCounts(long boardId) {
     Map<Long, Map<Verdict, Long>> counts = new java.util.HashMap<>();
-    boardFindings(boardId).ifPresent(board -> board.circuits().forEach(circuit -> {
-      Map<Verdict, Long> perVerdict = new EnumMap<>(Verdict.class);
-      circuit.findings().stream()
-          .filter(SiteAnalysis::isProblem)
-          .forEach(finding -> perVerdict.merge(finding.verdict(), 1L, Long::sum));
-      counts.put(circuit.circuitId(), perVerdict);
-    }));
+    boardFindings(boardId)
+        .ifPresent(
+            board ->
+                board
+                    .circuits()
+                    .forEach(
+                        circuit -> {
+                          Map<Verdict, Long> perVerdict = new EnumMap<>(Verdict.class);
+                          circuit.findings().stream()
+                              .filter(SiteAnalysis::isProblem)
+                              .forEach(
+                                  finding -> perVerdict.merge(finding.verdict(), 1L, Long::sum));
+                          counts.put(circuit.circuitId(), perVerdict);
+                        }));
     return counts;
   }
 
@@ -85,7 +101,8 @@ public record SiteAnalysis(SiteSpec spec, SiteDemand demand, SiteFindings findin
     Map<Long, BoardHeadline> headlines = new java.util.HashMap<>();
     for (BoardDemand board : demand.boards()) {
       headlines.put(
-          board.boardId(), BoardHeadline.of(board, worstPhase(board.boardId()), problemCounts(board.boardId())));
+          board.boardId(),
+          BoardHeadline.of(board, worstPhase(board.boardId()), problemCounts(board.boardId())));
     }
     return headlines;
   }

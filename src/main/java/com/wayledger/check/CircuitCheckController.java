@@ -28,8 +28,8 @@ import org.springframework.web.bind.annotation.RequestParam;
 import org.springframework.web.servlet.mvc.support.RedirectAttributes;
 
 /**
- * One circuit as the checks see it: its findings with the numbers behind them, the lowest device that passes
- * every check at once (with "apply" for editors), and its time–current chart.
+ * One circuit as the checks see it: its findings with the numbers behind them, the lowest device
+ * that passes every check at once (with "apply" for editors), and its time–current chart.
  */
 @Controller
 public class CircuitCheckController {
@@ -62,7 +62,8 @@ public class CircuitCheckController {
     if (spec != null && spec.device() != null && spec.device().ratedCurrentAmps() != null) {
       Resolved<DeviceCharacteristic> characteristic =
           DeviceCharacteristic.of(
-              spec.device(), circuit.getDevice() == null ? null : circuit.getDevice().mccbSettings(),
+              spec.device(),
+              circuit.getDevice() == null ? null : circuit.getDevice().mccbSettings(),
               ProtectionSettings.DEFAULT_MCCB_INSTANTANEOUS_MULTIPLE);
       Double surgeSeconds =
           loads.stream()
@@ -72,11 +73,19 @@ public class CircuitCheckController {
               .map(millis -> millis / 1000.0)
               .orElse(null);
       Double faultAmps = null;
-      if (findings != null && findings.loopImpedanceOhms() != null && findings.loopImpedanceOhms().isKnown()
+      if (findings != null
+          && findings.loopImpedanceOhms() != null
+          && findings.loopImpedanceOhms().isKnown()
           && findings.loopImpedanceOhms().value() > 0) {
-        faultAmps = results.spec().supply().nominalVoltageToEarthVolts() / findings.loopImpedanceOhms().value();
+        faultAmps =
+            results.spec().supply().nominalVoltageToEarthVolts()
+                / findings.loopImpedanceOhms().value();
       }
-      model.addAttribute("chartBasis", characteristic.isKnown() ? TimeCurrentBand.of(characteristic.value()).basis() : characteristic.missing());
+      model.addAttribute(
+          "chartBasis",
+          characteristic.isKnown()
+              ? TimeCurrentBand.of(characteristic.value()).basis()
+              : characteristic.missing());
       model.addAttribute(
           "chart",
           TimeCurrentChart.of(
@@ -110,14 +119,19 @@ public class CircuitCheckController {
     return "redirect:/circuits/" + id;
   }
 
-  private static DeviceProposal proposal(SiteAnalysis results, long circuitId, CircuitDemand demand) {
+  private static DeviceProposal proposal(
+      SiteAnalysis results, long circuitId, CircuitDemand demand) {
     CircuitSpec spec = specOf(results, circuitId);
     if (spec == null || spec.device() == null) {
       return null;
     }
-    Double designCurrent = demand != null && demand.isAssessed() ? demand.designCurrentAmps() : null;
+    Double designCurrent =
+        demand != null && demand.isAssessed() ? demand.designCurrentAmps() : null;
     return DeviceProposer.propose(
-        results.spec(), circuitId, new CircuitLoading(circuitId, designCurrent), ProtectionSettings.DEFAULTS);
+        results.spec(),
+        circuitId,
+        new CircuitLoading(circuitId, designCurrent),
+        ProtectionSettings.DEFAULTS);
   }
 
   private static CircuitSpec specOf(SiteAnalysis results, long circuitId) {

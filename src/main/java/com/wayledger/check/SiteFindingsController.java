@@ -16,7 +16,10 @@ import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.PathVariable;
 import org.springframework.web.bind.annotation.RequestParam;
 
-/** Every problem the checks found on a site, board by board, filterable by grade, each linked to its circuit. */
+/**
+ * Every problem the checks found on a site, board by board, filterable by grade, each linked to its
+ * circuit.
+ */
 @Controller
 public class SiteFindingsController {
 
@@ -31,7 +34,8 @@ public class SiteFindingsController {
   }
 
   /** One line of the site's findings list. */
-  public record Line(long boardId, String boardReference, Long circuitId, Integer wayNumber, Finding finding) {}
+  public record Line(
+      long boardId, String boardReference, Long circuitId, Integer wayNumber, Finding finding) {}
 
   @GetMapping("/sites/{id}/findings")
   public String findings(
@@ -47,16 +51,28 @@ public class SiteFindingsController {
       board.findings().stream()
           .filter(finding -> shown(finding, severity))
           .forEach(finding -> lines.add(new Line(boardId, board.reference(), null, null, finding)));
-      board.circuits().forEach(circuit -> circuit.findings().stream()
-          .filter(finding -> shown(finding, severity))
-          .forEach(finding -> lines.add(
-              new Line(boardId, board.reference(), circuit.circuitId(), circuit.wayNumber(), finding))));
+      board
+          .circuits()
+          .forEach(
+              circuit ->
+                  circuit.findings().stream()
+                      .filter(finding -> shown(finding, severity))
+                      .forEach(
+                          finding ->
+                              lines.add(
+                                  new Line(
+                                      boardId,
+                                      board.reference(),
+                                      circuit.circuitId(),
+                                      circuit.wayNumber(),
+                                      finding))));
     }
     lines.sort(java.util.Comparator.comparing(line -> line.finding().verdict()));
     model.addAttribute("site", sites.get(id));
     model.addAttribute("lines", lines);
     model.addAttribute("severity", severity);
-    model.addAttribute("verdicts", List.of(Verdict.DANGER, Verdict.WARNING, Verdict.ADVICE, Verdict.NOT_ASSESSED));
+    model.addAttribute(
+        "verdicts", List.of(Verdict.DANGER, Verdict.WARNING, Verdict.ADVICE, Verdict.NOT_ASSESSED));
     model.addAttribute("settings", results.findings().settings());
     return "check/site-findings";
   }

@@ -6,8 +6,9 @@ import java.util.ArrayList;
 import java.util.List;
 
 /**
- * Geometry of a log–log time–current chart drawn on the server as SVG: the device's band as a filled polygon
- * and vertical markers for the circuit's design current, its start-up surge and the earth fault current.
+ * Geometry of a log–log time–current chart drawn on the server as SVG: the device's band as a
+ * filled polygon and vertical markers for the circuit's design current, its start-up surge and the
+ * earth fault current.
  *
  * @param bandPath SVG path data of the band ("M x y L x y … Z"); empty when the device has no band
  * @param markers currents to mark, with their x position
@@ -16,7 +17,11 @@ import java.util.List;
  * @param surgePoint the surge as a point (current, duration); null when none
  */
 public record TimeCurrentChart(
-    String bandPath, List<Marker> markers, List<Tick> currentTicks, List<Tick> timeTicks, Point surgePoint) {
+    String bandPath,
+    List<Marker> markers,
+    List<Tick> currentTicks,
+    List<Tick> timeTicks,
+    Point surgePoint) {
 
   public static final int WIDTH = 560;
   public static final int HEIGHT = 420;
@@ -45,7 +50,11 @@ public record TimeCurrentChart(
    * @param faultAmps earth fault current at the circuit's far end; null when unknown
    */
   public static TimeCurrentChart of(
-      TimeCurrentBand band, double ratedAmps, Double designCurrentAmps, Double surgeAmps, Double surgeSeconds,
+      TimeCurrentBand band,
+      double ratedAmps,
+      Double designCurrentAmps,
+      Double surgeAmps,
+      Double surgeSeconds,
       Double faultAmps) {
     double lowAmps = ratedAmps * 0.5;
     double highAmps = ratedAmps * 100;
@@ -55,7 +64,8 @@ public record TimeCurrentChart(
         highAmps = Math.max(highAmps, amps * 1.25);
       }
     }
-    Scale x = new Scale(Math.floor(Math.log10(lowAmps)), Math.ceil(Math.log10(highAmps)), LEFT, RIGHT);
+    Scale x =
+        new Scale(Math.floor(Math.log10(lowAmps)), Math.ceil(Math.log10(highAmps)), LEFT, RIGHT);
     Scale y = new Scale(Math.log10(MIN_SECONDS), Math.log10(MAX_SECONDS), BOTTOM, TOP);
 
     String path = band == null ? "" : bandPath(band, x, y);
@@ -65,8 +75,12 @@ public record TimeCurrentChart(
     addMarker(markers, "fault", "earth fault", faultAmps, x);
     Point surge = null;
     if (surgeAmps != null && surgeAmps > 0 && surgeSeconds != null && surgeSeconds > 0) {
-      surge = new Point(x.at(Math.log10(surgeAmps)), y.at(Math.log10(clampSeconds(surgeSeconds))),
-          String.format(java.util.Locale.ROOT, "%.0f A for %.0f ms", surgeAmps, surgeSeconds * 1000));
+      surge =
+          new Point(
+              x.at(Math.log10(surgeAmps)),
+              y.at(Math.log10(clampSeconds(surgeSeconds))),
+              String.format(
+                  java.util.Locale.ROOT, "%.0f A for %.0f ms", surgeAmps, surgeSeconds * 1000));
     }
     List<Tick> currentTicks = new ArrayList<>();
     for (double decade = x.low; decade <= x.high; decade++) {
@@ -114,7 +128,10 @@ public record TimeCurrentChart(
       }
       double px = x.at(Math.log10(point.currentAmps()));
       if (point.maxSeconds() != null) {
-        upper.append(upper.isEmpty() ? "M " : " L ").append(fmt(px)).append(' ')
+        upper
+            .append(upper.isEmpty() ? "M " : " L ")
+            .append(fmt(px))
+            .append(' ')
             .append(fmt(y.at(Math.log10(clampSeconds(point.maxSeconds())))));
       }
       if (point.minSeconds() != null) {
@@ -127,7 +144,8 @@ public record TimeCurrentChart(
     return upper.isEmpty() ? "" : upper + lower.toString() + " Z";
   }
 
-  private static void addMarker(List<Marker> markers, String kind, String label, Double amps, Scale x) {
+  private static void addMarker(
+      List<Marker> markers, String kind, String label, Double amps, Scale x) {
     if (amps != null && amps > 0) {
       markers.add(new Marker(kind, label, amps, x.at(Math.log10(amps))));
     }
@@ -142,12 +160,19 @@ public record TimeCurrentChart(
   }
 
   private static String amps(double value) {
-    return value >= 1000 ? String.format(java.util.Locale.ROOT, "%.0f kA", value / 1000)
-        : String.format(java.util.Locale.ROOT, "%s A", value < 1 ? String.valueOf(value) : String.format(java.util.Locale.ROOT, "%.0f", value));
+    return value >= 1000
+        ? String.format(java.util.Locale.ROOT, "%.0f kA", value / 1000)
+        : String.format(
+            java.util.Locale.ROOT,
+            "%s A",
+            value < 1
+                ? String.valueOf(value)
+                : String.format(java.util.Locale.ROOT, "%.0f", value));
   }
 
   private static String seconds(double value) {
-    return value < 1 ? String.format(java.util.Locale.ROOT, "%.0f ms", value * 1000)
+    return value < 1
+        ? String.format(java.util.Locale.ROOT, "%.0f ms", value * 1000)
         : String.format(java.util.Locale.ROOT, "%.0f s", value);
   }
 

@@ -52,7 +52,11 @@ public class MethodController {
       library.copy(key, newKey, newName, user.getName());
       return "redirect:/methods/" + newKey.strip();
     } catch (RuleViolation violation) {
-      fill(model, library.entry(key), Map.of(), Map.of("copy." + violation.field(), violation.messageCode()));
+      fill(
+          model,
+          library.entry(key),
+          Map.of(),
+          Map.of("copy." + violation.field(), violation.messageCode()));
       model.addAttribute("newKey", newKey);
       model.addAttribute("newName", newName);
       return FormStatus.invalid(response, "diversity/method");
@@ -77,14 +81,22 @@ public class MethodController {
   }
 
   private static void fill(
-      Model model, MethodLibrary.Entry entry, Map<String, String> submitted, Map<String, String> problems) {
+      Model model,
+      MethodLibrary.Entry entry,
+      Map<String, String> submitted,
+      Map<String, String> problems) {
     List<GroupView> groups = new ArrayList<>();
     List<CategoryGroup> all = entry.method().groups();
     for (int i = 0; i < all.size(); i++) {
       List<RuleParameters.Field> fields = new ArrayList<>();
-      for (RuleParameters.Field field : RuleParameters.fieldsOf(all.get(i).rule(), MethodLibrary.prefix(i))) {
+      for (RuleParameters.Field field :
+          RuleParameters.fieldsOf(all.get(i).rule(), MethodLibrary.prefix(i))) {
         String typed = submitted.get(field.name());
-        fields.add(typed == null ? field : new RuleParameters.Field(field.name(), field.label(), field.kind(), typed, field.options()));
+        fields.add(
+            typed == null
+                ? field
+                : new RuleParameters.Field(
+                    field.name(), field.label(), field.kind(), typed, field.options()));
       }
       groups.add(new GroupView(i, all.get(i), fields));
     }

@@ -7,8 +7,8 @@ import com.wayledger.engine.demand.DiversityRule;
 import tools.jackson.databind.json.JsonMapper;
 
 /**
- * Writes and reads a diversity method as JSON. The engine's rule types carry no annotations (the engine imports
- * nothing but java.*), so their type names are attached here with a mix-in.
+ * Writes and reads a diversity method as JSON. The engine's rule types carry no annotations (the
+ * engine imports nothing but java.*), so their type names are attached here with a mix-in.
  */
 final class MethodJson {
 

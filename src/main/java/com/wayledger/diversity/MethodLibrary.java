@@ -16,7 +16,9 @@ import org.slf4j.LoggerFactory;
 import org.springframework.stereotype.Service;
 import org.springframework.transaction.annotation.Transactional;
 
-/** The diversity methods a board may use: the engine's built-in ones and the user-defined copies. */
+/**
+ * The diversity methods a board may use: the engine's built-in ones and the user-defined copies.
+ */
 @Service
 public class MethodLibrary {
 
@@ -29,7 +31,9 @@ public class MethodLibrary {
     this.stored = stored;
   }
 
-  /** A method as listed: the method, whether it is built in, what it was copied from, its version. */
+  /**
+   * A method as listed: the method, whether it is built in, what it was copied from, its version.
+   */
   public record Entry(DiversityMethod method, boolean builtIn, String basedOn, long version) {}
 
   /** Every method a board can choose, built-in first. */
@@ -45,7 +49,9 @@ public class MethodLibrary {
   @Transactional(readOnly = true)
   public List<Entry> entries() {
     List<Entry> entries = new ArrayList<>();
-    DiversityMethods.builtIn().methods().forEach(method -> entries.add(new Entry(method, true, null, 0)));
+    DiversityMethods.builtIn()
+        .methods()
+        .forEach(method -> entries.add(new Entry(method, true, null, 0)));
     entries.addAll(userEntries());
     return entries;
   }
@@ -78,12 +84,14 @@ public class MethodLibrary {
   }
 
   /**
-   * Saves edited rule parameters of a user-defined method. Returns the problems by form field (empty when it
-   * was saved); nothing is stored while any remains.
+   * Saves edited rule parameters of a user-defined method. Returns the problems by form field
+   * (empty when it was saved); nothing is stored while any remains.
    */
   @Transactional
-  public Map<String, String> update(String key, long version, String name, Map<String, String> submitted, String user) {
-    StoredMethod row = stored.findById(key).orElseThrow(() -> new RuleViolation("key", "method.builtIn.readOnly"));
+  public Map<String, String> update(
+      String key, long version, String name, Map<String, String> submitted, String user) {
+    StoredMethod row =
+        stored.findById(key).orElseThrow(() -> new RuleViolation("key", "method.builtIn.readOnly"));
     if (row.getVersion() != version) {
       throw new StaleEditException("Diversity method " + key);
     }
@@ -100,19 +108,31 @@ public class MethodLibrary {
       }
     }
     if (problems.isEmpty()) {
-      DiversityMethod renamed = new DiversityMethod(key, name.strip(), edited.source(), edited.groups(), edited.needsDwellingParameters());
+      DiversityMethod renamed =
+          new DiversityMethod(
+              key,
+              name.strip(),
+              edited.source(),
+              edited.groups(),
+              edited.needsDwellingParameters());
       row.update(renamed.name(), MethodJson.write(renamed), user);
     }
     return problems;
   }
 
-  /** The method with each group's rule rebuilt from the submitted values ("g0.factor", "g1.tiers", …). */
-  static DiversityMethod edit(DiversityMethod method, Map<String, String> submitted, Map<String, String> problems) {
+  /**
+   * The method with each group's rule rebuilt from the submitted values ("g0.factor", "g1.tiers",
+   * …).
+   */
+  static DiversityMethod edit(
+      DiversityMethod method, Map<String, String> submitted, Map<String, String> problems) {
     DiversityMethod edited = method;
     List<CategoryGroup> groups = method.groups();
     for (int i = 0; i < groups.size(); i++) {
       CategoryGroup group = groups.get(i);
-      edited = edited.withGroup(group.withRule(RuleParameters.rebuild(group.rule(), prefix(i), submitted, problems)));
+      edited =
+          edited.withGroup(
+              group.withRule(RuleParameters.rebuild(group.rule(), prefix(i), submitted, problems)));
     }
     return edited;
   }
@@ -125,9 +145,14 @@ public class MethodLibrary {
     List<Entry> entries = new ArrayList<>();
     for (StoredMethod row : stored.findAll()) {
       try {
-        entries.add(new Entry(MethodJson.read(row.getDefinition()), false, row.getBasedOn(), row.getVersion()));
+        entries.add(
+            new Entry(
+                MethodJson.read(row.getDefinition()), false, row.getBasedOn(), row.getVersion()));
       } catch (RuntimeException unreadable) {
-        LOG.error("Stored diversity method '{}' cannot be read and is left out", row.getKey(), unreadable);
+        LOG.error(
+            "Stored diversity method '{}' cannot be read and is left out",
+            row.getKey(),
+            unreadable);
       }
     }
     return entries;

@@ -9,13 +9,16 @@ import java.util.Locale;
 import java.util.Map;
 
 /**
- * The editable numbers of a diversity rule, read from and written back to its record components, so that every
- * rule type of the engine can be edited on one form without a form class per type. Tiers are edited as text:
- * "3000:1; 120000:0.35; :0.25" (upper end of each band in VA, then its factor; the last band open-ended).
+ * The editable numbers of a diversity rule, read from and written back to its record components, so
+ * that every rule type of the engine can be edited on one form without a form class per type. Tiers
+ * are edited as text: "3000:1; 120000:0.35; :0.25" (upper end of each band in VA, then its factor;
+ * the last band open-ended).
  */
 final class RuleParameters {
 
-  /** One editable value: its form name, its label, the text to show and, for a choice, the options. */
+  /**
+   * One editable value: its form name, its label, the text to show and, for a choice, the options.
+   */
   record Field(String name, String label, String kind, String value, List<String> options) {}
 
   private RuleParameters() {}
@@ -26,24 +29,40 @@ final class RuleParameters {
       Object value = read(rule, component);
       String name = prefix + component.getName();
       Class<?> type = component.getType();
-      if (type == double.class || type == int.class || type == Double.class || type == Integer.class) {
-        fields.add(new Field(name, words(component.getName()), "number", value == null ? "" : plain(value), List.of()));
+      if (type == double.class
+          || type == int.class
+          || type == Double.class
+          || type == Integer.class) {
+        fields.add(
+            new Field(
+                name,
+                words(component.getName()),
+                "number",
+                value == null ? "" : plain(value),
+                List.of()));
       } else if (type.isEnum()) {
-        List<String> options = Arrays.stream(type.getEnumConstants()).map(Object::toString).toList();
-        fields.add(new Field(name, words(component.getName()), "choice", String.valueOf(value), options));
-      } else if (rule instanceof DiversityRule.Tiered tiered && component.getName().equals("tiers")) {
-        fields.add(new Field(name, "tiers (up to VA : factor; …)", "text", tiersText(tiered), List.of()));
+        List<String> options =
+            Arrays.stream(type.getEnumConstants()).map(Object::toString).toList();
+        fields.add(
+            new Field(name, words(component.getName()), "choice", String.valueOf(value), options));
+      } else if (rule instanceof DiversityRule.Tiered tiered
+          && component.getName().equals("tiers")) {
+        fields.add(
+            new Field(name, "tiers (up to VA : factor; …)", "text", tiersText(tiered), List.of()));
       }
     }
     return fields;
   }
 
   /**
-   * The rule with the submitted values; unreadable values are reported in {@code problems} under their form
-   * name and the original value is kept.
+   * The rule with the submitted values; unreadable values are reported in {@code problems} under
+   * their form name and the original value is kept.
    */
   static DiversityRule rebuild(
-      DiversityRule rule, String prefix, Map<String, String> submitted, Map<String, String> problems) {
+      DiversityRule rule,
+      String prefix,
+      Map<String, String> submitted,
+      Map<String, String> problems) {
     RecordComponent[] components = rule.getClass().getRecordComponents();
     Object[] values = new Object[components.length];
     Class<?>[] types = new Class<?>[components.length];
@@ -103,7 +122,8 @@ final class RuleParameters {
       }
       String[] parts = band.split(":");
       if (parts.length != 2) {
-        throw new IllegalArgumentException("Write each band as 'up to VA : factor', separated by ';'.");
+        throw new IllegalArgumentException(
+            "Write each band as 'up to VA : factor', separated by ';'.");
       }
       Double upTo = parts[0].isBlank() ? null : number(parts[0].strip());
       tiers.add(new DiversityRule.Tier(upTo, number(parts[1].strip())));
@@ -114,7 +134,10 @@ final class RuleParameters {
   static String tiersText(DiversityRule.Tiered tiered) {
     List<String> bands = new ArrayList<>();
     for (DiversityRule.Tier tier : tiered.tiers()) {
-      bands.add((tier.upToVoltAmperes() == null ? "" : plain(tier.upToVoltAmperes())) + ":" + plain(tier.factor()));
+      bands.add(
+          (tier.upToVoltAmperes() == null ? "" : plain(tier.upToVoltAmperes()))
+              + ":"
+              + plain(tier.factor()));
     }
     return String.join("; ", bands);
   }

@@ -17,7 +17,8 @@ import java.util.List;
  * @param coincidenceFactor factor applied to this board's demand as seen by its parent, in (0, 1]
  * @param diversityMethodKey the diversity method chosen for this board; null for the site default
  * @param measuredExternalLoopImpedanceOhms Ze measured at the board; null when not measured
- * @param measuredFaultCurrentKiloAmps prospective fault current measured at the board; null when not measured
+ * @param measuredFaultCurrentKiloAmps prospective fault current measured at the board; null when
+ *     not measured
  * @param circuits the board's positions that hold a circuit, spare device or empty space record
  */
 public record BoardSpec(

@@ -12,7 +12,8 @@ package com.wayledger.engine;
  * @param installationMethod reference installation method
  * @param ambientCelsius ambient temperature along the route, °C
  * @param groupedCircuits number of circuits grouped together, this one included
- * @param thermalInsulationMillimetres length of the cable surrounded by thermal insulation, mm (0 = none)
+ * @param thermalInsulationMillimetres length of the cable surrounded by thermal insulation, mm (0 =
+ *     none)
  */
 public record CableSpec(
     Double lineCsaSquareMillimetres,

@@ -16,8 +16,8 @@ import java.util.List;
  * @param loads load items, possibly none
  * @param feedsBoardId id of the sub-board this circuit feeds as a submain; null for a final circuit
  * @param measuredLoopImpedanceOhms Zs measured at the circuit's far end; null when not measured
- * @param ringFinal whether the cable is a ring final circuit (leaves the board and returns to it); its recorded
- *     length is then the whole ring's length
+ * @param ringFinal whether the cable is a ring final circuit (leaves the board and returns to it);
+ *     its recorded length is then the whole ring's length
  */
 public record CircuitSpec(
     long id,
@@ -37,7 +37,9 @@ public record CircuitSpec(
     loads = List.copyOf(loads);
   }
 
-  /** A radial circuit (not a ring final circuit): the argument list from before rings were recorded. */
+  /**
+   * A radial circuit (not a ring final circuit): the argument list from before rings were recorded.
+   */
   public CircuitSpec(
       long id,
       int wayNumber,
@@ -50,7 +52,18 @@ public record CircuitSpec(
       List<LoadSpec> loads,
       Long feedsBoardId,
       Double measuredLoopImpedanceOhms) {
-    this(id, wayNumber, position, description, status, lockedForBalancing, device, cable, loads, feedsBoardId,
-        measuredLoopImpedanceOhms, false);
+    this(
+        id,
+        wayNumber,
+        position,
+        description,
+        status,
+        lockedForBalancing,
+        device,
+        cable,
+        loads,
+        feedsBoardId,
+        measuredLoopImpedanceOhms,
+        false);
   }
 }

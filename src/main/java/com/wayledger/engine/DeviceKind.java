@@ -8,7 +8,9 @@ public enum DeviceKind {
   RCBO,
   /** Residual-current device without overcurrent protection, IEC 61008-1. */
   RCD,
-  /** Fuse; the engine holds no characteristic for fuses, so checks that need one are not assessed. */
+  /**
+   * Fuse; the engine holds no characteristic for fuses, so checks that need one are not assessed.
+   */
   FUSE,
   /** Moulded-case circuit breaker, IEC 60947-2. */
   MCCB;

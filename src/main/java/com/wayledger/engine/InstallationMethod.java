@@ -1,6 +1,9 @@
 package com.wayledger.engine;
 
-/** Reference installation methods of IEC 60364-5-52 Table B.52.1 used by the current-carrying capacity tables. */
+/**
+ * Reference installation methods of IEC 60364-5-52 Table B.52.1 used by the current-carrying
+ * capacity tables.
+ */
 public enum InstallationMethod {
   /** Insulated conductors in conduit in a thermally insulating wall. */
   A1,

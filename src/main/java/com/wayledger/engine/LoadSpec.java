@@ -6,10 +6,12 @@ package com.wayledger.engine;
  * @param description what the load is
  * @param category diversity category
  * @param quantity number of identical items, at least 1
- * @param ratingValue nameplate rating of one item in {@code ratingUnit}; for a three-phase load in A, per line
+ * @param ratingValue nameplate rating of one item in {@code ratingUnit}; for a three-phase load in
+ *     A, per line
  * @param ratingUnit W, VA or A
  * @param powerFactor cos φ in (0, 1], lagging
- * @param startUpSurgeMultiple peak start-up current as a multiple of running current; null when none
+ * @param startUpSurgeMultiple peak start-up current as a multiple of running current; null when
+ *     none
  * @param startUpSurgeMillis duration of the start-up surge, ms; null when none
  * @param continuous whether the load runs for three hours or more at a time
  */

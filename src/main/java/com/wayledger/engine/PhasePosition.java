@@ -4,8 +4,8 @@ import java.util.EnumSet;
 import java.util.Set;
 
 /**
- * Where a circuit sits on a board: a single-pole position on one line, or a three-pole device across all
- * three. On a single-phase board every circuit sits on {@link #L1}.
+ * Where a circuit sits on a board: a single-pole position on one line, or a three-pole device
+ * across all three. On a single-phase board every circuit sits on {@link #L1}.
  */
 public enum PhasePosition {
   L1,

@@ -14,9 +14,10 @@ import java.util.HashMap;
 import java.util.Map;
 
 /**
- * The engine's figures for one board, rearranged for a sheet whose totals are live formulas: for each
- * circuit the factors that turn its own connected load into its demand, and for the board what the
- * sheet's rows cannot hold (sub-boards' demand carried by feeding ways, an allowance carried by no way).
+ * The engine's figures for one board, rearranged for a sheet whose totals are live formulas: for
+ * each circuit the factors that turn its own connected load into its demand, and for the board what
+ * the sheet's rows cannot hold (sub-boards' demand carried by feeding ways, an allowance carried by
+ * no way).
  */
 final class BoardFigures {
 
@@ -46,7 +47,8 @@ final class BoardFigures {
       return;
     }
     for (CircuitDemand circuit : demand.circuits()) {
-      BoardDemand child = circuit.feedsBoardId() == null ? null : site.board(circuit.feedsBoardId());
+      BoardDemand child =
+          circuit.feedsBoardId() == null ? null : site.board(circuit.feedsBoardId());
       double childWatts = 0;
       double childVars = 0;
       double childConnectedWatts = 0;
@@ -116,7 +118,9 @@ final class BoardFigures {
         continue;
       }
       for (CircuitFindings circuit : board.circuits()) {
-        counts.put(circuit.circuitId(), (int) circuit.findings().stream().filter(Finding::isProblem).count());
+        counts.put(
+            circuit.circuitId(),
+            (int) circuit.findings().stream().filter(Finding::isProblem).count());
       }
     }
     return counts;
@@ -150,6 +154,8 @@ final class BoardFigures {
 
   /** Demand carried by no way (an NEC dwelling allowance), per line, W at unity power factor. */
   double allowanceWattsPerLine() {
-    return demand == null || demand.lines() == 0 ? 0 : demand.allowanceVoltAmperes() / demand.lines();
+    return demand == null || demand.lines() == 0
+        ? 0
+        : demand.allowanceVoltAmperes() / demand.lines();
   }
 }

@@ -5,14 +5,18 @@ import com.wayledger.engine.Phase;
 import com.wayledger.engine.RatingUnit;
 
 /**
- * The results of the board sheet's formulas, worked out in Java as the rows are written, so that every formula
- * cell carries its value as well. A spreadsheet program that recalculates on opening (the workbook asks for
- * it) computes the same numbers; one that shows stored results without recalculating (LibreOffice's default
- * for this file type) still shows the right totals instead of zeros.
+ * The results of the board sheet's formulas, worked out in Java as the rows are written, so that
+ * every formula cell carries its value as well. A spreadsheet program that recalculates on opening
+ * (the workbook asks for it) computes the same numbers; one that shows stored results without
+ * recalculating (LibreOffice's default for this file type) still shows the right totals instead of
+ * zeros.
  */
 final class CachedResults {
 
-  /** Connected active and reactive power of one load row, kW and kvar, exactly as the row's formulas. */
+  /**
+   * Connected active and reactive power of one load row, kW and kvar, exactly as the row's
+   * formulas.
+   */
   record RowPower(double kilowatts, double kilovars) {}
 
   private final double u0;
@@ -27,9 +31,14 @@ final class CachedResults {
     this.threePhaseBoard = threePhaseBoard;
   }
 
-  /** The CONNECTED_KW / CONNECTED_KVAR formulas of a row; zero for a row without a complete load. */
+  /**
+   * The CONNECTED_KW / CONNECTED_KVAR formulas of a row; zero for a row without a complete load.
+   */
   RowPower rowPower(LoadForm load, boolean threePole) {
-    if (load == null || load.ratingValue() == null || load.quantity() == null || load.powerFactor() == null) {
+    if (load == null
+        || load.ratingValue() == null
+        || load.quantity() == null
+        || load.powerFactor() == null) {
       return new RowPower(0, 0);
     }
     double qty = load.quantity();
@@ -53,8 +62,16 @@ final class CachedResults {
     return new RowPower(p / 1000, q / 1000);
   }
 
-  /** Adds a row to the per-line sums behind the totals (a three-pole row counts a third on each line). */
-  void add(RowPower row, double diversityActive, double diversityReactive, Phase phase, boolean threePole) {
+  /**
+   * Adds a row to the per-line sums behind the totals (a three-pole row counts a third on each
+   * line).
+   */
+  void add(
+      RowPower row,
+      double diversityActive,
+      double diversityReactive,
+      Phase phase,
+      boolean threePole) {
     for (Phase line : Phase.values()) {
       double share;
       if (!threePhaseBoard) {
@@ -72,7 +89,10 @@ final class CachedResults {
     }
   }
 
-  /** The IB_CONNECTED formula of a circuit: |S| of its rows over U0 (times three on a three-pole way). */
+  /**
+   * The IB_CONNECTED formula of a circuit: |S| of its rows over U0 (times three on a three-pole
+   * way).
+   */
   double circuitCurrentAmps(double kilowatts, double kilovars, boolean threePole) {
     return Math.hypot(kilowatts, kilovars) * 1000 / (u0 * (threePole ? 3 : 1));
   }

@@ -5,8 +5,8 @@ import com.wayledger.board.LoadForm;
 import java.util.List;
 
 /**
- * One circuit of a board as exchanged with a spreadsheet: its own fields (as the schedule form holds them,
- * without a first load) and its load lines.
+ * One circuit of a board as exchanged with a spreadsheet: its own fields (as the schedule form
+ * holds them, without a first load) and its load lines.
  *
  * @param circuitId the stored circuit's id; null for a circuit read from a file
  * @param circuit the circuit's fields

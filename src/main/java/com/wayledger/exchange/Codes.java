@@ -4,7 +4,10 @@ import com.wayledger.engine.PhasePosition;
 import com.wayledger.engine.WayStatus;
 import java.util.Locale;
 
-/** How closed vocabularies are written into a spreadsheet cell, and read back from ours and others' files. */
+/**
+ * How closed vocabularies are written into a spreadsheet cell, and read back from ours and others'
+ * files.
+ */
 final class Codes {
 
   private Codes() {}
@@ -20,8 +23,20 @@ final class Codes {
       case "L1", "1", "A", "R", "P1", "PH1", "PHASE1" -> PhasePosition.L1;
       case "L2", "2", "B", "S", "Y", "P2", "PH2", "PHASE2" -> PhasePosition.L2;
       case "L3", "3", "C", "T", "P3", "PH3", "PHASE3" -> PhasePosition.L3;
-      case "3P", "TP", "TPN", "3PH", "3PHASE", "THREEPOLE", "THREEPHASE", "L1L2L3", "L1L3", "L123", "ABC", "RYB",
-          "RST" -> PhasePosition.THREE_POLE;
+      case "3P",
+          "TP",
+          "TPN",
+          "3PH",
+          "3PHASE",
+          "THREEPOLE",
+          "THREEPHASE",
+          "L1L2L3",
+          "L1L3",
+          "L123",
+          "ABC",
+          "RYB",
+          "RST" ->
+          PhasePosition.THREE_POLE;
       default -> null;
     };
   }
@@ -81,7 +96,10 @@ final class Codes {
     return null;
   }
 
-  /** Upper case without spaces, hyphens, underscores, dots or slashes, so "in-use" and "IN_USE" meet. */
+  /**
+   * Upper case without spaces, hyphens, underscores, dots or slashes, so "in-use" and "IN_USE"
+   * meet.
+   */
   static String squash(String text) {
     if (text == null) {
       return "";

@@ -13,14 +13,15 @@ import java.util.Set;
 import java.util.regex.Pattern;
 
 /**
- * Guesses what each column of a sheet means from its header words and a sample of its values. A guess is
- * only a proposal: the user confirms or changes every column before anything is read.
+ * Guesses what each column of a sheet means from its header words and a sample of its values. A
+ * guess is only a proposal: the user confirms or changes every column before anything is read.
  */
 public final class ColumnGuesser {
 
   private static final int SAMPLE_ROWS = 25;
   private static final Pattern DEVICE_TEXT =
-      Pattern.compile("(?i)^(MCB|RCBO|RCD|MCCB|FUSE|BS\\s?\\d+)?\\s*[BCD]\\s*\\d+(\\.\\d+)?\\s*A?(\\s*/?\\s*\\d+\\s*mA)?$");
+      Pattern.compile(
+          "(?i)^(MCB|RCBO|RCD|MCCB|FUSE|BS\\s?\\d+)?\\s*[BCD]\\s*\\d+(\\.\\d+)?\\s*A?(\\s*/?\\s*\\d+\\s*mA)?$");
   private static final Pattern NUMBER = Pattern.compile("^-?\\d+([.,]\\d+)?\\s*[a-zA-Z²Ω°%×]*$");
 
   private ColumnGuesser() {}
@@ -49,7 +50,8 @@ public final class ColumnGuesser {
         }
       }
     }
-    candidates.sort(Comparator.comparingInt((int[] a) -> a[2]).reversed().thenComparingInt(a -> a[0]));
+    candidates.sort(
+        Comparator.comparingInt((int[] a) -> a[2]).reversed().thenComparingInt(a -> a[0]));
     ImportField[] chosen = new ImportField[columns];
     Arrays.fill(chosen, ImportField.IGNORE);
     Set<ImportField> used = EnumSet.noneOf(ImportField.class);
@@ -64,7 +66,10 @@ public final class ColumnGuesser {
     return List.of(chosen);
   }
 
-  /** How many cells of a row read as known column headers; the header row is the row that scores most. */
+  /**
+   * How many cells of a row read as known column headers; the header row is the row that scores
+   * most.
+   */
   static int headerScore(List<String> cells) {
     int known = 0;
     for (String cell : cells) {
@@ -115,9 +120,27 @@ public final class ColumnGuesser {
       case CATEGORY -> all(sample, v -> Codes.parseEnum(LoadCategory.class, v) != null) ? 35 : 0;
       case UNIT -> all(sample, v -> Codes.parseEnum(RatingUnit.class, v) != null) ? 35 : 0;
       case WAY -> all(sample, v -> v.strip().matches("\\d+")) ? 5 : -60;
-      case RATING_AMPS, BREAKING_KILOAMPS, RESIDUAL_MILLIAMPS, OVERLOAD_SETTING_AMPS, INSTANTANEOUS_SETTING_AMPS, LINE_CSA, CPC_CSA, LENGTH_METRES, AMBIENT_CELSIUS,
-          GROUPED, THERMAL_INSULATION_MM, MEASURED_ZS, QUANTITY, RATING, SURGE_MULTIPLE, SURGE_MILLIS, POLES,
-          LOAD_KILOWATTS, LOAD_WATTS, LOAD_AMPS -> all(sample, v -> NUMBER.matcher(v.strip()).matches()) ? 0 : -60;
+      case RATING_AMPS,
+          BREAKING_KILOAMPS,
+          RESIDUAL_MILLIAMPS,
+          OVERLOAD_SETTING_AMPS,
+          INSTANTANEOUS_SETTING_AMPS,
+          LINE_CSA,
+          CPC_CSA,
+          LENGTH_METRES,
+          AMBIENT_CELSIUS,
+          GROUPED,
+          THERMAL_INSULATION_MM,
+          MEASURED_ZS,
+          QUANTITY,
+          RATING,
+          SURGE_MULTIPLE,
+          SURGE_MILLIS,
+          POLES,
+          LOAD_KILOWATTS,
+          LOAD_WATTS,
+          LOAD_AMPS ->
+          all(sample, v -> NUMBER.matcher(v.strip()).matches()) ? 0 : -60;
       case POWER_FACTOR -> all(sample, v -> v.strip().matches("0?[.,]\\d+|1([.,]0+)?")) ? 5 : -60;
       default -> 0;
     };
@@ -142,14 +165,16 @@ public final class ColumnGuesser {
   }
 
   static String normalise(String header) {
-    String text = header.toLowerCase(Locale.ROOT)
-        .replace("²", "2")
-        .replace("ω", " ohm")
-        .replace("°", " ")
-        .replace("×", " x ")
-        .replaceAll("[()\\[\\]/.,:;_\\-–'\"]", " ")
-        .replaceAll("\\s+", " ")
-        .strip();
+    String text =
+        header
+            .toLowerCase(Locale.ROOT)
+            .replace("²", "2")
+            .replace("ω", " ohm")
+            .replace("°", " ")
+            .replace("×", " x ")
+            .replaceAll("[()\\[\\]/.,:;_\\-–'\"]", " ")
+            .replaceAll("\\s+", " ")
+            .strip();
     return text;
   }
 

@@ -14,10 +14,10 @@ import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 
 /**
- * Writes one board's schedule as CSV: a header row, then one row per load line with the same columns as the
- * workbook. Computed columns hold the engine's figures for each circuit, on its first row, as plain numbers
- * (CSV holds no formulas). User text
- * that could start a formula is prefixed with a single quote.
+ * Writes one board's schedule as CSV: a header row, then one row per load line with the same
+ * columns as the workbook. Computed columns hold the engine's figures for each circuit, on its
+ * first row, as plain numbers (CSV holds no formulas). User text that could start a formula is
+ * prefixed with a single quote.
  */
 public final class CsvWriter {
 
@@ -30,11 +30,14 @@ public final class CsvWriter {
       header.add(column.header());
     }
     // not closed here: the caller owns the writer (a response stream, say)
-    CSVPrinter printer = new CSVPrinter(out, CSVFormat.RFC4180.builder().setHeader(header.toArray(String[]::new)).get());
+    CSVPrinter printer =
+        new CSVPrinter(
+            out, CSVFormat.RFC4180.builder().setHeader(header.toArray(String[]::new)).get());
     {
       for (CircuitEntry entry : board.circuits()) {
         BoardFigures.CircuitFigures f = figures.circuit(entry.circuitId());
-        List<LoadForm> loads = entry.loads().isEmpty() ? Collections.singletonList(null) : entry.loads();
+        List<LoadForm> loads =
+            entry.loads().isEmpty() ? Collections.singletonList(null) : entry.loads();
         boolean first = true;
         for (LoadForm load : loads) {
           printer.printRecord(row(entry.circuit(), load, f, first));
@@ -45,7 +48,8 @@ public final class CsvWriter {
     printer.flush();
   }
 
-  private static List<String> row(CircuitForm c, LoadForm l, BoardFigures.CircuitFigures f, boolean first) {
+  private static List<String> row(
+      CircuitForm c, LoadForm l, BoardFigures.CircuitFigures f, boolean first) {
     String[] cells = new String[ScheduleColumn.values().length];
     cells[WAY.ordinal()] = num(c.wayNumber());
     cells[LINE.ordinal()] = Codes.line(c.position());
@@ -83,7 +87,8 @@ public final class CsvWriter {
       cells[SURGE_MILLIS.ordinal()] = num(l.startUpSurgeMillis());
       cells[CONTINUOUS.ordinal()] = Codes.yes(l.continuous());
     }
-    // CSV holds no formulas: the computed columns carry the circuit's own figures, on its first row only
+    // CSV holds no formulas: the computed columns carry the circuit's own figures, on its first row
+    // only
     if (first && f != null) {
       double dp = f.assessed() ? f.diversityActive() : 0.0;
       double dq = f.assessed() ? f.diversityReactive() : 0.0;

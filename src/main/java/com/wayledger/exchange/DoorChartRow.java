@@ -18,18 +18,23 @@ import java.util.stream.Collectors;
  * @param residual residual rating text, e.g. "30 mA"; empty when none
  * @param loads the loads in short words
  */
-public record DoorChartRow(int way, String line, String description, String device, String residual, String loads) {
+public record DoorChartRow(
+    int way, String line, String description, String device, String residual, String loads) {
 
   static List<DoorChartRow> of(BoardEntry board) {
     List<DoorChartRow> rows = new ArrayList<>();
     for (CircuitEntry entry : board.circuits()) {
       CircuitForm c = entry.circuit();
-      String line = board.isThreePhase() ? (c.position() == PhasePosition.THREE_POLE ? "L1–L3" : c.position().name()) : "";
-      String description = switch (c.status()) {
-        case IN_USE -> c.description();
-        case SPARE_DEVICE -> c.description().isBlank() ? "spare" : c.description() + " (spare)";
-        case EMPTY -> "empty space";
-      };
+      String line =
+          board.isThreePhase()
+              ? (c.position() == PhasePosition.THREE_POLE ? "L1–L3" : c.position().name())
+              : "";
+      String description =
+          switch (c.status()) {
+            case IN_USE -> c.description();
+            case SPARE_DEVICE -> c.description().isBlank() ? "spare" : c.description() + " (spare)";
+            case EMPTY -> "empty space";
+          };
       StringBuilder device = new StringBuilder();
       if (c.status() != WayStatus.EMPTY && c.deviceKind() != null) {
         device.append(c.deviceKind().name()).append(' ');
@@ -37,12 +42,20 @@ public record DoorChartRow(int way, String line, String description, String devi
           device.append(c.deviceCurve().name());
         }
         if (c.deviceRatingAmps() != null) {
-          device.append(CsvWriter.num(c.deviceRatingAmps())).append(c.deviceCurve() == null ? " A" : "");
+          device
+              .append(CsvWriter.num(c.deviceRatingAmps()))
+              .append(c.deviceCurve() == null ? " A" : "");
         }
       }
-      String residual = c.deviceResidualMilliAmps() == null ? "" : CsvWriter.num(c.deviceResidualMilliAmps()) + " mA";
-      String loads = entry.loads().stream().map(DoorChartRow::load).collect(Collectors.joining("; "));
-      rows.add(new DoorChartRow(c.wayNumber(), line, description, device.toString().strip(), residual, loads));
+      String residual =
+          c.deviceResidualMilliAmps() == null
+              ? ""
+              : CsvWriter.num(c.deviceResidualMilliAmps()) + " mA";
+      String loads =
+          entry.loads().stream().map(DoorChartRow::load).collect(Collectors.joining("; "));
+      rows.add(
+          new DoorChartRow(
+              c.wayNumber(), line, description, device.toString().strip(), residual, loads));
     }
     return rows;
   }
@@ -50,6 +63,10 @@ public record DoorChartRow(int way, String line, String description, String devi
   private static String load(LoadForm load) {
     String unit = load.ratingUnit() == null ? "" : " " + load.ratingUnit().name();
     String quantity = load.quantity() != null && load.quantity() > 1 ? load.quantity() + " × " : "";
-    return load.description() + " " + quantity + (load.ratingValue() == null ? "" : CsvWriter.num(load.ratingValue())) + unit;
+    return load.description()
+        + " "
+        + quantity
+        + (load.ratingValue() == null ? "" : CsvWriter.num(load.ratingValue()))
+        + unit;
   }
 }

@@ -14,7 +14,10 @@ import org.springframework.ui.Model;
 import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.PathVariable;
 
-/** Schedules out: XLSX of a board or a whole site, CSV of a board, and the printable door chart. Any role may export. */
+/**
+ * Schedules out: XLSX of a board or a whole site, CSV of a board, and the printable door chart. Any
+ * role may export.
+ */
 @Controller
 public class ExportController {
 
@@ -29,23 +32,32 @@ public class ExportController {
   }
 
   @GetMapping("/boards/{boardId}/export.xlsx")
-  public void boardWorkbook(@PathVariable long boardId, HttpServletResponse response) throws IOException {
+  public void boardWorkbook(@PathVariable long boardId, HttpServletResponse response)
+      throws IOException {
     ExportData data = reader.board(boardId);
-    attachment(response, XLSX, fileName(data.siteName() + "-" + data.boards().get(0).reference()) + ".xlsx");
+    attachment(
+        response,
+        XLSX,
+        fileName(data.siteName() + "-" + data.boards().get(0).reference()) + ".xlsx");
     new WorkbookWriter(caution()).write(data, false, response.getOutputStream());
   }
 
   @GetMapping("/sites/{siteId}/export.xlsx")
-  public void siteWorkbook(@PathVariable long siteId, HttpServletResponse response) throws IOException {
+  public void siteWorkbook(@PathVariable long siteId, HttpServletResponse response)
+      throws IOException {
     ExportData data = reader.site(siteId);
     attachment(response, XLSX, fileName(data.siteName()) + ".xlsx");
     new WorkbookWriter(caution()).write(data, true, response.getOutputStream());
   }
 
   @GetMapping("/boards/{boardId}/export.csv")
-  public void boardCsv(@PathVariable long boardId, HttpServletResponse response) throws IOException {
+  public void boardCsv(@PathVariable long boardId, HttpServletResponse response)
+      throws IOException {
     ExportData data = reader.board(boardId);
-    attachment(response, "text/csv;charset=UTF-8", fileName(data.siteName() + "-" + data.boards().get(0).reference()) + ".csv");
+    attachment(
+        response,
+        "text/csv;charset=UTF-8",
+        fileName(data.siteName() + "-" + data.boards().get(0).reference()) + ".csv");
     Writer out = new OutputStreamWriter(response.getOutputStream(), StandardCharsets.UTF_8);
     CsvWriter.write(data, data.boards().get(0), out);
     out.flush();

@@ -6,8 +6,8 @@ import java.time.LocalDate;
 import java.util.List;
 
 /**
- * Everything an export writes, read in one transaction: the site's facts, the boards to write (in tree
- * order) with their circuits and loads, and the engine's figures for the whole site.
+ * Everything an export writes, read in one transaction: the site's facts, the boards to write (in
+ * tree order) with their circuits and loads, and the engine's figures for the whole site.
  *
  * @param siteId the site
  * @param siteName its name

@@ -18,9 +18,9 @@ import org.springframework.stereotype.Service;
 import org.springframework.transaction.annotation.Transactional;
 
 /**
- * Reads what an export writes in one read-only transaction (entities are lazy and the session closes with
- * the transaction), and runs both engines (through the board feature's analysis) over the whole site, since a board's
- * figures depend on the boards it feeds.
+ * Reads what an export writes in one read-only transaction (entities are lazy and the session
+ * closes with the transaction), and runs both engines (through the board feature's analysis) over
+ * the whole site, since a board's figures depend on the boards it feeds.
  */
 @Service
 public class ExportReader {
@@ -53,15 +53,21 @@ public class ExportReader {
   private ExportData read(Site site, Long onlyBoardId) {
     List<BoardTreeNode> tree = boards.tree(site.getId());
     List<Board> all = tree.stream().map(BoardTreeNode::board).toList();
-    SiteAnalysis analysis = analyses.analyse(ScheduleMapper.toSpec(site, all), ScheduleMapper.mccbSettingsOf(all));
+    SiteAnalysis analysis =
+        analyses.analyse(ScheduleMapper.toSpec(site, all), ScheduleMapper.mccbSettingsOf(all));
     List<BoardEntry> entries =
         tree.stream()
             .filter(node -> onlyBoardId == null || node.board().getId().equals(onlyBoardId))
             .map(node -> entry(node.board(), node.depth()))
             .toList();
     return new ExportData(
-        site.getId(), site.getName(), site.getEarthingSystem() == null ? "" : site.getEarthingSystem().name(),
-        entries, analysis.demand(), analysis.findings(), LocalDate.now(clock));
+        site.getId(),
+        site.getName(),
+        site.getEarthingSystem() == null ? "" : site.getEarthingSystem().name(),
+        entries,
+        analysis.demand(),
+        analysis.findings(),
+        LocalDate.now(clock));
   }
 
   static BoardEntry entry(Board board, int depth) {

@@ -2,8 +2,8 @@ package com.wayledger.exchange;
 
 import com.wayledger.board.Board;
 import com.wayledger.board.BoardService;
-import com.wayledger.system.NotFoundException;
 import com.wayledger.system.FormStatus;
+import com.wayledger.system.NotFoundException;
 import com.wayledger.system.RuleViolation;
 import jakarta.servlet.http.HttpServletRequest;
 import jakarta.servlet.http.HttpServletResponse;
@@ -22,9 +22,9 @@ import org.springframework.web.multipart.MultipartFile;
 import org.springframework.web.servlet.mvc.support.RedirectAttributes;
 
 /**
- * Spreadsheets in, in four steps: upload, column mapping (skipped for our own export), a preview of every
- * row with its problems, and the import itself. Nothing is stored before the last step, and then all of it
- * in one transaction. Every step needs the editor role.
+ * Spreadsheets in, in four steps: upload, column mapping (skipped for our own export), a preview of
+ * every row with its problems, and the import itself. Nothing is stored before the last step, and
+ * then all of it in one transaction. Every step needs the editor role.
  */
 @Controller
 public class ImportController {
@@ -54,18 +54,21 @@ public class ImportController {
       Principal principal,
       HttpServletRequest request,
       HttpServletResponse response,
-      Model model) throws IOException {
+      Model model)
+      throws IOException {
     Board board = boards.get(boardId);
     try {
       if (file == null || file.isEmpty()) {
         throw new ImportRefused("import.refused.noFile");
       }
       if (file.getSize() > SpreadsheetReader.MAX_BYTES) {
-        throw new ImportRefused("import.refused.tooBig", SpreadsheetReader.MAX_BYTES / (1024 * 1024));
+        throw new ImportRefused(
+            "import.refused.tooBig", SpreadsheetReader.MAX_BYTES / (1024 * 1024));
       }
       byte[] bytes = file.getBytes();
       SheetTable table = SpreadsheetReader.read(bytes, file.getOriginalFilename(), -1);
-      UploadStore.Upload upload = uploads.save(boardId, principal.getName(), file.getOriginalFilename(), bytes);
+      UploadStore.Upload upload =
+          uploads.save(boardId, principal.getName(), file.getOriginalFilename(), bytes);
       String next;
       if (table.isOwnExport()) {
         upload = upload.withMapping(table.sheetIndex(), ColumnGuesser.guess(table));
@@ -96,7 +99,9 @@ public class ImportController {
     int sheetIndex = sheet != null ? sheet : upload.sheetIndex();
     SheetTable table = SpreadsheetReader.read(uploads.bytes(upload), upload.fileName(), sheetIndex);
     List<ImportField> mapping =
-        sheet == null && upload.mapping().size() == table.headers().size() && upload.sheetIndex() == table.sheetIndex()
+        sheet == null
+                && upload.mapping().size() == table.headers().size()
+                && upload.sheetIndex() == table.sheetIndex()
             ? upload.mapping()
             : ColumnGuesser.guess(table);
     model.addAttribute("board", boards.get(boardId));
@@ -135,7 +140,8 @@ public class ImportController {
   }
 
   @GetMapping("/boards/{boardId}/import/{token}/preview")
-  public String preview(@PathVariable long boardId, @PathVariable String token, Principal principal, Model model) {
+  public String preview(
+      @PathVariable long boardId, @PathVariable String token, Principal principal, Model model) {
     UploadStore.Upload upload = upload(token, boardId, principal);
     if (upload.mapping().isEmpty()) {
       return "redirect:/boards/" + boardId + "/import/" + token + "/mapping";
@@ -159,7 +165,8 @@ public class ImportController {
     boolean validOnly = "valid".equals(mode);
     if (!plan.isAllValid() && !validOnly) {
       response.setStatus(FormStatus.UNPROCESSABLE);
-      model.addAttribute("refusal", new ImportRefused("import.refused.hasErrors", plan.invalidRows()));
+      model.addAttribute(
+          "refusal", new ImportRefused("import.refused.hasErrors", plan.invalidRows()));
       return "exchange/preview";
     }
     if (plan.circuits().isEmpty()) {
@@ -179,9 +186,16 @@ public class ImportController {
     }
   }
 
-  /** A stored upload that cannot be read any more (or a sheet that is empty) goes back to the upload step. */
+  /**
+   * A stored upload that cannot be read any more (or a sheet that is empty) goes back to the upload
+   * step.
+   */
   @org.springframework.web.bind.annotation.ExceptionHandler(ImportRefused.class)
-  public String refused(ImportRefused refused, HttpServletRequest request, HttpServletResponse response, Model model) {
+  public String refused(
+      ImportRefused refused,
+      HttpServletRequest request,
+      HttpServletResponse response,
+      Model model) {
     response.setStatus(FormStatus.UNPROCESSABLE);
     String[] parts = request.getRequestURI().split("/");
     long boardId = Long.parseLong(parts[java.util.Arrays.asList(parts).indexOf("boards") + 1]);
@@ -193,7 +207,8 @@ public class ImportController {
   }
 
   private ImportPlan fillPreview(long boardId, UploadStore.Upload upload, Model model) {
-    SheetTable table = SpreadsheetReader.read(uploads.bytes(upload), upload.fileName(), upload.sheetIndex());
+    SheetTable table =
+        SpreadsheetReader.read(uploads.bytes(upload), upload.fileName(), upload.sheetIndex());
     List<ImportField> mapping = upload.mapping();
     if (mapping.size() != table.headers().size()) {
       mapping = ColumnGuesser.guess(table);
@@ -214,7 +229,8 @@ public class ImportController {
   }
 
   /** A redirect that htmx follows as a page load (HX-Redirect), and a plain 303 otherwise. */
-  private static String redirect(HttpServletRequest request, HttpServletResponse response, String path) {
+  private static String redirect(
+      HttpServletRequest request, HttpServletResponse response, String path) {
     if ("true".equals(request.getHeader("HX-Request"))) {
       response.setHeader("HX-Redirect", request.getContextPath() + path);
       return "exchange/redirect";

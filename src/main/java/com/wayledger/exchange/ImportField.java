@@ -3,49 +3,183 @@ package com.wayledger.exchange;
 import java.util.List;
 
 /**
- * What a column of an uploaded sheet means. Most are our own schedule columns; a few take the forms other
- * spreadsheets use (a device as one text such as "C32", a load in kW, W or A).
+ * What a column of an uploaded sheet means. Most are our own schedule columns; a few take the forms
+ * other spreadsheets use (a device as one text such as "C32", a load in kW, W or A).
  */
 public enum ImportField {
   IGNORE(null, List.of()),
-  WAY(ScheduleColumn.WAY, List.of("way", "way no", "cct", "ckt", "circuit ref", "no", "number", "nr", "cct no", "circuit no", "circuit number", "position", "#")),
+  WAY(
+      ScheduleColumn.WAY,
+      List.of(
+          "way",
+          "way no",
+          "cct",
+          "ckt",
+          "circuit ref",
+          "no",
+          "number",
+          "nr",
+          "cct no",
+          "circuit no",
+          "circuit number",
+          "position",
+          "#")),
   LINE(ScheduleColumn.LINE, List.of("line", "phase", "ph", "phases", "pole position", "l")),
-  CIRCUIT(ScheduleColumn.CIRCUIT, List.of("circuit", "description", "circuit description", "feeds", "serving", "designation", "name", "destination", "what it feeds")),
+  CIRCUIT(
+      ScheduleColumn.CIRCUIT,
+      List.of(
+          "circuit",
+          "description",
+          "circuit description",
+          "feeds",
+          "serving",
+          "designation",
+          "name",
+          "destination",
+          "what it feeds")),
   STATE(ScheduleColumn.STATE, List.of("state", "status", "in use")),
   KEEP_LINE(ScheduleColumn.KEEP_LINE, List.of("keep line", "locked", "fixed phase", "lock")),
-  DEVICE(ScheduleColumn.DEVICE, List.of("device", "device kind", "device type", "breaker type", "protective device type", "kind")),
+  DEVICE(
+      ScheduleColumn.DEVICE,
+      List.of(
+          "device",
+          "device kind",
+          "device type",
+          "breaker type",
+          "protective device type",
+          "kind")),
   CURVE(ScheduleColumn.CURVE, List.of("curve", "characteristic", "trip curve", "tripping type")),
-  RATING_AMPS(ScheduleColumn.RATING_AMPS, List.of("in a", "in", "rating a", "breaker a", "breaker rating", "mcb rating", "device rating", "rated current", "current rating", "amps", "size a", "trip a")),
+  RATING_AMPS(
+      ScheduleColumn.RATING_AMPS,
+      List.of(
+          "in a",
+          "in",
+          "rating a",
+          "breaker a",
+          "breaker rating",
+          "mcb rating",
+          "device rating",
+          "rated current",
+          "current rating",
+          "amps",
+          "size a",
+          "trip a")),
   POLES(ScheduleColumn.POLES, List.of("poles", "pole", "no of poles")),
-  BREAKING_KILOAMPS(ScheduleColumn.BREAKING_KILOAMPS, List.of("icn ka", "icn", "icu", "ka", "breaking capacity", "breaking")),
-  RESIDUAL_MILLIAMPS(ScheduleColumn.RESIDUAL_MILLIAMPS, List.of("iδn ma", "idn", "ma", "residual", "rcd ma", "sensitivity", "trip ma")),
+  BREAKING_KILOAMPS(
+      ScheduleColumn.BREAKING_KILOAMPS,
+      List.of("icn ka", "icn", "icu", "ka", "breaking capacity", "breaking")),
+  RESIDUAL_MILLIAMPS(
+      ScheduleColumn.RESIDUAL_MILLIAMPS,
+      List.of("iδn ma", "idn", "ma", "residual", "rcd ma", "sensitivity", "trip ma")),
   RCD_TYPE(ScheduleColumn.RCD_TYPE, List.of("rcd type", "rcd class")),
-  OVERLOAD_SETTING_AMPS(ScheduleColumn.OVERLOAD_SETTING_AMPS, List.of("ir a", "ir", "ir setting", "overload setting", "long time setting", "thermal setting", "mccb ir")),
-  INSTANTANEOUS_SETTING_AMPS(ScheduleColumn.INSTANTANEOUS_SETTING_AMPS, List.of("ii a", "ii", "ii setting", "instantaneous setting", "magnetic setting", "instantaneous", "mccb ii")),
-  LINE_CSA(ScheduleColumn.LINE_CSA, List.of("line mm2", "mm2", "mm", "csa", "cable size", "conductor size", "live mm2", "cable mm2", "size mm2", "cable")),
-  CPC_CSA(ScheduleColumn.CPC_CSA, List.of("cpc mm2", "cpc", "earth mm2", "earth", "protective conductor")),
-  CONDUCTOR(ScheduleColumn.CONDUCTOR, List.of("conductor", "material", "conductor material", "cu al")),
+  OVERLOAD_SETTING_AMPS(
+      ScheduleColumn.OVERLOAD_SETTING_AMPS,
+      List.of(
+          "ir a",
+          "ir",
+          "ir setting",
+          "overload setting",
+          "long time setting",
+          "thermal setting",
+          "mccb ir")),
+  INSTANTANEOUS_SETTING_AMPS(
+      ScheduleColumn.INSTANTANEOUS_SETTING_AMPS,
+      List.of(
+          "ii a",
+          "ii",
+          "ii setting",
+          "instantaneous setting",
+          "magnetic setting",
+          "instantaneous",
+          "mccb ii")),
+  LINE_CSA(
+      ScheduleColumn.LINE_CSA,
+      List.of(
+          "line mm2",
+          "mm2",
+          "mm",
+          "csa",
+          "cable size",
+          "conductor size",
+          "live mm2",
+          "cable mm2",
+          "size mm2",
+          "cable")),
+  CPC_CSA(
+      ScheduleColumn.CPC_CSA,
+      List.of("cpc mm2", "cpc", "earth mm2", "earth", "protective conductor")),
+  CONDUCTOR(
+      ScheduleColumn.CONDUCTOR, List.of("conductor", "material", "conductor material", "cu al")),
   INSULATION(ScheduleColumn.INSULATION, List.of("insulation", "cable type", "insulation type")),
-  LENGTH_METRES(ScheduleColumn.LENGTH_METRES, List.of("length m", "length", "run m", "run", "distance", "route length", "m")),
-  RING(ScheduleColumn.RING, List.of("ring", "ring final", "ring circuit", "ring final circuit", "rfc", "ring or radial")),
-  INSTALLATION(ScheduleColumn.INSTALLATION, List.of("installation", "installation method", "reference method", "method", "install")),
-  AMBIENT_CELSIUS(ScheduleColumn.AMBIENT_CELSIUS, List.of("ambient c", "ambient", "temperature", "temp")),
+  LENGTH_METRES(
+      ScheduleColumn.LENGTH_METRES,
+      List.of("length m", "length", "run m", "run", "distance", "route length", "m")),
+  RING(
+      ScheduleColumn.RING,
+      List.of("ring", "ring final", "ring circuit", "ring final circuit", "rfc", "ring or radial")),
+  INSTALLATION(
+      ScheduleColumn.INSTALLATION,
+      List.of("installation", "installation method", "reference method", "method", "install")),
+  AMBIENT_CELSIUS(
+      ScheduleColumn.AMBIENT_CELSIUS, List.of("ambient c", "ambient", "temperature", "temp")),
   GROUPED(ScheduleColumn.GROUPED, List.of("grouped", "grouping", "group")),
-  THERMAL_INSULATION_MM(ScheduleColumn.THERMAL_INSULATION_MM, List.of("in insulation mm", "thermal insulation", "insulation mm")),
-  MEASURED_ZS(ScheduleColumn.MEASURED_ZS, List.of("measured zs", "zs", "zs ohm", "loop impedance", "measured loop")),
-  LOAD(ScheduleColumn.LOAD, List.of("load", "load description", "equipment", "item", "appliance", "connected item")),
-  CATEGORY(ScheduleColumn.CATEGORY, List.of("category", "load type", "load category", "use", "type of load")),
-  QUANTITY(ScheduleColumn.QUANTITY, List.of("qty", "quantity", "count", "number of", "no off", "units")),
+  THERMAL_INSULATION_MM(
+      ScheduleColumn.THERMAL_INSULATION_MM,
+      List.of("in insulation mm", "thermal insulation", "insulation mm")),
+  MEASURED_ZS(
+      ScheduleColumn.MEASURED_ZS,
+      List.of("measured zs", "zs", "zs ohm", "loop impedance", "measured loop")),
+  LOAD(
+      ScheduleColumn.LOAD,
+      List.of("load", "load description", "equipment", "item", "appliance", "connected item")),
+  CATEGORY(
+      ScheduleColumn.CATEGORY,
+      List.of("category", "load type", "load category", "use", "type of load")),
+  QUANTITY(
+      ScheduleColumn.QUANTITY, List.of("qty", "quantity", "count", "number of", "no off", "units")),
   RATING(ScheduleColumn.RATING, List.of("rating", "nameplate", "load rating", "value")),
   UNIT(ScheduleColumn.UNIT, List.of("unit", "units of rating", "rating unit")),
-  POWER_FACTOR(ScheduleColumn.POWER_FACTOR, List.of("pf", "power factor", "cos phi", "cosphi", "cos")),
-  SURGE_MULTIPLE(ScheduleColumn.SURGE_MULTIPLE, List.of("surge", "surge x", "inrush", "starting multiple", "start multiple")),
+  POWER_FACTOR(
+      ScheduleColumn.POWER_FACTOR, List.of("pf", "power factor", "cos phi", "cosphi", "cos")),
+  SURGE_MULTIPLE(
+      ScheduleColumn.SURGE_MULTIPLE,
+      List.of("surge", "surge x", "inrush", "starting multiple", "start multiple")),
   SURGE_MILLIS(ScheduleColumn.SURGE_MILLIS, List.of("surge ms", "inrush ms", "start ms", "ms")),
   CONTINUOUS(ScheduleColumn.CONTINUOUS, List.of("continuous", "cont")),
-  DEVICE_SUMMARY(null, List.of("protection", "breaker", "mcb", "ocpd", "protective device", "device rating", "fuse", "overcurrent device")),
-  LOAD_KILOWATTS(null, List.of("kw", "kilowatts", "kilowatt", "load kw", "power kw", "demand kw", "installed kw", "connected kw")),
+  DEVICE_SUMMARY(
+      null,
+      List.of(
+          "protection",
+          "breaker",
+          "mcb",
+          "ocpd",
+          "protective device",
+          "device rating",
+          "fuse",
+          "overcurrent device")),
+  LOAD_KILOWATTS(
+      null,
+      List.of(
+          "kw",
+          "kilowatts",
+          "kilowatt",
+          "load kw",
+          "power kw",
+          "demand kw",
+          "installed kw",
+          "connected kw")),
   LOAD_WATTS(null, List.of("w", "watts", "load w", "power w", "wattage")),
-  LOAD_AMPS(null, List.of("load a", "ib", "ib a", "design current", "load current", "current a", "full load current", "flc"));
+  LOAD_AMPS(
+      null,
+      List.of(
+          "load a",
+          "ib",
+          "ib a",
+          "design current",
+          "load current",
+          "current a",
+          "full load current",
+          "flc"));
 
   private final ScheduleColumn column;
   private final List<String> words;

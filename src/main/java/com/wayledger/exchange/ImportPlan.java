@@ -27,9 +27,11 @@ public record ImportPlan(List<PreviewRow> rows, List<PlannedCircuit> circuits) {
    * @param circuit the circuit fields read (null when the row continues the circuit above)
    * @param load the load read (null when the row holds none)
    * @param problems problems, each tied to a column
-   * @param notes assumptions made for this row (a default power factor, a category from the description)
+   * @param notes assumptions made for this row (a default power factor, a category from the
+   *     description)
    */
-  public record PreviewRow(int number, CircuitForm circuit, LoadForm load, List<Problem> problems, List<String> notes) {
+  public record PreviewRow(
+      int number, CircuitForm circuit, LoadForm load, List<Problem> problems, List<String> notes) {
 
     public boolean isValid() {
       return problems.isEmpty();
@@ -41,7 +43,8 @@ public record ImportPlan(List<PreviewRow> rows, List<PlannedCircuit> circuits) {
   }
 
   /** A circuit to add, with its loads and the rows it came from. */
-  public record PlannedCircuit(CircuitForm circuit, List<LoadForm> loads, List<Integer> rowNumbers) {}
+  public record PlannedCircuit(
+      CircuitForm circuit, List<LoadForm> loads, List<Integer> rowNumbers) {}
 
   public long validRows() {
     return rows.stream().filter(PreviewRow::isValid).count();

@@ -1,6 +1,9 @@
 package com.wayledger.exchange;
 
-/** A file that cannot be imported at all (not a spreadsheet, too big, protected, empty); carries a message code. */
+/**
+ * A file that cannot be imported at all (not a spreadsheet, too big, protected, empty); carries a
+ * message code.
+ */
 public class ImportRefused extends RuntimeException {
 
   private final String messageCode;

@@ -37,12 +37,15 @@ public class ImportService {
         occupied.add(RowReader.BoardContext.slot(circuit.getWayNumber(), phase));
       }
     }
-    return rows.read(table, mapping, new RowReader.BoardContext(board.getPhases(), board.getWayCount(), occupied));
+    return rows.read(
+        table,
+        mapping,
+        new RowReader.BoardContext(board.getPhases(), board.getWayCount(), occupied));
   }
 
   /**
-   * Stores the planned circuits and their loads in one transaction: if the schedule service refuses any of
-   * them (someone filled a position meanwhile), nothing is stored.
+   * Stores the planned circuits and their loads in one transaction: if the schedule service refuses
+   * any of them (someone filled a position meanwhile), nothing is stored.
    *
    * @return the number of circuits and loads stored
    */

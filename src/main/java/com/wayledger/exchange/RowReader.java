@@ -29,13 +29,14 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
 /**
- * Turns the rows of a mapped sheet into the circuits and loads they describe, checking each cell and each
- * schedule rule (ways within the board, one circuit per position, a device where the way is used) so that
- * the preview shows every problem beside its row and column before anything is stored.
+ * Turns the rows of a mapped sheet into the circuits and loads they describe, checking each cell
+ * and each schedule rule (ways within the board, one circuit per position, a device where the way
+ * is used) so that the preview shows every problem beside its row and column before anything is
+ * stored.
  *
- * <p>Rows with the same way and line and the same circuit fields are one circuit with several loads (that
- * is how our export writes a circuit); a row with no way, line or circuit text but a load continues the
- * circuit above.
+ * <p>Rows with the same way and line and the same circuit fields are one circuit with several loads
+ * (that is how our export writes a circuit); a row with no way, line or circuit text but a load
+ * continues the circuit above.
  */
 public final class RowReader {
 
@@ -52,22 +53,49 @@ public final class RowReader {
   }
 
   private static final Pattern DEVICE_TEXT =
-      Pattern.compile("(?i)^\\s*(MCB|RCBO|RCD|MCCB|FUSE)?\\s*([BCD])?\\s*(\\d+(?:[.,]\\d+)?)\\s*A?\\s*(?:/?\\s*(\\d+(?:[.,]\\d+)?)\\s*mA)?\\s*(MCB|RCBO|RCD|MCCB|FUSE)?\\s*$");
+      Pattern.compile(
+          "(?i)^\\s*(MCB|RCBO|RCD|MCCB|FUSE)?\\s*([BCD])?\\s*(\\d+(?:[.,]\\d+)?)\\s*A?\\s*(?:/?\\s*(\\d+(?:[.,]\\d+)?)\\s*mA)?\\s*(MCB|RCBO|RCD|MCCB|FUSE)?\\s*$");
 
-  private static final Map<String, ImportField> CIRCUIT_PROPERTIES = Map.ofEntries(
-      Map.entry("wayNumber", WAY), Map.entry("position", LINE), Map.entry("description", CIRCUIT),
-      Map.entry("status", STATE), Map.entry("deviceKind", DEVICE), Map.entry("deviceCurve", CURVE),
-      Map.entry("deviceRatingAmps", RATING_AMPS), Map.entry("devicePoles", POLES),
-      Map.entry("deviceBreakingCapacityKiloAmps", BREAKING_KILOAMPS), Map.entry("deviceResidualMilliAmps", RESIDUAL_MILLIAMPS),
-      Map.entry("deviceOverloadSettingAmps", OVERLOAD_SETTING_AMPS),
-      Map.entry("deviceInstantaneousSettingAmps", INSTANTANEOUS_SETTING_AMPS),
-      Map.entry("cableLineCsa", LINE_CSA), Map.entry("cableCpcCsa", CPC_CSA), Map.entry("cableLengthMetres", LENGTH_METRES),
-      Map.entry("cableAmbientCelsius", AMBIENT_CELSIUS), Map.entry("cableGroupedCircuits", GROUPED),
-      Map.entry("cableThermalInsulationMm", THERMAL_INSULATION_MM), Map.entry("measuredLoopImpedanceOhms", MEASURED_ZS));
+  private static final Map<String, ImportField> CIRCUIT_PROPERTIES =
+      Map.ofEntries(
+          Map.entry("wayNumber", WAY),
+          Map.entry("position", LINE),
+          Map.entry("description", CIRCUIT),
+          Map.entry("status", STATE),
+          Map.entry("deviceKind", DEVICE),
+          Map.entry("deviceCurve", CURVE),
+          Map.entry("deviceRatingAmps", RATING_AMPS),
+          Map.entry("devicePoles", POLES),
+          Map.entry("deviceBreakingCapacityKiloAmps", BREAKING_KILOAMPS),
+          Map.entry("deviceResidualMilliAmps", RESIDUAL_MILLIAMPS),
+          Map.entry("deviceOverloadSettingAmps", OVERLOAD_SETTING_AMPS),
+          Map.entry("deviceInstantaneousSettingAmps", INSTANTANEOUS_SETTING_AMPS),
+          Map.entry("cableLineCsa", LINE_CSA),
+          Map.entry("cableCpcCsa", CPC_CSA),
+          Map.entry("cableLengthMetres", LENGTH_METRES),
+          Map.entry("cableAmbientCelsius", AMBIENT_CELSIUS),
+          Map.entry("cableGroupedCircuits", GROUPED),
+          Map.entry("cableThermalInsulationMm", THERMAL_INSULATION_MM),
+          Map.entry("measuredLoopImpedanceOhms", MEASURED_ZS));
 
-  private static final Map<String, ImportField> LOAD_PROPERTIES = Map.of(
-      "description", LOAD, "category", CATEGORY, "quantity", QUANTITY, "ratingValue", RATING, "ratingUnit", UNIT,
-      "powerFactor", POWER_FACTOR, "startUpSurgeMultiple", SURGE_MULTIPLE, "startUpSurgeMillis", SURGE_MILLIS);
+  private static final Map<String, ImportField> LOAD_PROPERTIES =
+      Map.of(
+          "description",
+          LOAD,
+          "category",
+          CATEGORY,
+          "quantity",
+          QUANTITY,
+          "ratingValue",
+          RATING,
+          "ratingUnit",
+          UNIT,
+          "powerFactor",
+          POWER_FACTOR,
+          "startUpSurgeMultiple",
+          SURGE_MULTIPLE,
+          "startUpSurgeMillis",
+          SURGE_MILLIS);
 
   private final Validator validator;
 
@@ -90,12 +118,31 @@ public final class RowReader {
       Cells cells = new Cells(row, columnOf);
       List<ImportPlan.Problem> problems = new ArrayList<>();
       List<String> notes = new ArrayList<>();
-      boolean hasLoad = cells.anyFilled(LOAD, CATEGORY, QUANTITY, RATING, UNIT, POWER_FACTOR, SURGE_MULTIPLE, SURGE_MILLIS, LOAD_KILOWATTS, LOAD_WATTS, LOAD_AMPS);
-      boolean continuation = cells.blank(WAY) && cells.blank(LINE) && cells.blank(CIRCUIT) && hasLoad && previous != null;
+      boolean hasLoad =
+          cells.anyFilled(
+              LOAD,
+              CATEGORY,
+              QUANTITY,
+              RATING,
+              UNIT,
+              POWER_FACTOR,
+              SURGE_MULTIPLE,
+              SURGE_MILLIS,
+              LOAD_KILOWATTS,
+              LOAD_WATTS,
+              LOAD_AMPS);
+      boolean continuation =
+          cells.blank(WAY)
+              && cells.blank(LINE)
+              && cells.blank(CIRCUIT)
+              && hasLoad
+              && previous != null;
       if (continuation) {
         LoadForm load = readLoad(cells, previous.circuit.description(), problems, notes);
         if (!previous.valid) {
-          problems.add(new ImportPlan.Problem(WAY, "import.cell.circuitInvalid", new Object[] {previous.firstRow}));
+          problems.add(
+              new ImportPlan.Problem(
+                  WAY, "import.cell.circuitInvalid", new Object[] {previous.firstRow}));
         } else if (previous.circuit.status() != WayStatus.IN_USE) {
           problems.add(new ImportPlan.Problem(LOAD, "import.cell.loadOnUnused", new Object[0]));
         }
@@ -109,7 +156,8 @@ public final class RowReader {
       CircuitForm circuit = readCircuit(cells, board, problems, notes);
       LoadForm load = hasLoad ? readLoad(cells, circuit.description(), problems, notes) : null;
       if (load != null && circuit.status() != null && circuit.status() != WayStatus.IN_USE) {
-        problems.add(new ImportPlan.Problem(cells.source(LOAD), "import.cell.loadOnUnused", new Object[0]));
+        problems.add(
+            new ImportPlan.Problem(cells.source(LOAD), "import.cell.loadOnUnused", new Object[0]));
       }
       Planned planned = null;
       if (circuit.wayNumber() != null && circuit.position() != null) {
@@ -118,17 +166,23 @@ public final class RowReader {
         if (same != null && same.circuit.equals(circuit)) {
           planned = same; // another load of a circuit already read
           if (!same.valid) {
-            problems.add(new ImportPlan.Problem(WAY, "import.cell.circuitInvalid", new Object[] {same.firstRow}));
+            problems.add(
+                new ImportPlan.Problem(
+                    WAY, "import.cell.circuitInvalid", new Object[] {same.firstRow}));
           }
         } else {
           for (Phase phase : circuit.position().phases()) {
             String slot = BoardContext.slot(circuit.wayNumber(), phase);
             if (slotRow.containsKey(slot)) {
-              problems.add(new ImportPlan.Problem(LINE, "import.cell.duplicate", new Object[] {slotRow.get(slot)}));
+              problems.add(
+                  new ImportPlan.Problem(
+                      LINE, "import.cell.duplicate", new Object[] {slotRow.get(slot)}));
               break;
             }
             if (board.occupied().contains(slot)) {
-              problems.add(new ImportPlan.Problem(LINE, "import.cell.taken", new Object[] {circuit.wayNumber(), phase.name()}));
+              problems.add(
+                  new ImportPlan.Problem(
+                      LINE, "import.cell.taken", new Object[] {circuit.wayNumber(), phase.name()}));
               break;
             }
           }
@@ -138,7 +192,8 @@ public final class RowReader {
         planned = new Planned(circuit, row.number(), problems.isEmpty());
         if (circuit.wayNumber() != null && circuit.position() != null) {
           byKey.putIfAbsent(circuit.wayNumber() + ":" + circuit.position(), planned);
-          // a position claimed by a row with problems is still claimed: two rows for one position are ambiguous
+          // a position claimed by a row with problems is still claimed: two rows for one position
+          // are ambiguous
           for (Phase phase : circuit.position().phases()) {
             slotRow.putIfAbsent(BoardContext.slot(circuit.wayNumber(), phase), row.number());
           }
@@ -155,13 +210,16 @@ public final class RowReader {
     List<ImportPlan.PlannedCircuit> circuits = new ArrayList<>();
     for (Planned planned : distinct(byKey, rows)) {
       if (planned.valid) {
-        circuits.add(new ImportPlan.PlannedCircuit(planned.circuit, List.copyOf(planned.loads), List.copyOf(planned.rows)));
+        circuits.add(
+            new ImportPlan.PlannedCircuit(
+                planned.circuit, List.copyOf(planned.loads), List.copyOf(planned.rows)));
       }
     }
     return new ImportPlan(rows, circuits);
   }
 
-  private static List<Planned> distinct(Map<String, Planned> byKey, List<ImportPlan.PreviewRow> rows) {
+  private static List<Planned> distinct(
+      Map<String, Planned> byKey, List<ImportPlan.PreviewRow> rows) {
     return new ArrayList<>(byKey.values());
   }
 
@@ -182,7 +240,8 @@ public final class RowReader {
 
   // ---------------------------------------------------------------- circuit
 
-  private CircuitForm readCircuit(Cells cells, BoardContext board, List<ImportPlan.Problem> problems, List<String> notes) {
+  private CircuitForm readCircuit(
+      Cells cells, BoardContext board, List<ImportPlan.Problem> problems, List<String> notes) {
     Integer way = cells.whole(WAY, problems);
     if (way == null && !cells.hasError(problems, WAY)) {
       problems.add(new ImportPlan.Problem(WAY, "import.cell.wayMissing", new Object[0]));
@@ -197,7 +256,9 @@ public final class RowReader {
     } else {
       position = Codes.parseLine(cells.text(LINE));
       if (position == null) {
-        problems.add(new ImportPlan.Problem(LINE, "import.cell.unknownLine", new Object[] {cells.text(LINE)}));
+        problems.add(
+            new ImportPlan.Problem(
+                LINE, "import.cell.unknownLine", new Object[] {cells.text(LINE)}));
       } else if (!board.isThreePhase() && position != PhasePosition.L1) {
         problems.add(new ImportPlan.Problem(LINE, "import.cell.singlePhaseBoard", new Object[0]));
       }
@@ -205,11 +266,16 @@ public final class RowReader {
     String description = CellText.fromCsv(cells.text(CIRCUIT));
     WayStatus status;
     if (cells.blank(STATE)) {
-      status = description.toLowerCase(Locale.ROOT).startsWith("spare") ? WayStatus.SPARE_DEVICE : WayStatus.IN_USE;
+      status =
+          description.toLowerCase(Locale.ROOT).startsWith("spare")
+              ? WayStatus.SPARE_DEVICE
+              : WayStatus.IN_USE;
     } else {
       status = Codes.parseState(cells.text(STATE));
       if (status == null) {
-        problems.add(new ImportPlan.Problem(STATE, "import.cell.unknownState", new Object[] {cells.text(STATE)}));
+        problems.add(
+            new ImportPlan.Problem(
+                STATE, "import.cell.unknownState", new Object[] {cells.text(STATE)}));
       }
     }
     Boolean locked = cells.yes(KEEP_LINE, problems);
@@ -222,7 +288,11 @@ public final class RowReader {
     if (!cells.blank(DEVICE_SUMMARY)) {
       Matcher m = DEVICE_TEXT.matcher(cells.text(DEVICE_SUMMARY));
       if (!m.matches()) {
-        problems.add(new ImportPlan.Problem(DEVICE_SUMMARY, "import.cell.unreadableDevice", new Object[] {cells.text(DEVICE_SUMMARY)}));
+        problems.add(
+            new ImportPlan.Problem(
+                DEVICE_SUMMARY,
+                "import.cell.unreadableDevice",
+                new Object[] {cells.text(DEVICE_SUMMARY)}));
       } else {
         String kindText = m.group(1) != null ? m.group(1) : m.group(5);
         if (kind == null && kindText != null) {
@@ -248,41 +318,83 @@ public final class RowReader {
       notes.add("import.note.deviceFromCurve");
     }
     if (kind != null && !kind.hasCurve() && curve != null && cells.blank(DEVICE_SUMMARY)) {
-      problems.add(new ImportPlan.Problem(CURVE, "import.cell.curveNotForDevice", new Object[] {kind.name()}));
+      problems.add(
+          new ImportPlan.Problem(
+              CURVE, "import.cell.curveNotForDevice", new Object[] {kind.name()}));
     }
-    if (status != null && status != WayStatus.EMPTY && kind == null && !cells.hasError(problems, DEVICE)) {
-      problems.add(new ImportPlan.Problem(cells.source(DEVICE), "import.cell.deviceRequired", new Object[0]));
+    if (status != null
+        && status != WayStatus.EMPTY
+        && kind == null
+        && !cells.hasError(problems, DEVICE)) {
+      problems.add(
+          new ImportPlan.Problem(
+              cells.source(DEVICE), "import.cell.deviceRequired", new Object[0]));
     }
     if (kind == DeviceKind.RCD && residual == null) {
-      problems.add(new ImportPlan.Problem(cells.source(RESIDUAL_MILLIAMPS), "import.cell.residualRequired", new Object[0]));
+      problems.add(
+          new ImportPlan.Problem(
+              cells.source(RESIDUAL_MILLIAMPS), "import.cell.residualRequired", new Object[0]));
     }
     if (way != null && way > board.wayCount()) {
-      problems.add(new ImportPlan.Problem(WAY, "import.cell.beyondBoard", new Object[] {board.wayCount()}));
+      problems.add(
+          new ImportPlan.Problem(WAY, "import.cell.beyondBoard", new Object[] {board.wayCount()}));
     }
     Double overload = cells.number(OVERLOAD_SETTING_AMPS, problems);
     Double instantaneous = cells.number(INSTANTANEOUS_SETTING_AMPS, problems);
     if (kind == DeviceKind.MCCB) {
       if (overload != null && rating != null && overload > rating) {
-        problems.add(new ImportPlan.Problem(OVERLOAD_SETTING_AMPS, "import.cell.overloadAboveRating", new Object[] {rating}));
+        problems.add(
+            new ImportPlan.Problem(
+                OVERLOAD_SETTING_AMPS, "import.cell.overloadAboveRating", new Object[] {rating}));
       } else if ((overload == null) != (instantaneous == null)) {
-        problems.add(new ImportPlan.Problem(
-            overload == null ? OVERLOAD_SETTING_AMPS : INSTANTANEOUS_SETTING_AMPS, "import.cell.mccbBothSettings",
-            new Object[0]));
+        problems.add(
+            new ImportPlan.Problem(
+                overload == null ? OVERLOAD_SETTING_AMPS : INSTANTANEOUS_SETTING_AMPS,
+                "import.cell.mccbBothSettings",
+                new Object[0]));
       }
     }
-    CircuitForm form = new CircuitForm(
-        way, position, description, status, locked, kind, curve, rating, cells.whole(POLES, problems),
-        cells.number(BREAKING_KILOAMPS, problems), residual, cells.choice(RCD_TYPE, RcdType.class, problems),
-        cells.number(LINE_CSA, problems), cells.number(CPC_CSA, problems),
-        cells.choice(CONDUCTOR, ConductorMaterial.class, problems), cells.choice(INSULATION, Insulation.class, problems),
-        cells.number(LENGTH_METRES, problems), cells.choice(INSTALLATION, InstallationMethod.class, problems),
-        cells.number(AMBIENT_CELSIUS, problems), cells.whole(GROUPED, problems), cells.whole(THERMAL_INSULATION_MM, problems),
-        cells.number(MEASURED_ZS, problems), null, null, null, null, null, null, null, ring,
-        overload, instantaneous);
+    CircuitForm form =
+        new CircuitForm(
+            way,
+            position,
+            description,
+            status,
+            locked,
+            kind,
+            curve,
+            rating,
+            cells.whole(POLES, problems),
+            cells.number(BREAKING_KILOAMPS, problems),
+            residual,
+            cells.choice(RCD_TYPE, RcdType.class, problems),
+            cells.number(LINE_CSA, problems),
+            cells.number(CPC_CSA, problems),
+            cells.choice(CONDUCTOR, ConductorMaterial.class, problems),
+            cells.choice(INSULATION, Insulation.class, problems),
+            cells.number(LENGTH_METRES, problems),
+            cells.choice(INSTALLATION, InstallationMethod.class, problems),
+            cells.number(AMBIENT_CELSIUS, problems),
+            cells.whole(GROUPED, problems),
+            cells.whole(THERMAL_INSULATION_MM, problems),
+            cells.number(MEASURED_ZS, problems),
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            ring,
+            overload,
+            instantaneous);
     for (ConstraintViolation<CircuitForm> violation : validator.validate(form)) {
-      ImportField field = CIRCUIT_PROPERTIES.getOrDefault(violation.getPropertyPath().toString(), CIRCUIT);
+      ImportField field =
+          CIRCUIT_PROPERTIES.getOrDefault(violation.getPropertyPath().toString(), CIRCUIT);
       if (!cells.hasError(problems, cells.source(field))) {
-        problems.add(new ImportPlan.Problem(cells.source(field), "import.cell.invalid", new Object[] {violation.getMessage()}));
+        problems.add(
+            new ImportPlan.Problem(
+                cells.source(field), "import.cell.invalid", new Object[] {violation.getMessage()}));
       }
     }
     return form;
@@ -290,7 +402,11 @@ public final class RowReader {
 
   // ---------------------------------------------------------------- load
 
-  private LoadForm readLoad(Cells cells, String circuitDescription, List<ImportPlan.Problem> problems, List<String> notes) {
+  private LoadForm readLoad(
+      Cells cells,
+      String circuitDescription,
+      List<ImportPlan.Problem> problems,
+      List<String> notes) {
     String description = CellText.fromCsv(cells.text(LOAD));
     if (description.isBlank()) {
       description = circuitDescription == null ? "" : circuitDescription;
@@ -304,7 +420,9 @@ public final class RowReader {
       if (category == null) {
         category = categoryFromWords(cells.text(CATEGORY));
         if (category == LoadCategory.OTHER && !Codes.squash(cells.text(CATEGORY)).equals("OTHER")) {
-          problems.add(new ImportPlan.Problem(CATEGORY, "import.cell.unknownCategory", new Object[] {cells.text(CATEGORY)}));
+          problems.add(
+              new ImportPlan.Problem(
+                  CATEGORY, "import.cell.unknownCategory", new Object[] {cells.text(CATEGORY)}));
         }
       }
     }
@@ -341,13 +459,24 @@ public final class RowReader {
       powerFactor = cells.number(POWER_FACTOR, problems);
     }
     Boolean continuous = cells.yes(CONTINUOUS, problems);
-    LoadForm form = new LoadForm(
-        description, category, quantity, rating, unit, powerFactor, cells.number(SURGE_MULTIPLE, problems),
-        cells.number(SURGE_MILLIS, problems), Boolean.TRUE.equals(continuous));
+    LoadForm form =
+        new LoadForm(
+            description,
+            category,
+            quantity,
+            rating,
+            unit,
+            powerFactor,
+            cells.number(SURGE_MULTIPLE, problems),
+            cells.number(SURGE_MILLIS, problems),
+            Boolean.TRUE.equals(continuous));
     for (ConstraintViolation<LoadForm> violation : validator.validate(form)) {
-      ImportField field = LOAD_PROPERTIES.getOrDefault(violation.getPropertyPath().toString(), LOAD);
+      ImportField field =
+          LOAD_PROPERTIES.getOrDefault(violation.getPropertyPath().toString(), LOAD);
       if (!cells.hasError(problems, cells.source(field))) {
-        problems.add(new ImportPlan.Problem(cells.source(field), "import.cell.invalid", new Object[] {violation.getMessage()}));
+        problems.add(
+            new ImportPlan.Problem(
+                cells.source(field), "import.cell.invalid", new Object[] {violation.getMessage()}));
       }
     }
     return form;
@@ -391,7 +520,10 @@ public final class RowReader {
 
   // ---------------------------------------------------------------- cells
 
-  /** The cells of one row by field, and which column a derived value came from (for placing its problems). */
+  /**
+   * The cells of one row by field, and which column a derived value came from (for placing its
+   * problems).
+   */
   private static final class Cells {
     private final SheetTable.Row row;
     private final Map<ImportField, Integer> columnOf;
@@ -450,20 +582,24 @@ public final class RowReader {
         return null;
       }
       if (value != Math.rint(value) || Math.abs(value) > 1_000_000_000) {
-        problems.add(new ImportPlan.Problem(field, "import.cell.notWhole", new Object[] {text(field)}));
+        problems.add(
+            new ImportPlan.Problem(field, "import.cell.notWhole", new Object[] {text(field)}));
         return null;
       }
       return value.intValue();
     }
 
-    <E extends Enum<E>> E choice(ImportField field, Class<E> type, List<ImportPlan.Problem> problems) {
+    <E extends Enum<E>> E choice(
+        ImportField field, Class<E> type, List<ImportPlan.Problem> problems) {
       String text = text(field);
       if (text.isEmpty()) {
         return null;
       }
       E value = Codes.parseEnum(type, text);
       if (value == null) {
-        problems.add(new ImportPlan.Problem(field, "import.cell.unknownChoice", new Object[] {text, choices(type)}));
+        problems.add(
+            new ImportPlan.Problem(
+                field, "import.cell.unknownChoice", new Object[] {text, choices(type)}));
       }
       return value;
     }
@@ -471,7 +607,8 @@ public final class RowReader {
     Boolean yes(ImportField field, List<ImportPlan.Problem> problems) {
       Boolean value = Codes.parseYes(text(field));
       if (value == null) {
-        problems.add(new ImportPlan.Problem(field, "import.cell.unknownYes", new Object[] {text(field)}));
+        problems.add(
+            new ImportPlan.Problem(field, "import.cell.unknownYes", new Object[] {text(field)}));
       }
       return value;
     }
@@ -479,7 +616,8 @@ public final class RowReader {
     Boolean ring(List<ImportPlan.Problem> problems) {
       Boolean value = Codes.parseRing(text(RING));
       if (value == null) {
-        problems.add(new ImportPlan.Problem(RING, "import.cell.unknownRing", new Object[] {text(RING)}));
+        problems.add(
+            new ImportPlan.Problem(RING, "import.cell.unknownRing", new Object[] {text(RING)}));
       }
       return value;
     }
@@ -498,7 +636,8 @@ public final class RowReader {
 
   /** Numbers as people type them in sheets: "16", "16 A", "2,5 mm²", "0.95". */
   static final class Numbers {
-    private static final Pattern NUMBER = Pattern.compile("^([-+]?\\d+(?:[.,]\\d+)?(?:[eE][-+]?\\d+)?)\\s*[a-zA-Z²Ω°%×µ]*\\s*$");
+    private static final Pattern NUMBER =
+        Pattern.compile("^([-+]?\\d+(?:[.,]\\d+)?(?:[eE][-+]?\\d+)?)\\s*[a-zA-Z²Ω°%×µ]*\\s*$");
 
     private Numbers() {}
 

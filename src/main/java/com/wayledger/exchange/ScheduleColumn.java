@@ -1,8 +1,8 @@
 package com.wayledger.exchange;
 
 /**
- * The columns of a board's schedule table, in the order the exports write them. Input columns are read back
- * on import; computed columns are written for the reader and ignored on import.
+ * The columns of a board's schedule table, in the order the exports write them. Input columns are
+ * read back on import; computed columns are written for the reader and ignored on import.
  */
 public enum ScheduleColumn {
   WAY("Way", true),

@@ -3,7 +3,8 @@ package com.wayledger.exchange;
 import java.util.List;
 
 /**
- * The cells of one sheet as text, as read from an uploaded file: its header row and the rows below it.
+ * The cells of one sheet as text, as read from an uploaded file: its header row and the rows below
+ * it.
  *
  * @param sheetNames every sheet of the file (one, named after the file, for CSV)
  * @param sheetIndex the sheet these rows come from
@@ -12,9 +13,16 @@ import java.util.List;
  * @param rows the non-blank rows below the header
  */
 public record SheetTable(
-    List<String> sheetNames, int sheetIndex, int headerRowNumber, List<String> headers, List<Row> rows) {
+    List<String> sheetNames,
+    int sheetIndex,
+    int headerRowNumber,
+    List<String> headers,
+    List<Row> rows) {
 
-  /** One row: its number as the spreadsheet shows it, and its cells (blank as ""), as wide as the header. */
+  /**
+   * One row: its number as the spreadsheet shows it, and its cells (blank as ""), as wide as the
+   * header.
+   */
   public record Row(int number, List<String> cells) {
 
     public String cell(int column) {

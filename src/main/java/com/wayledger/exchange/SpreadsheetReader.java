@@ -20,7 +20,6 @@ import org.apache.poi.EncryptedDocumentException;
 import org.apache.poi.openxml4j.exceptions.InvalidFormatException;
 import org.apache.poi.openxml4j.exceptions.NotOfficeXmlFileException;
 import org.apache.poi.openxml4j.opc.OPCPackage;
-import org.apache.poi.openxml4j.opc.PackageAccess;
 import org.apache.poi.openxml4j.util.ZipSecureFile;
 import org.apache.poi.poifs.filesystem.FileMagic;
 import org.apache.poi.poifs.filesystem.POIFSFileSystem;
@@ -38,10 +37,10 @@ import org.xml.sax.SAXException;
 import org.xml.sax.XMLReader;
 
 /**
- * Reads an uploaded XLSX or CSV file into a {@link SheetTable}, within limits: a size cap, a row cap, POI's
- * zip-bomb guard, and POI's XML parsers (which refuse document type declarations, so no external entity is
- * ever fetched). XLSX is read with POI's streaming (SAX) reader, so a huge sheet is stopped at the row cap
- * without being held in memory.
+ * Reads an uploaded XLSX or CSV file into a {@link SheetTable}, within limits: a size cap, a row
+ * cap, POI's zip-bomb guard, and POI's XML parsers (which refuse document type declarations, so no
+ * external entity is ever fetched). XLSX is read with POI's streaming (SAX) reader, so a huge sheet
+ * is stopped at the row cap without being held in memory.
  */
 public final class SpreadsheetReader {
 
@@ -57,7 +56,10 @@ public final class SpreadsheetReader {
   /** Rows searched for the header. */
   private static final int HEADER_SEARCH_ROWS = 30;
 
-  /** Smallest compressed/uncompressed ratio of a zip entry before POI calls it a zip bomb (POI's default, stated). */
+  /**
+   * Smallest compressed/uncompressed ratio of a zip entry before POI calls it a zip bomb (POI's
+   * default, stated).
+   */
   private static final double MIN_INFLATE_RATIO = 0.01;
 
   /** Largest uncompressed part of an XLSX, bytes. */
@@ -76,7 +78,9 @@ public final class SpreadsheetReader {
     CSV
   }
 
-  /** Which kind of file the bytes hold; refuses what is not a spreadsheet we read, with the reason. */
+  /**
+   * Which kind of file the bytes hold; refuses what is not a spreadsheet we read, with the reason.
+   */
   public static Kind detect(byte[] bytes, String fileName) {
     if (bytes.length == 0) {
       throw new ImportRefused("import.refused.emptyFile");
@@ -92,7 +96,9 @@ public final class SpreadsheetReader {
     }
     return switch (magic) {
       case OOXML -> Kind.XLSX;
-      case OLE2 -> throw new ImportRefused(isEncrypted(bytes) ? "import.refused.protected" : "import.refused.oldExcel");
+      case OLE2 ->
+          throw new ImportRefused(
+              isEncrypted(bytes) ? "import.refused.protected" : "import.refused.oldExcel");
       default -> {
         if (looksLikeText(bytes)) {
           yield Kind.CSV;
@@ -118,7 +124,8 @@ public final class SpreadsheetReader {
       }
     }
     try {
-      StandardCharsets.UTF_8.newDecoder()
+      StandardCharsets.UTF_8
+          .newDecoder()
           .onMalformedInput(CodingErrorAction.REPORT)
           .onUnmappableCharacter(CodingErrorAction.REPORT)
           .decode(ByteBuffer.wrap(bytes));
@@ -135,22 +142,27 @@ public final class SpreadsheetReader {
       return List.of(fileName == null || fileName.isBlank() ? "CSV" : fileName);
     }
     List<String> names = new ArrayList<>();
-    withPackage(bytes, pkg -> {
-      XSSFReader.SheetIterator sheets = (XSSFReader.SheetIterator) new XSSFReader(pkg).getSheetsData();
-      while (sheets.hasNext()) {
-        try (InputStream ignored = sheets.next()) {
-          names.add(sheets.getSheetName());
-        }
-      }
-      return null;
-    });
+    withPackage(
+        bytes,
+        pkg -> {
+          XSSFReader.SheetIterator sheets =
+              (XSSFReader.SheetIterator) new XSSFReader(pkg).getSheetsData();
+          while (sheets.hasNext()) {
+            try (InputStream ignored = sheets.next()) {
+              names.add(sheets.getSheetName());
+            }
+          }
+          return null;
+        });
     return names;
   }
 
   /**
-   * The sheet's table: the header is the row among the first ones whose cells name the most known columns.
+   * The sheet's table: the header is the row among the first ones whose cells name the most known
+   * columns.
    *
-   * @param sheetIndex the sheet to read; a negative index picks our own board sheet if there is one, else the first
+   * @param sheetIndex the sheet to read; a negative index picks our own board sheet if there is
+   *     one, else the first
    */
   public static SheetTable read(byte[] bytes, String fileName, int sheetIndex) {
     Kind kind = detect(bytes, fileName);
@@ -232,8 +244,10 @@ public final class SpreadsheetReader {
     }
     char delimiter = guessDelimiter(text);
     List<SheetTable.Row> rows = new ArrayList<>();
-    CSVFormat format = CSVFormat.RFC4180.builder().setDelimiter(delimiter).setIgnoreEmptyLines(false).get();
-    try (Reader reader = new StringReader(text); CSVParser parser = CSVParser.parse(reader, format)) {
+    CSVFormat format =
+        CSVFormat.RFC4180.builder().setDelimiter(delimiter).setIgnoreEmptyLines(false).get();
+    try (Reader reader = new StringReader(text);
+        CSVParser parser = CSVParser.parse(reader, format)) {
       for (CSVRecord record : parser) {
         List<String> cells = new ArrayList<>();
         for (int i = 0; i < Math.min(record.size(), MAX_COLUMNS); i++) {
@@ -252,7 +266,9 @@ public final class SpreadsheetReader {
 
   private static char guessDelimiter(String text) {
     int end = text.indexOf('\n');
-    String firstLines = text.substring(0, end < 0 ? Math.min(text.length(), 4096) : Math.min(text.length(), end + 1 + 4096));
+    String firstLines =
+        text.substring(
+            0, end < 0 ? Math.min(text.length(), 4096) : Math.min(text.length(), end + 1 + 4096));
     long commas = firstLines.chars().filter(c -> c == ',').count();
     long semicolons = firstLines.chars().filter(c -> c == ';').count();
     long tabs = firstLines.chars().filter(c -> c == '\t').count();
@@ -278,11 +294,13 @@ public final class SpreadsheetReader {
   // ------------------------------------------------------------------ XLSX
 
   private interface PackageWork<T> {
-    T apply(OPCPackage pkg) throws IOException, SAXException, org.apache.poi.openxml4j.exceptions.OpenXML4JException;
+    T apply(OPCPackage pkg)
+        throws IOException, SAXException, org.apache.poi.openxml4j.exceptions.OpenXML4JException;
   }
 
   private static <T> T withPackage(byte[] bytes, PackageWork<T> work) {
-    try (OPCPackage pkg = OPCPackage.open(new BufferedInputStream(new ByteArrayInputStream(bytes)))) {
+    try (OPCPackage pkg =
+        OPCPackage.open(new BufferedInputStream(new ByteArrayInputStream(bytes)))) {
       return work.apply(pkg);
     } catch (ImportRefused refused) {
       throw refused;
@@ -295,7 +313,9 @@ public final class SpreadsheetReader {
         throw new ImportRefused("import.refused.zipBomb");
       }
       throw new ImportRefused("import.refused.damaged");
-    } catch (SAXException | org.apache.poi.openxml4j.exceptions.OpenXML4JException | RuntimeException e) {
+    } catch (SAXException
+        | org.apache.poi.openxml4j.exceptions.OpenXML4JException
+        | RuntimeException e) {
       Throwable cause = e;
       while (cause != null) {
         if (cause instanceof ImportRefused refused) {
@@ -311,31 +331,38 @@ public final class SpreadsheetReader {
   }
 
   private static List<SheetTable.Row> readSheet(byte[] bytes, int index) {
-    return withPackage(bytes, pkg -> {
-      XSSFReader reader = new XSSFReader(pkg);
-      ReadOnlySharedStringsTable strings = new ReadOnlySharedStringsTable(pkg, false);
-      StylesTable styles = reader.getStylesTable();
-      XSSFReader.SheetIterator sheets = (XSSFReader.SheetIterator) reader.getSheetsData();
-      int i = 0;
-      while (sheets.hasNext()) {
-        try (InputStream sheet = sheets.next()) {
-          if (i++ != index) {
-            continue;
+    return withPackage(
+        bytes,
+        pkg -> {
+          XSSFReader reader = new XSSFReader(pkg);
+          ReadOnlySharedStringsTable strings = new ReadOnlySharedStringsTable(pkg, false);
+          StylesTable styles = reader.getStylesTable();
+          XSSFReader.SheetIterator sheets = (XSSFReader.SheetIterator) reader.getSheetsData();
+          int i = 0;
+          while (sheets.hasNext()) {
+            try (InputStream sheet = sheets.next()) {
+              if (i++ != index) {
+                continue;
+              }
+              RowCollector collector = new RowCollector();
+              XMLReader parser = XMLHelper.newXMLReader();
+              parser.setContentHandler(
+                  new XSSFSheetXMLHandler(
+                      styles, null, strings, collector, new RawNumbers(), false));
+              parser.parse(new InputSource(sheet));
+              return collector.rows;
+            } catch (javax.xml.parsers.ParserConfigurationException e) {
+              throw new IOException(e);
+            }
           }
-          RowCollector collector = new RowCollector();
-          XMLReader parser = XMLHelper.newXMLReader();
-          parser.setContentHandler(new XSSFSheetXMLHandler(styles, null, strings, collector, new RawNumbers(), false));
-          parser.parse(new InputSource(sheet));
-          return collector.rows;
-        } catch (javax.xml.parsers.ParserConfigurationException e) {
-          throw new IOException(e);
-        }
-      }
-      return List.<SheetTable.Row>of();
-    });
+          return List.<SheetTable.Row>of();
+        });
   }
 
-  /** Numbers as their full value, never rounded by the cell's display format (so our export reads back exactly). */
+  /**
+   * Numbers as their full value, never rounded by the cell's display format (so our export reads
+   * back exactly).
+   */
   private static final class RawNumbers extends DataFormatter {
     RawNumbers() {
       super(Locale.ROOT);
@@ -347,7 +374,8 @@ public final class SpreadsheetReader {
     }
 
     @Override
-    public String formatRawCellContents(double value, int formatIndex, String formatString, boolean use1904Windowing) {
+    public String formatRawCellContents(
+        double value, int formatIndex, String formatString, boolean use1904Windowing) {
       return NumberToTextConverter.toText(value);
     }
   }

@@ -10,8 +10,8 @@ import org.springframework.web.bind.annotation.ExceptionHandler;
 import org.springframework.web.multipart.MaxUploadSizeExceededException;
 
 /**
- * An upload beyond the server's multipart limit is refused before any controller runs; this turns it into
- * a readable page with a 413 instead of an error.
+ * An upload beyond the server's multipart limit is refused before any controller runs; this turns
+ * it into a readable page with a 413 instead of an error.
  */
 @ControllerAdvice
 @Order(Ordered.HIGHEST_PRECEDENCE)

@@ -20,9 +20,10 @@ import java.util.regex.Pattern;
 import org.springframework.stereotype.Component;
 
 /**
- * Keeps an uploaded file between the import steps in a temporary file named by a random token, with a small
- * side file for the board, the uploader and the chosen mapping. Sessions live in the database, so the file
- * itself never goes into the session. Uploads older than two hours are removed.
+ * Keeps an uploaded file between the import steps in a temporary file named by a random token, with
+ * a small side file for the board, the uploader and the chosen mapping. Sessions live in the
+ * database, so the file itself never goes into the session. Uploads older than two hours are
+ * removed.
  */
 @Component
 public class UploadStore {
@@ -43,7 +44,12 @@ public class UploadStore {
 
   /** What is known about an upload. */
   public record Upload(
-      String token, long boardId, String owner, String fileName, int sheetIndex, List<ImportField> mapping) {
+      String token,
+      long boardId,
+      String owner,
+      String fileName,
+      int sheetIndex,
+      List<ImportField> mapping) {
 
     Upload withMapping(int sheet, List<ImportField> fields) {
       return new Upload(token, boardId, owner, fileName, sheet, List.copyOf(fields));
@@ -60,7 +66,8 @@ public class UploadStore {
     } catch (IOException e) {
       throw new UncheckedIOException(e);
     }
-    Upload upload = new Upload(token, boardId, owner, fileName == null ? "" : fileName, -1, List.of());
+    Upload upload =
+        new Upload(token, boardId, owner, fileName == null ? "" : fileName, -1, List.of());
     update(upload);
     return upload;
   }
@@ -71,15 +78,20 @@ public class UploadStore {
     properties.setProperty("owner", upload.owner());
     properties.setProperty("fileName", upload.fileName());
     properties.setProperty("sheet", Integer.toString(upload.sheetIndex()));
-    properties.setProperty("mapping", String.join(",", upload.mapping().stream().map(Enum::name).toList()));
-    try (OutputStream out = Files.newOutputStream(directory.resolve(upload.token() + ".properties"))) {
+    properties.setProperty(
+        "mapping", String.join(",", upload.mapping().stream().map(Enum::name).toList()));
+    try (OutputStream out =
+        Files.newOutputStream(directory.resolve(upload.token() + ".properties"))) {
       properties.store(out, null);
     } catch (IOException e) {
       throw new UncheckedIOException(e);
     }
   }
 
-  /** The upload of this token for this board and user; empty when unknown, expired or someone else's. */
+  /**
+   * The upload of this token for this board and user; empty when unknown, expired or someone
+   * else's.
+   */
   public Optional<Upload> find(String token, long boardId, String owner) {
     if (token == null || !TOKEN.matcher(token).matches()) {
       return Optional.empty();
@@ -94,7 +106,8 @@ public class UploadStore {
     } catch (IOException e) {
       return Optional.empty();
     }
-    if (Long.parseLong(properties.getProperty("boardId")) != boardId || !owner.equals(properties.getProperty("owner"))) {
+    if (Long.parseLong(properties.getProperty("boardId")) != boardId
+        || !owner.equals(properties.getProperty("owner"))) {
       return Optional.empty();
     }
     List<ImportField> mapping = new ArrayList<>();
@@ -104,8 +117,14 @@ public class UploadStore {
         mapping.add(ImportField.valueOf(name));
       }
     }
-    return Optional.of(new Upload(token, boardId, owner, properties.getProperty("fileName"),
-        Integer.parseInt(properties.getProperty("sheet")), mapping));
+    return Optional.of(
+        new Upload(
+            token,
+            boardId,
+            owner,
+            properties.getProperty("fileName"),
+            Integer.parseInt(properties.getProperty("sheet")),
+            mapping));
   }
 
   public byte[] bytes(Upload upload) {

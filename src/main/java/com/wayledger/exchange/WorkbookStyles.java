@@ -10,9 +10,9 @@ import org.apache.poi.ss.usermodel.VerticalAlignment;
 import org.apache.poi.ss.usermodel.Workbook;
 
 /**
- * The cell styles of an export, made once per workbook and used by name (a workbook holds at most 64,000
- * styles, so a style per cell is never made). Number formats follow the screens: A to 1 decimal, kW and
- * factors to 3, Ω to 2.
+ * The cell styles of an export, made once per workbook and used by name (a workbook holds at most
+ * 64,000 styles, so a style per cell is never made). Number formats follow the screens: A to 1
+ * decimal, kW and factors to 3, Ω to 2.
  */
 final class WorkbookStyles {
 

@@ -5,7 +5,6 @@ import static com.wayledger.exchange.ScheduleColumn.*;
 import com.wayledger.board.CircuitForm;
 import com.wayledger.board.LoadForm;
 import com.wayledger.engine.Phase;
-import com.wayledger.engine.PhasePosition;
 import com.wayledger.engine.demand.BoardDemand;
 import com.wayledger.engine.demand.DemandSettings;
 import com.wayledger.engine.protection.BoardFindings;
@@ -40,11 +39,11 @@ import org.apache.poi.xssf.streaming.SXSSFWorkbook;
 import org.apache.poi.xssf.streaming.SheetDataWriter;
 
 /**
- * Writes schedules as an XLSX workbook with the streaming writer, so a site of thousands of circuits is
- * written in a bounded window of rows. Board sheets hold one row per load line (a circuit without loads
- * takes one row), input columns first and then computed columns whose per-row figures, per-phase and board
- * totals are live formulas; figures the rows cannot express (diversity factors, sub-boards' demand) are
- * written as values from the engine and named "at export".
+ * Writes schedules as an XLSX workbook with the streaming writer, so a site of thousands of
+ * circuits is written in a bounded window of rows. Board sheets hold one row per load line (a
+ * circuit without loads takes one row), input columns first and then computed columns whose per-row
+ * figures, per-phase and board totals are live formulas; figures the rows cannot express (diversity
+ * factors, sub-boards' demand) are written as values from the engine and named "at export".
  */
 public final class WorkbookWriter {
 
@@ -58,15 +57,22 @@ public final class WorkbookWriter {
 
   private final String caution;
 
-  /** @param caution the caution printed on every sheet */
+  /**
+   * @param caution the caution printed on every sheet
+   */
   public WorkbookWriter(String caution) {
     this.caution = caution;
   }
 
   /** Where a board sheet's totals are, so that other sheets can refer to them. */
   record TotalsCells(
-      String sheetName, String connectedKilowatts, String demandKilowatts, String highestPhaseAmps,
-      double connectedKilowattsValue, double demandKilowattsValue, double highestPhaseAmpsValue) {}
+      String sheetName,
+      String connectedKilowatts,
+      String demandKilowatts,
+      String highestPhaseAmps,
+      double connectedKilowattsValue,
+      double demandKilowattsValue,
+      double highestPhaseAmpsValue) {}
 
   /**
    * Writes the workbook.
@@ -79,7 +85,12 @@ public final class WorkbookWriter {
     SXSSFWorkbook workbook = new FastWorkbook(WINDOW_ROWS);
     try {
       WorkbookStyles styles = new WorkbookStyles(workbook);
-      Set<String> names = new HashSet<>(Set.of(SUMMARY_SHEET.toLowerCase(Locale.ROOT), FINDINGS_SHEET.toLowerCase(Locale.ROOT), METHODS_SHEET.toLowerCase(Locale.ROOT)));
+      Set<String> names =
+          new HashSet<>(
+              Set.of(
+                  SUMMARY_SHEET.toLowerCase(Locale.ROOT),
+                  FINDINGS_SHEET.toLowerCase(Locale.ROOT),
+                  METHODS_SHEET.toLowerCase(Locale.ROOT)));
       SXSSFSheet summary = withSummary ? workbook.createSheet(SUMMARY_SHEET) : null;
       Map<Long, TotalsCells> totals = new HashMap<>();
       for (BoardEntry board : data.boards()) {
@@ -104,9 +115,10 @@ public final class WorkbookWriter {
   }
 
   /**
-   * The streaming workbook with two speed-ups of the writing, which dominates a large export: zipped at the
-   * fastest deflate level (the sheets' XML is highly repetitive, so the file grows by about a quarter while
-   * zipping takes a fraction of the time), and text escaped in runs rather than character by character.
+   * The streaming workbook with two speed-ups of the writing, which dominates a large export:
+   * zipped at the fastest deflate level (the sheets' XML is highly repetitive, so the file grows by
+   * about a quarter while zipping takes a fraction of the time), and text escaped in runs rather
+   * than character by character.
    */
   private static final class FastWorkbook extends SXSSFWorkbook {
     FastWorkbook(int window) {
@@ -126,7 +138,10 @@ public final class WorkbookWriter {
     }
   }
 
-  /** POI's sheet writer with its text escaping done in runs of plain characters (same output, see {@link #escape}). */
+  /**
+   * POI's sheet writer with its text escaping done in runs of plain characters (same output, see
+   * {@link #escape}).
+   */
   static final class RunEscapingSheetWriter extends SheetDataWriter {
     RunEscapingSheetWriter() throws IOException {
       super();
@@ -139,10 +154,11 @@ public final class WorkbookWriter {
   }
 
   /**
-   * Writes text as POI's streaming writer escapes it (POI 5.5's {@code SheetDataWriter.outputEscapedString}):
-   * {@code < > & "} as entities, tab, line feed, carriage return and no-break space as character references,
-   * other control characters and U+FFFE/U+FFFF as "?", everything else as it is; but plain runs are written
-   * whole instead of one character at a time. {@code WorkbookWriterTests} compares both on awkward text.
+   * Writes text as POI's streaming writer escapes it (POI 5.5's {@code
+   * SheetDataWriter.outputEscapedString}): {@code < > & "} as entities, tab, line feed, carriage
+   * return and no-break space as character references, other control characters and U+FFFE/U+FFFF
+   * as "?", everything else as it is; but plain runs are written whole instead of one character at
+   * a time. {@code WorkbookWriterTests} compares both on awkward text.
    */
   static void escape(String text, Writer out) throws IOException {
     if (text == null) {
@@ -186,13 +202,23 @@ public final class WorkbookWriter {
 
   // ---------------------------------------------------------------- board sheet
 
-  private TotalsCells writeBoard(SXSSFSheet sheet, BoardEntry board, BoardFigures figures, ExportData data, WorkbookStyles styles) {
+  private TotalsCells writeBoard(
+      SXSSFSheet sheet,
+      BoardEntry board,
+      BoardFigures figures,
+      ExportData data,
+      WorkbookStyles styles) {
     Widths widths = new Widths(ScheduleColumn.values().length);
     BoardDemand demand = figures.demand();
     double u0 = demand != null ? demand.nominalVoltageVolts() : data.demand().nominalVoltageVolts();
 
     Row title = sheet.createRow(0);
-    text(title, 0, "Schedule of board " + board.reference() + " — " + data.siteName(), styles.title, null);
+    text(
+        title,
+        0,
+        "Schedule of board " + board.reference() + " — " + data.siteName(),
+        styles.title,
+        null);
     Row facts = sheet.createRow(1);
     text(facts, 0, "U0 V", styles.label, null);
     number(facts, 1, u0, styles.number, null);
@@ -205,7 +231,12 @@ public final class WorkbookWriter {
     text(facts, 8, "Diversity", styles.label, null);
     text(facts, 9, demand == null ? "not assessed" : demand.methodName(), styles.text, null);
     text(facts, 11, "Fed from", styles.label, null);
-    text(facts, 12, board.parentReference() == null ? "origin" : board.parentReference(), styles.text, null);
+    text(
+        facts,
+        12,
+        board.parentReference() == null ? "origin" : board.parentReference(),
+        styles.text,
+        null);
     text(sheet.createRow(2), 0, "Caution: " + caution, styles.caution, null);
 
     Row header = sheet.createRow(HEADER_ROW);
@@ -220,8 +251,10 @@ public final class WorkbookWriter {
     CachedResults cache = new CachedResults(u0, board.isThreePhase());
     for (CircuitEntry entry : board.circuits()) {
       BoardFigures.CircuitFigures circuitFigures = figures.circuit(entry.circuitId());
-      List<LoadForm> loads = entry.loads().isEmpty() ? java.util.Collections.singletonList(null) : entry.loads();
-      boolean threePole = entry.circuit().position() == com.wayledger.engine.PhasePosition.THREE_POLE;
+      List<LoadForm> loads =
+          entry.loads().isEmpty() ? java.util.Collections.singletonList(null) : entry.loads();
+      boolean threePole =
+          entry.circuit().position() == com.wayledger.engine.PhasePosition.THREE_POLE;
       Phase phase = threePole ? Phase.L1 : entry.circuit().position().phases().iterator().next();
       double circuitKw = 0;
       double circuitKvar = 0;
@@ -240,8 +273,18 @@ public final class WorkbookWriter {
         }
         CachedResults.RowPower power = cache.rowPower(load, threePole);
         double[] diversity =
-            writeComputedCells(row, rowIndex + 1, first, circuitFigures, u0Cell, firstData + 1, lastData + 1,
-                power, circuitAmps, styles, widths);
+            writeComputedCells(
+                row,
+                rowIndex + 1,
+                first,
+                circuitFigures,
+                u0Cell,
+                firstData + 1,
+                lastData + 1,
+                power,
+                circuitAmps,
+                styles,
+                widths);
         cache.add(power, diversity[0], diversity[1], phase, threePole);
         first = false;
         rowIndex++;
@@ -250,9 +293,19 @@ public final class WorkbookWriter {
     if (rowIndex == firstData) {
       rowIndex++; // an empty board keeps one blank data row so the ranges stay valid
     }
-    sheet.setAutoFilter(new CellRangeAddress(HEADER_ROW, lastData, 0, ScheduleColumn.values().length - 1));
+    sheet.setAutoFilter(
+        new CellRangeAddress(HEADER_ROW, lastData, 0, ScheduleColumn.values().length - 1));
     TotalsCells cells =
-        writeTotals(sheet, board, figures, rowIndex + 1, firstData + 1, lastData + 1, cache, styles, widths);
+        writeTotals(
+            sheet,
+            board,
+            figures,
+            rowIndex + 1,
+            firstData + 1,
+            lastData + 1,
+            cache,
+            styles,
+            widths);
 
     widths.apply(sheet);
     sheet.createFreezePane(3, HEADER_ROW + 1);
@@ -273,7 +326,12 @@ public final class WorkbookWriter {
     text(row, LINE.ordinal(), Codes.line(c.position()), s.text, w);
     text(row, CIRCUIT.ordinal(), c.description(), s.text, w);
     text(row, STATE.ordinal(), Codes.state(c.status()), s.text, w);
-    text(row, KEEP_LINE.ordinal(), Codes.yes(Boolean.TRUE.equals(c.lockedForBalancing())), s.text, w);
+    text(
+        row,
+        KEEP_LINE.ordinal(),
+        Codes.yes(Boolean.TRUE.equals(c.lockedForBalancing())),
+        s.text,
+        w);
     text(row, DEVICE.ordinal(), name(c.deviceKind()), s.text, w);
     text(row, CURVE.ordinal(), name(c.deviceCurve()), s.text, w);
     number(row, RATING_AMPS.ordinal(), c.deviceRatingAmps(), s.number, w);
@@ -282,7 +340,8 @@ public final class WorkbookWriter {
     number(row, RESIDUAL_MILLIAMPS.ordinal(), c.deviceResidualMilliAmps(), s.number, w);
     text(row, RCD_TYPE.ordinal(), name(c.deviceRcdType()), s.text, w);
     number(row, OVERLOAD_SETTING_AMPS.ordinal(), c.deviceOverloadSettingAmps(), s.number, w);
-    number(row, INSTANTANEOUS_SETTING_AMPS.ordinal(), c.deviceInstantaneousSettingAmps(), s.number, w);
+    number(
+        row, INSTANTANEOUS_SETTING_AMPS.ordinal(), c.deviceInstantaneousSettingAmps(), s.number, w);
     number(row, LINE_CSA.ordinal(), c.cableLineCsa(), s.number, w);
     number(row, CPC_CSA.ordinal(), c.cableCpcCsa(), s.number, w);
     text(row, CONDUCTOR.ordinal(), name(c.cableMaterial()), s.text, w);
@@ -310,8 +369,17 @@ public final class WorkbookWriter {
 
   /** Writes a row's computed cells; returns the diversity factors written (active, reactive). */
   private static double[] writeComputedCells(
-      Row row, int r, boolean firstOfCircuit, BoardFigures.CircuitFigures figures, String u0, int from, int to,
-      CachedResults.RowPower power, double circuitAmps, WorkbookStyles s, Widths w) {
+      Row row,
+      int r,
+      boolean firstOfCircuit,
+      BoardFigures.CircuitFigures figures,
+      String u0,
+      int from,
+      int to,
+      CachedResults.RowPower power,
+      double circuitAmps,
+      WorkbookStyles s,
+      Widths w) {
     String qty = ref(QUANTITY, r);
     String rating = ref(RATING, r);
     String unit = ref(UNIT, r);
@@ -319,20 +387,72 @@ public final class WorkbookWriter {
     String line = ref(LINE, r);
     String perLine = u0 + "*IF(" + line + "=\"" + THREE_POLE_CODE + "\",3,1)";
     String blank = "OR(" + rating + "=\"\"," + qty + "=\"\"," + pf + "=\"\")";
-    formula(row, CONNECTED_KW.ordinal(),
-        "IF(" + blank + ",0," + qty + "*" + rating + "*IF(" + unit + "=\"W\",1,IF(" + unit + "=\"VA\"," + pf + "," + perLine + "*" + pf + "))/1000)",
-        power.kilowatts(), s.kilowatts, w);
-    formula(row, CONNECTED_KVAR.ordinal(),
-        "IF(" + blank + ",0," + qty + "*" + rating + "*IF(" + unit + "=\"W\",1/" + pf + ",IF(" + unit + "=\"VA\",1," + perLine + "))*SQRT(1-" + pf + "^2)/1000)",
-        power.kilovars(), s.kilowatts, w);
-    double diversityP = figures == null ? 1.0 : figures.assessed() ? figures.diversityActive() : 0.0;
-    double diversityQ = figures == null ? 1.0 : figures.assessed() ? figures.diversityReactive() : 0.0;
+    formula(
+        row,
+        CONNECTED_KW.ordinal(),
+        "IF("
+            + blank
+            + ",0,"
+            + qty
+            + "*"
+            + rating
+            + "*IF("
+            + unit
+            + "=\"W\",1,IF("
+            + unit
+            + "=\"VA\","
+            + pf
+            + ","
+            + perLine
+            + "*"
+            + pf
+            + "))/1000)",
+        power.kilowatts(),
+        s.kilowatts,
+        w);
+    formula(
+        row,
+        CONNECTED_KVAR.ordinal(),
+        "IF("
+            + blank
+            + ",0,"
+            + qty
+            + "*"
+            + rating
+            + "*IF("
+            + unit
+            + "=\"W\",1/"
+            + pf
+            + ",IF("
+            + unit
+            + "=\"VA\",1,"
+            + perLine
+            + "))*SQRT(1-"
+            + pf
+            + "^2)/1000)",
+        power.kilovars(),
+        s.kilowatts,
+        w);
+    double diversityP =
+        figures == null ? 1.0 : figures.assessed() ? figures.diversityActive() : 0.0;
+    double diversityQ =
+        figures == null ? 1.0 : figures.assessed() ? figures.diversityReactive() : 0.0;
     number(row, DIVERSITY_P.ordinal(), diversityP, s.factor, w);
     number(row, DIVERSITY_Q.ordinal(), diversityQ, s.factor, w);
-    formula(row, DEMAND_KW.ordinal(), ref(CONNECTED_KW, r) + "*" + ref(DIVERSITY_P, r),
-        power.kilowatts() * diversityP, s.kilowatts, w);
-    formula(row, DEMAND_KVAR.ordinal(), ref(CONNECTED_KVAR, r) + "*" + ref(DIVERSITY_Q, r),
-        power.kilovars() * diversityQ, s.kilowatts, w);
+    formula(
+        row,
+        DEMAND_KW.ordinal(),
+        ref(CONNECTED_KW, r) + "*" + ref(DIVERSITY_P, r),
+        power.kilowatts() * diversityP,
+        s.kilowatts,
+        w);
+    formula(
+        row,
+        DEMAND_KVAR.ordinal(),
+        ref(CONNECTED_KVAR, r) + "*" + ref(DIVERSITY_Q, r),
+        power.kilovars() * diversityQ,
+        s.kilowatts,
+        w);
     double[] diversity = {diversityP, diversityQ};
     if (!firstOfCircuit) {
       return diversity;
@@ -341,10 +461,37 @@ public final class WorkbookWriter {
       number(row, IB_CONNECTED.ordinal(), figures.connectedCurrentAmps(), s.amps, w);
     } else {
       String way = ref(WAY, r);
-      String p = "SUMIFS(" + range(CONNECTED_KW, from, to) + "," + range(WAY, from, to) + "," + way + "," + range(LINE, from, to) + "," + line + ")";
-      String q = "SUMIFS(" + range(CONNECTED_KVAR, from, to) + "," + range(WAY, from, to) + "," + way + "," + range(LINE, from, to) + "," + line + ")";
-      formula(row, IB_CONNECTED.ordinal(), "SQRT(" + p + "^2+" + q + "^2)*1000/(" + perLine + ")", circuitAmps,
-          s.amps, w);
+      String p =
+          "SUMIFS("
+              + range(CONNECTED_KW, from, to)
+              + ","
+              + range(WAY, from, to)
+              + ","
+              + way
+              + ","
+              + range(LINE, from, to)
+              + ","
+              + line
+              + ")";
+      String q =
+          "SUMIFS("
+              + range(CONNECTED_KVAR, from, to)
+              + ","
+              + range(WAY, from, to)
+              + ","
+              + way
+              + ","
+              + range(LINE, from, to)
+              + ","
+              + line
+              + ")";
+      formula(
+          row,
+          IB_CONNECTED.ordinal(),
+          "SQRT(" + p + "^2+" + q + "^2)*1000/(" + perLine + ")",
+          circuitAmps,
+          s.amps,
+          w);
     }
     if (figures != null) {
       number(row, IB_DESIGN.ordinal(), figures.designCurrentAmps(), s.amps, w);
@@ -354,10 +501,27 @@ public final class WorkbookWriter {
   }
 
   private TotalsCells writeTotals(
-      SXSSFSheet sheet, BoardEntry board, BoardFigures figures, int startRow, int from, int to, CachedResults cache,
-      WorkbookStyles s, Widths w) {
-    String[] heads = {"Totals", "Connected kW", "Connected kvar", "Connected A", "Demand kW", "Demand kvar", "Demand A",
-        "Sub-boards kW (at export)", "Sub-boards kvar (at export)", "Allowance kW (at export)"};
+      SXSSFSheet sheet,
+      BoardEntry board,
+      BoardFigures figures,
+      int startRow,
+      int from,
+      int to,
+      CachedResults cache,
+      WorkbookStyles s,
+      Widths w) {
+    String[] heads = {
+      "Totals",
+      "Connected kW",
+      "Connected kvar",
+      "Connected A",
+      "Demand kW",
+      "Demand kvar",
+      "Demand A",
+      "Sub-boards kW (at export)",
+      "Sub-boards kvar (at export)",
+      "Allowance kW (at export)"
+    };
     Row head = sheet.createRow(startRow);
     for (int i = 0; i < heads.length; i++) {
       text(head, i, heads[i], s.header, null);
@@ -377,17 +541,44 @@ public final class WorkbookWriter {
       double connectedKw = cache.connectedKilowatts(phase);
       double connectedKvar = cache.connectedKilovars(phase);
       double demandKw =
-          cache.demandKilowatts(phase) + figures.carriedWatts(phase) / 1000.0 + figures.allowanceWattsPerLine() / 1000.0;
+          cache.demandKilowatts(phase)
+              + figures.carriedWatts(phase) / 1000.0
+              + figures.allowanceWattsPerLine() / 1000.0;
       double demandKvar = cache.demandKilovars(phase) + figures.carriedVars(phase) / 1000.0;
       double demandAmps = cache.amps(demandKw, demandKvar);
-      formula(row, 1, phaseSum(CONNECTED_KW, phase, board, from, to), connectedKw, s.kilowatts, null);
-      formula(row, 2, phaseSum(CONNECTED_KVAR, phase, board, from, to), connectedKvar, s.kilowatts, null);
-      formula(row, 3, "SQRT(B" + r + "^2+C" + r + "^2)*1000/$B$2", cache.amps(connectedKw, connectedKvar), s.amps, null);
+      formula(
+          row, 1, phaseSum(CONNECTED_KW, phase, board, from, to), connectedKw, s.kilowatts, null);
+      formula(
+          row,
+          2,
+          phaseSum(CONNECTED_KVAR, phase, board, from, to),
+          connectedKvar,
+          s.kilowatts,
+          null);
+      formula(
+          row,
+          3,
+          "SQRT(B" + r + "^2+C" + r + "^2)*1000/$B$2",
+          cache.amps(connectedKw, connectedKvar),
+          s.amps,
+          null);
       number(row, 7, figures.carriedWatts(phase) / 1000.0, s.kilowatts, null);
       number(row, 8, figures.carriedVars(phase) / 1000.0, s.kilowatts, null);
       number(row, 9, figures.allowanceWattsPerLine() / 1000.0, s.kilowatts, null);
-      formula(row, 4, phaseSum(DEMAND_KW, phase, board, from, to) + "+H" + r + "+J" + r, demandKw, s.kilowatts, null);
-      formula(row, 5, phaseSum(DEMAND_KVAR, phase, board, from, to) + "+I" + r, demandKvar, s.kilowatts, null);
+      formula(
+          row,
+          4,
+          phaseSum(DEMAND_KW, phase, board, from, to) + "+H" + r + "+J" + r,
+          demandKw,
+          s.kilowatts,
+          null);
+      formula(
+          row,
+          5,
+          phaseSum(DEMAND_KVAR, phase, board, from, to) + "+I" + r,
+          demandKvar,
+          s.kilowatts,
+          null);
       formula(row, 6, "SQRT(E" + r + "^2+F" + r + "^2)*1000/$B$2", demandAmps, s.amps, null);
       sumConnectedKw += connectedKw;
       sumConnectedKvar += connectedKvar;
@@ -406,9 +597,20 @@ public final class WorkbookWriter {
     Row total = sheet.createRow(r - 1);
     text(total, 0, "Board", s.totalLabel, null);
     double totalConnectedKw = sumConnectedKw + figures.carriedConnectedWatts() / 1000.0;
-    formula(total, 1, "SUM(B" + first + ":B" + last + ")+B" + carriedRow, totalConnectedKw, s.totalKilowatts, null);
-    formula(total, 2, "SUM(C" + first + ":C" + last + ")+C" + carriedRow,
-        sumConnectedKvar + figures.carriedConnectedVars() / 1000.0, s.totalKilowatts, null);
+    formula(
+        total,
+        1,
+        "SUM(B" + first + ":B" + last + ")+B" + carriedRow,
+        totalConnectedKw,
+        s.totalKilowatts,
+        null);
+    formula(
+        total,
+        2,
+        "SUM(C" + first + ":C" + last + ")+C" + carriedRow,
+        sumConnectedKvar + figures.carriedConnectedVars() / 1000.0,
+        s.totalKilowatts,
+        null);
     formula(total, 4, "SUM(E" + first + ":E" + last + ")", sumDemandKw, s.totalKilowatts, null);
     formula(total, 5, "SUM(F" + first + ":F" + last + ")", sumDemandKvar, s.totalKilowatts, null);
     formula(total, 6, "MAX(G" + first + ":G" + last + ")", highestAmps, s.totalAmps, null);
@@ -420,30 +622,74 @@ public final class WorkbookWriter {
       String mean = "AVERAGE(G" + first + ":G" + last + ")";
       double meanAmps = lineAmps.stream().mapToDouble(Double::doubleValue).average().orElse(0);
       double deviation = lineAmps.stream().mapToDouble(a -> Math.abs(a - meanAmps)).max().orElse(0);
-      formula(unbalance, 6,
-          "IF(" + mean + "<=0,0,100*MAX(ABS(G" + first + "-" + mean + "),ABS(G" + (first + 1) + "-" + mean + "),ABS(G" + last + "-" + mean + "))/" + mean + ")",
-          meanAmps <= 0 ? 0 : 100 * deviation / meanAmps, s.percent, null);
+      formula(
+          unbalance,
+          6,
+          "IF("
+              + mean
+              + "<=0,0,100*MAX(ABS(G"
+              + first
+              + "-"
+              + mean
+              + "),ABS(G"
+              + (first + 1)
+              + "-"
+              + mean
+              + "),ABS(G"
+              + last
+              + "-"
+              + mean
+              + "))/"
+              + mean
+              + ")",
+          meanAmps <= 0 ? 0 : 100 * deviation / meanAmps,
+          s.percent,
+          null);
       r++;
     }
     Row note = sheet.createRow(r);
-    text(note, 0, "Demand per row = connected × the circuit's diversity factors as worked out at export; change a load and the totals follow, "
-        + "but only a fresh export re-applies the diversity method (see the Methods sheet).", s.caution, null);
+    text(
+        note,
+        0,
+        "Demand per row = connected × the circuit's diversity factors as worked out at export; change a load and the totals follow, "
+            + "but only a fresh export re-applies the diversity method (see the Methods sheet).",
+        s.caution,
+        null);
     String quoted = "'" + sheet.getSheetName().replace("'", "''") + "'!";
-    return new TotalsCells(sheet.getSheetName(), quoted + "$B$" + totalRow, quoted + "$E$" + totalRow,
-        quoted + "$G$" + totalRow, totalConnectedKw, sumDemandKw, highestAmps);
+    return new TotalsCells(
+        sheet.getSheetName(),
+        quoted + "$B$" + totalRow,
+        quoted + "$E$" + totalRow,
+        quoted + "$G$" + totalRow,
+        totalConnectedKw,
+        sumDemandKw,
+        highestAmps);
   }
 
-  private static String phaseSum(ScheduleColumn column, Phase phase, BoardEntry board, int from, int to) {
+  private static String phaseSum(
+      ScheduleColumn column, Phase phase, BoardEntry board, int from, int to) {
     if (!board.isThreePhase()) {
       return "SUM(" + range(column, from, to) + ")";
     }
-    return "(SUMIFS(" + range(column, from, to) + "," + range(LINE, from, to) + ",\"" + phase.name() + "\")+SUMIFS("
-        + range(column, from, to) + "," + range(LINE, from, to) + ",\"" + THREE_POLE_CODE + "\")/3)";
+    return "(SUMIFS("
+        + range(column, from, to)
+        + ","
+        + range(LINE, from, to)
+        + ",\""
+        + phase.name()
+        + "\")+SUMIFS("
+        + range(column, from, to)
+        + ","
+        + range(LINE, from, to)
+        + ",\""
+        + THREE_POLE_CODE
+        + "\")/3)";
   }
 
   // ---------------------------------------------------------------- other sheets
 
-  private void writeSummary(SXSSFSheet sheet, ExportData data, Map<Long, TotalsCells> totals, WorkbookStyles s) {
+  private void writeSummary(
+      SXSSFSheet sheet, ExportData data, Map<Long, TotalsCells> totals, WorkbookStyles s) {
     Widths w = new Widths(12);
     text(sheet.createRow(0), 0, "Site " + data.siteName() + " — boards", s.title, null);
     Row facts = sheet.createRow(1);
@@ -452,8 +698,20 @@ public final class WorkbookWriter {
     text(facts, 2, "Exported", s.label, null);
     text(facts, 3, data.exportedOn().toString(), s.text, null);
     text(sheet.createRow(2), 0, "Caution: " + caution, s.caution, null);
-    String[] heads = {"Board", "Location", "Fed from", "Lines", "Ways", "Circuits", "Connected kW", "Demand kW",
-        "Highest phase A", "Incomer", "Unbalance %", "Not assessed"};
+    String[] heads = {
+      "Board",
+      "Location",
+      "Fed from",
+      "Lines",
+      "Ways",
+      "Circuits",
+      "Connected kW",
+      "Demand kW",
+      "Highest phase A",
+      "Incomer",
+      "Unbalance %",
+      "Not assessed"
+    };
     Row head = sheet.createRow(HEADER_ROW);
     for (int i = 0; i < heads.length; i++) {
       text(head, i, heads[i], s.header, w);
@@ -476,26 +734,32 @@ public final class WorkbookWriter {
       if (demand != null && demand.unbalancePercent() != null) {
         number(row, 10, demand.unbalancePercent(), s.percent, w);
       }
-      text(row, 11, demand == null ? "not assessed" : String.join("; ", demand.notAssessed()), s.text, w);
+      text(
+          row,
+          11,
+          demand == null ? "not assessed" : String.join("; ", demand.notAssessed()),
+          s.text,
+          w);
     }
-    sheet.setAutoFilter(new CellRangeAddress(HEADER_ROW, Math.max(HEADER_ROW + 1, r - 1), 0, heads.length - 1));
+    sheet.setAutoFilter(
+        new CellRangeAddress(HEADER_ROW, Math.max(HEADER_ROW + 1, r - 1), 0, heads.length - 1));
     w.apply(sheet);
     sheet.createFreezePane(1, HEADER_ROW + 1);
     printSetup(sheet, data.siteName() + " — boards", data, HEADER_ROW);
   }
 
   /**
-   * One row of the Findings sheet: a finding of the site, a board or one circuit ({@code way} set), or the
-   * same "not assessed" finding of several circuits of a board gathered into one row ({@code circuits} > 1,
-   * {@code ways} listing their ways).
+   * One row of the Findings sheet: a finding of the site, a board or one circuit ({@code way} set),
+   * or the same "not assessed" finding of several circuits of a board gathered into one row ({@code
+   * circuits} > 1, {@code ways} listing their ways).
    */
   record FindingRow(String board, Integer way, Finding finding, int circuits, String ways) {}
 
   /**
-   * Every danger, warning and advice in full, in board order; checks not assessed on a board's circuits are
-   * gathered per board and reason (check, text, clause, remedy), one row naming how many circuits and which
-   * ways, so that a site with thousands of circuits missing the same input does not give thousands of
-   * identical rows, and still no "not assessed" is left out.
+   * Every danger, warning and advice in full, in board order; checks not assessed on a board's
+   * circuits are gathered per board and reason (check, text, clause, remedy), one row naming how
+   * many circuits and which ways, so that a site with thousands of circuits missing the same input
+   * does not give thousands of identical rows, and still no "not assessed" is left out.
    */
   static List<FindingRow> findingRows(ExportData data) {
     List<FindingRow> rows = new ArrayList<>();
@@ -535,7 +799,9 @@ public final class WorkbookWriter {
         if (ways.size() == 1) {
           rows.add(new FindingRow(board.reference(), ways.get(0), gathered.getKey(), 1, null));
         } else {
-          rows.add(new FindingRow(board.reference(), null, gathered.getKey(), ways.size(), wayRanges(ways)));
+          rows.add(
+              new FindingRow(
+                  board.reference(), null, gathered.getKey(), ways.size(), wayRanges(ways)));
         }
       }
     }
@@ -544,7 +810,13 @@ public final class WorkbookWriter {
 
   /** Way numbers as ascending ranges: 1–4, 7, 9–12. */
   static String wayRanges(List<Integer> ways) {
-    int[] sorted = ways.stream().filter(w -> w != null).mapToInt(Integer::intValue).sorted().distinct().toArray();
+    int[] sorted =
+        ways.stream()
+            .filter(w -> w != null)
+            .mapToInt(Integer::intValue)
+            .sorted()
+            .distinct()
+            .toArray();
     StringBuilder text = new StringBuilder();
     for (int i = 0; i < sorted.length; i++) {
       int from = sorted[i];
@@ -562,11 +834,17 @@ public final class WorkbookWriter {
     return text.toString();
   }
 
-  private void writeFindings(SXSSFSheet sheet, List<FindingRow> rows, ExportData data, WorkbookStyles s) {
+  private void writeFindings(
+      SXSSFSheet sheet, List<FindingRow> rows, ExportData data, WorkbookStyles s) {
     Widths w = new Widths(8);
     text(sheet.createRow(0), 0, "Findings — " + data.siteName(), s.title, null);
-    text(sheet.createRow(1), 0, "Every check that did not pass: each danger, warning and advice in full; checks not assessed for want "
-        + "of an input gathered per board and reason, with the number of circuits and their ways.", s.text, null);
+    text(
+        sheet.createRow(1),
+        0,
+        "Every check that did not pass: each danger, warning and advice in full; checks not assessed for want "
+            + "of an input gathered per board and reason, with the number of circuits and their ways.",
+        s.text,
+        null);
     text(sheet.createRow(2), 0, "Caution: " + caution, s.caution, null);
     String[] heads = {"Board", "Way", "Check", "Verdict", "Finding", "Figures", "Clause", "Remedy"};
     Row head = sheet.createRow(HEADER_ROW);
@@ -584,14 +862,16 @@ public final class WorkbookWriter {
       text(row, 2, finding.check().name(), s.text, w);
       text(row, 3, finding.verdict().name(), s.text, w);
       text(row, 4, finding.summary(), s.text, w);
-      String figures = item.ways() != null
-          ? item.circuits() + " circuits, ways " + item.ways()
-          : joinQuantities(finding.values());
+      String figures =
+          item.ways() != null
+              ? item.circuits() + " circuits, ways " + item.ways()
+              : joinQuantities(finding.values());
       text(row, 5, figures, s.text, w);
       text(row, 6, finding.reference(), s.text, w);
       text(row, 7, finding.remedy(), s.text, w);
     }
-    sheet.setAutoFilter(new CellRangeAddress(HEADER_ROW, Math.max(HEADER_ROW + 1, r - 1), 0, heads.length - 1));
+    sheet.setAutoFilter(
+        new CellRangeAddress(HEADER_ROW, Math.max(HEADER_ROW + 1, r - 1), 0, heads.length - 1));
     w.apply(sheet);
     sheet.createFreezePane(0, HEADER_ROW + 1);
     printSetup(sheet, data.siteName() + " — findings", data, HEADER_ROW);
@@ -622,27 +902,54 @@ public final class WorkbookWriter {
     lines.add(new String[] {"Exported", data.exportedOn().toString()});
     lines.add(new String[] {"U0 used, V", plain(data.demand().nominalVoltageVolts())});
     DemandSettings settings = data.demand().settings();
-    lines.add(new String[] {"U0 when the site states none, V", plain(settings.nominalVoltageVolts())});
-    lines.add(new String[] {"Unbalance limit when a board states none, %", plain(settings.unbalanceLimitPercent())});
+    lines.add(
+        new String[] {"U0 when the site states none, V", plain(settings.nominalVoltageVolts())});
+    lines.add(
+        new String[] {
+          "Unbalance limit when a board states none, %", plain(settings.unbalanceLimitPercent())
+        });
     lines.add(new String[] {"Diversity when none is chosen", settings.fallbackMethodKey()});
-    lines.add(new String[] {"Coincidence factor when none is stated", plain(settings.coincidenceFactor())});
-    lines.add(new String[] {"Connected load", "P and Q summed per load line: W is active power, VA apparent, A current per line "
-        + "(S = U0·I, or 3·U0·I for a three-pole circuit); Ib connected = |S| / U0 (per line for three poles)."});
-    lines.add(new String[] {"Demand", "The board's diversity method applied by the demand engine; each circuit's demand / connected "
-        + "ratio (Diversity P, Diversity Q) is written as a value, and the sheet's demand columns and totals are formulas "
-        + "over it. Per-phase current = √(P² + Q²) / U0; a three-pole circuit adds a third to each line."});
-    lines.add(new String[] {"Unbalance", "Largest deviation of a phase current from the mean of the three, over the mean (NEMA MG-1 "
-        + "definition applied to currents)."});
-    lines.add(new String[] {"Findings", "Count of checks graded danger, warning or advice per circuit; every check that did not pass "
-        + "is on the Findings sheet with its clause: each problem on its own row, checks not assessed gathered per board "
-        + "and reason with the number of circuits and their ways."});
+    lines.add(
+        new String[] {
+          "Coincidence factor when none is stated", plain(settings.coincidenceFactor())
+        });
+    lines.add(
+        new String[] {
+          "Connected load",
+          "P and Q summed per load line: W is active power, VA apparent, A current per line "
+              + "(S = U0·I, or 3·U0·I for a three-pole circuit); Ib connected = |S| / U0 (per line for three poles)."
+        });
+    lines.add(
+        new String[] {
+          "Demand",
+          "The board's diversity method applied by the demand engine; each circuit's demand / connected "
+              + "ratio (Diversity P, Diversity Q) is written as a value, and the sheet's demand columns and totals are formulas "
+              + "over it. Per-phase current = √(P² + Q²) / U0; a three-pole circuit adds a third to each line."
+        });
+    lines.add(
+        new String[] {
+          "Unbalance",
+          "Largest deviation of a phase current from the mean of the three, over the mean (NEMA MG-1 "
+              + "definition applied to currents)."
+        });
+    lines.add(
+        new String[] {
+          "Findings",
+          "Count of checks graded danger, warning or advice per circuit; every check that did not pass "
+              + "is on the Findings sheet with its clause: each problem on its own row, checks not assessed gathered per board "
+              + "and reason with the number of circuits and their ways."
+        });
     if (data.findings() != null) {
       ProtectionSettings p = data.findings().settings();
       lines.add(new String[] {"Supply ownership", p.supplyOwnership().name()});
-      lines.add(new String[] {"Voltage drop limit, lighting %", plain(p.lightingDropLimitPercent())});
+      lines.add(
+          new String[] {"Voltage drop limit, lighting %", plain(p.lightingDropLimitPercent())});
       lines.add(new String[] {"Voltage drop limit, other %", plain(p.otherDropLimitPercent())});
       lines.add(new String[] {"Cmin (minimum voltage factor)", plain(p.minimumVoltageFactor())});
-      lines.add(new String[] {"Measured Zs fraction of the maximum", plain(p.measuredLoopImpedanceFraction())});
+      lines.add(
+          new String[] {
+            "Measured Zs fraction of the maximum", plain(p.measuredLoopImpedanceFraction())
+          });
     }
     for (BoardEntry board : data.boards()) {
       BoardDemand demand = data.demand().board(board.id());
@@ -650,7 +957,11 @@ public final class WorkbookWriter {
         lines.add(new String[] {"Board " + board.reference(), "not assessed"});
         continue;
       }
-      lines.add(new String[] {"Board " + board.reference() + " method", demand.methodName() + " — " + demand.methodSource()});
+      lines.add(
+          new String[] {
+            "Board " + board.reference() + " method",
+            demand.methodName() + " — " + demand.methodSource()
+          });
       for (String missing : demand.notAssessed()) {
         lines.add(new String[] {"Board " + board.reference() + " not assessed", missing});
       }
@@ -694,7 +1005,9 @@ public final class WorkbookWriter {
     sheet.getFooter().setRight("Page &P of &N");
   }
 
-  /** Each schedule column's letters, worked out once rather than for every reference in every row. */
+  /**
+   * Each schedule column's letters, worked out once rather than for every reference in every row.
+   */
   private static final String[] LETTERS = new String[ScheduleColumn.values().length];
 
   static {
@@ -742,10 +1055,11 @@ public final class WorkbookWriter {
   }
 
   /**
-   * A formula cell with its result stored beside it, so that a program showing stored results without
-   * recalculating still shows the right figure.
+   * A formula cell with its result stored beside it, so that a program showing stored results
+   * without recalculating still shows the right figure.
    */
-  private static void formula(Row row, int column, String formula, double result, CellStyle style, Widths widths) {
+  private static void formula(
+      Row row, int column, String formula, double result, CellStyle style, Widths widths) {
     Cell cell = row.createCell(column);
     cell.setCellFormula(formula);
     if (Double.isFinite(result)) {
@@ -757,7 +1071,10 @@ public final class WorkbookWriter {
     }
   }
 
-  /** Column widths that fit the longest text seen, within bounds (the streaming writer cannot autosize cheaply). */
+  /**
+   * Column widths that fit the longest text seen, within bounds (the streaming writer cannot
+   * autosize cheaply).
+   */
   private static final class Widths {
     private final int[] chars;
 

@@ -25,8 +25,8 @@ import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestParam;
 
 /**
- * "Can it take it?" for one board or a whole site. Asking is a GET (any signed-in user may ask, and the
- * answer can be bookmarked); adding the load at a candidate is a POST for editors.
+ * "Can it take it?" for one board or a whole site. Asking is a GET (any signed-in user may ask, and
+ * the answer can be bookmarked); adding the load at a candidate is a POST for editors.
  */
 @Controller
 public class CapacityController {
@@ -77,8 +77,14 @@ public class CapacityController {
   }
 
   private String answer(
-      long siteId, Long boardId, String ask, CapacityForm form, BindingResult errors, HttpServletRequest request,
-      Model model, HttpServletResponse response) {
+      long siteId,
+      Long boardId,
+      String ask,
+      CapacityForm form,
+      BindingResult errors,
+      HttpServletRequest request,
+      Model model,
+      HttpServletResponse response) {
     Site site = sites.get(siteId);
     model.addAttribute("site", site);
     if (ask == null) {
@@ -92,7 +98,8 @@ public class CapacityController {
     }
     CapacityAnswer answer = capacity.ask(siteId, boardId, form);
     model.addAttribute("answer", answer);
-    model.addAttribute("choices", answer.outcomes().stream().map(CapacityService::choiceOf).toList());
+    model.addAttribute(
+        "choices", answer.outcomes().stream().map(CapacityService::choiceOf).toList());
     return VIEW;
   }
 
@@ -121,7 +128,8 @@ public class CapacityController {
     if (!errors.hasErrors()) {
       CapacityAnswer answer = capacity.ask(board.getSite().getId(), id, form);
       model.addAttribute("answer", answer);
-      model.addAttribute("choices", answer.outcomes().stream().map(CapacityService::choiceOf).toList());
+      model.addAttribute(
+          "choices", answer.outcomes().stream().map(CapacityService::choiceOf).toList());
     }
     return FormStatus.invalid(response, VIEW);
   }

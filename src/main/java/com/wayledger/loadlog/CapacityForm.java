@@ -30,7 +30,13 @@ public record CapacityForm(
   }
 
   NewLoad toNewLoad() {
-    return new NewLoad(description.strip(), category, ratingValue, ratingUnit == RatingUnit.VA ? RatingUnit.W : ratingUnit,
-        powerFactor, Boolean.TRUE.equals(threePhase), startUpSurgeMultiple);
+    return new NewLoad(
+        description.strip(),
+        category,
+        ratingValue,
+        ratingUnit == RatingUnit.VA ? RatingUnit.W : ratingUnit,
+        powerFactor,
+        Boolean.TRUE.equals(threePhase),
+        startUpSurgeMultiple);
   }
 }

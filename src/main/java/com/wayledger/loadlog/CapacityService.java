@@ -38,14 +38,20 @@ public class CapacityService {
   @Transactional(readOnly = true)
   public CapacityAnswer ask(long siteId, Long boardId, CapacityForm form) {
     var spec = analysis.ofSite(siteId).spec();
-    return CapacityAdvisor.ask(spec, boardId == null ? Set.of() : Set.of(boardId), form.toNewLoad(), analysis.methods(),
-        analysis.mccbSettingsOfSite(siteId), ProtectionSettings.DEFAULTS);
+    return CapacityAdvisor.ask(
+        spec,
+        boardId == null ? Set.of() : Set.of(boardId),
+        form.toNewLoad(),
+        analysis.methods(),
+        analysis.mccbSettingsOfSite(siteId),
+        ProtectionSettings.DEFAULTS);
   }
 
   /**
-   * Adds the load at the candidate named by {@code choice} (see {@link #choiceOf(CandidateOutcome)}), worked out
-   * again from the stored schedule so that what is stored is what the engines assessed now. One transaction:
-   * the circuit (when new or spare) and the load, each logged with the reason.
+   * Adds the load at the candidate named by {@code choice} (see {@link
+   * #choiceOf(CandidateOutcome)}), worked out again from the stored schedule so that what is stored
+   * is what the engines assessed now. One transaction: the circuit (when new or spare) and the
+   * load, each logged with the reason.
    *
    * @return the circuit that now carries the load
    */
@@ -74,7 +80,10 @@ public class CapacityService {
     } else {
       CircuitForm blank = CircuitForm.blankAt(candidate.wayNumber(), candidate.position());
       Circuit added =
-          schedule.addCircuit(boardId, inUse(withoutFirstLoad(blank), load.description(), candidate.device()), reason);
+          schedule.addCircuit(
+              boardId,
+              inUse(withoutFirstLoad(blank), load.description(), candidate.device()),
+              reason);
       circuitId = added.getId();
     }
     schedule.addLoad(circuitId, loadForm, reason);
@@ -84,36 +93,98 @@ public class CapacityService {
   /** A stable name of a candidate for the "add it" form: board, way, position, kind, circuit. */
   public static String choiceOf(CandidateOutcome outcome) {
     var c = outcome.candidate();
-    return c.boardId() + ":" + c.wayNumber() + ":" + c.position() + ":" + c.kind() + ":" + Objects.toString(c.circuitId(), "new");
+    return c.boardId()
+        + ":"
+        + c.wayNumber()
+        + ":"
+        + c.position()
+        + ":"
+        + c.kind()
+        + ":"
+        + Objects.toString(c.circuitId(), "new");
   }
 
   static LoadForm loadForm(NewLoad load) {
     var spec = load.toLoadSpec();
-    return new LoadForm(spec.description(), spec.category(), 1, spec.ratingValue(), spec.ratingUnit(),
-        spec.powerFactor(), spec.startUpSurgeMultiple(), spec.startUpSurgeMillis(), false);
+    return new LoadForm(
+        spec.description(),
+        spec.category(),
+        1,
+        spec.ratingValue(),
+        spec.ratingUnit(),
+        spec.powerFactor(),
+        spec.startUpSurgeMultiple(),
+        spec.startUpSurgeMillis(),
+        false);
   }
 
   private static CircuitForm withoutFirstLoad(CircuitForm f) {
-    return new CircuitForm(f.wayNumber(), f.position(), f.description(), f.status(), f.lockedForBalancing(),
-        f.deviceKind(), f.deviceCurve(), f.deviceRatingAmps(), f.devicePoles(), f.deviceBreakingCapacityKiloAmps(),
-        f.deviceResidualMilliAmps(), f.deviceRcdType(), f.cableLineCsa(), f.cableCpcCsa(), f.cableMaterial(),
-        f.cableInsulation(), f.cableLengthMetres(), f.cableInstallationMethod(), f.cableAmbientCelsius(),
-        f.cableGroupedCircuits(), f.cableThermalInsulationMm(), f.measuredLoopImpedanceOhms(), null, null, null, null,
-        null, null, f.version(), f.ringFinal());
+    return new CircuitForm(
+        f.wayNumber(),
+        f.position(),
+        f.description(),
+        f.status(),
+        f.lockedForBalancing(),
+        f.deviceKind(),
+        f.deviceCurve(),
+        f.deviceRatingAmps(),
+        f.devicePoles(),
+        f.deviceBreakingCapacityKiloAmps(),
+        f.deviceResidualMilliAmps(),
+        f.deviceRcdType(),
+        f.cableLineCsa(),
+        f.cableCpcCsa(),
+        f.cableMaterial(),
+        f.cableInsulation(),
+        f.cableLengthMetres(),
+        f.cableInstallationMethod(),
+        f.cableAmbientCelsius(),
+        f.cableGroupedCircuits(),
+        f.cableThermalInsulationMm(),
+        f.measuredLoopImpedanceOhms(),
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        f.version(),
+        f.ringFinal());
   }
 
   /** The form put in use for the load; {@code device}, when given, replaces the form's device. */
   private static CircuitForm inUse(CircuitForm f, String description, DeviceSpec device) {
     boolean newDevice = device != null;
-    return new CircuitForm(f.wayNumber(), f.position(), description, WayStatus.IN_USE, f.lockedForBalancing(),
-        newDevice ? device.kind() : f.deviceKind(), newDevice ? device.curve() : f.deviceCurve(),
+    return new CircuitForm(
+        f.wayNumber(),
+        f.position(),
+        description,
+        WayStatus.IN_USE,
+        f.lockedForBalancing(),
+        newDevice ? device.kind() : f.deviceKind(),
+        newDevice ? device.curve() : f.deviceCurve(),
         newDevice ? device.ratedCurrentAmps() : f.deviceRatingAmps(),
         newDevice ? Integer.valueOf(device.poles()) : f.devicePoles(),
         newDevice ? device.breakingCapacityKiloAmps() : f.deviceBreakingCapacityKiloAmps(),
         newDevice ? device.residualCurrentMilliAmps() : f.deviceResidualMilliAmps(),
-        newDevice ? device.rcdType() : f.deviceRcdType(), f.cableLineCsa(), f.cableCpcCsa(), f.cableMaterial(),
-        f.cableInsulation(), f.cableLengthMetres(), f.cableInstallationMethod(), f.cableAmbientCelsius(),
-        f.cableGroupedCircuits(), f.cableThermalInsulationMm(), f.measuredLoopImpedanceOhms(), null, null, null, null,
-        null, null, f.version(), f.ringFinal());
+        newDevice ? device.rcdType() : f.deviceRcdType(),
+        f.cableLineCsa(),
+        f.cableCpcCsa(),
+        f.cableMaterial(),
+        f.cableInsulation(),
+        f.cableLengthMetres(),
+        f.cableInstallationMethod(),
+        f.cableAmbientCelsius(),
+        f.cableGroupedCircuits(),
+        f.cableThermalInsulationMm(),
+        f.measuredLoopImpedanceOhms(),
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        f.version(),
+        f.ringFinal());
   }
 }

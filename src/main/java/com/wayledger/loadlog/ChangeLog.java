@@ -65,7 +65,10 @@ public class ChangeLog {
   /** One entry by its id. */
   @Transactional(readOnly = true)
   public java.util.Optional<ChangeLogEntry> find(long id) {
-    return jdbc.sql("SELECT * FROM change_log WHERE id = ?").param(id).query(ChangeLog::entry).optional();
+    return jdbc.sql("SELECT * FROM change_log WHERE id = ?")
+        .param(id)
+        .query(ChangeLog::entry)
+        .optional();
   }
 
   /** The users who appear in a site's log, for the filter's choices. */

@@ -15,8 +15,8 @@ import org.springframework.web.bind.annotation.RequestParam;
 import org.springframework.web.bind.annotation.RestController;
 
 /**
- * The change log over JSON, read-only: there is no PUT, PATCH or DELETE here by design, so those methods get
- * 405 on these URLs.
+ * The change log over JSON, read-only: there is no PUT, PATCH or DELETE here by design, so those
+ * methods get 405 on these URLs.
  */
 @RestController
 @RequestMapping("/api")

@@ -19,8 +19,17 @@ import java.time.Instant;
  * @param reason the reason or work order given; null when none
  */
 public record ChangeLogEntry(
-    long id, long siteId, Long boardId, Long circuitId, Instant happenedAt, String username, ChangeKind kind,
-    String summary, String before, String after, String reason) {
+    long id,
+    long siteId,
+    Long boardId,
+    Long circuitId,
+    Instant happenedAt,
+    String username,
+    ChangeKind kind,
+    String summary,
+    String before,
+    String after,
+    String reason) {
   /** When, as "2025-03-01 14:05:09 UTC". */
   public String when() {
     return java.time.format.DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm:ss 'UTC'")

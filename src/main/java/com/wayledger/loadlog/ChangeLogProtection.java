@@ -9,11 +9,12 @@ import org.flywaydb.core.api.migration.JavaMigration;
 import org.springframework.stereotype.Component;
 
 /**
- * Migration 4.1: on PostgreSQL the database itself refuses UPDATE, DELETE and TRUNCATE of change_log rows, with
- * a trigger that raises an exception, whoever is connected (the table owner included). H2 cannot read the
- * PL/pgSQL it needs, so on H2 this migration records itself and does nothing: there the guarantee is the
- * application's (no code path updates or deletes a row). A Java migration rather than per-vendor SQL folders so
- * that db/ keeps one script per version for both databases. Spring Boot hands JavaMigration beans to Flyway.
+ * Migration 4.1: on PostgreSQL the database itself refuses UPDATE, DELETE and TRUNCATE of
+ * change_log rows, with a trigger that raises an exception, whoever is connected (the table owner
+ * included). H2 cannot read the PL/pgSQL it needs, so on H2 this migration records itself and does
+ * nothing: there the guarantee is the application's (no code path updates or deletes a row). A Java
+ * migration rather than per-vendor SQL folders so that db/ keeps one script per version for both
+ * databases. Spring Boot hands JavaMigration beans to Flyway.
  */
 @Component
 class ChangeLogProtection implements JavaMigration {
@@ -54,7 +55,11 @@ class ChangeLogProtection implements JavaMigration {
   @Override
   public void migrate(Context context) throws Exception {
     Connection connection = context.getConnection();
-    if (!connection.getMetaData().getDatabaseProductName().toLowerCase(java.util.Locale.ROOT).contains("postgresql")) {
+    if (!connection
+        .getMetaData()
+        .getDatabaseProductName()
+        .toLowerCase(java.util.Locale.ROOT)
+        .contains("postgresql")) {
       return;
     }
     try (Statement statement = connection.createStatement()) {

@@ -11,9 +11,9 @@ import org.springframework.stereotype.Component;
 import tools.jackson.databind.json.JsonMapper;
 
 /**
- * Writes one change-log row per {@link ScheduleChanged} event. The listener is synchronous, so the row is
- * written in the transaction of the change: if either fails, neither is stored. This class only ever
- * INSERTs; nothing in the application updates or deletes a log row.
+ * Writes one change-log row per {@link ScheduleChanged} event. The listener is synchronous, so the
+ * row is written in the transaction of the change: if either fails, neither is stored. This class
+ * only ever INSERTs; nothing in the application updates or deletes a log row.
  */
 @Component
 class ChangeRecorder {

@@ -11,9 +11,10 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * Geometry of the server-drawn demand-history chart: one step line per phase (the demand holds until the next
- * change), time along the x axis, against a dashed line at the incomer rating. Changes within one second are
- * drawn as one step (the last state counts). Coordinates are SVG units.
+ * Geometry of the server-drawn demand-history chart: one step line per phase (the demand holds
+ * until the next change), time along the x axis, against a dashed line at the incomer rating.
+ * Changes within one second are drawn as one step (the last state counts). Coordinates are SVG
+ * units.
  *
  * @param lines one polyline per phase
  * @param ticks y axis ticks
@@ -23,7 +24,12 @@ import java.util.Map;
  * @param steps the states drawn, oldest first
  */
 public record DemandHistoryChart(
-    List<Line> lines, List<Tick> ticks, List<DateLabel> dates, Double ratingAmps, Double ratingY, List<Step> steps) {
+    List<Line> lines,
+    List<Tick> ticks,
+    List<DateLabel> dates,
+    Double ratingAmps,
+    Double ratingY,
+    List<Step> steps) {
 
   public static final int WIDTH = 640;
   public static final int HEIGHT = 260;
@@ -31,7 +37,8 @@ public record DemandHistoryChart(
   static final int RIGHT = 620;
   static final int TOP = 14;
   static final int BOTTOM = 210;
-  private static final DateTimeFormatter DAY = DateTimeFormatter.ofPattern("d MMM yyyy HH:mm").withZone(ZoneOffset.UTC);
+  private static final DateTimeFormatter DAY =
+      DateTimeFormatter.ofPattern("d MMM yyyy HH:mm").withZone(ZoneOffset.UTC);
 
   public record Line(Phase phase, String points) {}
 
@@ -45,10 +52,12 @@ public record DemandHistoryChart(
   static DemandHistoryChart of(List<HistoryPoint> points, Double incomerRatingAmps, Instant now) {
     Map<Instant, Map<Phase, Double>> byInstant = new LinkedHashMap<>();
     for (HistoryPoint point : points) {
-      byInstant.put(point.at().truncatedTo(ChronoUnit.SECONDS),
+      byInstant.put(
+          point.at().truncatedTo(ChronoUnit.SECONDS),
           point.removed() ? Map.of() : point.phaseCurrentsAmps());
     }
-    List<Step> steps = byInstant.entrySet().stream().map(e -> new Step(e.getKey(), e.getValue())).toList();
+    List<Step> steps =
+        byInstant.entrySet().stream().map(e -> new Step(e.getKey(), e.getValue())).toList();
     double largest = incomerRatingAmps == null ? 0 : incomerRatingAmps;
     for (Step step : steps) {
       for (double amps : step.phaseCurrentsAmps().values()) {
@@ -62,12 +71,27 @@ public record DemandHistoryChart(
       ticks.add(new Tick(scaleMax * i / 4, BOTTOM - plot * i / 4));
     }
     if (steps.isEmpty()) {
-      return new DemandHistoryChart(List.of(), ticks, List.of(), incomerRatingAmps, ratingY(incomerRatingAmps, scaleMax), steps);
+      return new DemandHistoryChart(
+          List.of(),
+          ticks,
+          List.of(),
+          incomerRatingAmps,
+          ratingY(incomerRatingAmps, scaleMax),
+          steps);
     }
     Instant start = steps.get(0).at();
-    Instant end = now.isAfter(steps.get(steps.size() - 1).at()) ? now : steps.get(steps.size() - 1).at();
+    Instant end =
+        now.isAfter(steps.get(steps.size() - 1).at()) ? now : steps.get(steps.size() - 1).at();
     double span = Math.max(1, end.getEpochSecond() - start.getEpochSecond());
-    List<Double> xs = steps.stream().map(s -> LEFT + (RIGHT - LEFT) * (s.at().getEpochSecond() - start.getEpochSecond()) / span).toList();
+    List<Double> xs =
+        steps.stream()
+            .map(
+                s ->
+                    LEFT
+                        + (RIGHT - LEFT)
+                            * (s.at().getEpochSecond() - start.getEpochSecond())
+                            / span)
+            .toList();
     List<Line> lines = new ArrayList<>();
     for (Phase phase : Phase.values()) {
       if (steps.stream().noneMatch(s -> s.phaseCurrentsAmps().containsKey(phase))) {
@@ -75,10 +99,17 @@ public record DemandHistoryChart(
       }
       StringBuilder path = new StringBuilder();
       for (int i = 0; i < steps.size(); i++) {
-        double y = BOTTOM - plot * steps.get(i).phaseCurrentsAmps().getOrDefault(phase, 0.0) / scaleMax;
+        double y =
+            BOTTOM - plot * steps.get(i).phaseCurrentsAmps().getOrDefault(phase, 0.0) / scaleMax;
         double xEnd = i + 1 < steps.size() ? xs.get(i + 1) : RIGHT;
-        path.append(fmt(xs.get(i))).append(',').append(fmt(y)).append(' ')
-            .append(fmt(xEnd)).append(',').append(fmt(y)).append(' ');
+        path.append(fmt(xs.get(i)))
+            .append(',')
+            .append(fmt(y))
+            .append(' ')
+            .append(fmt(xEnd))
+            .append(',')
+            .append(fmt(y))
+            .append(' ');
       }
       lines.add(new Line(phase, path.toString().strip()));
     }
@@ -87,7 +118,8 @@ public record DemandHistoryChart(
     if (span > 1) {
       dates.add(new DateLabel(DAY.format(end), RIGHT));
     }
-    return new DemandHistoryChart(lines, ticks, dates, incomerRatingAmps, ratingY(incomerRatingAmps, scaleMax), steps);
+    return new DemandHistoryChart(
+        lines, ticks, dates, incomerRatingAmps, ratingY(incomerRatingAmps, scaleMax), steps);
   }
 
   private static Double ratingY(Double rating, double scaleMax) {

@@ -13,12 +13,19 @@ import java.util.Map;
  * @param kind what kind of change
  * @param summary what happened
  * @param reason the reason given, or null
- * @param phaseCurrentsAmps demand current per line after the change, A (L1 only on a single-phase board)
+ * @param phaseCurrentsAmps demand current per line after the change, A (L1 only on a single-phase
+ *     board)
  * @param removed whether the board itself was removed by this change (no figures then)
  */
 public record HistoryPoint(
-    long entryId, Instant at, String username, com.wayledger.system.ChangeKind kind, String summary, String reason,
-    Map<Phase, Double> phaseCurrentsAmps, boolean removed) {
+    long entryId,
+    Instant at,
+    String username,
+    com.wayledger.system.ChangeKind kind,
+    String summary,
+    String reason,
+    Map<Phase, Double> phaseCurrentsAmps,
+    boolean removed) {
 
   /** When, as "2025-03-01 14:05:09 UTC". */
   public String when() {

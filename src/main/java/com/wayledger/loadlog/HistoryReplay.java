@@ -18,13 +18,15 @@ import java.util.Map;
 import java.util.Set;
 
 /**
- * Rebuilds a board at every logged change from the log's snapshots and evaluates it with the demand engine.
+ * Rebuilds a board at every logged change from the log's snapshots and evaluates it with the demand
+ * engine.
  *
- * <p>The state before the first entry is the baseline: a circuit whose first entry is an edit or removal
- * existed before logging began, so its "before" snapshot is in the baseline; likewise the board header.
- * Then each entry's "after" snapshot replaces the circuit (or header), and a removal drops it. The board is
- * evaluated on its own (sub-boards' demand is not carried onto the ways feeding them), with today's supply
- * and diversity catalogue: the log records the schedule, not the site's supply.
+ * <p>The state before the first entry is the baseline: a circuit whose first entry is an edit or
+ * removal existed before logging began, so its "before" snapshot is in the baseline; likewise the
+ * board header. Then each entry's "after" snapshot replaces the circuit (or header), and a removal
+ * drops it. The board is evaluated on its own (sub-boards' demand is not carried onto the ways
+ * feeding them), with today's supply and diversity catalogue: the log records the schedule, not the
+ * site's supply.
  */
 final class HistoryReplay {
 
@@ -35,7 +37,10 @@ final class HistoryReplay {
    * @param currentHeader the board's header now, used when no board entry carries one
    */
   static List<HistoryPoint> replay(
-      List<ChangeLogEntry> entries, BoardSpec currentHeader, SupplySpec supply, DiversityMethodCatalog methods,
+      List<ChangeLogEntry> entries,
+      BoardSpec currentHeader,
+      SupplySpec supply,
+      DiversityMethodCatalog methods,
       String siteDefaultMethodKey) {
     BoardSpec header = null;
     Map<Long, CircuitSpec> circuits = new LinkedHashMap<>();
@@ -53,7 +58,9 @@ final class HistoryReplay {
           header = Snapshots.board(entry.before());
         }
         boardSeen = true;
-      } else if (seen.add(entry.circuitId()) && entry.kind() != ChangeKind.CIRCUIT_ADDED && entry.before() != null) {
+      } else if (seen.add(entry.circuitId())
+          && entry.kind() != ChangeKind.CIRCUIT_ADDED
+          && entry.before() != null) {
         circuits.put(entry.circuitId(), Snapshots.circuit(entry.before()));
       }
     }
@@ -79,16 +86,30 @@ final class HistoryReplay {
       Map<Phase, Double> currents =
           removed || header == null
               ? Map.of()
-              : currents(com.wayledger.board.ScheduleMapper.replayed(header, circuits.values()), supply, methods,
+              : currents(
+                  com.wayledger.board.ScheduleMapper.replayed(header, circuits.values()),
+                  supply,
+                  methods,
                   siteDefaultMethodKey);
-      points.add(new HistoryPoint(entry.id(), entry.happenedAt(), entry.username(), entry.kind(), entry.summary(),
-          entry.reason(), currents, removed));
+      points.add(
+          new HistoryPoint(
+              entry.id(),
+              entry.happenedAt(),
+              entry.username(),
+              entry.kind(),
+              entry.summary(),
+              entry.reason(),
+              currents,
+              removed));
     }
     return points;
   }
 
   static Map<Phase, Double> currents(
-      BoardSpec board, SupplySpec supply, DiversityMethodCatalog methods, String siteDefaultMethodKey) {
+      BoardSpec board,
+      SupplySpec supply,
+      DiversityMethodCatalog methods,
+      String siteDefaultMethodKey) {
     BoardDemand demand = DemandEngine.evaluateBoard(board, supply, methods, siteDefaultMethodKey);
     Map<Phase, Double> currents = new EnumMap<>(Phase.class);
     for (PhaseDemand phase : demand.phases()) {

@@ -28,7 +28,10 @@ public class HistoryService {
     Board board = boards.get(boardId);
     var site = board.getSite();
     return HistoryReplay.replay(
-        log.boardHistory(boardId), ScheduleMapper.headerOf(board), ScheduleMapper.supplyOf(site), analysis.methods(),
+        log.boardHistory(boardId),
+        ScheduleMapper.headerOf(board),
+        ScheduleMapper.supplyOf(site),
+        analysis.methods(),
         site.getDefaultDiversityMethod());
   }
 
@@ -36,6 +39,8 @@ public class HistoryService {
   public DemandHistoryChart chart(long boardId, List<HistoryPoint> points) {
     Board board = boards.get(boardId);
     return DemandHistoryChart.of(
-        points, board.getIncomer() == null ? null : board.getIncomer().getRatingAmps(), Instant.now());
+        points,
+        board.getIncomer() == null ? null : board.getIncomer().getRatingAmps(),
+        Instant.now());
   }
 }

@@ -22,7 +22,10 @@ import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.PathVariable;
 import org.springframework.web.bind.annotation.RequestParam;
 
-/** The board history page, the site-wide log with its filters, and the headroom part of the site page. */
+/**
+ * The board history page, the site-wide log with its filters, and the headroom part of the site
+ * page.
+ */
 @Controller
 public class LoadLogController {
 
@@ -33,7 +36,11 @@ public class LoadLogController {
   private final AnalysisService analysis;
 
   public LoadLogController(
-      ChangeLog log, HistoryService history, BoardService boards, SiteService sites, AnalysisService analysis) {
+      ChangeLog log,
+      HistoryService history,
+      BoardService boards,
+      SiteService sites,
+      AnalysisService analysis) {
     this.log = log;
     this.history = history;
     this.boards = boards;
@@ -101,9 +108,15 @@ public class LoadLogController {
         }
         loading = demand.incomer().loadingPercent();
       }
-      rows.add(new Headroom(board.getId(), board.getReference(), node.depth(),
-          board.getIncomer() == null ? null : board.getIncomer().getRatingAmps(), room, loading,
-          loading != null && loading >= site.getLoadingThresholdPercent()));
+      rows.add(
+          new Headroom(
+              board.getId(),
+              board.getReference(),
+              node.depth(),
+              board.getIncomer() == null ? null : board.getIncomer().getRatingAmps(),
+              room,
+              loading,
+              loading != null && loading >= site.getLoadingThresholdPercent()));
     }
     return rows;
   }

@@ -12,7 +12,8 @@ import java.time.LocalDate;
  * @param to only entries on or before this day (UTC)
  * @param kind only entries of this kind
  */
-public record LogFilter(Long boardId, String username, LocalDate from, LocalDate to, ChangeKind kind) {
+public record LogFilter(
+    Long boardId, String username, LocalDate from, LocalDate to, ChangeKind kind) {
 
   public static final LogFilter ALL = new LogFilter(null, null, null, null, null);
 

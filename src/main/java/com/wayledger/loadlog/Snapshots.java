@@ -6,8 +6,9 @@ import tools.jackson.databind.DeserializationFeature;
 import tools.jackson.databind.json.JsonMapper;
 
 /**
- * The log's snapshots are the engine's own records (CircuitSpec for circuit and load changes, BoardSpec
- * without circuits for board changes) written as JSON, so a replay feeds the engine what it was fed then.
+ * The log's snapshots are the engine's own records (CircuitSpec for circuit and load changes,
+ * BoardSpec without circuits for board changes) written as JSON, so a replay feeds the engine what
+ * it was fed then.
  */
 final class Snapshots {
 

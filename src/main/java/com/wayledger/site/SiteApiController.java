@@ -45,10 +45,18 @@ public class SiteApiController {
 
     static SiteView of(Site site) {
       return new SiteView(
-          site.getId(), site.getName(), site.getAddress(), site.getEarthingSystem(),
-          site.getNominalVoltageVolts(), site.getPhases(), site.getFrequencyHertz(),
-          site.getExternalLoopImpedanceOhms(), site.getProspectiveFaultCurrentKiloAmps(),
-          site.getSupplyFuseRatingAmps(), site.getDefaultDiversityMethod(), site.getNotes(),
+          site.getId(),
+          site.getName(),
+          site.getAddress(),
+          site.getEarthingSystem(),
+          site.getNominalVoltageVolts(),
+          site.getPhases(),
+          site.getFrequencyHertz(),
+          site.getExternalLoopImpedanceOhms(),
+          site.getProspectiveFaultCurrentKiloAmps(),
+          site.getSupplyFuseRatingAmps(),
+          site.getDefaultDiversityMethod(),
+          site.getNotes(),
           site.getVersion());
     }
   }
@@ -73,7 +81,9 @@ public class SiteApiController {
   }
 
   @PutMapping("/{id}")
-  @Operation(summary = "Replace a site's fields (editor); send the version you read to detect concurrent edits")
+  @Operation(
+      summary =
+          "Replace a site's fields (editor); send the version you read to detect concurrent edits")
   public SiteView update(@PathVariable long id, @Valid @RequestBody SiteForm form) {
     return SiteView.of(sites.update(id, form));
   }

@@ -1,5 +1,6 @@
 package com.wayledger.site;
 
+import com.wayledger.diversity.MethodLibrary;
 import com.wayledger.engine.EarthingSystem;
 import com.wayledger.system.FormRecovery;
 import com.wayledger.system.FormStatus;
@@ -7,7 +8,6 @@ import com.wayledger.system.RuleViolation;
 import jakarta.servlet.http.HttpServletRequest;
 import jakarta.servlet.http.HttpServletResponse;
 import jakarta.validation.Valid;
-import com.wayledger.diversity.MethodLibrary;
 import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
 import org.springframework.validation.BindingResult;
@@ -54,8 +54,11 @@ public class SiteController {
 
   @PostMapping("/sites")
   public String create(
-      @Valid @ModelAttribute("form") SiteForm form, BindingResult errors,
-      HttpServletRequest request, Model model, HttpServletResponse response) {
+      @Valid @ModelAttribute("form") SiteForm form,
+      BindingResult errors,
+      HttpServletRequest request,
+      Model model,
+      HttpServletResponse response) {
     form = FormRecovery.ensure(form, errors, model, "form", SiteForm.class, request);
     if (errors.hasErrors()) {
       return FormStatus.invalid(response, FORM_VIEW);

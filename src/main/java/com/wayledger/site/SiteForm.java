@@ -25,24 +25,57 @@ public record SiteForm(
     @DecimalMin(value = "1") @DecimalMax(value = "100") Double loadingThresholdPercent) {
 
   /**
-   * Boards whose largest phase current passes this share of their incomer rating are highlighted on the site
-   * overview (loadlog headroom), %. 80 % is common practice for leaving room for growth, not a rule.
+   * Boards whose largest phase current passes this share of their incomer rating are highlighted on
+   * the site overview (loadlog headroom), %. 80 % is common practice for leaving room for growth,
+   * not a rule.
    */
   public static final double DEFAULT_LOADING_THRESHOLD_PERCENT = 80.0;
 
   /** The form without a loading threshold: the site keeps its threshold (80 % for a new site). */
   public SiteForm(
-      String name, String address, EarthingSystem earthingSystem, Double nominalVoltageVolts, Integer phases,
-      Double frequencyHertz, Double externalLoopImpedanceOhms, Double prospectiveFaultCurrentKiloAmps,
-      Double supplyFuseRatingAmps, String defaultDiversityMethod, String notes, Long version) {
-    this(name, address, earthingSystem, nominalVoltageVolts, phases, frequencyHertz, externalLoopImpedanceOhms,
-        prospectiveFaultCurrentKiloAmps, supplyFuseRatingAmps, defaultDiversityMethod, notes, version, null);
+      String name,
+      String address,
+      EarthingSystem earthingSystem,
+      Double nominalVoltageVolts,
+      Integer phases,
+      Double frequencyHertz,
+      Double externalLoopImpedanceOhms,
+      Double prospectiveFaultCurrentKiloAmps,
+      Double supplyFuseRatingAmps,
+      String defaultDiversityMethod,
+      String notes,
+      Long version) {
+    this(
+        name,
+        address,
+        earthingSystem,
+        nominalVoltageVolts,
+        phases,
+        frequencyHertz,
+        externalLoopImpedanceOhms,
+        prospectiveFaultCurrentKiloAmps,
+        supplyFuseRatingAmps,
+        defaultDiversityMethod,
+        notes,
+        version,
+        null);
   }
 
   /** A new site with the usual defaults filled in (230 V, three-phase, 50 Hz, TN-C-S). */
   public static SiteForm blank() {
     return new SiteForm(
-        "", "", EarthingSystem.TN_C_S, 230.0, 3, 50.0, null, null, null, null, "", null,
+        "",
+        "",
+        EarthingSystem.TN_C_S,
+        230.0,
+        3,
+        50.0,
+        null,
+        null,
+        null,
+        null,
+        "",
+        null,
         DEFAULT_LOADING_THRESHOLD_PERCENT);
   }
 

@@ -13,8 +13,9 @@ import org.springframework.stereotype.Service;
 import org.springframework.transaction.annotation.Transactional;
 
 /**
- * Creates, edits and finds sites; the rules that a form alone cannot check live here. Each change publishes a
- * {@link ScheduleChanged} event for the change log (the snapshots are the site forms before and after).
+ * Creates, edits and finds sites; the rules that a form alone cannot check live here. Each change
+ * publishes a {@link ScheduleChanged} event for the change log (the snapshots are the site forms
+ * before and after).
  */
 @Service
 public class SiteService {
@@ -23,7 +24,8 @@ public class SiteService {
   private final MethodLibrary methods;
   private final ApplicationEventPublisher events;
 
-  public SiteService(SiteRepository sites, MethodLibrary methods, ApplicationEventPublisher events) {
+  public SiteService(
+      SiteRepository sites, MethodLibrary methods, ApplicationEventPublisher events) {
     this.sites = sites;
     this.methods = methods;
     this.events = events;
@@ -68,10 +70,18 @@ public class SiteService {
     return saved;
   }
 
-  private void logged(Site site, ChangeKind kind, String what, Object before, Object after, String reason) {
+  private void logged(
+      Site site, ChangeKind kind, String what, Object before, Object after, String reason) {
     events.publishEvent(
         new ScheduleChanged(
-            site.getId(), null, null, kind, "Site “" + site.getName() + "”: " + what, before, after, reason));
+            site.getId(),
+            null,
+            null,
+            kind,
+            "Site “" + site.getName() + "”: " + what,
+            before,
+            after,
+            reason));
   }
 
   private void checkRules(SiteForm form, Long id) {
@@ -81,13 +91,16 @@ public class SiteService {
     if (form.frequencyHertz() != 50.0 && form.frequencyHertz() != 60.0) {
       throw new RuleViolation("frequencyHertz", "site.frequency.invalid");
     }
-    if (form.defaultDiversityMethod() != null && !form.defaultDiversityMethod().isBlank()
+    if (form.defaultDiversityMethod() != null
+        && !form.defaultDiversityMethod().isBlank()
         && methods.catalog().find(form.defaultDiversityMethod()).isEmpty()) {
       throw new RuleViolation("defaultDiversityMethod", "method.unknown");
     }
     String name = form.name().strip();
     boolean taken =
-        id == null ? sites.existsByNameIgnoreCase(name) : sites.existsByNameIgnoreCaseAndIdNot(name, id);
+        id == null
+            ? sites.existsByNameIgnoreCase(name)
+            : sites.existsByNameIgnoreCaseAndIdNot(name, id);
     if (taken) {
       throw new RuleViolation("name", "site.name.taken");
     }

@@ -16,8 +16,8 @@ import org.springframework.web.method.annotation.MethodArgumentTypeMismatchExcep
 import tools.jackson.core.JacksonException;
 
 /**
- * Errors of the JSON API as RFC 9457 problem details: the status, a sentence, and for bad input a list of
- * {field, message} so a client can show each message beside its field.
+ * Errors of the JSON API as RFC 9457 problem details: the status, a sentence, and for bad input a
+ * list of {field, message} so a client can show each message beside its field.
  */
 @RestControllerAdvice(annotations = org.springframework.web.bind.annotation.RestController.class)
 public class ApiErrorHandling {
@@ -26,7 +26,13 @@ public class ApiErrorHandling {
   public ProblemDetail invalid(MethodArgumentNotValidException e) {
     List<Map<String, String>> fields =
         e.getBindingResult().getFieldErrors().stream()
-            .map(error -> Map.of("field", error.getField(), "message", String.valueOf(error.getDefaultMessage())))
+            .map(
+                error ->
+                    Map.of(
+                        "field",
+                        error.getField(),
+                        "message",
+                        String.valueOf(error.getDefaultMessage())))
             .toList();
     ProblemDetail problem = problem(HttpStatus.BAD_REQUEST, "Some values are not acceptable.");
     problem.setProperty("fields", fields);
@@ -35,22 +41,30 @@ public class ApiErrorHandling {
 
   @ExceptionHandler(RuleViolation.class)
   public ProblemDetail rule(RuleViolation e) {
-    ProblemDetail problem = problem(HttpStatus.UNPROCESSABLE_CONTENT, "A value breaks a rule of the schedule.");
+    ProblemDetail problem =
+        problem(HttpStatus.UNPROCESSABLE_CONTENT, "A value breaks a rule of the schedule.");
     problem.setProperty("fields", List.of(Map.of("field", e.field(), "message", e.messageCode())));
     return problem;
   }
 
   @ExceptionHandler(HttpMessageNotReadableException.class)
   public ProblemDetail unreadable(HttpMessageNotReadableException e) {
-    ProblemDetail problem = problem(HttpStatus.BAD_REQUEST, "The request body or a parameter is malformed.");
-    // A value of the wrong type ("abc" for a rating, an unknown enum name) names its field in Jackson's path;
+    ProblemDetail problem =
+        problem(HttpStatus.BAD_REQUEST, "The request body or a parameter is malformed.");
+    // A value of the wrong type ("abc" for a rating, an unknown enum name) names its field in
+    // Jackson's path;
     // broken JSON syntax has no path and gets no field.
     if (e.getCause() instanceof JacksonException jackson && !jackson.getPath().isEmpty()) {
       String field =
           jackson.getPath().stream()
-              .map(step -> step.getPropertyName() != null ? step.getPropertyName() : "[" + step.getIndex() + "]")
+              .map(
+                  step ->
+                      step.getPropertyName() != null
+                          ? step.getPropertyName()
+                          : "[" + step.getIndex() + "]")
               .collect(Collectors.joining("."));
-      problem.setProperty("fields", List.of(Map.of("field", field, "message", "not a valid value here")));
+      problem.setProperty(
+          "fields", List.of(Map.of("field", field, "message", "not a valid value here")));
     }
     return problem;
   }
@@ -67,7 +81,8 @@ public class ApiErrorHandling {
 
   @ExceptionHandler({StaleEditException.class, ObjectOptimisticLockingFailureException.class})
   public ProblemDetail stale(Exception e) {
-    return problem(HttpStatus.CONFLICT, "Someone else changed this record; fetch it again and retry.");
+    return problem(
+        HttpStatus.CONFLICT, "Someone else changed this record; fetch it again and retry.");
   }
 
   @ExceptionHandler(DataIntegrityViolationException.class)

@@ -10,18 +10,20 @@ import org.springframework.validation.BeanPropertyBindingResult;
 import org.springframework.validation.BindingResult;
 
 /**
- * Form records are bound through their constructor; when one submitted value cannot be converted (letters in
- * a number field) Spring cannot construct the record at all and the form would come back empty. This rebuilds
- * the record from the request with each unconvertible value left blank, and carries the binding errors over,
- * so the user sees every value they typed and the message beside the field at fault.
+ * Form records are bound through their constructor; when one submitted value cannot be converted
+ * (letters in a number field) Spring cannot construct the record at all and the form would come
+ * back empty. This rebuilds the record from the request with each unconvertible value left blank,
+ * and carries the binding errors over, so the user sees every value they typed and the message
+ * beside the field at fault.
  */
 public final class FormRecovery {
 
   private FormRecovery() {}
 
   /**
-   * Returns {@code form} when binding kept it; otherwise (binding errors left the binding result without a
-   * target) a recovered record, registered in the model under {@code name} with the original errors.
+   * Returns {@code form} when binding kept it; otherwise (binding errors left the binding result
+   * without a target) a recovered record, registered in the model under {@code name} with the
+   * original errors.
    */
   public static <R extends Record> R ensure(
       R form,
@@ -33,7 +35,8 @@ public final class FormRecovery {
     if (errors.getTarget() != null) {
       return form;
     }
-    R recovered = form != null ? form : rebuild(type, request, DefaultConversionService.getSharedInstance());
+    R recovered =
+        form != null ? form : rebuild(type, request, DefaultConversionService.getSharedInstance());
     BeanPropertyBindingResult carried = new BeanPropertyBindingResult(recovered, name);
     carried.addAllErrors(errors);
     model.addAttribute(name, recovered);

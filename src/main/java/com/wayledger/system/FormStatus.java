@@ -3,7 +3,9 @@ package com.wayledger.system;
 import jakarta.servlet.http.HttpServletResponse;
 import org.springframework.validation.BindingResult;
 
-/** Shared handling of a form that comes back with problems: 422 and the messages beside the fields. */
+/**
+ * Shared handling of a form that comes back with problems: 422 and the messages beside the fields.
+ */
 public final class FormStatus {
 
   /** 422 Unprocessable Content: the request was understood but a value breaks a rule. */

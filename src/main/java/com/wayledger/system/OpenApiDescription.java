@@ -15,16 +15,19 @@ class OpenApiDescription {
   @Bean
   OpenAPI wayledgerApi() {
     return new OpenAPI()
-        .info(new Info()
-            .title("Wayledger API")
-            .version("1")
-            .description("Sites, boards, circuits and loads; demand after diversity; protection and cable findings;"
-                + " phase balancing; change log. Every request is signed in with HTTP Basic; reading needs the"
-                + " viewer role, changing needs editor. Caution: figures assist a competent person; local wiring"
-                + " regulations and the current edition of the relevant standard govern; electrical work must be"
-                + " designed, done and certified by qualified people.")
-            .license(new License().name("Apache-2.0")))
-        .schemaRequirement("basic", new SecurityScheme().type(SecurityScheme.Type.HTTP).scheme("basic"))
+        .info(
+            new Info()
+                .title("Wayledger API")
+                .version("1")
+                .description(
+                    "Sites, boards, circuits and loads; demand after diversity; protection and cable findings;"
+                        + " phase balancing; change log. Every request is signed in with HTTP Basic; reading needs the"
+                        + " viewer role, changing needs editor. Caution: figures assist a competent person; local wiring"
+                        + " regulations and the current edition of the relevant standard govern; electrical work must be"
+                        + " designed, done and certified by qualified people.")
+                .license(new License().name("Apache-2.0")))
+        .schemaRequirement(
+            "basic", new SecurityScheme().type(SecurityScheme.Type.HTTP).scheme("basic"))
         .addSecurityItem(new SecurityRequirement().addList("basic"));
   }
 }

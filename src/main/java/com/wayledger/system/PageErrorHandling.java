@@ -19,7 +19,10 @@ public class PageErrorHandling {
     return problem(HttpStatus.NOT_FOUND, "error.notFound", model, response);
   }
 
-  @ExceptionHandler({MethodArgumentTypeMismatchException.class, MissingServletRequestParameterException.class})
+  @ExceptionHandler({
+    MethodArgumentTypeMismatchException.class,
+    MissingServletRequestParameterException.class
+  })
   public String badRequest(Exception e, Model model, HttpServletResponse response) {
     return problem(HttpStatus.BAD_REQUEST, "error.badRequest", model, response);
   }

@@ -7,8 +7,8 @@ import java.util.Objects;
 import java.util.Set;
 
 /**
- * The fields in which two values of one form record differ: what an edit conflict shows a user (their value
- * beside the one saved meanwhile), so that nothing they typed is lost.
+ * The fields in which two values of one form record differ: what an edit conflict shows a user
+ * (their value beside the one saved meanwhile), so that nothing they typed is lost.
  */
 public final class RecordDiff {
 
@@ -17,8 +17,12 @@ public final class RecordDiff {
 
   private RecordDiff() {}
 
-  /** Fields of {@code yours} and {@code theirs} (same record type) that differ, in declaration order. */
-  public static <R extends Record> List<FieldChange> between(R yours, R theirs, Set<String> ignored) {
+  /**
+   * Fields of {@code yours} and {@code theirs} (same record type) that differ, in declaration
+   * order.
+   */
+  public static <R extends Record> List<FieldChange> between(
+      R yours, R theirs, Set<String> ignored) {
     List<FieldChange> changes = new ArrayList<>();
     for (RecordComponent component : yours.getClass().getRecordComponents()) {
       if (ignored.contains(component.getName())) {

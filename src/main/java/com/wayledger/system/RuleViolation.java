@@ -1,8 +1,9 @@
 package com.wayledger.system;
 
 /**
- * A rule of the domain that a submitted value breaks (a way beyond the board's size, an occupied position).
- * Controllers show it beside the named form field; the API returns it as a 4xx with the field name.
+ * A rule of the domain that a submitted value breaks (a way beyond the board's size, an occupied
+ * position). Controllers show it beside the named form field; the API returns it as a 4xx with the
+ * field name.
  */
 public class RuleViolation extends RuntimeException {
 

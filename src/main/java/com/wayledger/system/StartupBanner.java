@@ -27,8 +27,9 @@ class StartupBanner {
     String port = environment.getProperty("local.server.port", "8080");
     LOG.info("Wayledger is ready at http://localhost:{}/", port);
     if (demo) {
-      LOG.info("Demo sign-in: user 'demo', password 'wayledger-demo' (editor and admin);"
-          + " user 'visitor', password 'wayledger-visit' (read only).");
+      LOG.info(
+          "Demo sign-in: user 'demo', password 'wayledger-demo' (editor and admin);"
+              + " user 'visitor', password 'wayledger-visit' (read only).");
     }
   }
 }

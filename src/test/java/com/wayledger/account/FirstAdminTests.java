@@ -42,9 +42,13 @@ class FirstAdminTests {
 
   @Test
   void replicaThatLosesTheRaceStillStarts() {
-    given(accounts.create(any())).willThrow(new DataIntegrityViolationException("app_user_username_key"));
+    given(accounts.create(any()))
+        .willThrow(new DataIntegrityViolationException("app_user_username_key"));
 
-    assertThatCode(() -> new FirstAdmin(accounts, "chief", "ten-or-more-chars").run(new DefaultApplicationArguments()))
+    assertThatCode(
+            () ->
+                new FirstAdmin(accounts, "chief", "ten-or-more-chars")
+                    .run(new DefaultApplicationArguments()))
         .as("start-up after the other replica created the same administrator")
         .doesNotThrowAnyException();
   }
@@ -53,7 +57,10 @@ class FirstAdminTests {
   void replicaThatSeesTheNameTakenStillStarts() {
     given(accounts.create(any())).willThrow(new RuleViolation("username", "user.username.taken"));
 
-    assertThatCode(() -> new FirstAdmin(accounts, "chief", "ten-or-more-chars").run(new DefaultApplicationArguments()))
+    assertThatCode(
+            () ->
+                new FirstAdmin(accounts, "chief", "ten-or-more-chars")
+                    .run(new DefaultApplicationArguments()))
         .doesNotThrowAnyException();
   }
 }

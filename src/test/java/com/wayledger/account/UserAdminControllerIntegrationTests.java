@@ -43,7 +43,8 @@ class UserAdminControllerIntegrationTests {
     return postUser(username, password, "EDITOR");
   }
 
-  private static MockHttpServletRequestBuilder postUser(String username, String password, String role) {
+  private static MockHttpServletRequestBuilder postUser(
+      String username, String password, String role) {
     return post("/admin/users")
         .param("username", username)
         .param("displayName", "Nia Okafor")
@@ -61,7 +62,8 @@ class UserAdminControllerIntegrationTests {
 
   @Test
   void adminSeesTheUsers() throws Exception {
-    given(accounts.all()).willReturn(List.of(new AppUser("nia", "{noop}x", "Nia Okafor", Role.EDITOR)));
+    given(accounts.all())
+        .willReturn(List.of(new AppUser("nia", "{noop}x", "Nia Okafor", Role.EDITOR)));
 
     mvc.perform(get("/admin/users").with(admin()))
         .andExpect(status().isOk())
@@ -78,7 +80,9 @@ class UserAdminControllerIntegrationTests {
 
   @Test
   void anonymousVisitorIsSentToSignIn() throws Exception {
-    mvc.perform(get("/admin/users")).andExpect(status().is3xxRedirection()).andExpect(redirectedUrl("/login"));
+    mvc.perform(get("/admin/users"))
+        .andExpect(status().is3xxRedirection())
+        .andExpect(redirectedUrl("/login"));
   }
 
   @Test
@@ -95,8 +99,11 @@ class UserAdminControllerIntegrationTests {
         .andExpect(status().is(422))
         .andExpect(view().name("account/users"))
         .andExpect(model().attributeHasFieldErrorCode("form", "password", "Size"))
-        .andExpect(content().string(containsString(
-            "<p class=\"error\" id=\"password-error\">Must be between 10 and 200 characters.</p>")));
+        .andExpect(
+            content()
+                .string(
+                    containsString(
+                        "<p class=\"error\" id=\"password-error\">Must be between 10 and 200 characters.</p>")));
     verify(accounts, never()).create(any());
   }
 
@@ -129,7 +136,8 @@ class UserAdminControllerIntegrationTests {
 
   @Test
   void postWithoutCsrfTokenIsRefused() throws Exception {
-    mvc.perform(postUser("nia", "long-enough-secret").with(admin())).andExpect(status().isForbidden());
+    mvc.perform(postUser("nia", "long-enough-secret").with(admin()))
+        .andExpect(status().isForbidden());
     verify(accounts, never()).create(any());
   }
 
@@ -145,7 +153,9 @@ class UserAdminControllerIntegrationTests {
 
   @Test
   void lastAdminKeepsTheRoleWithTheReason() throws Exception {
-    willThrow(new RuleViolation("role", "user.role.lastAdmin")).given(accounts).changeRole(1, Role.VIEWER);
+    willThrow(new RuleViolation("role", "user.role.lastAdmin"))
+        .given(accounts)
+        .changeRole(1, Role.VIEWER);
 
     mvc.perform(post("/admin/users/1/role").param("role", "VIEWER").with(admin()).with(csrf()))
         .andExpect(status().is3xxRedirection())

@@ -13,7 +13,9 @@ import com.tngtech.archunit.core.importer.ImportOption;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
-/** The shape of the code, checked on every build: a pure engine, feature packages without cycles. */
+/**
+ * The shape of the code, checked on every build: a pure engine, feature packages without cycles.
+ */
 class ArchitectureTests {
 
   private static JavaClasses production;
@@ -45,7 +47,12 @@ class ArchitectureTests {
         .resideInAPackage("com.wayledger.engine..")
         .should()
         .dependOnClassesThat()
-        .resideInAnyPackage("jakarta..", "org.springframework..", "org.apache.poi..", "tools.jackson..", "com.fasterxml..")
+        .resideInAnyPackage(
+            "jakarta..",
+            "org.springframework..",
+            "org.apache.poi..",
+            "tools.jackson..",
+            "com.fasterxml..")
         .check(production);
   }
 
@@ -62,7 +69,10 @@ class ArchitectureTests {
         .should()
         .dependOnClassesThat()
         .resideInAnyPackage(
-            "com.wayledger.site..", "com.wayledger.board..", "com.wayledger.account..", "com.wayledger.demo..")
+            "com.wayledger.site..",
+            "com.wayledger.board..",
+            "com.wayledger.account..",
+            "com.wayledger.demo..")
         .because("system is the shared kernel every feature may use")
         .check(production);
   }

@@ -39,32 +39,57 @@ class BalancePageIntegrationTests {
         mvc.perform(get("/boards/{id}/balance", bakery).with(editor()))
             .andExpect(status().isOk())
             .andExpect(content().string(containsString("Proved optimal")))
-            .andReturn().getResponse().getContentAsString();
+            .andReturn()
+            .getResponse()
+            .getContentAsString();
     String placements = hidden(page, "placements");
     String version = hidden(page, "version");
-    mvc.perform(post("/boards/{id}/balance/apply", bakery).param("placements", placements).param("version", version)
-            .param("reason", "WO-5").with(editor()).with(csrf()))
+    mvc.perform(
+            post("/boards/{id}/balance/apply", bakery)
+                .param("placements", placements)
+                .param("version", version)
+                .param("reason", "WO-5")
+                .with(editor())
+                .with(csrf()))
         .andExpect(status().is3xxRedirection())
         .andExpect(flash().attributeExists("applied"));
-    String after = mvc.perform(get("/boards/{id}", bakery).with(viewer())).andReturn().getResponse().getContentAsString();
+    String after =
+        mvc.perform(get("/boards/{id}", bakery).with(viewer()))
+            .andReturn()
+            .getResponse()
+            .getContentAsString();
     assertThat(after).contains("within the board").doesNotContain("beyond the board");
   }
 
   @Test
   void malformedPlanChangesNothing() throws Exception {
     long bakery = board("KB1");
-    long before = jdbc.sql("SELECT version FROM board WHERE id = ?").param(bakery).query(Long.class).single();
-    mvc.perform(post("/boards/{id}/balance/apply", bakery).param("placements", "12:x:L9").param("version", String.valueOf(before))
-            .with(editor()).with(csrf()))
+    long before =
+        jdbc.sql("SELECT version FROM board WHERE id = ?").param(bakery).query(Long.class).single();
+    mvc.perform(
+            post("/boards/{id}/balance/apply", bakery)
+                .param("placements", "12:x:L9")
+                .param("version", String.valueOf(before))
+                .with(editor())
+                .with(csrf()))
         .andExpect(status().is3xxRedirection())
         .andExpect(flash().attribute("problem", "balance.plan.malformed"));
-    assertThat(jdbc.sql("SELECT version FROM board WHERE id = ?").param(bakery).query(Long.class).single()).isEqualTo(before);
+    assertThat(
+            jdbc.sql("SELECT version FROM board WHERE id = ?")
+                .param(bakery)
+                .query(Long.class)
+                .single())
+        .isEqualTo(before);
   }
 
   @Test
   void viewerCannotApplyAPlan() throws Exception {
-    mvc.perform(post("/boards/{id}/balance/apply", board("KB1")).param("placements", "1:1:L1").param("version", "0")
-            .with(viewer()).with(csrf()))
+    mvc.perform(
+            post("/boards/{id}/balance/apply", board("KB1"))
+                .param("placements", "1:1:L1")
+                .param("version", "0")
+                .with(viewer())
+                .with(csrf()))
         .andExpect(status().isForbidden());
   }
 
@@ -76,7 +101,10 @@ class BalancePageIntegrationTests {
   }
 
   private long board(String reference) {
-    return jdbc.sql("SELECT id FROM board WHERE reference = ?").param(reference).query(Long.class).single();
+    return jdbc.sql("SELECT id FROM board WHERE reference = ?")
+        .param(reference)
+        .query(Long.class)
+        .single();
   }
 
   private static String hidden(String page, String name) {

@@ -46,7 +46,9 @@ class BalancingIntegrationTests {
     assertThat(after.unbalancePercent())
         .as("unbalance after applying the plan, recomputed from the stored board")
         .isLessThan(after.unbalanceLimitPercent());
-    assertThat(after.demandWatts()).as("moving circuits does not change the demand").isCloseTo(plans.before().demandWatts(), org.assertj.core.api.Assertions.within(1e-6));
+    assertThat(after.demandWatts())
+        .as("moving circuits does not change the demand")
+        .isCloseTo(plans.before().demandWatts(), org.assertj.core.api.Assertions.within(1e-6));
 
     schedule.rearrange(bakery.getId(), boards.get(bakery.getId()).getVersion(), plans.undo());
     assertThat(positions(bakery.getId())).as("undo puts every circuit back").isEqualTo(before);
@@ -67,11 +69,16 @@ class BalancingIntegrationTests {
     Board bakery = bakery();
     BalancePlans plans = balancing.plans(bakery.getId(), Basis.DEMAND, 1);
     long entriesBefore = logEntries(bakery.getId());
-    schedule.rearrange(bakery.getId(), boards.get(bakery.getId()).getVersion(), plans.placements(), "WO-77");
-    assertThat(logEntries(bakery.getId())).as("one log row for the whole plan").isEqualTo(entriesBefore + 1);
+    schedule.rearrange(
+        bakery.getId(), boards.get(bakery.getId()).getVersion(), plans.placements(), "WO-77");
+    assertThat(logEntries(bakery.getId()))
+        .as("one log row for the whole plan")
+        .isEqualTo(entriesBefore + 1);
     String kind =
-        jdbc.sql("SELECT kind FROM change_log WHERE board_id = ? AND reason = 'WO-77'").param(bakery.getId())
-            .query(String.class).single();
+        jdbc.sql("SELECT kind FROM change_log WHERE board_id = ? AND reason = 'WO-77'")
+            .param(bakery.getId())
+            .query(String.class)
+            .single();
     assertThat(kind).isEqualTo("BALANCING_APPLIED");
   }
 
@@ -79,7 +86,11 @@ class BalancingIntegrationTests {
   void theDemandHistoryReplaysABalancingPlanToTheBoardAsItNowStands() {
     Board bakery = bakery();
     BalancePlans plans = balancing.plans(bakery.getId(), Basis.DEMAND, null);
-    schedule.rearrange(bakery.getId(), boards.get(bakery.getId()).getVersion(), plans.placements(), "replay check");
+    schedule.rearrange(
+        bakery.getId(),
+        boards.get(bakery.getId()).getVersion(),
+        plans.placements(),
+        "replay check");
     var points = history.points(bakery.getId());
     var last = points.get(points.size() - 1);
     var now = analysis.ofBoard(bakery.getId()).boardDemand(bakery.getId());
@@ -92,18 +103,28 @@ class BalancingIntegrationTests {
   }
 
   private long logEntries(long boardId) {
-    return jdbc.sql("SELECT COUNT(*) FROM change_log WHERE board_id = ?").param(boardId).query(Long.class).single();
+    return jdbc.sql("SELECT COUNT(*) FROM change_log WHERE board_id = ?")
+        .param(boardId)
+        .query(Long.class)
+        .single();
   }
 
   private Board bakery() {
     long siteId = sites.all().get(0).getId();
-    return boards.onSite(siteId).stream().filter(b -> b.getReference().equals("KB1")).findFirst().orElseThrow();
+    return boards.onSite(siteId).stream()
+        .filter(b -> b.getReference().equals("KB1"))
+        .findFirst()
+        .orElseThrow();
   }
 
   private Map<Long, String> positions(long boardId) {
-    return jdbc.sql("SELECT id, way_number, position FROM circuit WHERE board_id = ?")
+    return jdbc
+        .sql("SELECT id, way_number, position FROM circuit WHERE board_id = ?")
         .param(boardId)
-        .query((row, n) -> Map.entry(row.getLong("id"), row.getInt("way_number") + " " + row.getString("position")))
+        .query(
+            (row, n) ->
+                Map.entry(
+                    row.getLong("id"), row.getInt("way_number") + " " + row.getString("position")))
         .list()
         .stream()
         .collect(Collectors.toMap(Map.Entry::getKey, Map.Entry::getValue));

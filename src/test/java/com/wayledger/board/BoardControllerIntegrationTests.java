@@ -1,7 +1,5 @@
 package com.wayledger.board;
 
-import com.wayledger.diversity.MethodLibrary;
-import com.wayledger.diversity.StoredMethodRepository;
 import static com.wayledger.board.PageFixtures.BOARD_ID;
 import static com.wayledger.board.PageFixtures.SITE_ID;
 import static com.wayledger.board.PageFixtures.board;
@@ -29,6 +27,8 @@ import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.view;
 
 import com.wayledger.account.SecurityConfig;
+import com.wayledger.diversity.MethodLibrary;
+import com.wayledger.diversity.StoredMethodRepository;
 import com.wayledger.site.SiteService;
 import com.wayledger.system.RuleViolation;
 import java.util.List;
@@ -74,7 +74,8 @@ class BoardControllerIntegrationTests {
         .andExpect(status().isOk())
         .andExpect(view().name("board/board"))
         .andExpect(content().string(containsString("id=\"pos-6-L3\"")))
-        .andExpect(content().string(org.hamcrest.Matchers.not(containsString("class=\"small add\""))));
+        .andExpect(
+            content().string(org.hamcrest.Matchers.not(containsString("class=\"small add\""))));
   }
 
   @Test
@@ -93,7 +94,9 @@ class BoardControllerIntegrationTests {
 
   @Test
   void anonymousVisitorIsSentToSignIn() throws Exception {
-    mvc.perform(get("/boards/{id}", BOARD_ID)).andExpect(status().is3xxRedirection()).andExpect(redirectedUrl("/login"));
+    mvc.perform(get("/boards/{id}", BOARD_ID))
+        .andExpect(status().is3xxRedirection())
+        .andExpect(redirectedUrl("/login"));
   }
 
   @Test
@@ -107,12 +110,14 @@ class BoardControllerIntegrationTests {
 
   @Test
   void viewerCannotOpenTheNewBoardForm() throws Exception {
-    mvc.perform(get("/sites/{id}/boards/new", SITE_ID).with(viewer())).andExpect(status().isForbidden());
+    mvc.perform(get("/sites/{id}/boards/new", SITE_ID).with(viewer()))
+        .andExpect(status().isForbidden());
   }
 
   @Test
   void viewerCannotOpenTheBoardEditForm() throws Exception {
-    mvc.perform(get("/boards/{id}/edit", BOARD_ID).with(viewer())).andExpect(status().isForbidden());
+    mvc.perform(get("/boards/{id}/edit", BOARD_ID).with(viewer()))
+        .andExpect(status().isForbidden());
   }
 
   @Test
@@ -137,18 +142,26 @@ class BoardControllerIntegrationTests {
   @Test
   void zeroWaysComesBackWith422AndTheMessage() throws Exception {
 
-    mvc.perform(postForm("/sites/3/boards", boardFields(), "wayCount", "0").with(editor()).with(csrf()))
+    mvc.perform(
+            postForm("/sites/3/boards", boardFields(), "wayCount", "0").with(editor()).with(csrf()))
         .andExpect(status().is(422))
         .andExpect(view().name("board/form"))
         .andExpect(model().attributeHasFieldErrorCode("form", "wayCount", "Min"))
-        .andExpect(content().string(containsString("<p class=\"error\" id=\"wayCount-error\">Must be at least 1.</p>")));
+        .andExpect(
+            content()
+                .string(
+                    containsString(
+                        "<p class=\"error\" id=\"wayCount-error\">Must be at least 1.</p>")));
     verify(boards, never()).create(anyLong(), any());
   }
 
   @Test
   void lettersForTheNumberOfWaysKeepTheReferenceTyped() throws Exception {
 
-    mvc.perform(postForm("/sites/3/boards", boardFields(), "wayCount", "twelve").with(editor()).with(csrf()))
+    mvc.perform(
+            postForm("/sites/3/boards", boardFields(), "wayCount", "twelve")
+                .with(editor())
+                .with(csrf()))
         .andExpect(status().is(422))
         .andExpect(model().attributeHasFieldErrorCode("form", "wayCount", "typeMismatch"))
         .andExpect(content().string(containsString("value=\"DB-Q\"")))
@@ -159,7 +172,10 @@ class BoardControllerIntegrationTests {
   @Test
   void coincidenceFactorAboveOneIsRefused() throws Exception {
 
-    mvc.perform(postForm("/sites/3/boards", boardFields(), "coincidenceFactor", "1.5").with(editor()).with(csrf()))
+    mvc.perform(
+            postForm("/sites/3/boards", boardFields(), "coincidenceFactor", "1.5")
+                .with(editor())
+                .with(csrf()))
         .andExpect(status().is(422))
         .andExpect(model().attributeHasFieldErrorCode("form", "coincidenceFactor", "DecimalMax"));
     verify(boards, never()).create(anyLong(), any());
@@ -167,17 +183,21 @@ class BoardControllerIntegrationTests {
 
   @Test
   void ruleBrokenInTheServiceShowsBesideItsField() throws Exception {
-    given(boards.create(eq(SITE_ID), any(), any())).willThrow(new RuleViolation("reference", "board.reference.taken"));
+    given(boards.create(eq(SITE_ID), any(), any()))
+        .willThrow(new RuleViolation("reference", "board.reference.taken"));
 
     mvc.perform(postForm("/sites/3/boards", boardFields()).with(editor()).with(csrf()))
         .andExpect(status().is(422))
         .andExpect(model().attributeHasFieldErrorCode("form", "reference", "board.reference.taken"))
-        .andExpect(content().string(containsString("Another board on this site already has this reference.")));
+        .andExpect(
+            content()
+                .string(containsString("Another board on this site already has this reference.")));
   }
 
   @Test
   void postWithoutCsrfTokenIsRefused() throws Exception {
-    mvc.perform(postForm("/sites/3/boards", boardFields()).with(editor())).andExpect(status().isForbidden());
+    mvc.perform(postForm("/sites/3/boards", boardFields()).with(editor()))
+        .andExpect(status().isForbidden());
     verify(boards, never()).create(anyLong(), any());
   }
 
@@ -187,7 +207,8 @@ class BoardControllerIntegrationTests {
         .andExpect(status().isForbidden());
     mvc.perform(postForm("/boards/5", boardFields()).with(viewer()).with(csrf()))
         .andExpect(status().isForbidden());
-    mvc.perform(post("/boards/5/delete").with(viewer()).with(csrf())).andExpect(status().isForbidden());
+    mvc.perform(post("/boards/5/delete").with(viewer()).with(csrf()))
+        .andExpect(status().isForbidden());
     verify(boards, never()).create(anyLong(), any());
     verify(boards, never()).update(anyLong(), any());
     verify(boards, never()).delete(anyLong());
@@ -195,7 +216,8 @@ class BoardControllerIntegrationTests {
 
   @Test
   void boardThatFeedsOthersIsKeptWithTheReason() throws Exception {
-    given(boards.delete(eq(BOARD_ID), any())).willThrow(new RuleViolation("reference", "board.delete.hasChildren"));
+    given(boards.delete(eq(BOARD_ID), any()))
+        .willThrow(new RuleViolation("reference", "board.delete.hasChildren"));
 
     mvc.perform(post("/boards/5/delete").with(editor()).with(csrf()))
         .andExpect(status().is3xxRedirection())

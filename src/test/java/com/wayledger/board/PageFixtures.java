@@ -39,8 +39,35 @@ final class PageFixtures {
   }
 
   static BoardForm boardForm(String reference) {
-    return new BoardForm(reference, "Plant room", 3, 6, 100.0, DeviceKind.MCCB, null, 63.0, 3, 10.0, null,
-        null, null, null, null, null, null, null, null, null, null, null, null, 10.0, 1.0, null, null, null,
+    return new BoardForm(
+        reference,
+        "Plant room",
+        3,
+        6,
+        100.0,
+        DeviceKind.MCCB,
+        null,
+        63.0,
+        3,
+        10.0,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        10.0,
+        1.0,
+        null,
+        null,
+        null,
         null);
   }
 
@@ -53,18 +80,48 @@ final class PageFixtures {
 
   static Circuit circuit(Board board) {
     Circuit circuit = new Circuit(board);
-    circuit.apply(new CircuitForm(2, PhasePosition.L1, "Boiler", WayStatus.IN_USE, false, DeviceKind.MCB,
-        TripCurve.B, 6.0, 1, 6.0, null, null, 1.5, 1.0, null, null, 8.0, null, null, null, null, null, null,
-        null, null, null, null, null, null));
+    circuit.apply(
+        new CircuitForm(
+            2,
+            PhasePosition.L1,
+            "Boiler",
+            WayStatus.IN_USE,
+            false,
+            DeviceKind.MCB,
+            TripCurve.B,
+            6.0,
+            1,
+            6.0,
+            null,
+            null,
+            1.5,
+            1.0,
+            null,
+            null,
+            8.0,
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            null));
     ReflectionTestUtils.setField(circuit, "id", CIRCUIT_ID);
     return circuit;
   }
 
   /**
-   * Makes the mocked store hold {@link #board()} (no circuits) on its site, so that the real SchedulePage and
-   * AnalysisService can fill the page as they do in the running app. Returns the stored board.
+   * Makes the mocked store hold {@link #board()} (no circuits) on its site, so that the real
+   * SchedulePage and AnalysisService can fill the page as they do in the running app. Returns the
+   * stored board.
    */
-  static Board storeHoldsTheBoard(BoardRepository boards, CircuitRepository circuits, SiteService sites) {
+  static Board storeHoldsTheBoard(
+      BoardRepository boards, CircuitRepository circuits, SiteService sites) {
     Board board = board();
     given(boards.findById(BOARD_ID)).willReturn(Optional.of(board));
     given(boards.findBySite(SITE_ID)).willReturn(List.of(board));
@@ -74,7 +131,8 @@ final class PageFixtures {
   }
 
   /** A POST with the given fields (pairs of name and value), each sent once. */
-  static MockHttpServletRequestBuilder postForm(String url, Map<String, String> base, String... replaced) {
+  static MockHttpServletRequestBuilder postForm(
+      String url, Map<String, String> base, String... replaced) {
     Map<String, String> fields = new LinkedHashMap<>(base);
     for (int i = 0; i < replaced.length; i += 2) {
       fields.put(replaced[i], replaced[i + 1]);

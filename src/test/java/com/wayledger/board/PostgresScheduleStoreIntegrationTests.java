@@ -5,7 +5,10 @@ import com.wayledger.support.PostgresDatabase;
 import org.springframework.test.context.DynamicPropertyRegistry;
 import org.springframework.test.context.DynamicPropertySource;
 
-/** The schedule store contract on a real PostgreSQL server (see {@link PostgresDatabase} for which one). */
+/**
+ * The schedule store contract on a real PostgreSQL server (see {@link PostgresDatabase} for which
+ * one).
+ */
 @EnabledWithPostgres
 class PostgresScheduleStoreIntegrationTests extends ScheduleStoreContract {
 

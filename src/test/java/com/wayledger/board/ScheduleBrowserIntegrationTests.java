@@ -29,9 +29,9 @@ import org.springframework.boot.test.web.server.LocalServerPort;
 import org.springframework.test.context.ActiveProfiles;
 
 /**
- * A real browser (headless Chromium) types a circuit into the demo bakery board through the inline editor,
- * and the circuit is still there after a reload. Uses the Debian chromium and chromedriver packages; never
- * lets Selenium fetch a driver or a browser.
+ * A real browser (headless Chromium) types a circuit into the demo bakery board through the inline
+ * editor, and the circuit is still there after a reload. Uses the Debian chromium and chromedriver
+ * packages; never lets Selenium fetch a driver or a browser.
  */
 @SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT)
 @ActiveProfiles({"test", "demo"})
@@ -51,7 +51,10 @@ class ScheduleBrowserIntegrationTests {
   static void chromiumIsInstalled() {
     RealParts.require(
         Files.isExecutable(CHROMIUM) && Files.isExecutable(CHROMEDRIVER),
-        "Chromium for the browser test: " + CHROMIUM + " and " + CHROMEDRIVER
+        "Chromium for the browser test: "
+            + CHROMIUM
+            + " and "
+            + CHROMEDRIVER
             + " (apt-get install chromium chromium-driver)");
   }
 
@@ -61,11 +64,21 @@ class ScheduleBrowserIntegrationTests {
     ChromeOptions options = new ChromeOptions();
     options.setBinary(CHROMIUM.toFile());
     options.addArguments(
-        "--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run",
-        "--disable-background-networking", "--disable-component-update", "--disable-sync",
-        "--disable-dev-shm-usage", "--window-size=1400,1800", "--user-data-dir=" + profileDir);
+        "--headless",
+        "--no-sandbox",
+        "--disable-gpu",
+        "--disable-quic",
+        "--no-first-run",
+        "--disable-background-networking",
+        "--disable-component-update",
+        "--disable-sync",
+        "--disable-dev-shm-usage",
+        "--window-size=1400,1800",
+        "--user-data-dir=" + profileDir);
     ChromeDriverService service =
-        new ChromeDriverService.Builder().usingDriverExecutable(new File(CHROMEDRIVER.toString())).build();
+        new ChromeDriverService.Builder()
+            .usingDriverExecutable(new File(CHROMEDRIVER.toString()))
+            .build();
     browser = new ChromeDriver(service, options);
     wait = new WebDriverWait(browser, PATIENCE);
   }
@@ -92,10 +105,13 @@ class ScheduleBrowserIntegrationTests {
     screenshot("board-kb1.png");
 
     WebElement freeRow = browser.findElement(By.id("pos-12-L3"));
-    assertThat(freeRow.getText()).as("way 12 L3 of KB1 is free in the demo").contains("free position");
+    assertThat(freeRow.getText())
+        .as("way 12 L3 of KB1 is free in the demo")
+        .contains("free position");
     freeRow.findElement(By.cssSelector("button.add")).click();
 
-    WebElement editor = wait.until(ExpectedConditions.visibilityOfElementLocated(By.id("editor-12-L3")));
+    WebElement editor =
+        wait.until(ExpectedConditions.visibilityOfElementLocated(By.id("editor-12-L3")));
     editor.findElement(By.name("description")).sendKeys("Proofing cabinet lamp");
     WebElement rating = editor.findElement(By.name("deviceRatingAmps"));
     rating.clear();
@@ -106,11 +122,16 @@ class ScheduleBrowserIntegrationTests {
     loadRating.sendKeys(Keys.ENTER);
 
     wait.until(ExpectedConditions.invisibilityOfElementLocated(By.id("editor-12-L3")));
-    wait.until(ExpectedConditions.textToBePresentInElementLocated(By.id("pos-12-L3"), "Proofing cabinet lamp"));
+    wait.until(
+        ExpectedConditions.textToBePresentInElementLocated(
+            By.id("pos-12-L3"), "Proofing cabinet lamp"));
 
     browser.navigate().refresh();
-    String row = wait.until(ExpectedConditions.presenceOfElementLocated(By.id("pos-12-L3"))).getText();
-    assertThat(row).as("row 12 L3 after a reload").contains("Proofing cabinet lamp", "Cabinet lamp", "60 W");
+    String row =
+        wait.until(ExpectedConditions.presenceOfElementLocated(By.id("pos-12-L3"))).getText();
+    assertThat(row)
+        .as("row 12 L3 after a reload")
+        .contains("Proofing cabinet lamp", "Cabinet lamp", "60 W");
     assertThat(browser.findElements(By.xpath("//*[contains(text(), 'Proofing cabinet lamp')]")))
         .as("the new circuit appears once")
         .hasSize(1);

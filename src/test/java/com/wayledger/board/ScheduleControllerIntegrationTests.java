@@ -1,7 +1,5 @@
 package com.wayledger.board;
 
-import com.wayledger.diversity.MethodLibrary;
-import com.wayledger.diversity.StoredMethodRepository;
 import static com.wayledger.board.PageFixtures.BOARD_ID;
 import static com.wayledger.board.PageFixtures.CIRCUIT_ID;
 import static com.wayledger.board.PageFixtures.board;
@@ -30,6 +28,8 @@ import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.view;
 
 import com.wayledger.account.SecurityConfig;
+import com.wayledger.diversity.MethodLibrary;
+import com.wayledger.diversity.StoredMethodRepository;
 import com.wayledger.engine.PhasePosition;
 import com.wayledger.site.SiteService;
 import com.wayledger.system.NotFoundException;
@@ -43,7 +43,9 @@ import org.springframework.context.annotation.Import;
 import org.springframework.test.context.bean.override.mockito.MockitoBean;
 import org.springframework.test.web.servlet.MockMvc;
 
-/** Inline editing of the schedule: the htmx fragments, whole-page fallbacks, roles and bad input. */
+/**
+ * Inline editing of the schedule: the htmx fragments, whole-page fallbacks, roles and bad input.
+ */
 @WebMvcTest(ScheduleController.class)
 @Import({SecurityConfig.class, MethodLibrary.class, SchedulePage.class, AnalysisService.class})
 class ScheduleControllerIntegrationTests {
@@ -73,8 +75,12 @@ class ScheduleControllerIntegrationTests {
 
   @Test
   void addButtonOpensTheEditorRowForThatPosition() throws Exception {
-    mvc.perform(get("/boards/5/circuits/new").param("way", "4").param("position", "L2")
-            .header("HX-Request", "true").with(editor()))
+    mvc.perform(
+            get("/boards/5/circuits/new")
+                .param("way", "4")
+                .param("position", "L2")
+                .header("HX-Request", "true")
+                .with(editor()))
         .andExpect(status().isOk())
         .andExpect(view().name(EDITOR_FRAGMENT))
         .andExpect(model().attribute("form", CircuitForm.blankAt(4, PhasePosition.L2)))
@@ -83,7 +89,8 @@ class ScheduleControllerIntegrationTests {
 
   @Test
   void withoutHtmxTheEditorIsAWholePage() throws Exception {
-    mvc.perform(get("/boards/5/circuits/new").param("way", "4").param("position", "L2").with(editor()))
+    mvc.perform(
+            get("/boards/5/circuits/new").param("way", "4").param("position", "L2").with(editor()))
         .andExpect(status().isOk())
         .andExpect(view().name("board/circuit"))
         .andExpect(content().string(containsString("<footer class=\"caution\"")));
@@ -91,7 +98,8 @@ class ScheduleControllerIntegrationTests {
 
   @Test
   void unknownPositionNameIsABadRequest() throws Exception {
-    mvc.perform(get("/boards/5/circuits/new").param("way", "4").param("position", "L4").with(editor()))
+    mvc.perform(
+            get("/boards/5/circuits/new").param("way", "4").param("position", "L4").with(editor()))
         .andExpect(status().isBadRequest())
         .andExpect(view().name("error/problem"));
   }
@@ -99,9 +107,11 @@ class ScheduleControllerIntegrationTests {
   @Test
   void viewerCannotOpenTheCircuitEditors() throws Exception {
     storedCircuit();
-    mvc.perform(get("/boards/5/circuits/new").param("way", "4").param("position", "L2").with(viewer()))
+    mvc.perform(
+            get("/boards/5/circuits/new").param("way", "4").param("position", "L2").with(viewer()))
         .andExpect(status().isForbidden());
-    mvc.perform(get("/circuits/{id}/edit", CIRCUIT_ID).with(viewer())).andExpect(status().isForbidden());
+    mvc.perform(get("/circuits/{id}/edit", CIRCUIT_ID).with(viewer()))
+        .andExpect(status().isForbidden());
     mvc.perform(get("/loads/1/edit").with(viewer())).andExpect(status().isForbidden());
   }
 
@@ -114,7 +124,9 @@ class ScheduleControllerIntegrationTests {
 
   @Test
   void anonymousVisitorIsSentToSignIn() throws Exception {
-    mvc.perform(get("/boards/5/schedule")).andExpect(status().is3xxRedirection()).andExpect(redirectedUrl("/login"));
+    mvc.perform(get("/boards/5/schedule"))
+        .andExpect(status().is3xxRedirection())
+        .andExpect(redirectedUrl("/login"));
   }
 
   @Test
@@ -122,26 +134,44 @@ class ScheduleControllerIntegrationTests {
     Circuit saved = circuit(board());
     given(schedule.addCircuit(eq(BOARD_ID), any(), any())).willReturn(saved);
 
-    mvc.perform(postForm("/boards/5/circuits", circuitFields()).header("HX-Request", "true").with(editor()).with(csrf()))
+    mvc.perform(
+            postForm("/boards/5/circuits", circuitFields())
+                .header("HX-Request", "true")
+                .with(editor())
+                .with(csrf()))
         .andExpect(status().isOk())
         .andExpect(view().name(SCHEDULE_FRAGMENT))
         .andExpect(header().string("HX-Retarget", "#schedule"))
         .andExpect(header().string("HX-Reswap", "outerHTML"));
-    verify(schedule).addCircuit(eq(BOARD_ID), any(CircuitForm.class), any()); // loadlog: reason passed through
+    verify(schedule)
+        .addCircuit(eq(BOARD_ID), any(CircuitForm.class), any()); // loadlog: reason passed through
   }
 
   @Test
   void ringTickReachesTheFormAndItsAbsenceMeansRadial() throws Exception {
     given(schedule.addCircuit(eq(BOARD_ID), any(), any())).willReturn(circuit(board()));
 
-    mvc.perform(postForm("/boards/5/circuits", circuitFields(), "ringFinal", "true", "_ringFinal", "on")
-            .with(editor()).with(csrf()))
+    mvc.perform(
+            postForm("/boards/5/circuits", circuitFields(), "ringFinal", "true", "_ringFinal", "on")
+                .with(editor())
+                .with(csrf()))
         .andExpect(status().is3xxRedirection());
-    verify(schedule).addCircuit(eq(BOARD_ID), org.mockito.ArgumentMatchers.argThat(f -> Boolean.TRUE.equals(f.ringFinal())), any());
+    verify(schedule)
+        .addCircuit(
+            eq(BOARD_ID),
+            org.mockito.ArgumentMatchers.argThat(f -> Boolean.TRUE.equals(f.ringFinal())),
+            any());
 
-    mvc.perform(postForm("/boards/5/circuits", circuitFields(), "_ringFinal", "on").with(editor()).with(csrf()))
+    mvc.perform(
+            postForm("/boards/5/circuits", circuitFields(), "_ringFinal", "on")
+                .with(editor())
+                .with(csrf()))
         .andExpect(status().is3xxRedirection());
-    verify(schedule).addCircuit(eq(BOARD_ID), org.mockito.ArgumentMatchers.argThat(f -> !Boolean.TRUE.equals(f.ringFinal())), any());
+    verify(schedule)
+        .addCircuit(
+            eq(BOARD_ID),
+            org.mockito.ArgumentMatchers.argThat(f -> !Boolean.TRUE.equals(f.ringFinal())),
+            any());
   }
 
   @Test
@@ -155,21 +185,30 @@ class ScheduleControllerIntegrationTests {
 
   @Test
   void lettersInTheLoadRatingComeBackBesideTheFieldWith422() throws Exception {
-    mvc.perform(postForm("/boards/5/circuits", circuitFields(), "loadRatingValue", "abc")
-            .header("HX-Request", "true").with(editor()).with(csrf()))
+    mvc.perform(
+            postForm("/boards/5/circuits", circuitFields(), "loadRatingValue", "abc")
+                .header("HX-Request", "true")
+                .with(editor())
+                .with(csrf()))
         .andExpect(status().is(422))
         .andExpect(view().name(EDITOR_FRAGMENT))
         .andExpect(model().attributeHasFieldErrorCode("form", "loadRatingValue", "typeMismatch"))
-        .andExpect(content().string(containsString(
-            "<p class=\"error\" id=\"loadRatingValue-error\">Please enter a number, such as 2.5.</p>")))
+        .andExpect(
+            content()
+                .string(
+                    containsString(
+                        "<p class=\"error\" id=\"loadRatingValue-error\">Please enter a number, such as 2.5.</p>")))
         .andExpect(content().string(containsString("value=\"Kettle point\"")));
     verify(schedule, never()).addCircuit(anyLong(), any());
   }
 
   @Test
   void blankDescriptionIsRefused() throws Exception {
-    mvc.perform(postForm("/boards/5/circuits", circuitFields(), "description", "")
-            .header("HX-Request", "true").with(editor()).with(csrf()))
+    mvc.perform(
+            postForm("/boards/5/circuits", circuitFields(), "description", "")
+                .header("HX-Request", "true")
+                .with(editor())
+                .with(csrf()))
         .andExpect(status().is(422))
         .andExpect(model().attributeHasFieldErrorCode("form", "description", "NotBlank"))
         .andExpect(content().string(containsString("Please fill this in.")));
@@ -178,12 +217,18 @@ class ScheduleControllerIntegrationTests {
 
   @Test
   void negativeDeviceRatingIsRefused() throws Exception {
-    mvc.perform(postForm("/boards/5/circuits", circuitFields(), "deviceRatingAmps", "-16")
-            .header("HX-Request", "true").with(editor()).with(csrf()))
+    mvc.perform(
+            postForm("/boards/5/circuits", circuitFields(), "deviceRatingAmps", "-16")
+                .header("HX-Request", "true")
+                .with(editor())
+                .with(csrf()))
         .andExpect(status().is(422))
         .andExpect(model().attributeHasFieldErrorCode("form", "deviceRatingAmps", "Positive"))
-        .andExpect(content().string(containsString(
-            "<p class=\"error\" id=\"deviceRatingAmps-error\">Must be greater than zero.</p>")));
+        .andExpect(
+            content()
+                .string(
+                    containsString(
+                        "<p class=\"error\" id=\"deviceRatingAmps-error\">Must be greater than zero.</p>")));
   }
 
   @Test
@@ -191,17 +236,28 @@ class ScheduleControllerIntegrationTests {
     given(schedule.addCircuit(eq(BOARD_ID), any(), any()))
         .willThrow(new RuleViolation("wayNumber", "circuit.position.occupied", 4, "L2"));
 
-    mvc.perform(postForm("/boards/5/circuits", circuitFields()).header("HX-Request", "true").with(editor()).with(csrf()))
+    mvc.perform(
+            postForm("/boards/5/circuits", circuitFields())
+                .header("HX-Request", "true")
+                .with(editor())
+                .with(csrf()))
         .andExpect(status().is(422))
         .andExpect(view().name(EDITOR_FRAGMENT))
-        .andExpect(model().attributeHasFieldErrorCode("form", "wayNumber", "circuit.position.occupied"))
-        .andExpect(content().string(containsString(
-            "<p class=\"error\" id=\"wayNumber-error\">Way 4 L2 already holds a circuit.</p>")));
+        .andExpect(
+            model().attributeHasFieldErrorCode("form", "wayNumber", "circuit.position.occupied"))
+        .andExpect(
+            content()
+                .string(
+                    containsString(
+                        "<p class=\"error\" id=\"wayNumber-error\">Way 4 L2 already holds a circuit.</p>")));
   }
 
   @Test
   void postWithoutCsrfTokenIsRefused() throws Exception {
-    mvc.perform(postForm("/boards/5/circuits", circuitFields()).header("HX-Request", "true").with(editor()))
+    mvc.perform(
+            postForm("/boards/5/circuits", circuitFields())
+                .header("HX-Request", "true")
+                .with(editor()))
         .andExpect(status().isForbidden());
     verify(schedule, never()).addCircuit(anyLong(), any());
   }
@@ -213,10 +269,12 @@ class ScheduleControllerIntegrationTests {
         .andExpect(status().isForbidden());
     mvc.perform(postForm("/circuits/9", circuitFields()).with(viewer()).with(csrf()))
         .andExpect(status().isForbidden());
-    mvc.perform(post("/circuits/9/delete").with(viewer()).with(csrf())).andExpect(status().isForbidden());
+    mvc.perform(post("/circuits/9/delete").with(viewer()).with(csrf()))
+        .andExpect(status().isForbidden());
     mvc.perform(postForm("/circuits/9/loads", loadFields()).with(viewer()).with(csrf()))
         .andExpect(status().isForbidden());
-    mvc.perform(post("/loads/1/delete").with(viewer()).with(csrf())).andExpect(status().isForbidden());
+    mvc.perform(post("/loads/1/delete").with(viewer()).with(csrf()))
+        .andExpect(status().isForbidden());
     verify(schedule, never()).addCircuit(anyLong(), any());
     verify(schedule, never()).updateCircuit(anyLong(), any());
     verify(schedule, never()).deleteCircuit(anyLong());
@@ -238,8 +296,11 @@ class ScheduleControllerIntegrationTests {
   void powerFactorAboveOneOnALoadIsRefused() throws Exception {
     storedCircuit();
 
-    mvc.perform(postForm("/circuits/9/loads", loadFields(), "powerFactor", "1.5")
-            .header("HX-Request", "true").with(editor()).with(csrf()))
+    mvc.perform(
+            postForm("/circuits/9/loads", loadFields(), "powerFactor", "1.5")
+                .header("HX-Request", "true")
+                .with(editor())
+                .with(csrf()))
         .andExpect(status().is(422))
         .andExpect(view().name(EDITOR_FRAGMENT))
         .andExpect(model().attributeHasFieldErrorCode("loadForm", "powerFactor", "DecimalMax"))
@@ -251,10 +312,15 @@ class ScheduleControllerIntegrationTests {
   void savedLoadRedrawsTheEditorRow() throws Exception {
     storedCircuit();
 
-    mvc.perform(postForm("/circuits/9/loads", loadFields()).header("HX-Request", "true").with(editor()).with(csrf()))
+    mvc.perform(
+            postForm("/circuits/9/loads", loadFields())
+                .header("HX-Request", "true")
+                .with(editor())
+                .with(csrf()))
         .andExpect(status().isOk())
         .andExpect(view().name(EDITOR_FRAGMENT))
         .andExpect(model().attribute("loadForm", LoadForm.blank()));
-    verify(schedule).addLoad(eq(CIRCUIT_ID), any(LoadForm.class), any()); // loadlog: reason passed through
+    verify(schedule)
+        .addLoad(eq(CIRCUIT_ID), any(LoadForm.class), any()); // loadlog: reason passed through
   }
 }

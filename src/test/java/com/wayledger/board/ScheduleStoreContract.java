@@ -28,9 +28,9 @@ import org.springframework.jdbc.core.simple.JdbcClient;
 import org.springframework.test.context.ActiveProfiles;
 
 /**
- * What the stored schedule must guarantee on every supported database: migrations applied, constraints
- * enforced by the database itself, the one-circuit-per-position rule, cascades and optimistic locking.
- * Each database gets a subclass; all of them run these same tests.
+ * What the stored schedule must guarantee on every supported database: migrations applied,
+ * constraints enforced by the database itself, the one-circuit-per-position rule, cascades and
+ * optimistic locking. Each database gets a subclass; all of them run these same tests.
  */
 @SpringBootTest
 @ActiveProfiles("test")
@@ -49,27 +49,95 @@ abstract class ScheduleStoreContract {
     String name = "Store test " + UUID.randomUUID();
     site =
         sites.create(
-            new SiteForm(name, null, EarthingSystem.TN_S, 230.0, 3, 50.0, 0.8, 6.0, 100.0, null, null, null));
+            new SiteForm(
+                name,
+                null,
+                EarthingSystem.TN_S,
+                230.0,
+                3,
+                50.0,
+                0.8,
+                6.0,
+                100.0,
+                null,
+                null,
+                null));
     board = boards.create(site.getId(), board("DB-T", null));
   }
 
   static BoardForm board(String reference, Long parentId) {
-    return new BoardForm(reference, "Test room", 3, 6, 100.0, DeviceKind.MCCB, null, 63.0, 3, 10.0, null,
-        null, parentId, null, null, null, null, null, null, null, null, null, null, 10.0, 1.0, null, null,
-        null, null);
+    return new BoardForm(
+        reference,
+        "Test room",
+        3,
+        6,
+        100.0,
+        DeviceKind.MCCB,
+        null,
+        63.0,
+        3,
+        10.0,
+        null,
+        null,
+        parentId,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        10.0,
+        1.0,
+        null,
+        null,
+        null,
+        null);
   }
 
   static CircuitForm circuit(int way, PhasePosition position, String description) {
     CircuitForm blank = CircuitForm.blankAt(way, position);
-    return new CircuitForm(way, position, description, WayStatus.IN_USE, false, DeviceKind.MCB, TripCurve.B,
-        16.0, 1, 6.0, null, null, 2.5, 1.5, null, null, 20.0, null, null, null, null, null, "Sockets",
-        LoadCategory.SOCKET_OUTLETS, 1, 2000.0, RatingUnit.W, 0.95, blank.version());
+    return new CircuitForm(
+        way,
+        position,
+        description,
+        WayStatus.IN_USE,
+        false,
+        DeviceKind.MCB,
+        TripCurve.B,
+        16.0,
+        1,
+        6.0,
+        null,
+        null,
+        2.5,
+        1.5,
+        null,
+        null,
+        20.0,
+        null,
+        null,
+        null,
+        null,
+        null,
+        "Sockets",
+        LoadCategory.SOCKET_OUTLETS,
+        1,
+        2000.0,
+        RatingUnit.W,
+        0.95,
+        blank.version());
   }
 
   @Test
   void everyMigrationInDbFolderIsApplied() throws IOException {
     long scripts =
-        Arrays.stream(new PathMatchingResourcePatternResolver().getResources("classpath:db/migration/V*.sql"))
+        Arrays.stream(
+                new PathMatchingResourcePatternResolver()
+                    .getResources("classpath:db/migration/V*.sql"))
             .count();
     Long applied =
         jdbc.sql("SELECT COUNT(*) FROM flyway_schema_history WHERE type = 'SQL' AND success = TRUE")
@@ -80,11 +148,18 @@ abstract class ScheduleStoreContract {
 
   @Test
   void circuitWithItsFirstLoadIsStoredAndReadBack() {
-    Circuit saved = schedule.addCircuit(board.getId(), circuit(2, PhasePosition.L2, "Kitchen sockets"));
+    Circuit saved =
+        schedule.addCircuit(board.getId(), circuit(2, PhasePosition.L2, "Kitchen sockets"));
     Long loads =
-        jdbc.sql("SELECT COUNT(*) FROM load_item WHERE circuit_id = ?").param(saved.getId()).query(Long.class).single();
+        jdbc.sql("SELECT COUNT(*) FROM load_item WHERE circuit_id = ?")
+            .param(saved.getId())
+            .query(Long.class)
+            .single();
     String phase =
-        jdbc.sql("SELECT phase FROM way_slot WHERE circuit_id = ?").param(saved.getId()).query(String.class).single();
+        jdbc.sql("SELECT phase FROM way_slot WHERE circuit_id = ?")
+            .param(saved.getId())
+            .query(String.class)
+            .single();
     assertThat(loads).as("first load stored with the circuit").isEqualTo(1L);
     assertThat(phase).as("position recorded in way_slot").isEqualTo("L2");
   }
@@ -92,7 +167,8 @@ abstract class ScheduleStoreContract {
   @Test
   void secondCircuitOnAnOccupiedPositionIsRefused() {
     schedule.addCircuit(board.getId(), circuit(3, PhasePosition.L1, "First"));
-    assertThatThrownBy(() -> schedule.addCircuit(board.getId(), circuit(3, PhasePosition.L1, "Second")))
+    assertThatThrownBy(
+            () -> schedule.addCircuit(board.getId(), circuit(3, PhasePosition.L1, "Second")))
         .isInstanceOf(RuleViolation.class)
         .extracting(e -> ((RuleViolation) e).messageCode())
         .isEqualTo("circuit.position.occupied");
@@ -102,7 +178,8 @@ abstract class ScheduleStoreContract {
   @Test
   void threePoleCircuitBlocksEachLineOfItsWay() {
     schedule.addCircuit(board.getId(), circuit(4, PhasePosition.THREE_POLE, "Oven"));
-    assertThatThrownBy(() -> schedule.addCircuit(board.getId(), circuit(4, PhasePosition.L3, "Lights")))
+    assertThatThrownBy(
+            () -> schedule.addCircuit(board.getId(), circuit(4, PhasePosition.L3, "Lights")))
         .isInstanceOf(RuleViolation.class);
   }
 
@@ -111,7 +188,8 @@ abstract class ScheduleStoreContract {
     Circuit first = schedule.addCircuit(board.getId(), circuit(5, PhasePosition.L1, "First"));
     assertThatThrownBy(
             () ->
-                jdbc.sql("INSERT INTO way_slot (board_id, way_number, phase, circuit_id) VALUES (?, 5, 'L1', ?)")
+                jdbc.sql(
+                        "INSERT INTO way_slot (board_id, way_number, phase, circuit_id) VALUES (?, 5, 'L1', ?)")
                     .params(board.getId(), first.getId())
                     .update())
         .isInstanceOf(DataIntegrityViolationException.class);
@@ -120,28 +198,78 @@ abstract class ScheduleStoreContract {
   @Test
   void mccbSettingsAreStoredReadBackAndRefusedAtZeroByTheDatabase() {
     CircuitForm mccb =
-        new CircuitForm(1, PhasePosition.THREE_POLE, "Feeder", WayStatus.IN_USE, false, DeviceKind.MCCB, null,
-            125.0, 3, 25.0, null, null, 35.0, 16.0, null, null, 20.0, null, null, null, null, null, null, null, null,
-            null, null, null, null, false, 100.0, 625.0);
+        new CircuitForm(
+            1,
+            PhasePosition.THREE_POLE,
+            "Feeder",
+            WayStatus.IN_USE,
+            false,
+            DeviceKind.MCCB,
+            null,
+            125.0,
+            3,
+            25.0,
+            null,
+            null,
+            35.0,
+            16.0,
+            null,
+            null,
+            20.0,
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            false,
+            100.0,
+            625.0);
     Circuit saved = schedule.addCircuit(board.getId(), mccb);
-    assertThat(jdbc.sql("SELECT device_overload_setting_amps FROM circuit WHERE id = ?").param(saved.getId())
-            .query(Double.class).single()).isEqualTo(100.0);
-    assertThat(jdbc.sql("SELECT device_instantaneous_setting_amps FROM circuit WHERE id = ?").param(saved.getId())
-            .query(Double.class).single()).isEqualTo(625.0);
-    assertThat(schedule.circuit(saved.getId()).getDevice().label()).isEqualTo("MCCB 125 A (Ir 100 A, Ii 625 A)");
+    assertThat(
+            jdbc.sql("SELECT device_overload_setting_amps FROM circuit WHERE id = ?")
+                .param(saved.getId())
+                .query(Double.class)
+                .single())
+        .isEqualTo(100.0);
+    assertThat(
+            jdbc.sql("SELECT device_instantaneous_setting_amps FROM circuit WHERE id = ?")
+                .param(saved.getId())
+                .query(Double.class)
+                .single())
+        .isEqualTo(625.0);
+    assertThat(schedule.circuit(saved.getId()).getDevice().label())
+        .isEqualTo("MCCB 125 A (Ir 100 A, Ii 625 A)");
 
-    Board fed = boards.update(board.getId(), BoardForm.of(boards.get(board.getId())).withIncomerMccbSettings(63.0, 315.0));
-    assertThat(jdbc.sql("SELECT incomer_instantaneous_setting_amps FROM board WHERE id = ?").param(fed.getId())
-            .query(Double.class).single()).isEqualTo(315.0);
+    Board fed =
+        boards.update(
+            board.getId(),
+            BoardForm.of(boards.get(board.getId())).withIncomerMccbSettings(63.0, 315.0));
+    assertThat(
+            jdbc.sql("SELECT incomer_instantaneous_setting_amps FROM board WHERE id = ?")
+                .param(fed.getId())
+                .query(Double.class)
+                .single())
+        .isEqualTo(315.0);
 
     assertThatThrownBy(
-            () -> jdbc.sql("UPDATE circuit SET device_overload_setting_amps = 0 WHERE id = ?").param(saved.getId())
-                .update())
+            () ->
+                jdbc.sql("UPDATE circuit SET device_overload_setting_amps = 0 WHERE id = ?")
+                    .param(saved.getId())
+                    .update())
         .as("Ir 0 A")
         .isInstanceOf(DataIntegrityViolationException.class);
     assertThatThrownBy(
-            () -> jdbc.sql("UPDATE board SET incomer_instantaneous_setting_amps = -5 WHERE id = ?").param(board.getId())
-                .update())
+            () ->
+                jdbc.sql("UPDATE board SET incomer_instantaneous_setting_amps = -5 WHERE id = ?")
+                    .param(board.getId())
+                    .update())
         .as("Ii -5 A")
         .isInstanceOf(DataIntegrityViolationException.class);
   }
@@ -174,7 +302,10 @@ abstract class ScheduleStoreContract {
     Circuit circuit = schedule.addCircuit(board.getId(), circuit(2, PhasePosition.L1, "Going"));
     boards.delete(board.getId());
     Long loads =
-        jdbc.sql("SELECT COUNT(*) FROM load_item WHERE circuit_id = ?").param(circuit.getId()).query(Long.class).single();
+        jdbc.sql("SELECT COUNT(*) FROM load_item WHERE circuit_id = ?")
+            .param(circuit.getId())
+            .query(Long.class)
+            .single();
     assertThat(circuitCount()).isZero();
     assertThat(loads).isZero();
   }
@@ -204,10 +335,36 @@ abstract class ScheduleStoreContract {
     Board child = boards.create(site.getId(), board("CHILD", board.getId()));
     BoardForm loop = board("DB-T", child.getId());
     BoardForm withVersion =
-        new BoardForm(loop.reference(), loop.location(), loop.phases(), loop.wayCount(), loop.busbarRatingAmps(),
-            loop.incomerKind(), loop.incomerCurve(), loop.incomerRatingAmps(), loop.incomerPoles(),
-            loop.incomerBreakingCapacityKiloAmps(), null, null, child.getId(), null, null, null, null, null, null,
-            null, null, null, null, 10.0, 1.0, null, null, null, null);
+        new BoardForm(
+            loop.reference(),
+            loop.location(),
+            loop.phases(),
+            loop.wayCount(),
+            loop.busbarRatingAmps(),
+            loop.incomerKind(),
+            loop.incomerCurve(),
+            loop.incomerRatingAmps(),
+            loop.incomerPoles(),
+            loop.incomerBreakingCapacityKiloAmps(),
+            null,
+            null,
+            child.getId(),
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            10.0,
+            1.0,
+            null,
+            null,
+            null,
+            null);
     assertThatThrownBy(() -> boards.update(board.getId(), withVersion))
         .isInstanceOf(RuleViolation.class)
         .extracting(e -> ((RuleViolation) e).messageCode())
@@ -215,13 +372,25 @@ abstract class ScheduleStoreContract {
   }
 
   private long circuitCount() {
-    return jdbc.sql("SELECT COUNT(*) FROM circuit WHERE board_id = ?").param(board.getId()).query(Long.class).single();
+    return jdbc.sql("SELECT COUNT(*) FROM circuit WHERE board_id = ?")
+        .param(board.getId())
+        .query(Long.class)
+        .single();
   }
 
   private static SiteForm withNotes(SiteForm form, String notes) {
-    return new SiteForm(form.name(), form.address(), form.earthingSystem(), form.nominalVoltageVolts(),
-        form.phases(), form.frequencyHertz(), form.externalLoopImpedanceOhms(),
-        form.prospectiveFaultCurrentKiloAmps(), form.supplyFuseRatingAmps(), form.defaultDiversityMethod(), notes,
+    return new SiteForm(
+        form.name(),
+        form.address(),
+        form.earthingSystem(),
+        form.nominalVoltageVolts(),
+        form.phases(),
+        form.frequencyHertz(),
+        form.externalLoopImpedanceOhms(),
+        form.prospectiveFaultCurrentKiloAmps(),
+        form.supplyFuseRatingAmps(),
+        form.defaultDiversityMethod(),
+        notes,
         form.version());
   }
 }

@@ -23,7 +23,9 @@ import org.springframework.test.annotation.DirtiesContext;
 import org.springframework.test.context.ActiveProfiles;
 import org.springframework.test.web.servlet.MockMvc;
 
-/** The circuit page and the site findings page on the demo site, as a viewer and an editor see them. */
+/**
+ * The circuit page and the site findings page on the demo site, as a viewer and an editor see them.
+ */
 @SpringBootTest
 @AutoConfigureMockMvc
 @ActiveProfiles({"test", "demo"})
@@ -50,33 +52,63 @@ class CheckPagesIntegrationTests {
   @Order(2)
   void editorFitsTheProposedDeviceAndTheSurgeFindingIsGoneAndLogged() throws Exception {
     long mixer = circuit("Spiral dough mixer");
-    long version = jdbc.sql("SELECT version FROM circuit WHERE id = ?").param(mixer).query(Long.class).single();
-    mvc.perform(post("/circuits/{id}/apply-proposal", mixer).param("version", String.valueOf(version)).with(editor()).with(csrf()))
+    long version =
+        jdbc.sql("SELECT version FROM circuit WHERE id = ?")
+            .param(mixer)
+            .query(Long.class)
+            .single();
+    mvc.perform(
+            post("/circuits/{id}/apply-proposal", mixer)
+                .param("version", String.valueOf(version))
+                .with(editor())
+                .with(csrf()))
         .andExpect(status().is3xxRedirection());
-    String curve = jdbc.sql("SELECT device_curve FROM circuit WHERE id = ?").param(mixer).query(String.class).single();
+    String curve =
+        jdbc.sql("SELECT device_curve FROM circuit WHERE id = ?")
+            .param(mixer)
+            .query(String.class)
+            .single();
     assertThat(curve).as("the proposal replaces the type B breaker").isNotEqualTo("B");
     mvc.perform(get("/circuits/{id}", mixer).with(viewer()))
         .andExpect(content().string(not(containsString("nuisance trips likely"))));
     Long logged =
-        jdbc.sql("SELECT COUNT(*) FROM change_log WHERE circuit_id = ? AND kind = 'CIRCUIT_EDITED'").param(mixer)
-            .query(Long.class).single();
+        jdbc.sql("SELECT COUNT(*) FROM change_log WHERE circuit_id = ? AND kind = 'CIRCUIT_EDITED'")
+            .param(mixer)
+            .query(Long.class)
+            .single();
     assertThat(logged).isEqualTo(1L);
   }
 
   @Test
   void viewerCannotFitADevice() throws Exception {
     long mixer = circuit("Bread slicer");
-    mvc.perform(post("/circuits/{id}/apply-proposal", mixer).param("version", "0").with(viewer()).with(csrf()))
+    mvc.perform(
+            post("/circuits/{id}/apply-proposal", mixer)
+                .param("version", "0")
+                .with(viewer())
+                .with(csrf()))
         .andExpect(status().isForbidden());
   }
 
   @Test
   void staleProposalIsRefusedWithAConflictAndNothingChanges() throws Exception {
     long slicer = circuit("Bread slicer");
-    String before = jdbc.sql("SELECT device_curve || device_rating_amps FROM circuit WHERE id = ?").param(slicer).query(String.class).single();
-    mvc.perform(post("/circuits/{id}/apply-proposal", slicer).param("version", "999").with(editor()).with(csrf()))
+    String before =
+        jdbc.sql("SELECT device_curve || device_rating_amps FROM circuit WHERE id = ?")
+            .param(slicer)
+            .query(String.class)
+            .single();
+    mvc.perform(
+            post("/circuits/{id}/apply-proposal", slicer)
+                .param("version", "999")
+                .with(editor())
+                .with(csrf()))
         .andExpect(status().isConflict());
-    String after = jdbc.sql("SELECT device_curve || device_rating_amps FROM circuit WHERE id = ?").param(slicer).query(String.class).single();
+    String after =
+        jdbc.sql("SELECT device_curve || device_rating_amps FROM circuit WHERE id = ?")
+            .param(slicer)
+            .query(String.class)
+            .single();
     assertThat(after).isEqualTo(before);
   }
 
@@ -86,12 +118,21 @@ class CheckPagesIntegrationTests {
     String page =
         mvc.perform(get("/sites/{id}/findings", site).param("severity", "DANGER").with(viewer()))
             .andExpect(status().isOk())
-            .andReturn().getResponse().getContentAsString();
-    assertThat(page).contains("v-DANGER").doesNotContain("class=\"badge v-WARNING\"").doesNotContain("class=\"badge v-ADVICE\"");
+            .andReturn()
+            .getResponse()
+            .getContentAsString();
+    assertThat(page)
+        .contains("v-DANGER")
+        .doesNotContain("class=\"badge v-WARNING\"")
+        .doesNotContain("class=\"badge v-ADVICE\"");
     assertThat(page).contains("cable not protected");
   }
 
   private long circuit(String description) {
-    return jdbc.sql("SELECT id FROM circuit WHERE description = ?").param(description).query(Long.class).list().get(0);
+    return jdbc.sql("SELECT id FROM circuit WHERE description = ?")
+        .param(description)
+        .query(Long.class)
+        .list()
+        .get(0);
   }
 }

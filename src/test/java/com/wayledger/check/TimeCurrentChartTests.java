@@ -16,10 +16,13 @@ class TimeCurrentChartTests {
   @Test
   void markersLieLeftToRightInOrderOfCurrentOnTheLogAxis() {
     TimeCurrentChart chart = TimeCurrentChart.of(b16, 16.0, 10.0, 73.0, 0.15, 412.0);
-    assertThat(chart.markers()).extracting(TimeCurrentChart.Marker::kind).containsExactly("design", "surge", "fault");
+    assertThat(chart.markers())
+        .extracting(TimeCurrentChart.Marker::kind)
+        .containsExactly("design", "surge", "fault");
     assertThat(chart.markers().get(0).x()).isLessThan(chart.markers().get(1).x());
     assertThat(chart.markers().get(1).x()).isLessThan(chart.markers().get(2).x());
-    // log scale: equal ratios of current give equal distances (10 → 100 A is one decade, as is 100 → 1000 A)
+    // log scale: equal ratios of current give equal distances (10 → 100 A is one decade, as is 100
+    // → 1000 A)
     double decade = chart.currentTicks().get(1).position() - chart.currentTicks().get(0).position();
     double tenToHundred =
         TimeCurrentChart.of(b16, 16.0, 10.0, 100.0, null, null).markers().get(1).x()

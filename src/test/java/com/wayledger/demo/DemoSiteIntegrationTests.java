@@ -5,8 +5,8 @@ import static org.assertj.core.api.Assertions.assertThat;
 import com.wayledger.board.AnalysisService;
 import com.wayledger.board.Board;
 import com.wayledger.board.BoardService;
-import com.wayledger.engine.CircuitSpec;
 import com.wayledger.board.SiteAnalysis;
+import com.wayledger.engine.CircuitSpec;
 import com.wayledger.engine.demand.BoardDemand;
 import com.wayledger.engine.protection.CircuitLoading;
 import com.wayledger.engine.protection.DeviceProposal;
@@ -25,8 +25,9 @@ import org.springframework.boot.test.context.SpringBootTest;
 import org.springframework.test.context.ActiveProfiles;
 
 /**
- * The demo site is invented so that later features have something to find: these tests hold it to that
- * promise (each deliberately wrong circuit shows the right finding) and keep its figures plausible.
+ * The demo site is invented so that later features have something to find: these tests hold it to
+ * that promise (each deliberately wrong circuit shows the right finding) and keep its figures
+ * plausible.
  */
 @SpringBootTest
 @ActiveProfiles({"test", "demo"})
@@ -41,15 +42,22 @@ class DemoSiteIntegrationTests {
 
   @BeforeEach
   void analyseDemoSite() {
-    site = sites.all().stream().filter(s -> s.getName().equals(DemoSite.SITE_NAME)).findFirst().orElseThrow();
+    site =
+        sites.all().stream()
+            .filter(s -> s.getName().equals(DemoSite.SITE_NAME))
+            .findFirst()
+            .orElseThrow();
     results = analysis.ofSite(site.getId());
   }
 
   @Test
   void demoSiteHasAboutSixtyCircuitsOnFiveBoards() {
     List<Board> onSite = boards.onSite(site.getId());
-    int circuits = results.spec().boards().stream().mapToInt(board -> board.circuits().size()).sum();
-    assertThat(onSite).extracting(Board::getReference).containsExactlyInAnyOrder("MDB", "KB1", "FLAT-1", "FLAT-2", "LL");
+    int circuits =
+        results.spec().boards().stream().mapToInt(board -> board.circuits().size()).sum();
+    assertThat(onSite)
+        .extracting(Board::getReference)
+        .containsExactlyInAnyOrder("MDB", "KB1", "FLAT-1", "FLAT-2", "LL");
     assertThat(circuits).as("circuits on the demo site").isBetween(50, 70);
   }
 
@@ -66,8 +74,11 @@ class DemoSiteIntegrationTests {
   @Test
   void lopsidedBakeryBoardIsFlaggedAsUnbalanced() {
     BoardDemand bakery = board("KB1");
-    assertThat(bakery.isUnbalancedBeyondLimit()).as("KB1 unbalance %s %%", bakery.unbalancePercent()).isTrue();
-    assertThat(findings("KB1", null)).anyMatch(f -> f.check() == CheckKind.PHASE_UNBALANCE && isProblem(f));
+    assertThat(bakery.isUnbalancedBeyondLimit())
+        .as("KB1 unbalance %s %%", bakery.unbalancePercent())
+        .isTrue();
+    assertThat(findings("KB1", null))
+        .anyMatch(f -> f.check() == CheckKind.PHASE_UNBALANCE && isProblem(f));
   }
 
   @Test
@@ -88,13 +99,25 @@ class DemoSiteIntegrationTests {
   @Test
   void flatSocketRingsAreJudgedAsRingsAndPass() {
     for (String flat : List.of("FLAT-1", "FLAT-2")) {
-      assertThat(circuit(flat, "Sockets ring, living and bedrooms").ringFinal()).as(flat + " ring flagged").isTrue();
+      assertThat(circuit(flat, "Sockets ring, living and bedrooms").ringFinal())
+          .as(flat + " ring flagged")
+          .isTrue();
       List<Finding> ring = findings(flat, "Sockets ring, living and bedrooms");
       // BS 7671 433.1.204 (from memory): 2.5/1.5 mm², In 32 A ≤ 32 A, Iz 27 A ≥ 20 A
-      assertThat(ring).as(flat).anyMatch(f -> f.check() == CheckKind.CABLE_PROTECTION && f.verdict() == Verdict.PASS
-          && f.summary().contains("ring final circuit"));
-      assertThat(ring).as(flat + " loop impedance and drop").anyMatch(f -> f.check() == CheckKind.LOOP_IMPEDANCE
-          && f.verdict() == Verdict.PASS && f.summary().contains("ring final circuit"));
+      assertThat(ring)
+          .as(flat)
+          .anyMatch(
+              f ->
+                  f.check() == CheckKind.CABLE_PROTECTION
+                      && f.verdict() == Verdict.PASS
+                      && f.summary().contains("ring final circuit"));
+      assertThat(ring)
+          .as(flat + " loop impedance and drop")
+          .anyMatch(
+              f ->
+                  f.check() == CheckKind.LOOP_IMPEDANCE
+                      && f.verdict() == Verdict.PASS
+                      && f.summary().contains("ring final circuit"));
       assertThat(ring).as(flat + ": no problem on the ring: %s", ring).noneMatch(this::isProblem);
     }
   }
@@ -114,10 +137,15 @@ class DemoSiteIntegrationTests {
     double designCurrent = results.circuitDemands(bakeryId).get(mixer.id()).designCurrentAmps();
     DeviceProposal proposal =
         DeviceProposer.propose(
-            results.spec(), mixer.id(), new CircuitLoading(mixer.id(), designCurrent), ProtectionSettings.DEFAULTS);
+            results.spec(),
+            mixer.id(),
+            new CircuitLoading(mixer.id(), designCurrent),
+            ProtectionSettings.DEFAULTS);
     assertThat(proposal.found()).as("a device is proposed: %s", proposal.reasons()).isTrue();
     assertThat(proposal.checks()).allMatch(check -> check.verdict() == Verdict.PASS);
-    assertThat(proposal.device().curve()).as("a curve whose band sits above the surge").isNotEqualTo(mixer.device().curve());
+    assertThat(proposal.device().curve())
+        .as("a curve whose band sits above the surge")
+        .isNotEqualTo(mixer.device().curve());
   }
 
   private boolean isProblem(Finding finding) {
@@ -125,11 +153,17 @@ class DemoSiteIntegrationTests {
   }
 
   private double subBoardWatts(BoardDemand board) {
-    return board.circuits().stream().filter(c -> c.feedsBoardId() != null).mapToDouble(c -> c.demandWatts()).sum();
+    return board.circuits().stream()
+        .filter(c -> c.feedsBoardId() != null)
+        .mapToDouble(c -> c.demandWatts())
+        .sum();
   }
 
   private BoardDemand board(String reference) {
-    return results.demand().boards().stream().filter(b -> b.reference().equals(reference)).findFirst().orElseThrow();
+    return results.demand().boards().stream()
+        .filter(b -> b.reference().equals(reference))
+        .findFirst()
+        .orElseThrow();
   }
 
   private CircuitSpec circuit(String boardReference, String description) {
@@ -150,7 +184,10 @@ class DemoSiteIntegrationTests {
     }
     long circuitId =
         results.demand().board(boardId).circuits().stream()
-            .filter(c -> c.description().equals(circuitDescription)).findFirst().orElseThrow().circuitId();
+            .filter(c -> c.description().equals(circuitDescription))
+            .findFirst()
+            .orElseThrow()
+            .circuitId();
     return results.circuitFindings(boardId).get(circuitId).findings();
   }
 }

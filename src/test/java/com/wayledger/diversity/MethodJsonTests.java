@@ -31,9 +31,13 @@ class MethodJsonTests {
     List<DiversityRule.Tier> tiers = RuleParameters.tiers("3000:1; 120000:0.35; :0.25");
     assertThat(tiers)
         .containsExactly(
-            new DiversityRule.Tier(3000.0, 1.0), new DiversityRule.Tier(120000.0, 0.35), new DiversityRule.Tier(null, 0.25));
-    assertThat(RuleParameters.tiersText(new DiversityRule.Tiered(tiers))).isEqualTo("3000:1; 120000:0.35; :0.25");
-    assertThatThrownBy(() -> RuleParameters.tiers("3000 at 1")).isInstanceOf(IllegalArgumentException.class);
+            new DiversityRule.Tier(3000.0, 1.0),
+            new DiversityRule.Tier(120000.0, 0.35),
+            new DiversityRule.Tier(null, 0.25));
+    assertThat(RuleParameters.tiersText(new DiversityRule.Tiered(tiers)))
+        .isEqualTo("3000:1; 120000:0.35; :0.25");
+    assertThatThrownBy(() -> RuleParameters.tiers("3000 at 1"))
+        .isInstanceOf(IllegalArgumentException.class);
   }
 
   @Test
@@ -43,7 +47,8 @@ class MethodJsonTests {
     DiversityMethod edited = MethodLibrary.edit(shop, Map.of("g0.factor", "0.5"), problems);
     assertThat(problems).isEmpty();
     assertThat(edited.groups().get(0).rule()).isEqualTo(new DiversityRule.Flat(0.5));
-    assertThat(edited.groups().subList(1, edited.groups().size())).isEqualTo(shop.groups().subList(1, shop.groups().size()));
+    assertThat(edited.groups().subList(1, edited.groups().size()))
+        .isEqualTo(shop.groups().subList(1, shop.groups().size()));
   }
 
   @Test
@@ -58,8 +63,10 @@ class MethodJsonTests {
     assertThat(tiered).as("the NEC method has a tiered lighting rule").isNotNegative();
     Map<String, String> problems = new HashMap<>();
     DiversityMethod edited =
-        MethodLibrary.edit(nec, Map.of("g" + tiered + ".tiers", "120000:0.35; 3000:1; :0.25"), problems);
-    assertThat(edited.groups().get(tiered).problems()).anyMatch(problem -> problem.contains("ascend"));
+        MethodLibrary.edit(
+            nec, Map.of("g" + tiered + ".tiers", "120000:0.35; 3000:1; :0.25"), problems);
+    assertThat(edited.groups().get(tiered).problems())
+        .anyMatch(problem -> problem.contains("ascend"));
     Map<String, String> unreadable = new HashMap<>();
     MethodLibrary.edit(DiversityMethods.ukSmallShop(), Map.of("g0.factor", "lots"), unreadable);
     assertThat(unreadable).containsKey("g0.factor");

@@ -33,6 +33,8 @@ class SupplySpecTests {
     assertThat(DeviceKind.MCB.hasCurve()).isTrue();
     assertThat(DeviceKind.RCBO.hasCurve()).isTrue();
     assertThat(DeviceKind.FUSE.hasCurve()).isFalse();
-    assertThat(DeviceKind.RCD.protectsAgainstOvercurrent()).as("an RCD alone gives no overcurrent protection").isFalse();
+    assertThat(DeviceKind.RCD.protectsAgainstOvercurrent())
+        .as("an RCD alone gives no overcurrent protection")
+        .isFalse();
   }
 }

@@ -40,7 +40,10 @@ import org.springframework.test.context.ActiveProfiles;
 import org.springframework.test.web.servlet.MockMvc;
 import org.springframework.test.web.servlet.request.RequestPostProcessor;
 
-/** The exchange pages on the whole application (H2): export, upload → mapping → preview → import, and who may do what. */
+/**
+ * The exchange pages on the whole application (H2): export, upload → mapping → preview → import,
+ * and who may do what.
+ */
 @SpringBootTest
 @AutoConfigureMockMvc
 @ActiveProfiles("test")
@@ -60,13 +63,55 @@ class ExchangeIntegrationTests {
   Board target;
 
   static BoardForm board(String reference) {
-    return new BoardForm(reference, "Plant room", 3, 12, 100.0, DeviceKind.MCCB, null, 63.0, 3, 10.0, null,
-        null, null, null, null, null, null, null, null, null, null, null, null, 10.0, 1.0, null, null, null, null);
+    return new BoardForm(
+        reference,
+        "Plant room",
+        3,
+        12,
+        100.0,
+        DeviceKind.MCCB,
+        null,
+        63.0,
+        3,
+        10.0,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        10.0,
+        1.0,
+        null,
+        null,
+        null,
+        null);
   }
 
   @BeforeEach
   void boards() {
-    site = sites.create(new SiteForm("Exchange " + UUID.randomUUID(), null, EarthingSystem.TN_C_S, 230.0, 3, 50.0, 0.35, 6.0, 100.0, null, null, null));
+    site =
+        sites.create(
+            new SiteForm(
+                "Exchange " + UUID.randomUUID(),
+                null,
+                EarthingSystem.TN_C_S,
+                230.0,
+                3,
+                50.0,
+                0.35,
+                6.0,
+                100.0,
+                null,
+                null,
+                null));
     source = boards.create(site.getId(), board("DB-A"));
     target = boards.create(site.getId(), board("DB-B"));
     for (BoardEntry fixture : List.of(ExchangeFixtures.shop().get(1))) {
@@ -77,117 +122,226 @@ class ExchangeIntegrationTests {
         }
       }
     }
-    CircuitForm oven = ExchangeFixtures.circuit(3, PhasePosition.THREE_POLE, "-Oven", DeviceKind.MCB, TripCurve.C, 20, null, 4.0, 12.0);
+    CircuitForm oven =
+        ExchangeFixtures.circuit(
+            3, PhasePosition.THREE_POLE, "-Oven", DeviceKind.MCB, TripCurve.C, 20, null, 4.0, 12.0);
     Circuit circuit = schedule.addCircuit(source.getId(), oven);
-    schedule.addLoad(circuit.getId(), ExchangeFixtures.load("Oven", LoadCategory.COOKING, 1, 7500, RatingUnit.W, 1.0));
-    schedule.addLoad(circuit.getId(), ExchangeFixtures.load("@Grill", LoadCategory.COOKING, 1, 2000, RatingUnit.W, 1.0));
+    schedule.addLoad(
+        circuit.getId(),
+        ExchangeFixtures.load("Oven", LoadCategory.COOKING, 1, 7500, RatingUnit.W, 1.0));
+    schedule.addLoad(
+        circuit.getId(),
+        ExchangeFixtures.load("@Grill", LoadCategory.COOKING, 1, 2000, RatingUnit.W, 1.0));
   }
 
   private static List<CircuitEntry> comparable(ExportData data) {
     return data.boards().get(0).circuits().stream()
-        .map(e -> new CircuitEntry(null, withoutVersion(e.circuit()), e.loads())).toList();
+        .map(e -> new CircuitEntry(null, withoutVersion(e.circuit()), e.loads()))
+        .toList();
   }
 
   private static CircuitForm withoutVersion(CircuitForm c) {
-    return new CircuitForm(c.wayNumber(), c.position(), c.description(), c.status(), c.lockedForBalancing(), c.deviceKind(),
-        c.deviceCurve(), c.deviceRatingAmps(), c.devicePoles(), c.deviceBreakingCapacityKiloAmps(), c.deviceResidualMilliAmps(),
-        c.deviceRcdType(), c.cableLineCsa(), c.cableCpcCsa(), c.cableMaterial(), c.cableInsulation(), c.cableLengthMetres(),
-        c.cableInstallationMethod(), c.cableAmbientCelsius(), c.cableGroupedCircuits(), c.cableThermalInsulationMm(),
-        c.measuredLoopImpedanceOhms(), null, null, null, null, null, null, null);
+    return new CircuitForm(
+        c.wayNumber(),
+        c.position(),
+        c.description(),
+        c.status(),
+        c.lockedForBalancing(),
+        c.deviceKind(),
+        c.deviceCurve(),
+        c.deviceRatingAmps(),
+        c.devicePoles(),
+        c.deviceBreakingCapacityKiloAmps(),
+        c.deviceResidualMilliAmps(),
+        c.deviceRcdType(),
+        c.cableLineCsa(),
+        c.cableCpcCsa(),
+        c.cableMaterial(),
+        c.cableInsulation(),
+        c.cableLengthMetres(),
+        c.cableInstallationMethod(),
+        c.cableAmbientCelsius(),
+        c.cableGroupedCircuits(),
+        c.cableThermalInsulationMm(),
+        c.measuredLoopImpedanceOhms(),
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null);
   }
 
   private String upload(byte[] bytes, String name, String expectedStep) throws Exception {
-    String location = mvc.perform(multipart("/boards/{id}/import", target.getId())
-            .file(new MockMultipartFile("file", name, "application/octet-stream", bytes)).with(EDITOR).with(csrf()))
-        .andExpect(status().is3xxRedirection())
-        .andReturn().getResponse().getRedirectedUrl();
+    String location =
+        mvc.perform(
+                multipart("/boards/{id}/import", target.getId())
+                    .file(new MockMultipartFile("file", name, "application/octet-stream", bytes))
+                    .with(EDITOR)
+                    .with(csrf()))
+            .andExpect(status().is3xxRedirection())
+            .andReturn()
+            .getResponse()
+            .getRedirectedUrl();
     assertThat(location).as("next step after upload").endsWith("/" + expectedStep);
     return location;
   }
 
   @Test
   void exportedWorkbookImportedIntoAnEmptyBoardGivesTheSameSchedule() throws Exception {
-    byte[] xlsx = mvc.perform(get("/boards/{id}/export.xlsx", source.getId()).with(VIEWER))
-        .andExpect(status().isOk())
-        .andExpect(header().string("Content-Type", ExportController.XLSX))
-        .andExpect(header().string("Content-Disposition", org.hamcrest.Matchers.containsString(".xlsx")))
-        .andReturn().getResponse().getContentAsByteArray();
+    byte[] xlsx =
+        mvc.perform(get("/boards/{id}/export.xlsx", source.getId()).with(VIEWER))
+            .andExpect(status().isOk())
+            .andExpect(header().string("Content-Type", ExportController.XLSX))
+            .andExpect(
+                header()
+                    .string("Content-Disposition", org.hamcrest.Matchers.containsString(".xlsx")))
+            .andReturn()
+            .getResponse()
+            .getContentAsByteArray();
     String preview = upload(xlsx, "db-a.xlsx", "preview");
     mvc.perform(get(preview).with(EDITOR))
         .andExpect(status().isOk())
         .andExpect(content().string(org.hamcrest.Matchers.containsString("Wayledger export")));
     String token = preview.split("/")[4];
-    mvc.perform(post("/boards/{id}/import/{t}", target.getId(), token).param("mode", "all").with(EDITOR).with(csrf()))
+    mvc.perform(
+            post("/boards/{id}/import/{t}", target.getId(), token)
+                .param("mode", "all")
+                .with(EDITOR)
+                .with(csrf()))
         .andExpect(status().is3xxRedirection())
         .andExpect(header().string("Location", "/boards/" + target.getId()));
-    assertThat(comparable(reader.board(target.getId()))).isEqualTo(comparable(reader.board(source.getId())));
+    assertThat(comparable(reader.board(target.getId())))
+        .isEqualTo(comparable(reader.board(source.getId())));
   }
 
   @Test
   void exportedCsvImportedIntoAnEmptyBoardGivesTheSameSchedule() throws Exception {
-    byte[] csv = mvc.perform(get("/boards/{id}/export.csv", source.getId()).with(VIEWER))
-        .andExpect(status().isOk())
-        .andReturn().getResponse().getContentAsByteArray();
-    assertThat(new String(csv, StandardCharsets.UTF_8)).as("formula-like text quoted").contains("'-Oven").contains("'@Grill");
+    byte[] csv =
+        mvc.perform(get("/boards/{id}/export.csv", source.getId()).with(VIEWER))
+            .andExpect(status().isOk())
+            .andReturn()
+            .getResponse()
+            .getContentAsByteArray();
+    assertThat(new String(csv, StandardCharsets.UTF_8))
+        .as("formula-like text quoted")
+        .contains("'-Oven")
+        .contains("'@Grill");
     String preview = upload(csv, "db-a.csv", "preview");
     String token = preview.split("/")[4];
-    mvc.perform(post("/boards/{id}/import/{t}", target.getId(), token).param("mode", "all").with(EDITOR).with(csrf()))
+    mvc.perform(
+            post("/boards/{id}/import/{t}", target.getId(), token)
+                .param("mode", "all")
+                .with(EDITOR)
+                .with(csrf()))
         .andExpect(status().is3xxRedirection());
-    assertThat(comparable(reader.board(target.getId()))).isEqualTo(comparable(reader.board(source.getId())));
+    assertThat(comparable(reader.board(target.getId())))
+        .isEqualTo(comparable(reader.board(source.getId())));
   }
 
   @Test
-  void foreignSheetGoesThroughMappingAndPreviewAndNothingIsStoredWhileRowsAreInvalid() throws Exception {
-    String csv = "Cct,Phase,Description,Protection,Load kW\n1,L1,Lights,B6,0.5\n2,L2,Sockets,X99,2\n3,L3,Heater,C16,3\n";
+  void foreignSheetGoesThroughMappingAndPreviewAndNothingIsStoredWhileRowsAreInvalid()
+      throws Exception {
+    String csv =
+        "Cct,Phase,Description,Protection,Load kW\n1,L1,Lights,B6,0.5\n2,L2,Sockets,X99,2\n3,L3,Heater,C16,3\n";
     String mapping = upload(csv.getBytes(StandardCharsets.UTF_8), "foreign.csv", "mapping");
     mvc.perform(get(mapping).with(EDITOR))
         .andExpect(status().isOk())
         .andExpect(content().string(org.hamcrest.Matchers.containsString("name=\"column3\"")));
     String token = mapping.split("/")[4];
-    mvc.perform(post(mapping).with(EDITOR).with(csrf()).param("sheet", "0")
-            .param("column0", "WAY").param("column1", "LINE").param("column2", "CIRCUIT")
-            .param("column3", "DEVICE_SUMMARY").param("column4", "LOAD_KILOWATTS"))
+    mvc.perform(
+            post(mapping)
+                .with(EDITOR)
+                .with(csrf())
+                .param("sheet", "0")
+                .param("column0", "WAY")
+                .param("column1", "LINE")
+                .param("column2", "CIRCUIT")
+                .param("column3", "DEVICE_SUMMARY")
+                .param("column4", "LOAD_KILOWATTS"))
         .andExpect(status().is3xxRedirection());
     mvc.perform(get("/boards/{id}/import/{t}/preview", target.getId(), token).with(EDITOR))
         .andExpect(status().isOk())
-        .andExpect(content().string(org.hamcrest.Matchers.containsString("does not read as a device")));
-    mvc.perform(post("/boards/{id}/import/{t}", target.getId(), token).param("mode", "all").with(EDITOR).with(csrf()))
+        .andExpect(
+            content().string(org.hamcrest.Matchers.containsString("does not read as a device")));
+    mvc.perform(
+            post("/boards/{id}/import/{t}", target.getId(), token)
+                .param("mode", "all")
+                .with(EDITOR)
+                .with(csrf()))
         .andExpect(status().isUnprocessableContent());
-    assertThat(reader.board(target.getId()).boards().get(0).circuits()).as("nothing stored").isEmpty();
-    mvc.perform(post("/boards/{id}/import/{t}", target.getId(), token).param("mode", "valid").with(EDITOR).with(csrf()))
+    assertThat(reader.board(target.getId()).boards().get(0).circuits())
+        .as("nothing stored")
+        .isEmpty();
+    mvc.perform(
+            post("/boards/{id}/import/{t}", target.getId(), token)
+                .param("mode", "valid")
+                .with(EDITOR)
+                .with(csrf()))
         .andExpect(status().is3xxRedirection());
-    assertThat(reader.board(target.getId()).boards().get(0).circuits()).extracting(e -> e.circuit().description())
+    assertThat(reader.board(target.getId()).boards().get(0).circuits())
+        .extracting(e -> e.circuit().description())
         .containsExactly("Lights", "Heater");
   }
 
   @Test
   void notASpreadsheetGetsAMessageAnd422() throws Exception {
-    mvc.perform(multipart("/boards/{id}/import", target.getId())
-            .file(new MockMultipartFile("file", "photo.xlsx", "image/png", new byte[] {(byte) 0x89, 'P', 'N', 'G', 0, 0, 0, 0}))
-            .with(EDITOR).with(csrf()))
+    mvc.perform(
+            multipart("/boards/{id}/import", target.getId())
+                .file(
+                    new MockMultipartFile(
+                        "file",
+                        "photo.xlsx",
+                        "image/png",
+                        new byte[] {(byte) 0x89, 'P', 'N', 'G', 0, 0, 0, 0}))
+                .with(EDITOR)
+                .with(csrf()))
         .andExpect(status().isUnprocessableContent())
-        .andExpect(content().string(org.hamcrest.Matchers.containsString("not a spreadsheet we can read")));
+        .andExpect(
+            content()
+                .string(org.hamcrest.Matchers.containsString("not a spreadsheet we can read")));
   }
 
   @Test
   void viewerMayExportButNotImport() throws Exception {
-    mvc.perform(get("/sites/{id}/export.xlsx", site.getId()).with(VIEWER)).andExpect(status().isOk());
-    mvc.perform(get("/boards/{id}/door-chart", source.getId()).with(VIEWER)).andExpect(status().isOk());
-    mvc.perform(get("/boards/{id}/import", target.getId()).with(VIEWER)).andExpect(status().isForbidden());
-    mvc.perform(get("/boards/{id}/import/{t}/preview", target.getId(), "0123456789abcdef0123456789abcdef").with(VIEWER))
+    mvc.perform(get("/sites/{id}/export.xlsx", site.getId()).with(VIEWER))
+        .andExpect(status().isOk());
+    mvc.perform(get("/boards/{id}/door-chart", source.getId()).with(VIEWER))
+        .andExpect(status().isOk());
+    mvc.perform(get("/boards/{id}/import", target.getId()).with(VIEWER))
         .andExpect(status().isForbidden());
-    mvc.perform(multipart("/boards/{id}/import", target.getId())
-            .file(new MockMultipartFile("file", "a.csv", "text/csv", "Way\n1\n".getBytes(StandardCharsets.UTF_8)))
-            .with(VIEWER).with(csrf()))
+    mvc.perform(
+            get(
+                    "/boards/{id}/import/{t}/preview",
+                    target.getId(),
+                    "0123456789abcdef0123456789abcdef")
+                .with(VIEWER))
+        .andExpect(status().isForbidden());
+    mvc.perform(
+            multipart("/boards/{id}/import", target.getId())
+                .file(
+                    new MockMultipartFile(
+                        "file", "a.csv", "text/csv", "Way\n1\n".getBytes(StandardCharsets.UTF_8)))
+                .with(VIEWER)
+                .with(csrf()))
         .andExpect(status().isForbidden());
     mvc.perform(get("/boards/{id}/import", target.getId()).with(EDITOR)).andExpect(status().isOk());
   }
 
   @Test
   void anotherUsersUploadTokenIsNotFound() throws Exception {
-    String preview = upload(mvc.perform(get("/boards/{id}/export.csv", source.getId()).with(VIEWER)).andReturn()
-        .getResponse().getContentAsByteArray(), "a.csv", "preview");
-    mvc.perform(get(preview).with(SecurityMockMvcRequestPostProcessors.user("someone-else").roles("EDITOR")))
+    String preview =
+        upload(
+            mvc.perform(get("/boards/{id}/export.csv", source.getId()).with(VIEWER))
+                .andReturn()
+                .getResponse()
+                .getContentAsByteArray(),
+            "a.csv",
+            "preview");
+    mvc.perform(
+            get(preview)
+                .with(SecurityMockMvcRequestPostProcessors.user("someone-else").roles("EDITOR")))
         .andExpect(status().isNotFound());
   }
 
@@ -198,7 +352,8 @@ class ExchangeIntegrationTests {
         .andExpect(content().string(org.hamcrest.Matchers.containsString("Store heaters")))
         .andExpect(content().string(org.hamcrest.Matchers.containsString("RCBO B20")))
         .andExpect(content().string(org.hamcrest.Matchers.containsString(site.getName())))
-        .andExpect(content().string(org.hamcrest.Matchers.containsString("assist a competent person")))
+        .andExpect(
+            content().string(org.hamcrest.Matchers.containsString("assist a competent person")))
         .andExpect(content().string(org.hamcrest.Matchers.containsString("@page")));
   }
 }

@@ -1,7 +1,6 @@
 package com.wayledger.exchange;
 
 import static org.assertj.core.api.Assertions.assertThat;
-import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 import java.io.ByteArrayInputStream;
 import java.io.ByteArrayOutputStream;
@@ -54,7 +53,8 @@ class HostileFileTests {
   /** Copies a workbook, replacing one part's content. */
   static byte[] withPart(byte[] xlsx, String partName, byte[] content) throws IOException {
     ByteArrayOutputStream out = new ByteArrayOutputStream();
-    try (ZipInputStream in = new ZipInputStream(new ByteArrayInputStream(xlsx)); ZipOutputStream zip = new ZipOutputStream(out)) {
+    try (ZipInputStream in = new ZipInputStream(new ByteArrayInputStream(xlsx));
+        ZipOutputStream zip = new ZipOutputStream(out)) {
       ZipEntry entry;
       while ((entry = in.getNextEntry()) != null) {
         zip.putNextEntry(new ZipEntry(entry.getName()));
@@ -67,10 +67,15 @@ class HostileFileTests {
 
   @Test
   void zipBombIsRefused() throws IOException {
-    // a sheet part of 60 MB of spaces inside a file of well under 1 MB: compression ratio far below POI's 1 %
-    String sheet = "<?xml version=\"1.0\" encoding=\"UTF-8\"?><worksheet xmlns=\"http://schemas.openxmlformats.org/spreadsheetml/2006/main\"><sheetData>"
-        + " ".repeat(60 * 1024 * 1024) + "</sheetData></worksheet>";
-    byte[] bomb = withPart(smallWorkbook(), "xl/worksheets/sheet1.xml", sheet.getBytes(StandardCharsets.UTF_8));
+    // a sheet part of 60 MB of spaces inside a file of well under 1 MB: compression ratio far below
+    // POI's 1 %
+    String sheet =
+        "<?xml version=\"1.0\" encoding=\"UTF-8\"?><worksheet xmlns=\"http://schemas.openxmlformats.org/spreadsheetml/2006/main\"><sheetData>"
+            + " ".repeat(60 * 1024 * 1024)
+            + "</sheetData></worksheet>";
+    byte[] bomb =
+        withPart(
+            smallWorkbook(), "xl/worksheets/sheet1.xml", sheet.getBytes(StandardCharsets.UTF_8));
     assertThat(bomb.length).as("bomb file size").isLessThan(SpreadsheetReader.MAX_BYTES);
     assertThat(refusal(bomb, "bomb.xlsx")).isEqualTo("import.refused.zipBomb");
   }
@@ -79,19 +84,29 @@ class HostileFileTests {
   void externalEntityIsNeverResolved(@TempDir Path temp) throws IOException {
     Path secret = temp.resolve("secret.txt");
     Files.writeString(secret, "TOP-SECRET-CONTENT");
-    String strings = "<?xml version=\"1.0\" encoding=\"UTF-8\"?>"
-        + "<!DOCTYPE sst [<!ENTITY xxe SYSTEM \"" + secret.toUri() + "\">]>"
-        + "<sst xmlns=\"http://schemas.openxmlformats.org/spreadsheetml/2006/main\" count=\"2\" uniqueCount=\"2\">"
-        + "<si><t>Way</t></si><si><t>&xxe;</t></si></sst>";
-    String sheet = "<?xml version=\"1.0\" encoding=\"UTF-8\"?>"
-        + "<!DOCTYPE worksheet [<!ENTITY xxe SYSTEM \"" + secret.toUri() + "\">]>"
-        + "<worksheet xmlns=\"http://schemas.openxmlformats.org/spreadsheetml/2006/main\"><sheetData>"
-        + "<row r=\"1\"><c r=\"A1\" t=\"inlineStr\"><is><t>Circuit</t></is></c></row>"
-        + "<row r=\"2\"><c r=\"A2\" t=\"inlineStr\"><is><t>&xxe;</t></is></c></row></sheetData></worksheet>";
-    byte[] hostile = withPart(smallWorkbook(), "xl/worksheets/sheet1.xml", sheet.getBytes(StandardCharsets.UTF_8));
+    String strings =
+        "<?xml version=\"1.0\" encoding=\"UTF-8\"?>"
+            + "<!DOCTYPE sst [<!ENTITY xxe SYSTEM \""
+            + secret.toUri()
+            + "\">]>"
+            + "<sst xmlns=\"http://schemas.openxmlformats.org/spreadsheetml/2006/main\" count=\"2\" uniqueCount=\"2\">"
+            + "<si><t>Way</t></si><si><t>&xxe;</t></si></sst>";
+    String sheet =
+        "<?xml version=\"1.0\" encoding=\"UTF-8\"?>"
+            + "<!DOCTYPE worksheet [<!ENTITY xxe SYSTEM \""
+            + secret.toUri()
+            + "\">]>"
+            + "<worksheet xmlns=\"http://schemas.openxmlformats.org/spreadsheetml/2006/main\"><sheetData>"
+            + "<row r=\"1\"><c r=\"A1\" t=\"inlineStr\"><is><t>Circuit</t></is></c></row>"
+            + "<row r=\"2\"><c r=\"A2\" t=\"inlineStr\"><is><t>&xxe;</t></is></c></row></sheetData></worksheet>";
+    byte[] hostile =
+        withPart(
+            smallWorkbook(), "xl/worksheets/sheet1.xml", sheet.getBytes(StandardCharsets.UTF_8));
     try {
       SheetTable table = SpreadsheetReader.read(hostile, "xxe.xlsx", -1);
-      assertThat(table.rows().toString()).as("entity not expanded").doesNotContain("TOP-SECRET-CONTENT");
+      assertThat(table.rows().toString())
+          .as("entity not expanded")
+          .doesNotContain("TOP-SECRET-CONTENT");
     } catch (ImportRefused refused) {
       assertThat(refused.messageCode()).isEqualTo("import.refused.damaged");
     }
@@ -105,7 +120,8 @@ class HostileFileTests {
     }
     byte[] bytes = csv.toString().getBytes(StandardCharsets.UTF_8);
     String code = refusal(bytes, "million.csv");
-    assertThat(code).as("refused for size or rows")
+    assertThat(code)
+        .as("refused for size or rows")
         .isIn("import.refused.tooManyRows", "import.refused.tooBig");
     byte[] xlsx;
     try (SXSSFWorkbook workbook = new SXSSFWorkbook(100)) {
@@ -118,7 +134,8 @@ class HostileFileTests {
       workbook.write(out);
       xlsx = out.toByteArray();
     }
-    assertThat(refusal(xlsx, "million.xlsx")).isIn("import.refused.tooManyRows", "import.refused.tooBig");
+    assertThat(refusal(xlsx, "million.xlsx"))
+        .isIn("import.refused.tooManyRows", "import.refused.tooBig");
   }
 
   @Test
@@ -127,7 +144,8 @@ class HostileFileTests {
     for (int i = 0; i <= SpreadsheetReader.MAX_ROWS; i++) {
       csv.append("1,c\n");
     }
-    assertThat(refusal(csv.toString().getBytes(StandardCharsets.UTF_8), "big.csv")).isEqualTo("import.refused.tooManyRows");
+    assertThat(refusal(csv.toString().getBytes(StandardCharsets.UTF_8), "big.csv"))
+        .isEqualTo("import.refused.tooManyRows");
   }
 
   @Test
@@ -139,10 +157,13 @@ class HostileFileTests {
 
   @Test
   void notASpreadsheetIsRefused() {
-    byte[] png = {(byte) 0x89, 'P', 'N', 'G', 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13, 'I', 'H', 'D', 'R'};
+    byte[] png = {
+      (byte) 0x89, 'P', 'N', 'G', 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13, 'I', 'H', 'D', 'R'
+    };
     assertThat(refusal(png, "picture.xlsx")).isEqualTo("import.refused.notSpreadsheet");
     byte[] zip = zipWith("readme.txt", "hello");
-    assertThat(refusal(zip, "archive.xlsx")).isIn("import.refused.notSpreadsheet", "import.refused.damaged");
+    assertThat(refusal(zip, "archive.xlsx"))
+        .isIn("import.refused.notSpreadsheet", "import.refused.damaged");
     assertThat(refusal(new byte[0], "nothing.csv")).isEqualTo("import.refused.emptyFile");
   }
 
@@ -175,7 +196,8 @@ class HostileFileTests {
       ByteArrayOutputStream out = new ByteArrayOutputStream();
       workbook.write(out);
       SheetTable table = SpreadsheetReader.read(out.toByteArray(), "f.xlsx", -1);
-      assertThat(table.rows().get(0).cell(1)).as("no cached value: read as blank, formula text never taken")
+      assertThat(table.rows().get(0).cell(1))
+          .as("no cached value: read as blank, formula text never taken")
           .doesNotContain("\"cmd\"");
     }
   }

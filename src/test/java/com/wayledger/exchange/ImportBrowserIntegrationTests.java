@@ -35,8 +35,13 @@ import org.springframework.boot.test.context.SpringBootTest;
 import org.springframework.boot.test.web.server.LocalServerPort;
 import org.springframework.test.context.ActiveProfiles;
 
-/** A person imports a foreign CSV in headless Chromium: upload, check the column guesses, preview, import. */
-@SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT, properties = "server.address=127.0.0.1")
+/**
+ * A person imports a foreign CSV in headless Chromium: upload, check the column guesses, preview,
+ * import.
+ */
+@SpringBootTest(
+    webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT,
+    properties = "server.address=127.0.0.1")
 @ActiveProfiles("test")
 class ImportBrowserIntegrationTests {
 
@@ -56,17 +61,42 @@ class ImportBrowserIntegrationTests {
 
   @BeforeEach
   void start() {
-    RealParts.require(CHROMIUM.canExecute() && DRIVER.canExecute(), "Chromium and chromedriver are not installed at /usr/bin");
+    RealParts.require(
+        CHROMIUM.canExecute() && DRIVER.canExecute(),
+        "Chromium and chromedriver are not installed at /usr/bin");
     username = "importer" + UUID.randomUUID().toString().substring(0, 8);
     accounts.create(new UserForm(username, "Importer", "import-pass-1234", Role.EDITOR));
-    Site site = sites.create(new SiteForm("Browser import " + UUID.randomUUID(), null, EarthingSystem.TN_S, 230.0, 3, 50.0, 0.3, 6.0, 80.0, null, null, null));
+    Site site =
+        sites.create(
+            new SiteForm(
+                "Browser import " + UUID.randomUUID(),
+                null,
+                EarthingSystem.TN_S,
+                230.0,
+                3,
+                50.0,
+                0.3,
+                6.0,
+                80.0,
+                null,
+                null,
+                null));
     board = boards.create(site.getId(), ExchangeIntegrationTests.board("DB-X"));
     ChromeOptions options = new ChromeOptions();
     options.setBinary(CHROMIUM);
-    options.addArguments("--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run",
-        "--disable-background-networking", "--disable-component-update", "--disable-sync", "--disable-dev-shm-usage",
+    options.addArguments(
+        "--headless",
+        "--no-sandbox",
+        "--disable-gpu",
+        "--disable-quic",
+        "--no-first-run",
+        "--disable-background-networking",
+        "--disable-component-update",
+        "--disable-sync",
+        "--disable-dev-shm-usage",
         "--user-data-dir=" + temp.resolve("profile"));
-    ChromeDriverService service = new ChromeDriverService.Builder().usingDriverExecutable(DRIVER).build();
+    ChromeDriverService service =
+        new ChromeDriverService.Builder().usingDriverExecutable(DRIVER).build();
     browser = new ChromeDriver(service, options);
   }
 
@@ -80,7 +110,10 @@ class ImportBrowserIntegrationTests {
   @Test
   void uploadMapPreviewAndImportAForeignCsv() throws Exception {
     Path file = temp.resolve("foreign.csv");
-    Files.writeString(file, "Cct,Phase,Serving,Breaker,Kilowatts\n1,L1,Corridor lights,B6,0.3\n2,L2,Office sockets,C16,1.8\n", StandardCharsets.UTF_8);
+    Files.writeString(
+        file,
+        "Cct,Phase,Serving,Breaker,Kilowatts\n1,L1,Corridor lights,B6,0.3\n2,L2,Office sockets,C16,1.8\n",
+        StandardCharsets.UTF_8);
     String base = "http://127.0.0.1:" + port;
     WebDriverWait wait = new WebDriverWait(browser, Duration.ofSeconds(20));
     browser.get(base + "/login");
@@ -95,17 +128,22 @@ class ImportBrowserIntegrationTests {
     wait.until(ExpectedConditions.urlContains("/mapping"));
 
     Select kilowatts = new Select(browser.findElement(By.id("column4")));
-    assertThat(kilowatts.getFirstSelectedOption().getAttribute("value")).as("guess for Kilowatts").isEqualTo("LOAD_KILOWATTS");
+    assertThat(kilowatts.getFirstSelectedOption().getAttribute("value"))
+        .as("guess for Kilowatts")
+        .isEqualTo("LOAD_KILOWATTS");
     Select breaker = new Select(browser.findElement(By.id("column3")));
     breaker.selectByValue("DEVICE_SUMMARY"); // the user confirms (or corrects) the guess
     browser.findElement(By.id("mapping-submit")).click();
     wait.until(ExpectedConditions.urlContains("/preview"));
-    assertThat(browser.findElement(By.id("preview-summary")).getText()).contains("2 valid").contains("0 with problems");
+    assertThat(browser.findElement(By.id("preview-summary")).getText())
+        .contains("2 valid")
+        .contains("0 with problems");
 
     browser.findElement(By.id("import-all")).click();
     wait.until(ExpectedConditions.presenceOfElementLocated(By.id("imported")));
     assertThat(browser.findElement(By.id("imported")).getText()).contains("2 circuits");
-    assertThat(reader.board(board.getId()).boards().get(0).circuits()).extracting(e -> e.circuit().description())
+    assertThat(reader.board(board.getId()).boards().get(0).circuits())
+        .extracting(e -> e.circuit().description())
         .containsExactly("Corridor lights", "Office sockets");
   }
 }

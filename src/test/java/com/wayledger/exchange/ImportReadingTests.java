@@ -22,7 +22,10 @@ import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
-/** Our own exports read back into the same circuits and loads, and rows with wrong values get a message per cell. */
+/**
+ * Our own exports read back into the same circuits and loads, and rows with wrong values get a
+ * message per cell.
+ */
 class ImportReadingTests {
 
   private static ValidatorFactory factory;
@@ -53,12 +56,19 @@ class ImportReadingTests {
 
   static ImportPlan plan(byte[] bytes, String name, int phases, int ways) {
     SheetTable table = SpreadsheetReader.read(bytes, name, -1);
-    return new RowReader(validator).read(table, ColumnGuesser.guess(table), new RowReader.BoardContext(phases, ways, Set.of()));
+    return new RowReader(validator)
+        .read(
+            table, ColumnGuesser.guess(table), new RowReader.BoardContext(phases, ways, Set.of()));
   }
 
-  /** What was exported, one board, as the importer would rebuild it (ids and versions are not exchanged). */
+  /**
+   * What was exported, one board, as the importer would rebuild it (ids and versions are not
+   * exchanged).
+   */
   static List<CircuitEntry> expected(BoardEntry board) {
-    return board.circuits().stream().map(e -> new CircuitEntry(null, e.circuit(), e.loads())).toList();
+    return board.circuits().stream()
+        .map(e -> new CircuitEntry(null, e.circuit(), e.loads()))
+        .toList();
   }
 
   static List<CircuitEntry> imported(ImportPlan plan) {
@@ -77,9 +87,16 @@ class ImportReadingTests {
     ImportPlan plan = plan(xlsx(data), "shop.xlsx", 3, 12);
     assertThat(plan.rows()).as("rows").allMatch(ImportPlan.PreviewRow::isValid);
     assertThat(imported(plan)).isEqualTo(expected(data.boards().get(0)));
-    assertThat(imported(plan)).as("the ring survives the round trip")
-        .anyMatch(e -> e.circuit().description().equals("Counter sockets") && Boolean.TRUE.equals(e.circuit().ringFinal()))
-        .anyMatch(e -> e.circuit().description().equals("Cooker") && Boolean.FALSE.equals(e.circuit().ringFinal()));
+    assertThat(imported(plan))
+        .as("the ring survives the round trip")
+        .anyMatch(
+            e ->
+                e.circuit().description().equals("Counter sockets")
+                    && Boolean.TRUE.equals(e.circuit().ringFinal()))
+        .anyMatch(
+            e ->
+                e.circuit().description().equals("Cooker")
+                    && Boolean.FALSE.equals(e.circuit().ringFinal()));
   }
 
   @Test
@@ -89,7 +106,9 @@ class ImportReadingTests {
     String text = new String(bytes, StandardCharsets.UTF_8);
     assertThat(text).as("formula-like circuit text quoted").contains("'=HYPERLINK");
     assertThat(text).as("formula-like load text quoted").contains("'+Water heater");
-    assertThat(text.lines().findFirst().orElseThrow()).as("header row").startsWith("Way,Line,Circuit,State");
+    assertThat(text.lines().findFirst().orElseThrow())
+        .as("header row")
+        .startsWith("Way,Line,Circuit,State");
     ImportPlan plan = plan(bytes, "shop.csv", 3, 12);
     assertThat(plan.isAllValid()).as("all rows valid: %s", plan.rows()).isTrue();
     assertThat(imported(plan)).isEqualTo(expected(data.boards().get(0)));
@@ -97,7 +116,8 @@ class ImportReadingTests {
 
   @Test
   void wrongValuesGetAMessageOnTheirRowAndColumn() throws IOException {
-    String csv = """
+    String csv =
+        """
         Way,Line,Circuit,Device,Curve,In A,Load,Category,Rating,Unit,PF
         1,L1,Lights,MCB,E,10,Lamps,LIGHTING,100,W,0.9
         2,L2,Sockets,MCB,B,sixteen,Sockets,SOCKET_OUTLETS,2000,W,0.95
@@ -108,19 +128,33 @@ class ImportReadingTests {
         5,L1,Good,MCB,B,16,Thing,OTHER,100,W,1
         """;
     ImportPlan plan = plan(csv.getBytes(StandardCharsets.UTF_8), "bad.csv", 3, 12);
-    assertThat(problem(plan, 2)).as("unknown curve").extracting(ImportPlan.Problem::field, ImportPlan.Problem::code)
+    assertThat(problem(plan, 2))
+        .as("unknown curve")
+        .extracting(ImportPlan.Problem::field, ImportPlan.Problem::code)
         .containsExactly(ImportField.CURVE, "import.cell.unknownChoice");
-    assertThat(problem(plan, 3)).as("rating not a number").extracting(ImportPlan.Problem::field, ImportPlan.Problem::code)
+    assertThat(problem(plan, 3))
+        .as("rating not a number")
+        .extracting(ImportPlan.Problem::field, ImportPlan.Problem::code)
         .containsExactly(ImportField.RATING_AMPS, "import.cell.notNumber");
-    assertThat(problem(plan, 4)).as("power factor out of range").extracting(ImportPlan.Problem::field, ImportPlan.Problem::code)
+    assertThat(problem(plan, 4))
+        .as("power factor out of range")
+        .extracting(ImportPlan.Problem::field, ImportPlan.Problem::code)
         .containsExactly(ImportField.POWER_FACTOR, "import.cell.invalid");
-    assertThat(problem(plan, 5)).as("duplicate position").extracting(ImportPlan.Problem::field, ImportPlan.Problem::code)
+    assertThat(problem(plan, 5))
+        .as("duplicate position")
+        .extracting(ImportPlan.Problem::field, ImportPlan.Problem::code)
         .containsExactly(ImportField.LINE, "import.cell.duplicate");
-    assertThat(problem(plan, 6)).as("unknown line").extracting(ImportPlan.Problem::field, ImportPlan.Problem::code)
+    assertThat(problem(plan, 6))
+        .as("unknown line")
+        .extracting(ImportPlan.Problem::field, ImportPlan.Problem::code)
         .containsExactly(ImportField.LINE, "import.cell.unknownLine");
-    assertThat(problem(plan, 7)).as("way beyond the board").extracting(ImportPlan.Problem::field, ImportPlan.Problem::code)
+    assertThat(problem(plan, 7))
+        .as("way beyond the board")
+        .extracting(ImportPlan.Problem::field, ImportPlan.Problem::code)
         .containsExactly(ImportField.WAY, "import.cell.beyondBoard");
-    assertThat(plan.circuits()).as("only the valid circuit would be stored").extracting(c -> c.circuit().description())
+    assertThat(plan.circuits())
+        .as("only the valid circuit would be stored")
+        .extracting(c -> c.circuit().description())
         .containsExactly("Good");
   }
 
@@ -128,9 +162,16 @@ class ImportReadingTests {
   void aPositionAlreadyTakenOnTheBoardIsRefused() {
     String csv = "Way,Line,Circuit,Device,Curve,In A\n2,3P,Oven,MCB,C,32\n";
     SheetTable table = SpreadsheetReader.read(csv.getBytes(StandardCharsets.UTF_8), "t.csv", -1);
-    ImportPlan plan = new RowReader(validator).read(table, ColumnGuesser.guess(table),
-        new RowReader.BoardContext(3, 12, Set.of(RowReader.BoardContext.slot(2, com.wayledger.engine.Phase.L2))));
-    assertThat(problem(plan, 2)).extracting(ImportPlan.Problem::code).isEqualTo("import.cell.taken");
+    ImportPlan plan =
+        new RowReader(validator)
+            .read(
+                table,
+                ColumnGuesser.guess(table),
+                new RowReader.BoardContext(
+                    3, 12, Set.of(RowReader.BoardContext.slot(2, com.wayledger.engine.Phase.L2))));
+    assertThat(problem(plan, 2))
+        .extracting(ImportPlan.Problem::code)
+        .isEqualTo("import.cell.taken");
   }
 
   @Test
@@ -139,7 +180,9 @@ class ImportReadingTests {
     ImportPlan plan = plan(csv.getBytes(StandardCharsets.UTF_8), "t.csv", 1, 6);
     CircuitForm first = plan.rows().get(0).circuit();
     assertThat(first.position()).isEqualTo(PhasePosition.L1);
-    assertThat(problem(plan, 3)).extracting(ImportPlan.Problem::code).isEqualTo("import.cell.singlePhaseBoard");
+    assertThat(problem(plan, 3))
+        .extracting(ImportPlan.Problem::code)
+        .isEqualTo("import.cell.singlePhaseBoard");
   }
 
   @Test
@@ -149,7 +192,8 @@ class ImportReadingTests {
       ByteArrayOutputStream out = new ByteArrayOutputStream();
       workbook.write(out);
       assertThatThrownBy(() -> SpreadsheetReader.read(out.toByteArray(), "empty.xlsx", -1))
-          .isInstanceOf(ImportRefused.class).extracting(e -> ((ImportRefused) e).messageCode())
+          .isInstanceOf(ImportRefused.class)
+          .extracting(e -> ((ImportRefused) e).messageCode())
           .isEqualTo("import.refused.emptySheet");
     }
     try (XSSFWorkbook workbook = new XSSFWorkbook()) {
@@ -160,13 +204,15 @@ class ImportReadingTests {
       ByteArrayOutputStream out = new ByteArrayOutputStream();
       workbook.write(out);
       assertThatThrownBy(() -> SpreadsheetReader.read(out.toByteArray(), "header.xlsx", -1))
-          .isInstanceOf(ImportRefused.class).extracting(e -> ((ImportRefused) e).messageCode())
+          .isInstanceOf(ImportRefused.class)
+          .extracting(e -> ((ImportRefused) e).messageCode())
           .isEqualTo("import.refused.noRows");
     }
   }
 
   private static ImportPlan.Problem problem(ImportPlan plan, int rowNumber) {
-    ImportPlan.PreviewRow row = plan.rows().stream().filter(r -> r.number() == rowNumber).findFirst().orElseThrow();
+    ImportPlan.PreviewRow row =
+        plan.rows().stream().filter(r -> r.number() == rowNumber).findFirst().orElseThrow();
     assertThat(row.problems()).as("problems of row %d", rowNumber).hasSize(1);
     return row.problems().get(0);
   }

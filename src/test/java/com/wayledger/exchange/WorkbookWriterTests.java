@@ -34,9 +34,9 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 
 /**
- * The exported workbook read back with POI: every formula evaluates, and what it evaluates to equals the
- * demand engine's own figure. Tolerance: 1e-6 relative (both sides do the same double arithmetic in a
- * different order; the workbook works in kW, the engine in W).
+ * The exported workbook read back with POI: every formula evaluates, and what it evaluates to
+ * equals the demand engine's own figure. Tolerance: 1e-6 relative (both sides do the same double
+ * arithmetic in a different order; the workbook works in kW, the engine in W).
  */
 class WorkbookWriterTests {
 
@@ -49,7 +49,12 @@ class WorkbookWriterTests {
   }
 
   @ParameterizedTest
-  @ValueSource(strings = {DiversityMethods.NONE, DiversityMethods.UK_SMALL_SHOP, DiversityMethods.UK_HOUSEHOLD})
+  @ValueSource(
+      strings = {
+        DiversityMethods.NONE,
+        DiversityMethods.UK_SMALL_SHOP,
+        DiversityMethods.UK_HOUSEHOLD
+      })
   void everyFormulaEvaluatesAndPhaseTotalsEqualTheEngine(String method) throws IOException {
     ExportData data = ExchangeFixtures.export(ExchangeFixtures.shop(), method);
     try (XSSFWorkbook workbook = written(data, true)) {
@@ -60,7 +65,9 @@ class WorkbookWriterTests {
           for (Cell cell : row) {
             if (cell.getCellType() == CellType.FORMULA) {
               assertThat(evaluator.evaluate(cell).getCellType())
-                  .as("formula %s!%s (%s) gives a number", sheet.getSheetName(), cell.getAddress(), cell.getCellFormula())
+                  .as(
+                      "formula %s!%s (%s) gives a number",
+                      sheet.getSheetName(), cell.getAddress(), cell.getCellFormula())
                   .isEqualTo(CellType.NUMERIC);
               formulas++;
             }
@@ -75,16 +82,25 @@ class WorkbookWriterTests {
         for (Phase phase : Phase.values()) {
           assertThat(totals.value(phase.name(), 6))
               .as("%s demand current on %s (method %s)", board.reference(), phase, method)
-              .isCloseTo(engine.onPhase(phase).currentAmps(), within(RELATIVE * Math.max(1, engine.onPhase(phase).currentAmps())));
+              .isCloseTo(
+                  engine.onPhase(phase).currentAmps(),
+                  within(RELATIVE * Math.max(1, engine.onPhase(phase).currentAmps())));
         }
-        assertThat(totals.value("Board", 4) * 1000).as("%s demand kW", board.reference())
+        assertThat(totals.value("Board", 4) * 1000)
+            .as("%s demand kW", board.reference())
             .isCloseTo(engine.demandWatts(), within(RELATIVE * Math.max(1, engine.demandWatts())));
-        assertThat(totals.value("Board", 5) * 1000).as("%s demand kvar", board.reference())
-            .isCloseTo(engine.demandVars(), within(RELATIVE * Math.max(1, Math.abs(engine.demandVars()))));
-        assertThat(totals.value("Board", 1) * 1000).as("%s connected kW", board.reference())
-            .isCloseTo(engine.connectedWatts(), within(RELATIVE * Math.max(1, engine.connectedWatts())));
-        assertThat(totals.value("Unbalance %", 6)).as("%s unbalance", board.reference())
-            .isCloseTo(engine.unbalancePercent(), within(1e-6 * Math.max(1, engine.unbalancePercent())));
+        assertThat(totals.value("Board", 5) * 1000)
+            .as("%s demand kvar", board.reference())
+            .isCloseTo(
+                engine.demandVars(), within(RELATIVE * Math.max(1, Math.abs(engine.demandVars()))));
+        assertThat(totals.value("Board", 1) * 1000)
+            .as("%s connected kW", board.reference())
+            .isCloseTo(
+                engine.connectedWatts(), within(RELATIVE * Math.max(1, engine.connectedWatts())));
+        assertThat(totals.value("Unbalance %", 6))
+            .as("%s unbalance", board.reference())
+            .isCloseTo(
+                engine.unbalancePercent(), within(1e-6 * Math.max(1, engine.unbalancePercent())));
       }
     }
   }
@@ -105,11 +121,20 @@ class WorkbookWriterTests {
         }
         int way = (int) row.getCell(ScheduleColumn.WAY.ordinal()).getNumericCellValue();
         String line = row.getCell(ScheduleColumn.LINE.ordinal()).getStringCellValue();
-        CircuitDemand circuit = engine.circuits().stream()
-            .filter(c -> c.wayNumber() == way && Codes.line(c.position()).equals(line)).findFirst().orElseThrow();
-        double value = ib.getCellType() == CellType.FORMULA ? evaluator.evaluate(ib).getNumberValue() : ib.getNumericCellValue();
-        assertThat(value).as("Ib connected of way %d %s", way, line)
-            .isCloseTo(circuit.connectedCurrentAmps(), within(RELATIVE * Math.max(1, circuit.connectedCurrentAmps())));
+        CircuitDemand circuit =
+            engine.circuits().stream()
+                .filter(c -> c.wayNumber() == way && Codes.line(c.position()).equals(line))
+                .findFirst()
+                .orElseThrow();
+        double value =
+            ib.getCellType() == CellType.FORMULA
+                ? evaluator.evaluate(ib).getNumberValue()
+                : ib.getNumericCellValue();
+        assertThat(value)
+            .as("Ib connected of way %d %s", way, line)
+            .isCloseTo(
+                circuit.connectedCurrentAmps(),
+                within(RELATIVE * Math.max(1, circuit.connectedCurrentAmps())));
         checked++;
       }
       assertThat(checked).as("circuits checked").isEqualTo(data.boards().get(0).circuits().size());
@@ -124,16 +149,21 @@ class WorkbookWriterTests {
       XSSFSheet sheet = workbook.getSheet("Board MDB");
       double before = Totals.find(sheet, evaluator).value("L2", 4);
       Row counter = rowOf(sheet, "Counter sockets");
-      counter.getCell(ScheduleColumn.RATING.ordinal()).setCellValue(2800); // 1800 W → 2800 W, no diversity
+      counter
+          .getCell(ScheduleColumn.RATING.ordinal())
+          .setCellValue(2800); // 1800 W → 2800 W, no diversity
       evaluator.clearAllCachedResultValues();
       double after = Totals.find(sheet, evaluator).value("L2", 4);
-      assertThat(after - before).as("L2 demand kW moves by the added 1 kW").isCloseTo(1.0, within(1e-9));
+      assertThat(after - before)
+          .as("L2 demand kW moves by the added 1 kW")
+          .isCloseTo(1.0, within(1e-9));
     }
   }
 
   @Test
   void everyFormulaCellStoresTheResultASpreadsheetWouldCompute() throws IOException {
-    // A program that opens the file without recalculating shows the stored results: they must be right.
+    // A program that opens the file without recalculating shows the stored results: they must be
+    // right.
     ExportData data = ExchangeFixtures.shopExport();
     try (XSSFWorkbook workbook = written(data, true)) {
       FormulaEvaluator evaluator = workbook.getCreationHelper().createFormulaEvaluator();
@@ -148,8 +178,12 @@ class WorkbookWriterTests {
             double stored = cell.getNumericCellValue();
             double computed = evaluator.evaluate(cell).getNumberValue();
             assertThat(stored)
-                .as("stored result of %s!%s (%s)", sheet.getSheetName(), cell.getAddress(), cell.getCellFormula())
-                .isCloseTo(computed, org.assertj.core.api.Assertions.within(1e-9 + Math.abs(computed) * 1e-9));
+                .as(
+                    "stored result of %s!%s (%s)",
+                    sheet.getSheetName(), cell.getAddress(), cell.getCellFormula())
+                .isCloseTo(
+                    computed,
+                    org.assertj.core.api.Assertions.within(1e-9 + Math.abs(computed) * 1e-9));
           }
         }
       }
@@ -160,10 +194,16 @@ class WorkbookWriterTests {
   @Test
   void userTextThatLooksLikeAFormulaIsWrittenAsAStringCell() throws IOException {
     try (XSSFWorkbook workbook = written(ExchangeFixtures.shopExport(), false)) {
-      Row row = rowOf(workbook.getSheet("Board MDB"), "=HYPERLINK(\"http://example.invalid\",\"x\")");
-      assertThat(row.getCell(ScheduleColumn.CIRCUIT.ordinal()).getCellType()).as("circuit text cell").isEqualTo(CellType.STRING);
-      assertThat(row.getCell(ScheduleColumn.LOAD.ordinal()).getCellType()).as("load text cell").isEqualTo(CellType.STRING);
-      assertThat(row.getCell(ScheduleColumn.LOAD.ordinal()).getStringCellValue()).isEqualTo("+Water heater");
+      Row row =
+          rowOf(workbook.getSheet("Board MDB"), "=HYPERLINK(\"http://example.invalid\",\"x\")");
+      assertThat(row.getCell(ScheduleColumn.CIRCUIT.ordinal()).getCellType())
+          .as("circuit text cell")
+          .isEqualTo(CellType.STRING);
+      assertThat(row.getCell(ScheduleColumn.LOAD.ordinal()).getCellType())
+          .as("load text cell")
+          .isEqualTo(CellType.STRING);
+      assertThat(row.getCell(ScheduleColumn.LOAD.ordinal()).getStringCellValue())
+          .isEqualTo("+Water heater");
     }
   }
 
@@ -171,20 +211,32 @@ class WorkbookWriterTests {
   void boardSheetsPrintOnA4LandscapeOnePageWideWithHeaderAndFooter() throws IOException {
     try (XSSFWorkbook workbook = written(ExchangeFixtures.shopExport(), true)) {
       XSSFSheet sheet = workbook.getSheet("Board MDB");
-      assertThat(sheet.getPrintSetup().getPaperSize()).as("paper").isEqualTo(PrintSetup.A4_PAPERSIZE);
+      assertThat(sheet.getPrintSetup().getPaperSize())
+          .as("paper")
+          .isEqualTo(PrintSetup.A4_PAPERSIZE);
       assertThat(sheet.getPrintSetup().getLandscape()).as("landscape").isTrue();
       assertThat(sheet.getPrintSetup().getFitWidth()).as("pages wide").isEqualTo((short) 1);
-      assertThat(sheet.getPrintSetup().getFitHeight()).as("pages high (0 = as many as needed)").isEqualTo((short) 0);
+      assertThat(sheet.getPrintSetup().getFitHeight())
+          .as("pages high (0 = as many as needed)")
+          .isEqualTo((short) 0);
       assertThat(sheet.getRepeatingRows().formatAsString()).as("repeated header").isEqualTo("4:4");
       assertThat(sheet.getFooter().getLeft()).contains("Tallow test shop").contains("MDB");
       assertThat(sheet.getFooter().getCenter()).contains("2025-03-14");
       assertThat(sheet.getFooter().getRight()).contains("&P");
-      assertThat(sheet.getCTWorksheet().getAutoFilter().getRef()).as("autofilter").startsWith("A4:");
-      assertThat(sheet.getPaneInformation().getHorizontalSplitPosition()).as("frozen below header").isEqualTo((short) 4);
+      assertThat(sheet.getCTWorksheet().getAutoFilter().getRef())
+          .as("autofilter")
+          .startsWith("A4:");
+      assertThat(sheet.getPaneInformation().getHorizontalSplitPosition())
+          .as("frozen below header")
+          .isEqualTo((short) 4);
       assertThat(workbook.getSheetIndex("Summary")).as("summary first").isZero();
-      assertThat(workbook.getSheet("Methods").getRow(2).getCell(1).getStringCellValue()).isEqualTo(ExchangeFixtures.CAUTION);
-      assertThat(workbook.getSheet("Findings")).as("findings sheet when findings exist").isNotNull();
-      assertThat(sheet.getRow(2).getCell(0).getStringCellValue()).contains(ExchangeFixtures.CAUTION);
+      assertThat(workbook.getSheet("Methods").getRow(2).getCell(1).getStringCellValue())
+          .isEqualTo(ExchangeFixtures.CAUTION);
+      assertThat(workbook.getSheet("Findings"))
+          .as("findings sheet when findings exist")
+          .isNotNull();
+      assertThat(sheet.getRow(2).getCell(0).getStringCellValue())
+          .contains(ExchangeFixtures.CAUTION);
     }
   }
 
@@ -196,16 +248,24 @@ class WorkbookWriterTests {
       Sheet summary = workbook.getSheet("Summary");
       Row mdb = summary.getRow(WorkbookWriter.HEADER_ROW + 1);
       assertThat(mdb.getCell(0).getStringCellValue()).isEqualTo("MDB");
-      assertThat(evaluator.evaluate(mdb.getCell(7)).getNumberValue() * 1000).as("MDB demand on the summary")
-          .isCloseTo(data.demand().board(1L).demandWatts(), within(1e-6 * data.demand().board(1L).demandWatts()));
-      assertThat(summary.getRow(WorkbookWriter.HEADER_ROW + 2).getCell(0).getStringCellValue()).as("child indented").isEqualTo("  DB2");
+      assertThat(evaluator.evaluate(mdb.getCell(7)).getNumberValue() * 1000)
+          .as("MDB demand on the summary")
+          .isCloseTo(
+              data.demand().board(1L).demandWatts(),
+              within(1e-6 * data.demand().board(1L).demandWatts()));
+      assertThat(summary.getRow(WorkbookWriter.HEADER_ROW + 2).getCell(0).getStringCellValue())
+          .as("child indented")
+          .isEqualTo("  DB2");
     }
   }
 
   @Test
   void findingsSheetListsEveryProblemAndGathersNotAssessedPerBoardAndReason() throws IOException {
-    // 2 boards of 6 circuits; the generated circuits record no ambient temperature, so one check is not assessed on each
-    ExportData data = ExchangeFixtures.export(ExchangeFixtures.generated(12, 6, 7L), DiversityMethods.UK_SMALL_SHOP);
+    // 2 boards of 6 circuits; the generated circuits record no ambient temperature, so one check is
+    // not assessed on each
+    ExportData data =
+        ExchangeFixtures.export(
+            ExchangeFixtures.generated(12, 6, 7L), DiversityMethods.UK_SMALL_SHOP);
     int engineProblems = 0;
     Map<String, Map<Finding, Integer>> engineNotAssessed = new HashMap<>();
     for (Finding finding : data.findings().siteFindings()) {
@@ -219,13 +279,18 @@ class WorkbookWriterTests {
         for (Finding finding : circuit.findings()) {
           engineProblems += finding.isProblem() ? 1 : 0;
           if (finding.verdict() == Verdict.NOT_ASSESSED) {
-            engineNotAssessed.computeIfAbsent(board.reference(), b -> new HashMap<>()).merge(finding, 1, Integer::sum);
+            engineNotAssessed
+                .computeIfAbsent(board.reference(), b -> new HashMap<>())
+                .merge(finding, 1, Integer::sum);
           }
         }
       }
     }
-    assertThat(engineNotAssessed.values()).as("the engine leaves a check not assessed on several circuits of a board")
-        .anySatisfy(byFinding -> assertThat(byFinding.values()).anySatisfy(n -> assertThat(n).isGreaterThan(1)));
+    assertThat(engineNotAssessed.values())
+        .as("the engine leaves a check not assessed on several circuits of a board")
+        .anySatisfy(
+            byFinding ->
+                assertThat(byFinding.values()).anySatisfy(n -> assertThat(n).isGreaterThan(1)));
     try (XSSFWorkbook workbook = written(data, true)) {
       Sheet findings = workbook.getSheet("Findings");
       int problemRows = 0;
@@ -236,20 +301,36 @@ class WorkbookWriterTests {
         }
         String verdict = row.getCell(3).getStringCellValue();
         if (verdict.equals(Verdict.NOT_ASSESSED.name())) {
-          String before = notAssessedRows.computeIfAbsent(row.getCell(0).getStringCellValue(), b -> new HashMap<>())
-              .put(row.getCell(2).getStringCellValue() + " | " + row.getCell(4).getStringCellValue(), row.getCell(5).getStringCellValue());
+          String before =
+              notAssessedRows
+                  .computeIfAbsent(row.getCell(0).getStringCellValue(), b -> new HashMap<>())
+                  .put(
+                      row.getCell(2).getStringCellValue()
+                          + " | "
+                          + row.getCell(4).getStringCellValue(),
+                      row.getCell(5).getStringCellValue());
           assertThat(before).as("one row per board and reason").isNull();
         } else if (Verdict.valueOf(verdict).isProblem()) {
           problemRows++;
         }
       }
-      assertThat(problemRows).as("every danger, warning and advice on its own row").isEqualTo(engineProblems);
-      engineNotAssessed.forEach((board, byFinding) -> {
-        assertThat(notAssessedRows.get(board)).as("not-assessed rows of %s", board).hasSize(byFinding.size());
-        byFinding.forEach((finding, circuits) -> assertThat(notAssessedRows.get(board).get(finding.check().name() + " | " + finding.summary()))
-            .as("%s %s: how many circuits and which ways", board, finding.check())
-            .isEqualTo(circuits + " circuits, ways 1–2"));
-      });
+      assertThat(problemRows)
+          .as("every danger, warning and advice on its own row")
+          .isEqualTo(engineProblems);
+      engineNotAssessed.forEach(
+          (board, byFinding) -> {
+            assertThat(notAssessedRows.get(board))
+                .as("not-assessed rows of %s", board)
+                .hasSize(byFinding.size());
+            byFinding.forEach(
+                (finding, circuits) ->
+                    assertThat(
+                            notAssessedRows
+                                .get(board)
+                                .get(finding.check().name() + " | " + finding.summary()))
+                        .as("%s %s: how many circuits and which ways", board, finding.check())
+                        .isEqualTo(circuits + " circuits, ways 1–2"));
+          });
     }
   }
 
@@ -271,8 +352,21 @@ class WorkbookWriterTests {
   }
 
   @ParameterizedTest
-  @ValueSource(strings = {"plain text", "<a & b> \"q\" 'x'", "tab\there\nline\rcr", "no\u00a0break", "bell\u0007 nul\u0000 esc\u001b",
-      "\ufffe\uffff end", "emoji \ud83d\ude00 ok", "lone \ud800 surrogate \udc00", "=SUM(A1)", "Ω ° ² Δ × –", "", "&amp;"})
+  @ValueSource(
+      strings = {
+        "plain text",
+        "<a & b> \"q\" 'x'",
+        "tab\there\nline\rcr",
+        "no\u00a0break",
+        "bell\u0007 nul\u0000 esc\u001b",
+        "\ufffe\uffff end",
+        "emoji \ud83d\ude00 ok",
+        "lone \ud800 surrogate \udc00",
+        "=SUM(A1)",
+        "Ω ° ² Δ × –",
+        "",
+        "&amp;"
+      })
   void runEscapingWritesExactlyWhatPoiWrites(String text) throws IOException {
     StringWriter poi = new StringWriter();
     PoiEscaping reference = new PoiEscaping(poi);
@@ -285,7 +379,9 @@ class WorkbookWriterTests {
   static Row rowOf(Sheet sheet, String circuit) {
     for (Row row : sheet) {
       Cell cell = row.getCell(ScheduleColumn.CIRCUIT.ordinal());
-      if (row.getRowNum() > WorkbookWriter.HEADER_ROW && cell != null && cell.getCellType() == CellType.STRING
+      if (row.getRowNum() > WorkbookWriter.HEADER_ROW
+          && cell != null
+          && cell.getCellType() == CellType.STRING
           && cell.getStringCellValue().equals(circuit)) {
         return row;
       }
@@ -300,7 +396,9 @@ class WorkbookWriterTests {
       boolean in = false;
       for (Row row : sheet) {
         Cell a = row.getCell(0);
-        if (a != null && a.getCellType() == CellType.STRING && a.getStringCellValue().equals("Totals")) {
+        if (a != null
+            && a.getCellType() == CellType.STRING
+            && a.getStringCellValue().equals("Totals")) {
           in = true;
         }
         if (in) {
@@ -313,7 +411,9 @@ class WorkbookWriterTests {
     double value(String label, int column) {
       for (Row row : rows) {
         Cell a = row.getCell(0);
-        if (a != null && a.getCellType() == CellType.STRING && a.getStringCellValue().equals(label)) {
+        if (a != null
+            && a.getCellType() == CellType.STRING
+            && a.getStringCellValue().equals(label)) {
           return evaluator.evaluate(row.getCell(column)).getNumberValue();
         }
       }

@@ -24,9 +24,9 @@ import org.springframework.boot.test.web.server.LocalServerPort;
 import org.springframework.test.context.ActiveProfiles;
 
 /**
- * A facility manager on the demo site asks whether the bakery board KB1 can take a three-phase oven and a
- * 7 kW charger, reads the ranked answers, adds the charger at the best place with a work order, and finds it
- * in the board's history. Headless Chromium; skips without it, fails in CI.
+ * A facility manager on the demo site asks whether the bakery board KB1 can take a three-phase oven
+ * and a 7 kW charger, reads the ranked answers, adds the charger at the best place with a work
+ * order, and finds it in the board's history. Headless Chromium; skips without it, fails in CI.
  */
 @SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT)
 @ActiveProfiles({"test", "demo"})
@@ -42,15 +42,26 @@ class CapacityBrowserIntegrationTests {
 
   @BeforeEach
   void startBrowser() throws Exception {
-    RealParts.require(DRIVER.canExecute() && BROWSER.canExecute(),
+    RealParts.require(
+        DRIVER.canExecute() && BROWSER.canExecute(),
         "Chromium and its driver (/usr/bin/chromium, /usr/bin/chromedriver): apt-get install chromium chromium-driver");
     profile = Files.createTempDirectory("wayledger-chromium");
     ChromeOptions options = new ChromeOptions();
     options.setBinary(BROWSER);
-    options.addArguments("--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run",
-        "--disable-background-networking", "--disable-component-update", "--disable-sync", "--disable-dev-shm-usage",
-        "--window-size=1400,1600", "--user-data-dir=" + profile);
-    ChromeDriverService service = new ChromeDriverService.Builder().usingDriverExecutable(DRIVER).build();
+    options.addArguments(
+        "--headless",
+        "--no-sandbox",
+        "--disable-gpu",
+        "--disable-quic",
+        "--no-first-run",
+        "--disable-background-networking",
+        "--disable-component-update",
+        "--disable-sync",
+        "--disable-dev-shm-usage",
+        "--window-size=1400,1600",
+        "--user-data-dir=" + profile);
+    ChromeDriverService service =
+        new ChromeDriverService.Builder().usingDriverExecutable(DRIVER).build();
     browser = new ChromeDriver(service, options);
   }
 
@@ -85,17 +96,25 @@ class CapacityBrowserIntegrationTests {
     String bestText = browser.findElement(By.id("best-candidate")).getText();
     WebElement first = rows.get(0);
     String firstPlace = first.findElement(By.tagName("strong")).getText();
-    assertThat(bestText).as("the best line names the first row's place").contains(firstPlace.replace("KB1 ", ""));
+    assertThat(bestText)
+        .as("the best line names the first row's place")
+        .contains(firstPlace.replace("KB1 ", ""));
 
     shot("capacity-answer");
     first.findElement(By.name("reason")).sendKeys("WO-2207 yard charger");
     first.findElement(By.cssSelector("form.add-candidate button")).click();
 
-    new WebDriverWait(browser, Duration.ofSeconds(10)).until(d -> d.getCurrentUrl().endsWith("/history"));
+    new WebDriverWait(browser, Duration.ofSeconds(10))
+        .until(d -> d.getCurrentUrl().endsWith("/history"));
     WebElement newest = browser.findElement(By.cssSelector("table.history tbody tr"));
-    assertThat(newest.getText()).as("newest history row").contains("Van charger").contains("WO-2207 yard charger")
+    assertThat(newest.getText())
+        .as("newest history row")
+        .contains("Van charger")
+        .contains("WO-2207 yard charger")
         .contains("demo");
-    assertThat(browser.findElements(By.cssSelector("polyline.history-line"))).as("one line per phase").hasSize(3);
+    assertThat(browser.findElements(By.cssSelector("polyline.history-line")))
+        .as("one line per phase")
+        .hasSize(3);
     shot("board-history");
   }
 
@@ -103,7 +122,9 @@ class CapacityBrowserIntegrationTests {
   private void shot(String name) {
     try {
       Path dir = Files.createDirectories(Path.of("target", "screenshots"));
-      byte[] png = ((org.openqa.selenium.TakesScreenshot) browser).getScreenshotAs(org.openqa.selenium.OutputType.BYTES);
+      byte[] png =
+          ((org.openqa.selenium.TakesScreenshot) browser)
+              .getScreenshotAs(org.openqa.selenium.OutputType.BYTES);
       Files.write(dir.resolve(name + ".png"), png);
     } catch (java.io.IOException | RuntimeException ignored) {
       // a missing screenshot must not fail the flow
@@ -115,7 +136,8 @@ class CapacityBrowserIntegrationTests {
     browser.findElement(By.name("username")).sendKeys("demo");
     browser.findElement(By.name("password")).sendKeys("wayledger-demo");
     browser.findElement(By.cssSelector("form button[type=submit]")).click();
-    new WebDriverWait(browser, Duration.ofSeconds(10)).until(d -> d.getCurrentUrl().contains("/sites"));
+    new WebDriverWait(browser, Duration.ofSeconds(10))
+        .until(d -> d.getCurrentUrl().contains("/sites"));
   }
 
   private void ask(String description, String category, String kilowatts, boolean threePhase) {
@@ -133,6 +155,7 @@ class CapacityBrowserIntegrationTests {
       box.click();
     }
     form.findElement(By.cssSelector("button[type=submit]")).click();
-    new WebDriverWait(browser, Duration.ofSeconds(20)).until(d -> !d.findElements(By.id("capacity-answer")).isEmpty());
+    new WebDriverWait(browser, Duration.ofSeconds(20))
+        .until(d -> !d.findElements(By.id("capacity-answer")).isEmpty());
   }
 }

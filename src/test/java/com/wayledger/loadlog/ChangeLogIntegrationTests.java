@@ -38,7 +38,10 @@ import org.springframework.jdbc.core.simple.JdbcClient;
 import org.springframework.test.context.ActiveProfiles;
 import org.springframework.test.web.servlet.MockMvc;
 
-/** The change log on the embedded database: what is recorded, that it cannot be altered, and the replay. */
+/**
+ * The change log on the embedded database: what is recorded, that it cannot be altered, and the
+ * replay.
+ */
 @SpringBootTest
 @AutoConfigureMockMvc
 @ActiveProfiles("test")
@@ -64,11 +67,23 @@ class ChangeLogIntegrationTests {
 
   @Test
   void circuitAddedInTheEditorIsLoggedWithItsUserReasonAndSnapshot() throws Exception {
-    mvc.perform(post("/boards/{id}/circuits", board.getId()).with(user("alice").roles("EDITOR")).with(csrf())
-            .param("wayNumber", "2").param("position", "L2").param("description", "Dough sheeter")
-            .param("status", "IN_USE").param("deviceKind", "MCB").param("deviceCurve", "C").param("deviceRatingAmps", "16")
-            .param("loadCategory", "MOTOR").param("loadQuantity", "1").param("loadRatingValue", "1100")
-            .param("loadRatingUnit", "W").param("loadPowerFactor", "0.8").param("reason", "WO-4471"))
+    mvc.perform(
+            post("/boards/{id}/circuits", board.getId())
+                .with(user("alice").roles("EDITOR"))
+                .with(csrf())
+                .param("wayNumber", "2")
+                .param("position", "L2")
+                .param("description", "Dough sheeter")
+                .param("status", "IN_USE")
+                .param("deviceKind", "MCB")
+                .param("deviceCurve", "C")
+                .param("deviceRatingAmps", "16")
+                .param("loadCategory", "MOTOR")
+                .param("loadQuantity", "1")
+                .param("loadRatingValue", "1100")
+                .param("loadRatingUnit", "W")
+                .param("loadPowerFactor", "0.8")
+                .param("reason", "WO-4471"))
         .andExpect(status().is3xxRedirection());
 
     ChangeLogEntry entry = log.ofSite(site.getId(), LogFilter.board(board.getId())).get(0);
@@ -77,21 +92,32 @@ class ChangeLogIntegrationTests {
     assertThat(entry.reason()).as("reason").isEqualTo("WO-4471");
     assertThat(entry.summary()).contains("Dough sheeter");
     assertThat(entry.before()).as("nothing before an addition").isNull();
-    assertThat(Snapshots.circuit(entry.after()).loads()).as("the snapshot holds the first load").singleElement()
+    assertThat(Snapshots.circuit(entry.after()).loads())
+        .as("the snapshot holds the first load")
+        .singleElement()
         .satisfies(load -> assertThat(load.ratingValue()).isEqualTo(1100.0));
   }
 
   @Test
   void everyKindOfScheduleChangeLeavesOneEntry() {
-    Circuit circuit = schedule.addCircuit(board.getId(), LogFixtures.circuit(1, PhasePosition.L1, "Prover", 3000));
+    Circuit circuit =
+        schedule.addCircuit(
+            board.getId(), LogFixtures.circuit(1, PhasePosition.L1, "Prover", 3000));
     var load = schedule.addLoad(circuit.getId(), LogFixtures.load("Lamp", 100), "WO-1");
     schedule.updateLoad(load.getId(), LogFixtures.load("Lamp", 150), null);
     schedule.deleteLoad(load.getId(), null);
     schedule.deleteCircuit(circuit.getId(), "removed for works");
 
-    List<ChangeKind> kinds = log.boardHistory(board.getId()).stream().map(ChangeLogEntry::kind).toList();
-    assertThat(kinds).containsExactly(ChangeKind.BOARD_ADDED, ChangeKind.CIRCUIT_ADDED, ChangeKind.LOAD_ADDED,
-        ChangeKind.LOAD_EDITED, ChangeKind.LOAD_REMOVED, ChangeKind.CIRCUIT_REMOVED);
+    List<ChangeKind> kinds =
+        log.boardHistory(board.getId()).stream().map(ChangeLogEntry::kind).toList();
+    assertThat(kinds)
+        .containsExactly(
+            ChangeKind.BOARD_ADDED,
+            ChangeKind.CIRCUIT_ADDED,
+            ChangeKind.LOAD_ADDED,
+            ChangeKind.LOAD_EDITED,
+            ChangeKind.LOAD_REMOVED,
+            ChangeKind.CIRCUIT_REMOVED);
     ChangeLogEntry removal = log.boardHistory(board.getId()).get(5);
     assertThat(removal.circuitId()).as("the entry outlives the circuit").isEqualTo(circuit.getId());
     assertThat(removal.before()).contains("Prover");
@@ -102,26 +128,45 @@ class ChangeLogIntegrationTests {
     schedule.addCircuit(board.getId(), LogFixtures.circuit(1, PhasePosition.L1, "Prover", 3000));
     long before = log.boardHistory(board.getId()).size();
     try {
-      schedule.addCircuit(board.getId(), LogFixtures.circuit(1, PhasePosition.L1, "Second on the same position", 100));
+      schedule.addCircuit(
+          board.getId(),
+          LogFixtures.circuit(1, PhasePosition.L1, "Second on the same position", 100));
     } catch (RuntimeException expected) {
       // occupied position
     }
-    assertThat(log.boardHistory(board.getId())).as("entries after a refused change").hasSize((int) before);
+    assertThat(log.boardHistory(board.getId()))
+        .as("entries after a refused change")
+        .hasSize((int) before);
   }
 
   @Test
   void logCannotBeChangedOrDeletedThroughTheApi() throws Exception {
     long entryId = log.boardHistory(board.getId()).get(0).id();
     var editor = user("ed").roles("ADMIN");
-    mvc.perform(get("/api/log/{id}", entryId).with(editor)).andExpect(status().isOk())
+    mvc.perform(get("/api/log/{id}", entryId).with(editor))
+        .andExpect(status().isOk())
         .andExpect(jsonPath("$.kind").value("BOARD_ADDED"));
-    mvc.perform(put("/api/log/{id}", entryId).with(editor).contentType("application/json").content("{\"summary\":\"x\"}"))
+    mvc.perform(
+            put("/api/log/{id}", entryId)
+                .with(editor)
+                .contentType("application/json")
+                .content("{\"summary\":\"x\"}"))
         .andExpect(status().isMethodNotAllowed());
-    mvc.perform(patch("/api/log/{id}", entryId).with(editor).contentType("application/json").content("{}"))
+    mvc.perform(
+            patch("/api/log/{id}", entryId)
+                .with(editor)
+                .contentType("application/json")
+                .content("{}"))
         .andExpect(status().isMethodNotAllowed());
-    mvc.perform(delete("/api/log/{id}", entryId).with(editor)).andExpect(status().isMethodNotAllowed());
-    mvc.perform(delete("/api/sites/{id}/log", site.getId()).with(editor)).andExpect(status().isMethodNotAllowed());
-    mvc.perform(put("/api/sites/{id}/log", site.getId()).with(editor).contentType("application/json").content("[]"))
+    mvc.perform(delete("/api/log/{id}", entryId).with(editor))
+        .andExpect(status().isMethodNotAllowed());
+    mvc.perform(delete("/api/sites/{id}/log", site.getId()).with(editor))
+        .andExpect(status().isMethodNotAllowed());
+    mvc.perform(
+            put("/api/sites/{id}/log", site.getId())
+                .with(editor)
+                .contentType("application/json")
+                .content("[]"))
         .andExpect(status().isMethodNotAllowed());
     assertThat(log.find(entryId).orElseThrow().summary()).as("entry untouched").contains("DB-L");
   }
@@ -129,28 +174,67 @@ class ChangeLogIntegrationTests {
   @Test
   void apiFiltersTheSiteLogByKindAndUser() throws Exception {
     schedule.addCircuit(board.getId(), LogFixtures.circuit(1, PhasePosition.L1, "Prover", 3000));
-    mvc.perform(get("/api/sites/{id}/log", site.getId()).param("kind", "CIRCUIT_ADDED").with(user("v").roles("VIEWER")))
+    mvc.perform(
+            get("/api/sites/{id}/log", site.getId())
+                .param("kind", "CIRCUIT_ADDED")
+                .with(user("v").roles("VIEWER")))
         .andExpect(status().isOk())
         .andExpect(jsonPath("$.length()").value(1))
         .andExpect(jsonPath("$[0].summary").value(org.hamcrest.Matchers.containsString("Prover")));
-    mvc.perform(get("/api/sites/{id}/log", site.getId()).param("username", "nobody").with(user("v").roles("VIEWER")))
+    mvc.perform(
+            get("/api/sites/{id}/log", site.getId())
+                .param("username", "nobody")
+                .with(user("v").roles("VIEWER")))
         .andExpect(jsonPath("$.length()").value(0));
   }
 
   @Test
   void historyChartValuesEqualTheDemandRecomputedAfterEachChange() {
     List<Map<Phase, Double>> expected = new ArrayList<>();
-    Circuit prover = schedule.addCircuit(board.getId(), LogFixtures.circuit(1, PhasePosition.L1, "Prover", 3000));
+    Circuit prover =
+        schedule.addCircuit(
+            board.getId(), LogFixtures.circuit(1, PhasePosition.L1, "Prover", 3000));
     expected.add(currentDemand());
-    Circuit dryer = schedule.addCircuit(board.getId(), LogFixtures.circuit(1, PhasePosition.L2, "Hand dryer", 1800));
+    Circuit dryer =
+        schedule.addCircuit(
+            board.getId(), LogFixtures.circuit(1, PhasePosition.L2, "Hand dryer", 1800));
     expected.add(currentDemand());
     schedule.addLoad(prover.getId(), LogFixtures.load("Proving cabinet lamp", 460), null);
     expected.add(currentDemand());
     CircuitForm moved = CircuitForm.of(schedule.circuit(dryer.getId()));
-    schedule.updateCircuit(dryer.getId(), new CircuitForm(2, PhasePosition.L3, moved.description(), moved.status(),
-        false, moved.deviceKind(), moved.deviceCurve(), moved.deviceRatingAmps(), moved.devicePoles(),
-        moved.deviceBreakingCapacityKiloAmps(), null, null, null, null, null, null, null, null, null, null, null, null,
-        null, null, null, null, null, null, moved.version()), "moved to L3");
+    schedule.updateCircuit(
+        dryer.getId(),
+        new CircuitForm(
+            2,
+            PhasePosition.L3,
+            moved.description(),
+            moved.status(),
+            false,
+            moved.deviceKind(),
+            moved.deviceCurve(),
+            moved.deviceRatingAmps(),
+            moved.devicePoles(),
+            moved.deviceBreakingCapacityKiloAmps(),
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            null,
+            moved.version()),
+        "moved to L3");
     expected.add(currentDemand());
     schedule.deleteCircuit(prover.getId(), null);
     expected.add(currentDemand());
@@ -160,11 +244,13 @@ class ChangeLogIntegrationTests {
     for (int i = 0; i < expected.size(); i++) {
       HistoryPoint point = points.get(i + 1);
       for (Phase phase : Phase.values()) {
-        assertThat(point.on(phase)).as("%s after change %d (%s)", phase, i + 1, point.summary())
+        assertThat(point.on(phase))
+            .as("%s after change %d (%s)", phase, i + 1, point.summary())
             .isCloseTo(expected.get(i).get(phase), within(1e-9));
       }
     }
-    assertThat(expected.get(1).get(Phase.L2)).as("sanity: the hand dryer is on L2, 1800/230 A")
+    assertThat(expected.get(1).get(Phase.L2))
+        .as("sanity: the hand dryer is on L2, 1800/230 A")
         .isCloseTo(1800.0 / 230.0, within(1e-9));
   }
 
@@ -186,8 +272,12 @@ class ChangeLogIntegrationTests {
     // 2.3 kW: 10 A, 16 % of 63 A.
     schedule.addCircuit(quiet.getId(), LogFixtures.circuit(1, PhasePosition.L1, "Lights", 2300));
 
-    String html = mvc.perform(get("/sites/{id}/headroom", site.getId()).with(user("v").roles("VIEWER")))
-        .andExpect(status().isOk()).andReturn().getResponse().getContentAsString();
+    String html =
+        mvc.perform(get("/sites/{id}/headroom", site.getId()).with(user("v").roles("VIEWER")))
+            .andExpect(status().isOk())
+            .andReturn()
+            .getResponse()
+            .getContentAsString();
     assertThat(html).containsPattern("data-board=\"DB-L\"[^>]*class=\"above-threshold\"");
     assertThat(html).doesNotContainPattern("data-board=\"DB-Q\"[^>]*class=\"above-threshold\"");
     assertThat(html).as("threshold stated").contains("80 %");

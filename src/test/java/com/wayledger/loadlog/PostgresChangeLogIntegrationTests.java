@@ -17,8 +17,9 @@ import org.springframework.test.context.DynamicPropertyRegistry;
 import org.springframework.test.context.DynamicPropertySource;
 
 /**
- * On PostgreSQL the database itself refuses to change or remove change-log rows, even for the connection that
- * owns the table (migration 4.1). Skips without a PostgreSQL database; fails in CI (CI=true).
+ * On PostgreSQL the database itself refuses to change or remove change-log rows, even for the
+ * connection that owns the table (migration 4.1). Skips without a PostgreSQL database; fails in CI
+ * (CI=true).
  */
 @EnabledWithPostgres
 @SpringBootTest
@@ -39,9 +40,14 @@ class PostgresChangeLogIntegrationTests {
   @Test
   void updateOfALogRowIsRefusedByTheDatabase() {
     long id = loggedEntry();
-    assertThatThrownBy(() -> jdbc.sql("UPDATE change_log SET summary = 'rewritten' WHERE id = ?").param(id).update())
+    assertThatThrownBy(
+            () ->
+                jdbc.sql("UPDATE change_log SET summary = 'rewritten' WHERE id = ?")
+                    .param(id)
+                    .update())
         .isInstanceOf(DataAccessException.class)
-        .rootCause().hasMessageContaining("append-only");
+        .rootCause()
+        .hasMessageContaining("append-only");
     assertThat(summaryOf(id)).as("row unchanged").doesNotContain("rewritten");
   }
 
@@ -50,9 +56,15 @@ class PostgresChangeLogIntegrationTests {
     long id = loggedEntry();
     assertThatThrownBy(() -> jdbc.sql("DELETE FROM change_log WHERE id = ?").param(id).update())
         .isInstanceOf(DataAccessException.class)
-        .rootCause().hasMessageContaining("append-only");
-    assertThat(jdbc.sql("SELECT COUNT(*) FROM change_log WHERE id = ?").param(id).query(Long.class).single())
-        .as("row still there").isEqualTo(1L);
+        .rootCause()
+        .hasMessageContaining("append-only");
+    assertThat(
+            jdbc.sql("SELECT COUNT(*) FROM change_log WHERE id = ?")
+                .param(id)
+                .query(Long.class)
+                .single())
+        .as("row still there")
+        .isEqualTo(1L);
   }
 
   @Test
@@ -60,23 +72,30 @@ class PostgresChangeLogIntegrationTests {
     loggedEntry();
     assertThatThrownBy(() -> jdbc.sql("TRUNCATE change_log").update())
         .isInstanceOf(DataAccessException.class)
-        .rootCause().hasMessageContaining("append-only");
+        .rootCause()
+        .hasMessageContaining("append-only");
   }
 
   @Test
   void newEntriesCanStillBeAppended() {
     long before = jdbc.sql("SELECT COUNT(*) FROM change_log").query(Long.class).single();
     loggedEntry();
-    assertThat(jdbc.sql("SELECT COUNT(*) FROM change_log").query(Long.class).single()).isEqualTo(before + 1);
+    assertThat(jdbc.sql("SELECT COUNT(*) FROM change_log").query(Long.class).single())
+        .isEqualTo(before + 1);
   }
 
   private long loggedEntry() {
     Site site = sites.create(LogFixtures.site());
     return jdbc.sql("SELECT id FROM change_log WHERE site_id = ? AND kind = 'SITE_ADDED'")
-        .param(site.getId()).query(Long.class).single();
+        .param(site.getId())
+        .query(Long.class)
+        .single();
   }
 
   private String summaryOf(long id) {
-    return jdbc.sql("SELECT summary FROM change_log WHERE id = ?").param(id).query(String.class).single();
+    return jdbc.sql("SELECT summary FROM change_log WHERE id = ?")
+        .param(id)
+        .query(String.class)
+        .single();
   }
 }

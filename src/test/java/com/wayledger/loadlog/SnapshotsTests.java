@@ -23,13 +23,27 @@ class SnapshotsTests {
     assertThat(old.ringFinal()).isFalse();
     assertThat(old.lockedForBalancing()).as("the other fields still read").isTrue();
     assertThat(old.measuredLoopImpedanceOhms()).isEqualTo(0.8);
-    assertThat(Snapshots.circuits("[" + OLD_SNAPSHOT + "]")).extracting(CircuitSpec::ringFinal).containsExactly(false);
+    assertThat(Snapshots.circuits("[" + OLD_SNAPSHOT + "]"))
+        .extracting(CircuitSpec::ringFinal)
+        .containsExactly(false);
   }
 
   @Test
   void ringFlagSurvivesTheSnapshot() {
-    CircuitSpec ring = new CircuitSpec(8, 4, PhasePosition.L2, "Ring", WayStatus.IN_USE, false, null, null, List.of(),
-        null, null, true);
+    CircuitSpec ring =
+        new CircuitSpec(
+            8,
+            4,
+            PhasePosition.L2,
+            "Ring",
+            WayStatus.IN_USE,
+            false,
+            null,
+            null,
+            List.of(),
+            null,
+            null,
+            true);
     String json = Snapshots.MAPPER.writeValueAsString(ring);
     assertThat(json).contains("\"ringFinal\":true");
     assertThat(Snapshots.circuit(json)).isEqualTo(ring);

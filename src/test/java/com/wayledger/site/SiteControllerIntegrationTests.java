@@ -1,7 +1,5 @@
 package com.wayledger.site;
 
-import com.wayledger.diversity.MethodLibrary;
-import com.wayledger.diversity.StoredMethodRepository;
 import static com.wayledger.support.Roles.editor;
 import static com.wayledger.support.Roles.viewer;
 import static org.hamcrest.Matchers.containsString;
@@ -22,6 +20,8 @@ import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.view;
 
 import com.wayledger.account.SecurityConfig;
+import com.wayledger.diversity.MethodLibrary;
+import com.wayledger.diversity.StoredMethodRepository;
 import com.wayledger.engine.EarthingSystem;
 import com.wayledger.system.NotFoundException;
 import com.wayledger.system.RuleViolation;
@@ -48,15 +48,27 @@ class SiteControllerIntegrationTests {
 
   static Site storedSite(long id, String name) {
     Site site = new Site(name);
-    site.apply(new SiteForm(name, "1 Test Row", EarthingSystem.TN_S, 230.0, 3, 50.0, 0.35, 16.0, 100.0,
-        null, null, 4L));
+    site.apply(
+        new SiteForm(
+            name,
+            "1 Test Row",
+            EarthingSystem.TN_S,
+            230.0,
+            3,
+            50.0,
+            0.35,
+            16.0,
+            100.0,
+            null,
+            null,
+            4L));
     ReflectionTestUtils.setField(site, "id", id);
     return site;
   }
 
   /**
-   * A complete, acceptable site form as the browser posts it, with some fields replaced: pairs of name and
-   * value, so that each field is sent once.
+   * A complete, acceptable site form as the browser posts it, with some fields replaced: pairs of
+   * name and value, so that each field is sent once.
    */
   static MockHttpServletRequestBuilder postSite(String url, String... replaced) {
     Map<String, String> fields = new LinkedHashMap<>();
@@ -91,7 +103,9 @@ class SiteControllerIntegrationTests {
 
   @Test
   void anonymousVisitorIsSentToSignIn() throws Exception {
-    mvc.perform(get("/sites")).andExpect(status().is3xxRedirection()).andExpect(redirectedUrl("/login"));
+    mvc.perform(get("/sites"))
+        .andExpect(status().is3xxRedirection())
+        .andExpect(redirectedUrl("/login"));
   }
 
   @Test
@@ -140,8 +154,21 @@ class SiteControllerIntegrationTests {
     mvc.perform(postSite("/sites").with(editor()).with(csrf()))
         .andExpect(status().is3xxRedirection())
         .andExpect(redirectedUrl("/sites/12"));
-    verify(sites).create(new SiteForm("Quarry Road Depot", "", EarthingSystem.TN_C_S, 230.0, 3, 50.0, 0.35,
-        null, 100.0, null, "", null));
+    verify(sites)
+        .create(
+            new SiteForm(
+                "Quarry Road Depot",
+                "",
+                EarthingSystem.TN_C_S,
+                230.0,
+                3,
+                50.0,
+                0.35,
+                null,
+                100.0,
+                null,
+                "",
+                null));
   }
 
   @Test
@@ -150,7 +177,11 @@ class SiteControllerIntegrationTests {
         .andExpect(status().is(422))
         .andExpect(view().name("site/form"))
         .andExpect(model().attributeHasFieldErrorCode("form", "name", "NotBlank"))
-        .andExpect(content().string(containsString("<p class=\"error\" id=\"name-error\">Please fill this in.</p>")));
+        .andExpect(
+            content()
+                .string(
+                    containsString(
+                        "<p class=\"error\" id=\"name-error\">Please fill this in.</p>")));
     verify(sites, never()).create(any());
   }
 
@@ -158,7 +189,8 @@ class SiteControllerIntegrationTests {
   void lettersInAVoltageFieldKeepTheOtherValuesTyped() throws Exception {
     mvc.perform(postSite("/sites", "nominalVoltageVolts", "two-thirty").with(editor()).with(csrf()))
         .andExpect(status().is(422))
-        .andExpect(model().attributeHasFieldErrorCode("form", "nominalVoltageVolts", "typeMismatch"))
+        .andExpect(
+            model().attributeHasFieldErrorCode("form", "nominalVoltageVolts", "typeMismatch"))
         .andExpect(content().string(containsString("value=\"Quarry Road Depot\"")))
         .andExpect(content().string(containsString("Please enter a number, such as 2.5.")));
     verify(sites, never()).create(any());

@@ -10,8 +10,9 @@ import org.junit.jupiter.api.extension.ExtendWith;
 import org.junit.jupiter.api.extension.ExtensionContext;
 
 /**
- * Runs the annotated test class only when {@link PostgresDatabase} finds a database: otherwise the class is
- * skipped with the reason, except in CI (CI=true), where it fails before Spring even starts.
+ * Runs the annotated test class only when {@link PostgresDatabase} finds a database: otherwise the
+ * class is skipped with the reason, except in CI (CI=true), where it fails before Spring even
+ * starts.
  */
 @Target(ElementType.TYPE)
 @Retention(RetentionPolicy.RUNTIME)

@@ -7,10 +7,10 @@ import org.testcontainers.DockerClientFactory;
 import org.testcontainers.postgresql.PostgreSQLContainer;
 
 /**
- * The PostgreSQL database the tests use, found in this order: the one named by WAYLEDGER_TEST_POSTGRES_URL
- * (set by .ci/run to a fresh database on the local server; user and password from
- * WAYLEDGER_TEST_POSTGRES_USER / _PASSWORD, default postgres/none), else a Testcontainers PostgreSQL when a
- * Docker engine answers, else none.
+ * The PostgreSQL database the tests use, found in this order: the one named by
+ * WAYLEDGER_TEST_POSTGRES_URL (set by .ci/run to a fresh database on the local server; user and
+ * password from WAYLEDGER_TEST_POSTGRES_USER / _PASSWORD, default postgres/none), else a
+ * Testcontainers PostgreSQL when a Docker engine answers, else none.
  */
 public final class PostgresDatabase {
 
@@ -48,10 +48,14 @@ public final class PostgresDatabase {
     if (dockerAvailable()) {
       container = new PostgreSQLContainer("postgres:16-alpine");
       container.start();
-      found = new Connection(container.getJdbcUrl(), container.getUsername(), container.getPassword());
+      found =
+          new Connection(container.getJdbcUrl(), container.getUsername(), container.getPassword());
       return found;
     }
-    whyNot = "no PostgreSQL for tests: set " + URL_VARIABLE + " (as .ci/run does) or run a Docker engine";
+    whyNot =
+        "no PostgreSQL for tests: set "
+            + URL_VARIABLE
+            + " (as .ci/run does) or run a Docker engine";
     return null;
   }
 

@@ -3,8 +3,8 @@ package com.wayledger.support;
 import org.junit.jupiter.api.Assumptions;
 
 /**
- * A test that needs a real part the machine may lack (PostgreSQL, Chromium) skips with a message on a
- * laptop and fails in CI, where the part must be present: CI=true turns the skip into a failure.
+ * A test that needs a real part the machine may lack (PostgreSQL, Chromium) skips with a message on
+ * a laptop and fails in CI, where the part must be present: CI=true turns the skip into a failure.
  */
 public final class RealParts {
 

@@ -4,7 +4,9 @@ import static org.springframework.security.test.web.servlet.request.SecurityMock
 
 import org.springframework.test.web.servlet.request.RequestPostProcessor;
 
-/** Signed-in users of each role for MockMvc requests; the role hierarchy of SecurityConfig applies. */
+/**
+ * Signed-in users of each role for MockMvc requests; the role hierarchy of SecurityConfig applies.
+ */
 public final class Roles {
 
   private Roles() {}

@@ -3,17 +3,18 @@ package com.wayledger.engine.balance;
 import java.util.Arrays;
 
 /**
- * Complete branch-and-bound over the movable circuits, largest first, each placed on one of the three
- * lines. Finds the arrangement with the smallest key (largest phase load, then middle load; see
- * {@link PreparedBoard#keyOf}) or, in the feasibility form, any arrangement with every line inside a band.
+ * Complete branch-and-bound over the movable circuits, largest first, each placed on one of the
+ * three lines. Finds the arrangement with the smallest key (largest phase load, then middle load;
+ * see {@link PreparedBoard#keyOf}) or, in the feasibility form, any arrangement with every line
+ * inside a band.
  *
- * <p>Pruning: a node is cut when a lower bound on any completion's key is no better than the best found.
- * The bound on the largest load is the largest of: the largest load so far; the lightest open line plus the
- * next circuit (it must go somewhere); the water level of the remaining demand over the open lines, in steps
- * of the demands' greatest common divisor; and, per line, its load plus the smallest circuits it must still
- * take when positions are tight. Two symmetry rules keep one of each set of equivalent subtrees: lines with
- * equal load and equal free positions are interchangeable, and runs of equal circuits take lines in
- * non-decreasing index order.
+ * <p>Pruning: a node is cut when a lower bound on any completion's key is no better than the best
+ * found. The bound on the largest load is the largest of: the largest load so far; the lightest
+ * open line plus the next circuit (it must go somewhere); the water level of the remaining demand
+ * over the open lines, in steps of the demands' greatest common divisor; and, per line, its load
+ * plus the smallest circuits it must still take when positions are tight. Two symmetry rules keep
+ * one of each set of equivalent subtrees: lines with equal load and equal free positions are
+ * interchangeable, and runs of equal circuits take lines in non-decreasing index order.
  */
 final class AssignmentSearch {
 
@@ -82,8 +83,8 @@ final class AssignmentSearch {
   }
 
   /**
-   * Searches for the smallest key. Returns {@code true} when the search is complete (the best found is
-   * optimal), {@code false} when the budget ran out first.
+   * Searches for the smallest key. Returns {@code true} when the search is complete (the best found
+   * is optimal), {@code false} when the budget ran out first.
    */
   boolean minimise() {
     feasibility = false;
@@ -97,7 +98,8 @@ final class AssignmentSearch {
 
   /**
    * Looks for an arrangement with every line load within [lowest, highest] centiamps. Returns the
-   * arrangement, or {@code null}; {@link #completed()} tells whether {@code null} means "none exists".
+   * arrangement, or {@code null}; {@link #completed()} tells whether {@code null} means "none
+   * exists".
    */
   int[] findWithin(long lowest, long highest) {
     feasibility = true;
@@ -141,7 +143,8 @@ final class AssignmentSearch {
       if (phase < lowestAllowed || counts[phase] >= board.capacity[phase]) {
         continue;
       }
-      // Lines with equal load and equal free positions lead to mirror-image subtrees: try the first only.
+      // Lines with equal load and equal free positions lead to mirror-image subtrees: try the first
+      // only.
       if (tried >= 0
           && loads[tried] == loads[phase]
           && board.capacity[tried] - counts[tried] == board.capacity[phase] - counts[phase]) {
@@ -224,7 +227,10 @@ final class AssignmentSearch {
     order[2] = c;
   }
 
-  /** Lower bound on the final load of each line, from the circuits it must still take (tight positions). */
+  /**
+   * Lower bound on the final load of each line, from the circuits it must still take (tight
+   * positions).
+   */
   private void mandatoryLoads(int index, long[] into) {
     int remaining = size - index;
     int free = 0;
@@ -253,17 +259,20 @@ final class AssignmentSearch {
       lbMax = Math.max(lbMax, lightestOpen + demand[index]);
       lbMax = Math.max(lbMax, waterLevel(remainingDemand));
     }
-    long secondLeast = least[0] + least[1] + least[2]
-        - Math.max(least[0], Math.max(least[1], least[2]))
-        - Math.min(least[0], Math.min(least[1], least[2]));
+    long secondLeast =
+        least[0]
+            + least[1]
+            + least[2]
+            - Math.max(least[0], Math.max(least[1], least[2]))
+            - Math.min(least[0], Math.min(least[1], least[2]));
     long total = board.total;
     long lbMid = Math.max(secondLeast, (total - lbMax + 1) / 2);
     return board.keyBound(lbMax, lbMid);
   }
 
   /**
-   * The smallest level M such that the open lines can absorb the remaining demand without exceeding M,
-   * each line taking a multiple of the demands' greatest common divisor.
+   * The smallest level M such that the open lines can absorb the remaining demand without exceeding
+   * M, each line taking a multiple of the demands' greatest common divisor.
    */
   private long waterLevel(long remainingDemand) {
     if (remainingDemand == 0) {
@@ -276,7 +285,8 @@ final class AssignmentSearch {
       }
     }
     Arrays.sort(openLoads, 0, open);
-    // Fill the lightest k lines to a common level; the first k whose level does not reach line k+1 wins.
+    // Fill the lightest k lines to a common level; the first k whose level does not reach line k+1
+    // wins.
     long level = 0;
     long filled = 0;
     for (int k = 1; k <= open; k++) {

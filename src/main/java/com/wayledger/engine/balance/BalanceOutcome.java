@@ -4,7 +4,10 @@ package com.wayledger.engine.balance;
 public enum BalanceOutcome {
   /** The arrangement is proved optimal (or, for fewest moves, every listed step is proved). */
   PROVED_OPTIMAL,
-  /** The search budget ran out; the best arrangement found is returned with its gap to the lower bound. */
+  /**
+   * The search budget ran out; the best arrangement found is returned with its gap to the lower
+   * bound.
+   */
   BEST_WITHIN_BUDGET,
   /** Nothing can move: no circuits, or every circuit locked; the currents are shown as they are. */
   NOTHING_TO_MOVE,

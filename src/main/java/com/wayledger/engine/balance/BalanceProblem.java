@@ -8,16 +8,18 @@ import java.util.Map;
  * A board to balance.
  *
  * @param items the single-phase circuits, movable and locked
- * @param fixedLoadAmps current on each line from loads that never move (multi-pole circuits, a sub-board's
- *     three-phase incomer, anything not listed in {@code items}), amperes; a missing map or phase means none
- * @param positionsAvailable how many single-pole positions on each line the movable circuits may occupy
- *     (the ones they occupy now plus the free ones; positions of locked and multi-pole circuits excluded).
- *     A missing map or phase is derived from {@code freeWays} plus the movable circuits now on that line;
- *     when that is missing too, the line is unlimited and the result says so
- * @param freeWays the way numbers whose position on each line is free now, used to give each moved circuit
- *     a way; a missing map or phase means none recorded
- * @param unbalanceLimitPercent the board's unbalance limit, percent of the mean phase current; {@code null}
- *     leaves the "reach the limit" answer not assessed
+ * @param fixedLoadAmps current on each line from loads that never move (multi-pole circuits, a
+ *     sub-board's three-phase incomer, anything not listed in {@code items}), amperes; a missing
+ *     map or phase means none
+ * @param positionsAvailable how many single-pole positions on each line the movable circuits may
+ *     occupy (the ones they occupy now plus the free ones; positions of locked and multi-pole
+ *     circuits excluded). A missing map or phase is derived from {@code freeWays} plus the movable
+ *     circuits now on that line; when that is missing too, the line is unlimited and the result
+ *     says so
+ * @param freeWays the way numbers whose position on each line is free now, used to give each moved
+ *     circuit a way; a missing map or phase means none recorded
+ * @param unbalanceLimitPercent the board's unbalance limit, percent of the mean phase current;
+ *     {@code null} leaves the "reach the limit" answer not assessed
  * @param threePhase {@code false} for a single-phase board, which has nothing to balance
  */
 public record BalanceProblem(

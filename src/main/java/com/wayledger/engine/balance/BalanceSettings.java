@@ -1,11 +1,12 @@
 package com.wayledger.engine.balance;
 
 /**
- * How much search the balancer may spend, echoed in every result so each figure states its assumptions.
- * Whichever budget runs out first stops the search; the best arrangement found is then returned with its
- * proven gap to the lower bound.
+ * How much search the balancer may spend, echoed in every result so each figure states its
+ * assumptions. Whichever budget runs out first stops the search; the best arrangement found is then
+ * returned with its proven gap to the lower bound.
  *
- * @param nodeBudget the most search nodes one call may explore (optimal mode and fewest-moves mode each)
+ * @param nodeBudget the most search nodes one call may explore (optimal mode and fewest-moves mode
+ *     each)
  * @param timeBudgetMillis the most wall-clock time one call may spend, milliseconds
  */
 public record BalanceSettings(long nodeBudget, long timeBudgetMillis) {

@@ -25,7 +25,9 @@ public record CircuitMove(
   /** The move in plain words: "move circuit 'Bakery mixer' from way 4 L2 to way 7 L1". */
   public String inWords() {
     String target =
-        toWay == null ? toPhase + " (no free position recorded on " + toPhase + ")" : "way " + toWay + " " + toPhase;
+        toWay == null
+            ? toPhase + " (no free position recorded on " + toPhase + ")"
+            : "way " + toWay + " " + toPhase;
     if (fromPhase == null) {
       return "place circuit '" + description + "' on " + target;
     }

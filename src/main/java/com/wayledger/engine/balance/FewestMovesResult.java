@@ -3,16 +3,16 @@ package com.wayledger.engine.balance;
 import java.util.List;
 
 /**
- * The fewest-moves answer for an existing board: how much each extra circuit move can buy, and how many
- * moves bring the board within its unbalance limit.
+ * The fewest-moves answer for an existing board: how much each extra circuit move can buy, and how
+ * many moves bring the board within its unbalance limit.
  *
- * @param outcome {@link BalanceOutcome#PROVED_OPTIMAL} when every step is proved and the last step reaches
- *     the proved optimum; {@link BalanceOutcome#BEST_WITHIN_BUDGET} when the list stops early or a step is
- *     not proved; otherwise the reason no list is given
+ * @param outcome {@link BalanceOutcome#PROVED_OPTIMAL} when every step is proved and the last step
+ *     reaches the proved optimum; {@link BalanceOutcome#BEST_WITHIN_BUDGET} when the list stops
+ *     early or a step is not proved; otherwise the reason no list is given
  * @param message plain words for the user
  * @param before the currents as the board is now; {@code null} when not assessed
- * @param steps row k is the best with at most k moves, from k = 0 (as it stands) up to the k that reaches
- *     the optimum; a k is listed only when it does strictly better than k − 1
+ * @param steps row k is the best with at most k moves, from k = 0 (as it stands) up to the k that
+ *     reaches the optimum; a k is listed only when it does strictly better than k − 1
  * @param optimumReached the last step has the optimal mode's best arrangement's figures
  * @param unbalanceLimitPercent the limit used, percent; {@code null} when the board has none
  * @param limitVerdict whether the limit is reached, and how

@@ -6,7 +6,10 @@ public enum LimitVerdict {
   ALREADY_WITHIN,
   /** The limit is reached with the stated, proved smallest number of moves. */
   REACHED,
-  /** The stated number of moves reaches the limit; the budget ran out before fewer could be ruled out. */
+  /**
+   * The stated number of moves reaches the limit; the budget ran out before fewer could be ruled
+   * out.
+   */
   REACHED_NOT_PROVED_FEWEST,
   /** No arrangement within the position limits reaches the limit (proved by a complete search). */
   NOT_REACHABLE,

@@ -1,9 +1,10 @@
 package com.wayledger.engine.balance;
 
 /**
- * Makes an arrangement found by the optimal search move fewer circuits without making it worse: it tries
- * the six relabellings of the lines, then undoes single moves and pairs of moves while the key stays as
- * good and the positions suffice. This is a clean-up, not a proof; the fewest-moves mode proves minima.
+ * Makes an arrangement found by the optimal search move fewer circuits without making it worse: it
+ * tries the six relabellings of the lines, then undoes single moves and pairs of moves while the
+ * key stays as good and the positions suffice. This is a clean-up, not a proof; the fewest-moves
+ * mode proves minima.
  */
 final class MoveReducer {
 

@@ -1,11 +1,12 @@
 package com.wayledger.engine.balance;
 
 /**
- * Complete search over sets of at most k circuit moves from the board as it is now. Each node is a set of
- * moves chosen in circuit order (largest demand first), so every set is visited once; each node is itself
- * a candidate arrangement. A subtree is cut when even moving the largest remaining circuits off each line
- * cannot beat the best found (or cannot bring every line into the band), or when a line would still hold
- * more circuits than it has positions after every remaining move out of it.
+ * Complete search over sets of at most k circuit moves from the board as it is now. Each node is a
+ * set of moves chosen in circuit order (largest demand first), so every set is visited once; each
+ * node is itself a candidate arrangement. A subtree is cut when even moving the largest remaining
+ * circuits off each line cannot beat the best found (or cannot bring every line into the band), or
+ * when a line would still hold more circuits than it has positions after every remaining move out
+ * of it.
  */
 final class MoveSearch {
 
@@ -14,10 +15,13 @@ final class MoveSearch {
   private final long[] demand;
   private final int[] current;
   private final int size;
+
   /** {@code before[p][j]}: how many circuits now on line p have an index below j. */
   private final int[][] before;
+
   /** {@code prefix[p][t]}: total demand of the t largest circuits now on line p. */
   private final long[][] prefix;
+
   private final int[] onLine = new int[3];
 
   private final long[] loads;
@@ -69,9 +73,9 @@ final class MoveSearch {
   }
 
   /**
-   * Looks for a strictly better arrangement than the best so far using at most {@code maxMoves} moves,
-   * stopping early at {@code stopAtKey}. Returns {@code true} when the search finished (so the best so far
-   * is the best with at most {@code maxMoves} moves).
+   * Looks for a strictly better arrangement than the best so far using at most {@code maxMoves}
+   * moves, stopping early at {@code stopAtKey}. Returns {@code true} when the search finished (so
+   * the best so far is the best with at most {@code maxMoves} moves).
    */
   boolean improveWithin(int maxMoves, long stopAtKey) {
     bandMode = false;
@@ -84,9 +88,9 @@ final class MoveSearch {
   }
 
   /**
-   * Looks for at most {@code maxMoves} moves after which every line load is within [lowest, highest]
-   * centiamps. Returns the arrangement or {@code null}; {@link #completed()} tells whether {@code null}
-   * means "none exists".
+   * Looks for at most {@code maxMoves} moves after which every line load is within [lowest,
+   * highest] centiamps. Returns the arrangement or {@code null}; {@link #completed()} tells whether
+   * {@code null} means "none exists".
    */
   int[] reachBand(int maxMoves, long lowest, long highest) {
     bandMode = true;
@@ -137,7 +141,9 @@ final class MoveSearch {
   }
 
   private void settleNode() {
-    if (counts[0] > board.capacity[0] || counts[1] > board.capacity[1] || counts[2] > board.capacity[2]) {
+    if (counts[0] > board.capacity[0]
+        || counts[1] > board.capacity[1]
+        || counts[2] > board.capacity[2]) {
       return;
     }
     if (bandMode) {
@@ -185,9 +191,12 @@ final class MoveSearch {
     }
     long lbMax = Math.max(least[0], Math.max(least[1], least[2]));
     lbMax = Math.max(lbMax, (board.total + 2) / 3);
-    long mid = least[0] + least[1] + least[2]
-        - Math.max(least[0], Math.max(least[1], least[2]))
-        - Math.min(least[0], Math.min(least[1], least[2]));
+    long mid =
+        least[0]
+            + least[1]
+            + least[2]
+            - Math.max(least[0], Math.max(least[1], least[2]))
+            - Math.min(least[0], Math.min(least[1], least[2]));
     long lbMid = Math.max(mid, (board.total - lbMax + 1) / 2);
     return board.keyBound(lbMax, lbMid) >= bestKey;
   }

@@ -11,15 +11,16 @@ import java.util.Map;
  * Balances the single-phase circuits of a three-phase board. Entry points:
  *
  * <ul>
- *   <li>{@link #optimise} — the arrangement with the smallest largest phase current, then the smallest
- *       unbalance, proved optimal unless the budget runs out (then the best found and its gap);
- *   <li>{@link #fewestMoves} — for an existing board, what k circuit moves can achieve, k = 0, 1, 2, … up
- *       to the optimum, and the fewest moves that bring it within its unbalance limit;
+ *   <li>{@link #optimise} — the arrangement with the smallest largest phase current, then the
+ *       smallest unbalance, proved optimal unless the budget runs out (then the best found and its
+ *       gap);
+ *   <li>{@link #fewestMoves} — for an existing board, what k circuit moves can achieve, k = 0, 1,
+ *       2, … up to the optimum, and the fewest moves that bring it within its unbalance limit;
  *   <li>{@link #largestFirst} — the greedy largest-first arrangement, a quick baseline.
  * </ul>
  *
- * <p>Never throws for bad input: every problem it cannot solve comes back as an outcome with a message.
- * Demands are rounded to 0.01 A each before searching; see docs/calculations/balance.md.
+ * <p>Never throws for bad input: every problem it cannot solve comes back as an outcome with a
+ * message. Demands are rounded to 0.01 A each before searching; see docs/calculations/balance.md.
  */
 public final class PhaseBalancer {
 
@@ -51,11 +52,15 @@ public final class PhaseBalancer {
     }
     boolean proved = search.minimise();
     int[] arrangement = MoveReducer.reduce(board, search.best());
-    long lowerBound = proved ? board.maxOfKey(search.bestKey()) : board.maxOfKey(search.rootBoundKey());
-    return arranged(board, arrangement, proved, lowerBound, budget.nodes(), proved ? "Proved optimal" : null);
+    long lowerBound =
+        proved ? board.maxOfKey(search.bestKey()) : board.maxOfKey(search.rootBoundKey());
+    return arranged(
+        board, arrangement, proved, lowerBound, budget.nodes(), proved ? "Proved optimal" : null);
   }
 
-  /** The greedy baseline: largest circuit first, each onto the lightest line with a free position. */
+  /**
+   * The greedy baseline: largest circuit first, each onto the lightest line with a free position.
+   */
   public BalanceResult largestFirst(BalanceProblem problem) {
     PreparedBoard.Preparation preparation = PreparedBoard.prepare(problem);
     if (preparation.board() == null) {
@@ -65,11 +70,16 @@ public final class PhaseBalancer {
     if (board.size() == 0) {
       return nothingToMove(board);
     }
-    long rootBound = board.maxOfKey(new AssignmentSearch(board, new SearchBudget(settings)).rootBoundKey());
-    return arranged(board, largestFirstArrangement(board), false, rootBound, 0, "Largest-first (not proved)");
+    long rootBound =
+        board.maxOfKey(new AssignmentSearch(board, new SearchBudget(settings)).rootBoundKey());
+    return arranged(
+        board, largestFirstArrangement(board), false, rootBound, 0, "Largest-first (not proved)");
   }
 
-  /** What each number of moves can achieve on an existing board, and the fewest that reach its limit. */
+  /**
+   * What each number of moves can achieve on an existing board, and the fewest that reach its
+   * limit.
+   */
   public FewestMovesResult fewestMoves(BalanceProblem problem) {
     PreparedBoard.Preparation preparation = PreparedBoard.prepare(problem);
     if (preparation.board() == null) {
@@ -91,7 +101,8 @@ public final class PhaseBalancer {
           before);
     }
     if (board.size() == 0) {
-      return movesRefused(BalanceOutcome.NOTHING_TO_MOVE, "Every circuit is locked: nothing can move.", before);
+      return movesRefused(
+          BalanceOutcome.NOTHING_TO_MOVE, "Every circuit is locked: nothing can move.", before);
     }
 
     SearchBudget optimumBudget = new SearchBudget(settings);
@@ -132,7 +143,8 @@ public final class PhaseBalancer {
       limitNodes = limitBudget.nodes();
       verdict = answer.verdict;
       movesToLimit = answer.moves;
-      limitPlan = answer.arrangement == null ? List.of() : PositionPlanner.plan(board, answer.arrangement);
+      limitPlan =
+          answer.arrangement == null ? List.of() : PositionPlanner.plan(board, answer.arrangement);
     }
 
     boolean complete = allProved && optimumReached && optimumProved;
@@ -149,7 +161,10 @@ public final class PhaseBalancer {
             last.largestAmps(),
             before.unbalancePercent(),
             last.unbalancePercent()));
-    message.append(optimumReached ? (optimumProved ? ", the optimum." : ", the best arrangement found.") : ".");
+    message.append(
+        optimumReached
+            ? (optimumProved ? ", the optimum." : ", the best arrangement found.")
+            : ".");
     message.append(limitSentence(verdict, movesToLimit, limit));
     appendNotes(message, board);
     return new FewestMovesResult(
@@ -170,7 +185,8 @@ public final class PhaseBalancer {
 
   private static LimitAnswer fewestMovesToLimit(
       PreparedBoard board, double limitPercent, List<MovesStep> rows, SearchBudget budget) {
-    // Unbalance ≤ limit ⇔ every line within mean·(1 ± limit/100); the tolerance absorbs the decimal limit.
+    // Unbalance ≤ limit ⇔ every line within mean·(1 ± limit/100); the tolerance absorbs the decimal
+    // limit.
     double mean = board.total / 3.0;
     double allowed = mean * limitPercent / 100.0;
     long lowest = (long) Math.ceil(mean - allowed - 1e-9);
@@ -208,7 +224,9 @@ public final class PhaseBalancer {
       provedSoFar &= search.completed();
     }
     return new LimitAnswer(
-        provedSoFar ? LimitVerdict.REACHED : LimitVerdict.REACHED_NOT_PROVED_FEWEST, knownMoves, known);
+        provedSoFar ? LimitVerdict.REACHED : LimitVerdict.REACHED_NOT_PROVED_FEWEST,
+        knownMoves,
+        known);
   }
 
   private static int[] arrangementOf(PreparedBoard board, MovesStep row) {
@@ -234,15 +252,28 @@ public final class PhaseBalancer {
 
   private static String limitSentence(LimitVerdict verdict, Integer moves, Double limit) {
     return switch (verdict) {
-      case ALREADY_WITHIN -> " The board is within its unbalance limit of " + percent(limit) + " as it stands.";
-      case REACHED -> " The fewest moves that bring it within its unbalance limit of " + percent(limit)
-          + ": " + moves + ".";
-      case REACHED_NOT_PROVED_FEWEST -> " " + moves + " move(s) bring it within its unbalance limit of "
-          + percent(limit) + "; the budget ran out before fewer could be ruled out.";
-      case NOT_REACHABLE -> " No arrangement within the positions reaches its unbalance limit of "
-          + percent(limit) + ".";
-      case NOT_DETERMINED -> " Whether its unbalance limit of " + percent(limit)
-          + " can be reached was not determined within the search budget.";
+      case ALREADY_WITHIN ->
+          " The board is within its unbalance limit of " + percent(limit) + " as it stands.";
+      case REACHED ->
+          " The fewest moves that bring it within its unbalance limit of "
+              + percent(limit)
+              + ": "
+              + moves
+              + ".";
+      case REACHED_NOT_PROVED_FEWEST ->
+          " "
+              + moves
+              + " move(s) bring it within its unbalance limit of "
+              + percent(limit)
+              + "; the budget ran out before fewer could be ruled out.";
+      case NOT_REACHABLE ->
+          " No arrangement within the positions reaches its unbalance limit of "
+              + percent(limit)
+              + ".";
+      case NOT_DETERMINED ->
+          " Whether its unbalance limit of "
+              + percent(limit)
+              + " can be reached was not determined within the search budget.";
       case NOT_ASSESSED -> " Unbalance limit not assessed: the board has no limit set.";
     };
   }
@@ -281,8 +312,14 @@ public final class PhaseBalancer {
   }
 
   private BalanceResult arranged(
-      PreparedBoard board, int[] arrangement, boolean proved, long lowerBound, long nodes, String heading) {
-    PhaseCurrents before = board.allPlaced() ? PhaseCurrents.ofCentiamps(board.loadsOf(board.currentPhase)) : null;
+      PreparedBoard board,
+      int[] arrangement,
+      boolean proved,
+      long lowerBound,
+      long nodes,
+      String heading) {
+    PhaseCurrents before =
+        board.allPlaced() ? PhaseCurrents.ofCentiamps(board.loadsOf(board.currentPhase)) : null;
     PhaseCurrents after = PhaseCurrents.ofCentiamps(board.loadsOf(arrangement));
     List<CircuitMove> moves = PositionPlanner.plan(board, arrangement);
     double gapAmps = Math.max(0, PreparedBoard.centiamps(after.largestAmps()) - lowerBound) / 100.0;
@@ -295,7 +332,11 @@ public final class PhaseBalancer {
     message.append(String.format(Locale.ROOT, "%.2f A", after.largestAmps()));
     if (!proved) {
       message.append(
-          String.format(Locale.ROOT, ", at most %.2f A above the lower bound of %.2f A", gapAmps, lowerBound / 100.0));
+          String.format(
+              Locale.ROOT,
+              ", at most %.2f A above the lower bound of %.2f A",
+              gapAmps,
+              lowerBound / 100.0));
     }
     message.append(String.format(Locale.ROOT, "; unbalance %.1f %%", after.unbalancePercent()));
     message.append(String.format(Locale.ROOT, "; %d circuit(s) to move.", moves.size()));
@@ -329,7 +370,8 @@ public final class PhaseBalancer {
     }
     Map<Long, Phase> inListOrder = new LinkedHashMap<>();
     for (BalanceItem item : board.problem.items()) {
-      inListOrder.put(item.circuitId(), item.movable() ? byId.get(item.circuitId()) : item.currentPhase());
+      inListOrder.put(
+          item.circuitId(), item.movable() ? byId.get(item.circuitId()) : item.currentPhase());
     }
     return inListOrder;
   }
@@ -356,11 +398,23 @@ public final class PhaseBalancer {
 
   private BalanceResult refused(BalanceOutcome outcome, String message) {
     return new BalanceResult(
-        outcome, message, Map.of(), null, null, null, null, 0.0, 0.0, false, 0, List.of(), settings);
+        outcome, message, Map.of(), null, null, null, null, 0.0, 0.0, false, 0, List.of(),
+        settings);
   }
 
-  private FewestMovesResult movesRefused(BalanceOutcome outcome, String message, PhaseCurrents before) {
+  private FewestMovesResult movesRefused(
+      BalanceOutcome outcome, String message, PhaseCurrents before) {
     return new FewestMovesResult(
-        outcome, message, before, List.of(), false, null, LimitVerdict.NOT_ASSESSED, null, List.of(), 0, settings);
+        outcome,
+        message,
+        before,
+        List.of(),
+        false,
+        null,
+        LimitVerdict.NOT_ASSESSED,
+        null,
+        List.of(),
+        0,
+        settings);
   }
 }

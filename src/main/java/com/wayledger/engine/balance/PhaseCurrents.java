@@ -3,8 +3,8 @@ package com.wayledger.engine.balance;
 import com.wayledger.engine.Phase;
 
 /**
- * The current on each line of a board, amperes, as the arithmetic sum of the circuit demands on it (see
- * docs/calculations/balance.md for why the balancer adds magnitudes).
+ * The current on each line of a board, amperes, as the arithmetic sum of the circuit demands on it
+ * (see docs/calculations/balance.md for why the balancer adds magnitudes).
  */
 public record PhaseCurrents(double l1Amps, double l2Amps, double l3Amps) {
 
@@ -25,8 +25,8 @@ public record PhaseCurrents(double l1Amps, double l2Amps, double l3Amps) {
   }
 
   /**
-   * Largest deviation from the mean phase current divided by the mean, percent (the NEMA MG-1 definition
-   * applied to currents); 0 for a board that carries no current.
+   * Largest deviation from the mean phase current divided by the mean, percent (the NEMA MG-1
+   * definition applied to currents); 0 for a board that carries no current.
    */
   public double unbalancePercent() {
     double mean = totalAmps() / 3.0;
@@ -34,7 +34,8 @@ public record PhaseCurrents(double l1Amps, double l2Amps, double l3Amps) {
       return 0.0;
     }
     double deviation =
-        Math.max(Math.abs(l1Amps - mean), Math.max(Math.abs(l2Amps - mean), Math.abs(l3Amps - mean)));
+        Math.max(
+            Math.abs(l1Amps - mean), Math.max(Math.abs(l2Amps - mean), Math.abs(l3Amps - mean)));
     return 100.0 * deviation / mean;
   }
 

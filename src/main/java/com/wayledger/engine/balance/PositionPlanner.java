@@ -6,10 +6,10 @@ import java.util.List;
 import java.util.TreeSet;
 
 /**
- * Turns a target arrangement into moves between ways. A circuit moving onto a line takes, in this order:
- * the position of its own way on the new line, when that is free or freed; otherwise the lowest-numbered
- * free or freed way on that line. Positions freed by circuits leaving a line are reused like free ones.
- * Circuits whose line does not change are not touched.
+ * Turns a target arrangement into moves between ways. A circuit moving onto a line takes, in this
+ * order: the position of its own way on the new line, when that is free or freed; otherwise the
+ * lowest-numbered free or freed way on that line. Positions freed by circuits leaving a line are
+ * reused like free ones. Circuits whose line does not change are not touched.
  */
 final class PositionPlanner {
 

@@ -10,9 +10,9 @@ import java.util.Map;
 import java.util.Set;
 
 /**
- * A checked problem in integer centiamps: the movable circuits sorted by demand, largest first, and the
- * fixed load and position limit of each line. Each demand is rounded to the nearest 0.01 A once, here, so
- * every search compares exact integers.
+ * A checked problem in integer centiamps: the movable circuits sorted by demand, largest first, and
+ * the fixed load and position limit of each line. Each demand is rounded to the nearest 0.01 A
+ * once, here, so every search compares exact integers.
  */
 final class PreparedBoard {
 
@@ -25,17 +25,26 @@ final class PreparedBoard {
   record Preparation(PreparedBoard board, BalanceOutcome failure, String message) {}
 
   final BalanceProblem problem;
+
   /** Movable circuits, largest demand first, ties by circuit id so results are repeatable. */
   final BalanceItem[] movable;
+
   /** Demand of {@code movable[i]}, centiamps. */
   final long[] demand;
+
   /** Current line index of {@code movable[i]}, or -1 when not placed. */
   final int[] currentPhase;
+
   final List<BalanceItem> locked;
+
   /** Fixed load per line including locked circuits, centiamps. */
   final long[] fixed;
-  /** Positions per line for the movable circuits; an unlimited line holds {@code movable.length}. */
+
+  /**
+   * Positions per line for the movable circuits; an unlimited line holds {@code movable.length}.
+   */
   final int[] capacity;
+
   final long total;
   final List<String> notes;
 
@@ -57,7 +66,8 @@ final class PreparedBoard {
     long sum = fixed[0] + fixed[1] + fixed[2];
     for (int i = 0; i < movable.length; i++) {
       demand[i] = centiamps(movable[i].demandAmps());
-      currentPhase[i] = movable[i].currentPhase() == null ? -1 : movable[i].currentPhase().ordinal();
+      currentPhase[i] =
+          movable[i].currentPhase() == null ? -1 : movable[i].currentPhase().ordinal();
       sum += demand[i];
     }
     this.total = sum;
@@ -98,9 +108,9 @@ final class PreparedBoard {
   }
 
   /**
-   * The objective as one number: the largest phase load first, then the largest deviation from the mean,
-   * kept as the exact integer max|3·load − total| (three times the deviation), so comparing keys is
-   * comparing (largest current, then unbalance) without rounding.
+   * The objective as one number: the largest phase load first, then the largest deviation from the
+   * mean, kept as the exact integer max|3·load − total| (three times the deviation), so comparing
+   * keys is comparing (largest current, then unbalance) without rounding.
    */
   long keyOf(long[] loads) {
     return key(loads[0], loads[1], loads[2]);
@@ -112,7 +122,10 @@ final class PreparedBoard {
     return max * keyBase() + Math.max(3 * max - total, total - 3 * min);
   }
 
-  /** Lower bound on the key when the largest load is at least {@code max} and the middle one at least {@code mid}. */
+  /**
+   * Lower bound on the key when the largest load is at least {@code max} and the middle one at
+   * least {@code mid}.
+   */
   long keyBound(long max, long mid) {
     long smallestUpper = total - max - mid;
     return max * keyBase() + Math.max(3 * max - total, Math.max(0, total - 3 * smallestUpper));
@@ -145,14 +158,19 @@ final class PreparedBoard {
       if (!ids.add(item.circuitId())) {
         return failed(
             BalanceOutcome.INVALID_INPUT,
-            "Circuit id " + item.circuitId() + " appears more than once; each circuit may be listed once.");
+            "Circuit id "
+                + item.circuitId()
+                + " appears more than once; each circuit may be listed once.");
       }
       if (item.demandAmps() == null) {
         missingDemand.add("'" + item.label() + "'");
       } else if (!Double.isFinite(item.demandAmps()) || item.demandAmps() < 0.0) {
         return failed(
             BalanceOutcome.INVALID_INPUT,
-            "Circuit '" + item.label() + "' has an impossible demand of " + item.demandAmps()
+            "Circuit '"
+                + item.label()
+                + "' has an impossible demand of "
+                + item.demandAmps()
                 + " A; demand must be zero or more.");
       }
       if (!item.movable() && item.currentPhase() == null) {
@@ -167,7 +185,8 @@ final class PreparedBoard {
     if (!unplacedLocked.isEmpty()) {
       return failed(
           BalanceOutcome.NOT_ASSESSED,
-          "Not assessed: locked circuit " + String.join(", ", unplacedLocked)
+          "Not assessed: locked circuit "
+              + String.join(", ", unplacedLocked)
               + " has no phase; a locked circuit must say which line it is locked to.");
     }
     long[] fixed = new long[3];
@@ -181,7 +200,11 @@ final class PreparedBoard {
         if (!Double.isFinite(amps) || amps < 0.0) {
           return failed(
               BalanceOutcome.INVALID_INPUT,
-              "Fixed load on " + entry.getKey() + " of " + amps + " A is impossible; it must be zero or more.");
+              "Fixed load on "
+                  + entry.getKey()
+                  + " of "
+                  + amps
+                  + " A is impossible; it must be zero or more.");
         }
         fixed[entry.getKey().ordinal()] += centiamps(amps);
       }
@@ -193,7 +216,9 @@ final class PreparedBoard {
     if (totalAmps > MAX_TOTAL_AMPS) {
       return failed(
           BalanceOutcome.INVALID_INPUT,
-          "The board's total demand of " + totalAmps + " A is beyond any low-voltage board; check the units.");
+          "The board's total demand of "
+              + totalAmps
+              + " A is beyond any low-voltage board; check the units.");
     }
     List<BalanceItem> movableItems = new ArrayList<>();
     List<BalanceItem> locked = new ArrayList<>();
@@ -214,7 +239,8 @@ final class PreparedBoard {
     List<String> notes = new ArrayList<>();
     int[] capacity = new int[3];
     for (Phase phase : PHASES) {
-      Integer given = problem.positionsAvailable() == null ? null : problem.positionsAvailable().get(phase);
+      Integer given =
+          problem.positionsAvailable() == null ? null : problem.positionsAvailable().get(phase);
       if (given != null) {
         if (given < 0) {
           return failed(
@@ -224,7 +250,8 @@ final class PreparedBoard {
         capacity[phase.ordinal()] = Math.min(given, movable.length);
       } else if (problem.freeWays() != null) {
         List<Integer> free = problem.freeWays().get(phase);
-        long onPhaseNow = movableItems.stream().filter(item -> item.currentPhase() == phase).count();
+        long onPhaseNow =
+            movableItems.stream().filter(item -> item.currentPhase() == phase).count();
         capacity[phase.ordinal()] =
             (int) Math.min(movable.length, onPhaseNow + (free == null ? 0 : free.size()));
       } else {
@@ -236,8 +263,15 @@ final class PreparedBoard {
     if (movable.length > positions) {
       return failed(
           BalanceOutcome.TOO_MANY_CIRCUITS,
-          movable.length + " movable single-phase circuits but only " + positions + " positions for them (L1 "
-              + capacity[0] + ", L2 " + capacity[1] + ", L3 " + capacity[2]
+          movable.length
+              + " movable single-phase circuits but only "
+              + positions
+              + " positions for them (L1 "
+              + capacity[0]
+              + ", L2 "
+              + capacity[1]
+              + ", L3 "
+              + capacity[2]
               + "): free positions or lock circuits before balancing.");
     }
     return new Preparation(

@@ -1,6 +1,8 @@
 package com.wayledger.engine.balance;
 
-/** Counts search nodes against a node budget and a wall-clock deadline shared by one balancer call. */
+/**
+ * Counts search nodes against a node budget and a wall-clock deadline shared by one balancer call.
+ */
 final class SearchBudget {
 
   private static final int CLOCK_CHECK_MASK = 1023;
@@ -22,7 +24,8 @@ final class SearchBudget {
     }
     nodes++;
     // Reading the clock costs more than a node, so look at it only every 1024 nodes.
-    if (nodes >= nodeLimit || ((nodes & CLOCK_CHECK_MASK) == 0 && System.nanoTime() > deadlineNanos)) {
+    if (nodes >= nodeLimit
+        || ((nodes & CLOCK_CHECK_MASK) == 0 && System.nanoTime() > deadlineNanos)) {
       exhausted = true;
     }
     return !exhausted;

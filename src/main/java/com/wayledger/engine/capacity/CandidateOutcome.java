@@ -14,12 +14,14 @@ import java.util.Map;
  * @param wayLoadingPercent Ib ÷ In, %; null when In is not known
  * @param phaseCurrentsBeforeAmps demand current per line of the board before, A
  * @param phaseCurrentsAfterAmps the same after, A
- * @param incomerLoadingPercent largest phase current ÷ incomer rating after, %; null when not assessed
+ * @param incomerLoadingPercent largest phase current ÷ incomer rating after, %; null when not
+ *     assessed
  * @param busbarLoadingPercent the same against the busbar, %; null when not assessed
- * @param supplyLoadingPercent largest phase current at the origin ÷ supply fuse after, %; null when not assessed
+ * @param supplyLoadingPercent largest phase current at the origin ÷ supply fuse after, %; null when
+ *     not assessed
  * @param unbalancePercentAfter phase unbalance of the board after, %; null for a single-phase board
- * @param newFindings problem findings (danger, warning) that the change would add or make worse, anywhere on
- *     the site
+ * @param newFindings problem findings (danger, warning) that the change would add or make worse,
+ *     anywhere on the site
  * @param reason one line saying why it ranks where it does
  */
 public record CandidateOutcome(
@@ -43,16 +45,23 @@ public record CandidateOutcome(
   }
 
   public long newDangerCount() {
-    return newFindings.stream().filter(f -> f.verdict() == com.wayledger.engine.protection.result.Verdict.DANGER).count();
+    return newFindings.stream()
+        .filter(f -> f.verdict() == com.wayledger.engine.protection.result.Verdict.DANGER)
+        .count();
   }
 
   public long newWarningCount() {
-    return newFindings.stream().filter(f -> f.verdict() == com.wayledger.engine.protection.result.Verdict.WARNING).count();
+    return newFindings.stream()
+        .filter(f -> f.verdict() == com.wayledger.engine.protection.result.Verdict.WARNING)
+        .count();
   }
 
   /** The largest line current of the board after the change, A. */
   public double largestPhaseAmps() {
-    return phaseCurrentsAfterAmps.values().stream().mapToDouble(Double::doubleValue).max().orElse(0.0);
+    return phaseCurrentsAfterAmps.values().stream()
+        .mapToDouble(Double::doubleValue)
+        .max()
+        .orElse(0.0);
   }
 
   public Double phaseAfter(Phase phase) {

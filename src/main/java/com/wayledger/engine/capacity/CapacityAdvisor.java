@@ -22,8 +22,8 @@ import com.wayledger.engine.protection.CircuitLoading;
 import com.wayledger.engine.protection.DeviceProposal;
 import com.wayledger.engine.protection.DeviceProposer;
 import com.wayledger.engine.protection.ProtectionEngine;
-import com.wayledger.engine.protection.RecordedMccbSettings;
 import com.wayledger.engine.protection.ProtectionSettings;
+import com.wayledger.engine.protection.RecordedMccbSettings;
 import com.wayledger.engine.protection.SiteFindings;
 import com.wayledger.engine.protection.device.McbStandard;
 import com.wayledger.engine.protection.result.CheckKind;
@@ -41,11 +41,12 @@ import java.util.Set;
 /**
  * Tries a new load at every candidate position and ranks the results.
  *
- * <p>Ranking, best first: fewest new danger findings; then fewest new warnings (an overloaded way or incomer
- * is a warning, and must not rank above a clean candidate); then the lowest largest phase current on the board
- * after the change; then the lowest unbalance after; then spare ways before shared circuits before new
- * circuits (the least work), then way order. Empty positions on the same line of a board are electrically
- * alike to the engine, so only the first free one per line (per three-pole way) is offered.
+ * <p>Ranking, best first: fewest new danger findings; then fewest new warnings (an overloaded way
+ * or incomer is a warning, and must not rank above a clean candidate); then the lowest largest
+ * phase current on the board after the change; then the lowest unbalance after; then spare ways
+ * before shared circuits before new circuits (the least work), then way order. Empty positions on
+ * the same line of a board are electrically alike to the engine, so only the first free one per
+ * line (per three-pole way) is offered.
  */
 public final class CapacityAdvisor {
 
@@ -57,13 +58,24 @@ public final class CapacityAdvisor {
    * @param load the new load
    */
   public static CapacityAnswer ask(
-      SiteSpec site, Set<Long> boardIds, NewLoad load, DiversityMethodCatalog methods, ProtectionSettings settings) {
+      SiteSpec site,
+      Set<Long> boardIds,
+      NewLoad load,
+      DiversityMethodCatalog methods,
+      ProtectionSettings settings) {
     return ask(site, boardIds, load, methods, RecordedMccbSettings.NONE, settings);
   }
 
-  /** As above, with the MCCB settings recorded on the site (a new trial circuit has none, so it is assumed). */
+  /**
+   * As above, with the MCCB settings recorded on the site (a new trial circuit has none, so it is
+   * assumed).
+   */
   public static CapacityAnswer ask(
-      SiteSpec site, Set<Long> boardIds, NewLoad load, DiversityMethodCatalog methods, RecordedMccbSettings mccb,
+      SiteSpec site,
+      Set<Long> boardIds,
+      NewLoad load,
+      DiversityMethodCatalog methods,
+      RecordedMccbSettings mccb,
       ProtectionSettings settings) {
     Analysis before = Analysis.of(site, methods, mccb, settings);
     List<String> notes = new ArrayList<>();
@@ -85,14 +97,16 @@ public final class CapacityAdvisor {
       }
     }
     outcomes.sort(RANKING);
-    return new CapacityAnswer(load, outcomes.stream().map(CapacityAdvisor::withReason).toList(), notes);
+    return new CapacityAnswer(
+        load, outcomes.stream().map(CapacityAdvisor::withReason).toList(), notes);
   }
 
   static final Comparator<CandidateOutcome> RANKING =
       Comparator.comparingLong(CandidateOutcome::newDangerCount)
           .thenComparingLong(CandidateOutcome::newWarningCount)
           .thenComparingDouble(o -> round(o.largestPhaseAmps()))
-          .thenComparingDouble(o -> o.unbalancePercentAfter() == null ? 0.0 : round(o.unbalancePercentAfter()))
+          .thenComparingDouble(
+              o -> o.unbalancePercentAfter() == null ? 0.0 : round(o.unbalancePercentAfter()))
           .thenComparing(o -> kindOrder(o.candidate().kind()))
           .thenComparing(o -> o.candidate().boardReference())
           .thenComparingInt(o -> o.candidate().wayNumber())
@@ -117,7 +131,8 @@ public final class CapacityAdvisor {
     Map<String, CircuitSpec> emptyRecords = new HashMap<>();
     for (CircuitSpec circuit : board.circuits()) {
       for (Phase phase : circuit.position().phases()) {
-        (circuit.status() == WayStatus.EMPTY ? emptyRecords : held).put(key(circuit.wayNumber(), phase), circuit);
+        (circuit.status() == WayStatus.EMPTY ? emptyRecords : held)
+            .put(key(circuit.wayNumber(), phase), circuit);
       }
     }
     List<Candidate> found = new ArrayList<>();
@@ -164,13 +179,32 @@ public final class CapacityAdvisor {
   }
 
   private static Candidate existing(BoardSpec board, CircuitSpec circuit, CandidateKind kind) {
-    return new Candidate(board.id(), board.reference(), kind, circuit.wayNumber(), circuit.position(), circuit.id(),
-        circuit.description(), circuit.device(), false, "");
+    return new Candidate(
+        board.id(),
+        board.reference(),
+        kind,
+        circuit.wayNumber(),
+        circuit.position(),
+        circuit.id(),
+        circuit.description(),
+        circuit.device(),
+        false,
+        "");
   }
 
-  private static Candidate empty(BoardSpec board, int way, PhasePosition position, CircuitSpec record) {
-    return new Candidate(board.id(), board.reference(), CandidateKind.EMPTY_POSITION, way, position,
-        record == null ? null : record.id(), null, null, true, "");
+  private static Candidate empty(
+      BoardSpec board, int way, PhasePosition position, CircuitSpec record) {
+    return new Candidate(
+        board.id(),
+        board.reference(),
+        CandidateKind.EMPTY_POSITION,
+        way,
+        position,
+        record == null ? null : record.id(),
+        null,
+        null,
+        true,
+        "");
   }
 
   /** Id given to a new circuit in the trial copy of the site: below every stored id. */
@@ -185,7 +219,13 @@ public final class CapacityAdvisor {
   }
 
   /** The site with the load placed at the candidate; {@code device} protects a new circuit. */
-  static SiteSpec withLoad(SiteSpec site, BoardSpec board, Candidate candidate, NewLoad load, DeviceSpec device, long newId) {
+  static SiteSpec withLoad(
+      SiteSpec site,
+      BoardSpec board,
+      Candidate candidate,
+      NewLoad load,
+      DeviceSpec device,
+      long newId) {
     List<CircuitSpec> circuits = new ArrayList<>();
     boolean placed = false;
     for (CircuitSpec circuit : board.circuits()) {
@@ -197,35 +237,100 @@ public final class CapacityAdvisor {
       }
     }
     if (!placed) {
-      circuits.add(new CircuitSpec(newId, candidate.wayNumber(), candidate.position(), load.description(),
-          WayStatus.IN_USE, false, device, null, List.of(load.toLoadSpec()), null, null));
+      circuits.add(
+          new CircuitSpec(
+              newId,
+              candidate.wayNumber(),
+              candidate.position(),
+              load.description(),
+              WayStatus.IN_USE,
+              false,
+              device,
+              null,
+              List.of(load.toLoadSpec()),
+              null,
+              null));
     }
-    BoardSpec changed = new BoardSpec(board.id(), board.reference(), board.phases(), board.wayCount(),
-        board.busbarRatingAmps(), board.incomer(), board.parentBoardId(), board.submainCable(),
-        board.unbalanceLimitPercent(), board.coincidenceFactor(), board.diversityMethodKey(),
-        board.measuredExternalLoopImpedanceOhms(), board.measuredFaultCurrentKiloAmps(), circuits);
-    List<BoardSpec> boards = site.boards().stream().map(b -> b.id() == board.id() ? changed : b).toList();
-    return new SiteSpec(site.id(), site.name(), site.supply(), site.defaultDiversityMethodKey(), boards);
+    BoardSpec changed =
+        new BoardSpec(
+            board.id(),
+            board.reference(),
+            board.phases(),
+            board.wayCount(),
+            board.busbarRatingAmps(),
+            board.incomer(),
+            board.parentBoardId(),
+            board.submainCable(),
+            board.unbalanceLimitPercent(),
+            board.coincidenceFactor(),
+            board.diversityMethodKey(),
+            board.measuredExternalLoopImpedanceOhms(),
+            board.measuredFaultCurrentKiloAmps(),
+            circuits);
+    List<BoardSpec> boards =
+        site.boards().stream().map(b -> b.id() == board.id() ? changed : b).toList();
+    return new SiteSpec(
+        site.id(), site.name(), site.supply(), site.defaultDiversityMethodKey(), boards);
   }
 
-  private static CircuitSpec placedOn(CircuitSpec circuit, Candidate candidate, NewLoad load, DeviceSpec device) {
+  private static CircuitSpec placedOn(
+      CircuitSpec circuit, Candidate candidate, NewLoad load, DeviceSpec device) {
     List<com.wayledger.engine.LoadSpec> loads = new ArrayList<>(circuit.loads());
     loads.add(load.toLoadSpec());
     return switch (candidate.kind()) {
-      case SHARED_CIRCUIT -> new CircuitSpec(circuit.id(), circuit.wayNumber(), circuit.position(), circuit.description(),
-          WayStatus.IN_USE, circuit.lockedForBalancing(), circuit.device(), circuit.cable(), loads, null,
-          circuit.measuredLoopImpedanceOhms(), circuit.ringFinal());
-      case SPARE_WAY -> new CircuitSpec(circuit.id(), circuit.wayNumber(), circuit.position(), load.description(),
-          WayStatus.IN_USE, circuit.lockedForBalancing(), circuit.device(), circuit.cable(), List.of(load.toLoadSpec()),
-          null, circuit.measuredLoopImpedanceOhms(), circuit.ringFinal());
-      case EMPTY_POSITION -> new CircuitSpec(circuit.id(), candidate.wayNumber(), candidate.position(), load.description(),
-          WayStatus.IN_USE, false, device, null, List.of(load.toLoadSpec()), null, null);
+      case SHARED_CIRCUIT ->
+          new CircuitSpec(
+              circuit.id(),
+              circuit.wayNumber(),
+              circuit.position(),
+              circuit.description(),
+              WayStatus.IN_USE,
+              circuit.lockedForBalancing(),
+              circuit.device(),
+              circuit.cable(),
+              loads,
+              null,
+              circuit.measuredLoopImpedanceOhms(),
+              circuit.ringFinal());
+      case SPARE_WAY ->
+          new CircuitSpec(
+              circuit.id(),
+              circuit.wayNumber(),
+              circuit.position(),
+              load.description(),
+              WayStatus.IN_USE,
+              circuit.lockedForBalancing(),
+              circuit.device(),
+              circuit.cable(),
+              List.of(load.toLoadSpec()),
+              null,
+              circuit.measuredLoopImpedanceOhms(),
+              circuit.ringFinal());
+      case EMPTY_POSITION ->
+          new CircuitSpec(
+              circuit.id(),
+              candidate.wayNumber(),
+              candidate.position(),
+              load.description(),
+              WayStatus.IN_USE,
+              false,
+              device,
+              null,
+              List.of(load.toLoadSpec()),
+              null,
+              null);
     };
   }
 
   private static CandidateOutcome evaluate(
-      SiteSpec site, BoardSpec board, Candidate candidate, NewLoad load, Analysis before,
-      DiversityMethodCatalog methods, RecordedMccbSettings mccb, ProtectionSettings settings) {
+      SiteSpec site,
+      BoardSpec board,
+      Candidate candidate,
+      NewLoad load,
+      Analysis before,
+      DiversityMethodCatalog methods,
+      RecordedMccbSettings mccb,
+      ProtectionSettings settings) {
     long newId = trialId(site);
     long wayId = candidate.circuitId() != null ? candidate.circuitId() : newId;
     Candidate placed = candidate;
@@ -242,11 +347,18 @@ public final class CapacityAdvisor {
     double ib = designCurrent(after.demand(), board.id(), wayId);
     Double in = placed.device() == null ? null : placed.device().ratedCurrentAmps();
     return new CandidateOutcome(
-        placed, ib, in, in == null || in <= 0 ? null : 100.0 * ib / in,
-        currents(boardBefore), currents(boardAfter),
-        boardAfter.incomer().loadingPercent(), boardAfter.busbar().loadingPercent(),
-        supplyLoading(after.findings()), boardAfter.unbalancePercent(),
-        newProblems(before.findings(), after.findings(), wayId), "");
+        placed,
+        ib,
+        in,
+        in == null || in <= 0 ? null : 100.0 * ib / in,
+        currents(boardBefore),
+        currents(boardAfter),
+        boardAfter.incomer().loadingPercent(),
+        boardAfter.busbar().loadingPercent(),
+        supplyLoading(after.findings()),
+        boardAfter.unbalancePercent(),
+        newProblems(before.findings(), after.findings(), wayId),
+        "");
   }
 
   private static double designCurrent(SiteDemand demand, long boardId, long circuitId) {
@@ -259,16 +371,26 @@ public final class CapacityAdvisor {
   }
 
   /**
-   * A device for a new circuit: the protection engine's proposal where it can make one (it needs the cable,
-   * which a new circuit does not have yet), otherwise the smallest standard MCB rating not below Ib, type B,
-   * or C or D where the start-up surge would reach the lower edge of B's (or C's) instantaneous band.
+   * A device for a new circuit: the protection engine's proposal where it can make one (it needs
+   * the cable, which a new circuit does not have yet), otherwise the smallest standard MCB rating
+   * not below Ib, type B, or C or D where the start-up surge would reach the lower edge of B's (or
+   * C's) instantaneous band.
    */
   static Candidate proposeDevice(
-      SiteSpec trial, Candidate candidate, long wayId, double ib, NewLoad load, ProtectionSettings settings) {
+      SiteSpec trial,
+      Candidate candidate,
+      long wayId,
+      double ib,
+      NewLoad load,
+      ProtectionSettings settings) {
     int poles = candidate.position() == PhasePosition.THREE_POLE ? 3 : 1;
-    DeviceProposal proposal = DeviceProposer.propose(trial, wayId, new CircuitLoading(wayId, ib), settings);
+    DeviceProposal proposal =
+        DeviceProposer.propose(trial, wayId, new CircuitLoading(wayId, ib), settings);
     if (proposal.found()) {
-      return withDevice(candidate, proposal.device(), "device proposed by the protection checks for the recorded cable");
+      return withDevice(
+          candidate,
+          proposal.device(),
+          "device proposed by the protection checks for the recorded cable");
     }
     double surgeAmps = load.startUpSurgeMultiple() == null ? 0.0 : load.startUpSurgeMultiple() * ib;
     for (double rating : McbStandard.STANDARD_RATINGS_AMPS) {
@@ -277,22 +399,48 @@ public final class CapacityAdvisor {
       }
       for (TripCurve curve : TripCurve.values()) {
         if (surgeAmps < curve.lowestInstantMultiple() * rating) {
-          DeviceSpec device = new DeviceSpec(DeviceKind.MCB, curve, rating, poles, null, null, null);
-          return withDevice(candidate, device,
-              "MCB type " + curve + " " + fixed(rating) + " A: the smallest standard rating not below Ib "
-                  + fixed(ib) + " A" + (surgeAmps > 0 ? " whose instantaneous band starts above the start-up surge of "
-                  + fixed(surgeAmps) + " A" : "") + ". The cable must be sized for it (Iz ≥ In, voltage drop, Zs)"
+          DeviceSpec device =
+              new DeviceSpec(DeviceKind.MCB, curve, rating, poles, null, null, null);
+          return withDevice(
+              candidate,
+              device,
+              "MCB type "
+                  + curve
+                  + " "
+                  + fixed(rating)
+                  + " A: the smallest standard rating not below Ib "
+                  + fixed(ib)
+                  + " A"
+                  + (surgeAmps > 0
+                      ? " whose instantaneous band starts above the start-up surge of "
+                          + fixed(surgeAmps)
+                          + " A"
+                      : "")
+                  + ". The cable must be sized for it (Iz ≥ In, voltage drop, Zs)"
                   + " and the breaking capacity chosen for the fault level at the board");
         }
       }
     }
-    return withDevice(candidate, null,
-        "no standard MCB up to 125 A fits Ib " + fixed(ib) + " A: a moulded-case breaker and a designed circuit are needed");
+    return withDevice(
+        candidate,
+        null,
+        "no standard MCB up to 125 A fits Ib "
+            + fixed(ib)
+            + " A: a moulded-case breaker and a designed circuit are needed");
   }
 
   private static Candidate withDevice(Candidate candidate, DeviceSpec device, String note) {
-    return new Candidate(candidate.boardId(), candidate.boardReference(), candidate.kind(), candidate.wayNumber(),
-        candidate.position(), candidate.circuitId(), candidate.circuitDescription(), device, true, note);
+    return new Candidate(
+        candidate.boardId(),
+        candidate.boardReference(),
+        candidate.kind(),
+        candidate.wayNumber(),
+        candidate.position(),
+        candidate.circuitId(),
+        candidate.circuitDescription(),
+        device,
+        true,
+        note);
   }
 
   private static Map<Phase, Double> currents(BoardDemand board) {
@@ -305,81 +453,124 @@ public final class CapacityAdvisor {
 
   private static Double supplyLoading(SiteFindings findings) {
     return findings.siteFindings().stream()
-        .filter(f -> f.check() == CheckKind.SUPPLY_FUSE_OVERLOAD && f.verdict() != Verdict.NOT_ASSESSED)
+        .filter(
+            f -> f.check() == CheckKind.SUPPLY_FUSE_OVERLOAD && f.verdict() != Verdict.NOT_ASSESSED)
         .findFirst()
         .map(f -> 100.0 * f.value("largest phase current") / f.value("supply fuse rating"))
         .orElse(null);
   }
 
   /**
-   * Danger and warning findings after the change that were not there before at that grade or worse; a
-   * finding is identified by where it is (site, board, circuit, and the way for selectivity) and its check.
+   * Danger and warning findings after the change that were not there before at that grade or worse;
+   * a finding is identified by where it is (site, board, circuit, and the way for selectivity) and
+   * its check.
    */
   static List<Finding> newProblems(SiteFindings before, SiteFindings after, long changedCircuitId) {
     Map<String, Verdict> was = new HashMap<>();
-    index(before, (key, finding) -> was.merge(key, finding.verdict(), (a, b) -> a.compareTo(b) <= 0 ? a : b));
+    index(
+        before,
+        (key, finding) -> was.merge(key, finding.verdict(), (a, b) -> a.compareTo(b) <= 0 ? a : b));
     List<Finding> added = new ArrayList<>();
-    index(after, (key, finding) -> {
-      boolean problem = finding.verdict() == Verdict.DANGER || finding.verdict() == Verdict.WARNING;
-      Verdict earlier = was.get(key);
-      if (problem && (earlier == null || earlier.compareTo(finding.verdict()) > 0)) {
-        added.add(finding);
-      }
-    });
+    index(
+        after,
+        (key, finding) -> {
+          boolean problem =
+              finding.verdict() == Verdict.DANGER || finding.verdict() == Verdict.WARNING;
+          Verdict earlier = was.get(key);
+          if (problem && (earlier == null || earlier.compareTo(finding.verdict()) > 0)) {
+            added.add(finding);
+          }
+        });
     added.sort(Comparator.comparing(Finding::verdict));
     return added;
   }
 
-  private static void index(SiteFindings findings, java.util.function.BiConsumer<String, Finding> each) {
+  private static void index(
+      SiteFindings findings, java.util.function.BiConsumer<String, Finding> each) {
     findings.siteFindings().forEach(f -> each.accept("site:" + f.check(), f));
     for (BoardFindings board : findings.boards()) {
       for (Finding f : board.findings()) {
-        String way = f.check() == CheckKind.SELECTIVITY && f.summary().startsWith("way ")
-            ? f.summary().substring(0, f.summary().indexOf(':') < 0 ? f.summary().length() : f.summary().indexOf(':'))
-            : "";
+        String way =
+            f.check() == CheckKind.SELECTIVITY && f.summary().startsWith("way ")
+                ? f.summary()
+                    .substring(
+                        0,
+                        f.summary().indexOf(':') < 0
+                            ? f.summary().length()
+                            : f.summary().indexOf(':'))
+                : "";
         each.accept("board:" + board.boardId() + ":" + f.check() + ":" + way, f);
       }
       for (CircuitFindings circuit : board.circuits()) {
-        circuit.findings().forEach(f -> each.accept("circuit:" + circuit.circuitId() + ":" + f.check(), f));
+        circuit
+            .findings()
+            .forEach(f -> each.accept("circuit:" + circuit.circuitId() + ":" + f.check(), f));
       }
     }
   }
 
   private static CandidateOutcome withReason(CandidateOutcome o) {
-    return new CandidateOutcome(o.candidate(), o.designCurrentAmps(), o.ratedCurrentAmps(), o.wayLoadingPercent(),
-        o.phaseCurrentsBeforeAmps(), o.phaseCurrentsAfterAmps(), o.incomerLoadingPercent(), o.busbarLoadingPercent(),
-        o.supplyLoadingPercent(), o.unbalancePercentAfter(), o.newFindings(), reason(o));
+    return new CandidateOutcome(
+        o.candidate(),
+        o.designCurrentAmps(),
+        o.ratedCurrentAmps(),
+        o.wayLoadingPercent(),
+        o.phaseCurrentsBeforeAmps(),
+        o.phaseCurrentsAfterAmps(),
+        o.incomerLoadingPercent(),
+        o.busbarLoadingPercent(),
+        o.supplyLoadingPercent(),
+        o.unbalancePercentAfter(),
+        o.newFindings(),
+        reason(o));
   }
 
   /** One line: where, the way's loading, the worst line after, and what it would set off. */
   static String reason(CandidateOutcome o) {
     Candidate c = o.candidate();
     StringBuilder text = new StringBuilder();
-    text.append(switch (c.kind()) {
-      case SPARE_WAY -> "Spare way " + c.label();
-      case SHARED_CIRCUIT -> "Share " + c.label() + " (" + c.circuitDescription() + ")";
-      case EMPTY_POSITION -> "New circuit at " + c.label();
-    });
+    text.append(
+        switch (c.kind()) {
+          case SPARE_WAY -> "Spare way " + c.label();
+          case SHARED_CIRCUIT -> "Share " + c.label() + " (" + c.circuitDescription() + ")";
+          case EMPTY_POSITION -> "New circuit at " + c.label();
+        });
     text.append(": Ib ").append(fixed(o.designCurrentAmps())).append(" A");
     if (o.ratedCurrentAmps() != null) {
       text.append(" on In ").append(fixed(o.ratedCurrentAmps())).append(" A");
     }
-    Phase worst = o.phaseCurrentsAfterAmps().entrySet().stream().max(Map.Entry.comparingByValue()).map(Map.Entry::getKey).orElse(null);
+    Phase worst =
+        o.phaseCurrentsAfterAmps().entrySet().stream()
+            .max(Map.Entry.comparingByValue())
+            .map(Map.Entry::getKey)
+            .orElse(null);
     if (worst != null) {
-      text.append("; largest line ").append(worst).append(' ').append(fixed(o.largestPhaseAmps())).append(" A");
+      text.append("; largest line ")
+          .append(worst)
+          .append(' ')
+          .append(fixed(o.largestPhaseAmps()))
+          .append(" A");
       if (o.incomerLoadingPercent() != null) {
-        text.append(" (").append(String.format(Locale.ROOT, "%.0f", o.incomerLoadingPercent())).append(" % of the incomer)");
+        text.append(" (")
+            .append(String.format(Locale.ROOT, "%.0f", o.incomerLoadingPercent()))
+            .append(" % of the incomer)");
       }
     }
     if (o.unbalancePercentAfter() != null) {
-      text.append(", unbalance ").append(String.format(Locale.ROOT, "%.1f", o.unbalancePercentAfter())).append(" %");
+      text.append(", unbalance ")
+          .append(String.format(Locale.ROOT, "%.1f", o.unbalancePercentAfter()))
+          .append(" %");
     }
     if (o.isClean()) {
       text.append("; adds no danger or warning finding");
     } else {
       Finding first = o.newFindings().get(0);
-      text.append("; would add ").append(o.newDangerCount()).append(" danger and ").append(o.newWarningCount())
-          .append(" warning finding(s), first: ").append(first.summary());
+      text.append("; would add ")
+          .append(o.newDangerCount())
+          .append(" danger and ")
+          .append(o.newWarningCount())
+          .append(" warning finding(s), first: ")
+          .append(first.summary());
     }
     return text.toString();
   }
@@ -392,18 +583,24 @@ public final class CapacityAdvisor {
   record Analysis(SiteDemand demand, SiteFindings findings) {
 
     static Analysis of(
-        SiteSpec site, DiversityMethodCatalog methods, RecordedMccbSettings mccb, ProtectionSettings settings) {
+        SiteSpec site,
+        DiversityMethodCatalog methods,
+        RecordedMccbSettings mccb,
+        ProtectionSettings settings) {
       SiteDemand demand = DemandEngine.evaluate(site, methods);
       Map<Long, CircuitLoading> circuits = new HashMap<>();
       Map<Long, BoardLoading> boards = new HashMap<>();
       for (BoardDemand board : demand.boards()) {
         for (CircuitDemand circuit : board.circuits()) {
-          circuits.put(circuit.circuitId(),
-              new CircuitLoading(circuit.circuitId(), circuit.isAssessed() ? circuit.designCurrentAmps() : null));
+          circuits.put(
+              circuit.circuitId(),
+              new CircuitLoading(
+                  circuit.circuitId(), circuit.isAssessed() ? circuit.designCurrentAmps() : null));
         }
         Map<Phase, Double> currents = new EnumMap<>(Phase.class);
         board.phases().forEach(p -> currents.put(p.phase(), p.currentAmps()));
-        boards.put(board.boardId(), new BoardLoading(board.boardId(), currents, board.unbalancePercent()));
+        boards.put(
+            board.boardId(), new BoardLoading(board.boardId(), currents, board.unbalancePercent()));
       }
       return new Analysis(demand, ProtectionEngine.check(site, circuits, boards, mccb, settings));
     }

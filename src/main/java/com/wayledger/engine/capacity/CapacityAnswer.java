@@ -7,8 +7,8 @@ import java.util.List;
  *
  * @param load the load asked about
  * @param outcomes every candidate, best first
- * @param notes why some boards offered no candidate (a three-phase load on a single-phase board, no free
- *     position), and the ranking rule
+ * @param notes why some boards offered no candidate (a three-phase load on a single-phase board, no
+ *     free position), and the ranking rule
  */
 public record CapacityAnswer(NewLoad load, List<CandidateOutcome> outcomes, List<String> notes) {
 

@@ -9,25 +9,41 @@ import com.wayledger.engine.RatingUnit;
  *
  * @param description what it is
  * @param category diversity category
- * @param ratingValue nameplate rating: kW when {@code ratingUnit} is W (the total for a three-phase load), or
- *     A (per line for a three-phase load)
+ * @param ratingValue nameplate rating: kW when {@code ratingUnit} is W (the total for a three-phase
+ *     load), or A (per line for a three-phase load)
  * @param ratingUnit W (given in kW) or A
  * @param powerFactor cos φ in (0, 1]
  * @param threePhase whether it needs a three-pole way
- * @param startUpSurgeMultiple peak start-up current as a multiple of running current; null when none
+ * @param startUpSurgeMultiple peak start-up current as a multiple of running current; null when
+ *     none
  */
 public record NewLoad(
-    String description, LoadCategory category, double ratingValue, RatingUnit ratingUnit, double powerFactor,
-    boolean threePhase, Double startUpSurgeMultiple) {
+    String description,
+    LoadCategory category,
+    double ratingValue,
+    RatingUnit ratingUnit,
+    double powerFactor,
+    boolean threePhase,
+    Double startUpSurgeMultiple) {
 
-  /** Assumed duration of a start-up surge when only its multiple is given, ms (a typical motor start). */
+  /**
+   * Assumed duration of a start-up surge when only its multiple is given, ms (a typical motor
+   * start).
+   */
   public static final double DEFAULT_SURGE_MILLIS = 200.0;
 
   /** The load as one line of a circuit's load list. */
   public LoadSpec toLoadSpec() {
     double value = ratingUnit == RatingUnit.W ? ratingValue * 1000.0 : ratingValue;
     return new LoadSpec(
-        description, category, 1, value, ratingUnit, powerFactor, startUpSurgeMultiple,
-        startUpSurgeMultiple == null ? null : DEFAULT_SURGE_MILLIS, false);
+        description,
+        category,
+        1,
+        value,
+        ratingUnit,
+        powerFactor,
+        startUpSurgeMultiple,
+        startUpSurgeMultiple == null ? null : DEFAULT_SURGE_MILLIS,
+        false);
   }
 }

@@ -15,8 +15,9 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * Demand of one board. Diversity reaches the phases line by line: each rule gives every load line its own
- * demand, and the line keeps its power factor, so the per-phase sums add up to the board total exactly.
+ * Demand of one board. Diversity reaches the phases line by line: each rule gives every load line
+ * its own demand, and the line keeps its power factor, so the per-phase sums add up to the board
+ * total exactly.
  */
 final class BoardCalculation {
 
@@ -72,29 +73,42 @@ final class BoardCalculation {
         for (LoadSpec load : circuit.loads()) {
           ConnectedLoad connected = ConnectedLoad.of(load, u0, threePole);
           if (!connected.isAssessed()) {
-            reason[c] = "not assessed — load \"" + load.description() + "\": missing or invalid " + connected.missingInput();
+            reason[c] =
+                "not assessed — load \""
+                    + load.description()
+                    + "\": missing or invalid "
+                    + connected.missingInput();
             break;
           }
         }
       }
       if (reason[c] != null) {
-        notAssessed.add("way " + circuit.wayNumber() + " (" + circuit.description() + "): " + reason[c]);
+        notAssessed.add(
+            "way " + circuit.wayNumber() + " (" + circuit.description() + "): " + reason[c]);
         continue;
       }
       for (LoadSpec load : circuit.loads()) {
         ConnectedLoad connected = ConnectedLoad.of(load, u0, threePole);
-        lines.add(c, load.category(), load.quantity(), connected.activeWatts(), connected.reactiveVars());
+        lines.add(
+            c, load.category(), load.quantity(), connected.activeWatts(), connected.reactiveVars());
       }
       if (circuit.feedsBoardId() != null) {
         if (!carried.add(circuit.feedsBoardId())) {
-          notes.add("way " + circuit.wayNumber() + " feeds sub-board #" + circuit.feedsBoardId()
-              + " like an earlier way; its demand is carried once, by the earlier way");
+          notes.add(
+              "way "
+                  + circuit.wayNumber()
+                  + " feeds sub-board #"
+                  + circuit.feedsBoardId()
+                  + " like an earlier way; its demand is carried once, by the earlier way");
           continue;
         }
         subBoard[c] = context.evaluatedSubBoards().get(circuit.feedsBoardId());
         if (subBoard[c] == null) {
           notAssessed.add(
-              "way " + circuit.wayNumber() + ": the demand of sub-board #" + circuit.feedsBoardId()
+              "way "
+                  + circuit.wayNumber()
+                  + ": the demand of sub-board #"
+                  + circuit.feedsBoardId()
                   + " is not available and is not included");
         }
       }
@@ -137,12 +151,20 @@ final class BoardCalculation {
         }
         double voltAmperesPerAmp = u0 * (position[c] == PhasePosition.THREE_POLE ? 3 : 1);
         double connected = sumApparent(lines, members, count);
-        double demand = GroupDemandCalculator.apply(group.rule(), lines, members, count, voltAmperesPerAmp);
+        double demand =
+            GroupDemandCalculator.apply(group.rule(), lines, members, count, voltAmperesPerAmp);
         for (int m = 0; m < count; m++) {
           consumed[members[m]] = true;
         }
-        if (group.rule() instanceof DiversityRule.FirstAmps firstAmps && firstAmps.socketAdderAmps() > 0) {
-          double[] socket = socketAllowance(lines, firstLine[c], firstLine[c + 1], consumed, firstAmps.socketAdderAmps() * voltAmperesPerAmp);
+        if (group.rule() instanceof DiversityRule.FirstAmps firstAmps
+            && firstAmps.socketAdderAmps() > 0) {
+          double[] socket =
+              socketAllowance(
+                  lines,
+                  firstLine[c],
+                  firstLine[c + 1],
+                  consumed,
+                  firstAmps.socketAdderAmps() * voltAmperesPerAmp);
           connected += socket[0];
           demand += socket[1];
         }
@@ -177,7 +199,8 @@ final class BoardCalculation {
       DwellingBasis basis = group.dwellingBasis();
       if (basis == null) {
         groupBasis[g] = connected;
-        groupDemand[g] = GroupDemandCalculator.apply(group.rule(), lines, members, count, u0 * boardLines);
+        groupDemand[g] =
+            GroupDemandCalculator.apply(group.rule(), lines, members, count, u0 * boardLines);
         continue;
       }
       String missing = missingDwellingInputs(context.dwelling());
@@ -185,13 +208,16 @@ final class BoardCalculation {
         groupReason[g] = "not assessed — missing " + missing + "; loads taken at 100 %";
         notAssessed.add(group.label() + ": " + groupReason[g]);
         groupBasis[g] = connected;
-        groupDemand[g] = GroupDemandCalculator.apply(new DiversityRule.NoDiversity(), lines, members, count, u0 * boardLines);
+        groupDemand[g] =
+            GroupDemandCalculator.apply(
+                new DiversityRule.NoDiversity(), lines, members, count, u0 * boardLines);
         continue;
       }
       DwellingParameters dwelling = context.dwelling();
       double dwellingLoad =
           dwelling.floorAreaSquareFeet() * basis.voltAmperesPerSquareFoot()
-              + (dwelling.smallApplianceCircuits() + dwelling.laundryCircuits()) * basis.voltAmperesPerApplianceCircuit();
+              + (dwelling.smallApplianceCircuits() + dwelling.laundryCircuits())
+                  * basis.voltAmperesPerApplianceCircuit();
       int[] replaced = new int[count];
       int replacedCount = 0;
       int kept = 0;
@@ -208,12 +234,14 @@ final class BoardCalculation {
       int dwellingLine = lines.add(-1, LoadCategory.LIGHTING, 1, dwellingLoad, 0.0);
       members[kept++] = dwellingLine;
       groupBasis[g] = sumApparent(lines, members, kept);
-      groupDemand[g] = GroupDemandCalculator.apply(group.rule(), lines, members, kept, u0 * boardLines);
+      groupDemand[g] =
+          GroupDemandCalculator.apply(group.rule(), lines, members, kept, u0 * boardLines);
       double dwellingDemand = lines.demandVoltAmperes[dwellingLine];
       if (replacedApparent > 0) {
         for (int r = 0; r < replacedCount; r++) {
           int i = replaced[r];
-          lines.demandVoltAmperes[i] = dwellingDemand * lines.apparentVoltAmperes[i] / replacedApparent;
+          lines.demandVoltAmperes[i] =
+              dwellingDemand * lines.apparentVoltAmperes[i] / replacedApparent;
         }
       } else {
         allowance += dwellingDemand;
@@ -232,8 +260,20 @@ final class BoardCalculation {
       CircuitSpec circuit = circuits[c];
       if (reason[c] != null) {
         circuitResults.add(
-            new CircuitDemand(circuit.id(), circuit.wayNumber(), circuit.description(), position[c], reason[c],
-                0, 0, 0, 0, 0, 0, circuit.feedsBoardId(), 0));
+            new CircuitDemand(
+                circuit.id(),
+                circuit.wayNumber(),
+                circuit.description(),
+                position[c],
+                reason[c],
+                0,
+                0,
+                0,
+                0,
+                0,
+                0,
+                circuit.feedsBoardId(),
+                0));
         continue;
       }
       boolean threePole = position[c] == PhasePosition.THREE_POLE;
@@ -294,22 +334,62 @@ final class BoardCalculation {
       for (int k = 0; k < boardLines; k++) {
         phaseWatts[k] += allowance / boardLines;
       }
-      notes.add("dwelling unit load of " + Math.round(allowance) + " VA after diversity carried by no circuit; spread evenly over the lines at unity power factor");
+      notes.add(
+          "dwelling unit load of "
+              + Math.round(allowance)
+              + " VA after diversity carried by no circuit; spread evenly over the lines at unity power factor");
     }
-    return assemble(board, context, u0, boardLines, circuitResults, groups, groupConnected, groupBasis, groupDemand,
-        groupReason, phaseWatts, phaseVars, connectedWatts, connectedVars, allowance, notAssessed, notes);
+    return assemble(
+        board,
+        context,
+        u0,
+        boardLines,
+        circuitResults,
+        groups,
+        groupConnected,
+        groupBasis,
+        groupDemand,
+        groupReason,
+        phaseWatts,
+        phaseVars,
+        connectedWatts,
+        connectedVars,
+        allowance,
+        notAssessed,
+        notes);
   }
 
   private static BoardDemand assemble(
-      BoardSpec board, Context context, double u0, int boardLines, List<CircuitDemand> circuitResults,
-      List<CategoryGroup> groups, double[] groupConnected, double[] groupBasis, double[] groupDemand,
-      String[] groupReason, double[] phaseWatts, double[] phaseVars, double connectedWatts, double connectedVars,
-      double allowance, List<String> notAssessed, List<String> notes) {
+      BoardSpec board,
+      Context context,
+      double u0,
+      int boardLines,
+      List<CircuitDemand> circuitResults,
+      List<CategoryGroup> groups,
+      double[] groupConnected,
+      double[] groupBasis,
+      double[] groupDemand,
+      String[] groupReason,
+      double[] phaseWatts,
+      double[] phaseVars,
+      double connectedWatts,
+      double connectedVars,
+      double allowance,
+      List<String> notAssessed,
+      List<String> notes) {
     List<GroupDemand> groupResults = new ArrayList<>(groups.size());
     for (int g = 0; g < groups.size(); g++) {
       CategoryGroup group = groups.get(g);
-      groupResults.add(new GroupDemand(group.label(), group.categories(), group.scope(), group.rule().describe(),
-          groupConnected[g], groupBasis[g], groupDemand[g], groupReason[g]));
+      groupResults.add(
+          new GroupDemand(
+              group.label(),
+              group.categories(),
+              group.scope(),
+              group.rule().describe(),
+              groupConnected[g],
+              groupBasis[g],
+              groupDemand[g],
+              groupReason[g]));
     }
     Double incomerRating = board.incomer() == null ? null : board.incomer().ratedCurrentAmps();
     Phase[] phases = Phase.values();
@@ -325,14 +405,33 @@ final class BoardCalculation {
       totalVars += phaseVars[k];
       Double headroomAmps = incomerRating == null ? null : incomerRating - currents[k];
       Double headroomKilowatts = headroomAmps == null ? null : headroomAmps * u0 / 1000.0;
-      phaseResults.add(new PhaseDemand(phases[k], phaseWatts[k], phaseVars[k], currents[k], headroomAmps, headroomKilowatts));
+      phaseResults.add(
+          new PhaseDemand(
+              phases[k],
+              phaseWatts[k],
+              phaseVars[k],
+              currents[k],
+              headroomAmps,
+              headroomKilowatts));
     }
-    double neutral = boardLines == 3 ? PhaseCurrents.neutralCurrentAmps(phaseWatts, phaseVars, u0) : currents[0];
-    Double unbalance = boardLines == 3 ? PhaseCurrents.unbalancePercent(currents[0], currents[1], currents[2]) : null;
-    double limit = board.unbalanceLimitPercent() > 0 ? board.unbalanceLimitPercent() : context.settings().unbalanceLimitPercent();
+    double neutral =
+        boardLines == 3 ? PhaseCurrents.neutralCurrentAmps(phaseWatts, phaseVars, u0) : currents[0];
+    Double unbalance =
+        boardLines == 3
+            ? PhaseCurrents.unbalancePercent(currents[0], currents[1], currents[2])
+            : null;
+    double limit =
+        board.unbalanceLimitPercent() > 0
+            ? board.unbalanceLimitPercent()
+            : context.settings().unbalanceLimitPercent();
     double coincidence = board.coincidenceFactor();
     if (!(coincidence > 0 && coincidence <= 1)) {
-      notes.add("coincidence factor " + coincidence + " is outside (0, 1]; " + context.settings().coincidenceFactor() + " used");
+      notes.add(
+          "coincidence factor "
+              + coincidence
+              + " is outside (0, 1]; "
+              + context.settings().coincidenceFactor()
+              + " used");
       coincidence = context.settings().coincidenceFactor();
     }
     RatingLoading incomer =
@@ -342,16 +441,41 @@ final class BoardCalculation {
     RatingLoading busbar = RatingLoading.of("busbar", board.busbarRatingAmps(), highest);
     RatingLoading supplyFuse;
     if (board.parentBoardId() != null) {
-      supplyFuse = RatingLoading.notApplicable("supply fuse", "not applicable — board fed from board #" + board.parentBoardId());
+      supplyFuse =
+          RatingLoading.notApplicable(
+              "supply fuse", "not applicable — board fed from board #" + board.parentBoardId());
     } else if (context.supply() == null) {
       supplyFuse = RatingLoading.notApplicable("supply fuse", "not assessed — missing supply");
     } else {
-      supplyFuse = RatingLoading.of("supply fuse", context.supply().supplyFuseRatingAmps(), highest);
+      supplyFuse =
+          RatingLoading.of("supply fuse", context.supply().supplyFuseRatingAmps(), highest);
     }
     DiversityMethod method = context.method();
-    return new BoardDemand(board.id(), board.reference(), boardLines, u0, method.key(), method.name(), method.source(),
-        coincidence, circuitResults, groupResults, phaseResults, connectedWatts, connectedVars, totalWatts, totalVars,
-        allowance, neutral, unbalance, limit, incomer, busbar, supplyFuse, notAssessed, notes);
+    return new BoardDemand(
+        board.id(),
+        board.reference(),
+        boardLines,
+        u0,
+        method.key(),
+        method.name(),
+        method.source(),
+        coincidence,
+        circuitResults,
+        groupResults,
+        phaseResults,
+        connectedWatts,
+        connectedVars,
+        totalWatts,
+        totalVars,
+        allowance,
+        neutral,
+        unbalance,
+        limit,
+        incomer,
+        busbar,
+        supplyFuse,
+        notAssessed,
+        notes);
   }
 
   private static PhasePosition effectivePosition(PhasePosition position, int boardLines) {
@@ -361,7 +485,8 @@ final class BoardCalculation {
     return boardLines == 1 && position.isSinglePole() ? PhasePosition.L1 : position;
   }
 
-  private static void addToPhases(double[] watts, double[] vars, PhasePosition position, double p, double q) {
+  private static void addToPhases(
+      double[] watts, double[] vars, PhasePosition position, double p, double q) {
     if (position == null) {
       return;
     }
@@ -378,7 +503,8 @@ final class BoardCalculation {
   }
 
   /** Replaces a cooker circuit's socket-outlet loads by the allowance, never more than they are. */
-  private static double[] socketAllowance(LoadLines lines, int from, int to, boolean[] consumed, double allowanceVoltAmperes) {
+  private static double[] socketAllowance(
+      LoadLines lines, int from, int to, boolean[] consumed, double allowanceVoltAmperes) {
     double socketApparent = 0.0;
     for (int i = from; i < to; i++) {
       if (!consumed[i] && lines.category[i] == LoadCategory.SOCKET_OUTLETS) {
@@ -413,10 +539,14 @@ final class BoardCalculation {
 
   private static String missingDwellingInputs(DwellingParameters dwelling) {
     List<String> missing = new ArrayList<>(3);
-    if (dwelling == null || dwelling.floorAreaSquareFeet() == null || !(dwelling.floorAreaSquareFeet() >= 0)) {
+    if (dwelling == null
+        || dwelling.floorAreaSquareFeet() == null
+        || !(dwelling.floorAreaSquareFeet() >= 0)) {
       missing.add("floor area");
     }
-    if (dwelling == null || dwelling.smallApplianceCircuits() == null || dwelling.smallApplianceCircuits() < 0) {
+    if (dwelling == null
+        || dwelling.smallApplianceCircuits() == null
+        || dwelling.smallApplianceCircuits() < 0) {
       missing.add("number of small-appliance circuits");
     }
     if (dwelling == null || dwelling.laundryCircuits() == null || dwelling.laundryCircuits() < 0) {

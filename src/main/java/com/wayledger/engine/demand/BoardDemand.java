@@ -21,16 +21,18 @@ import java.util.List;
  * @param connectedVars Q of the same, var
  * @param demandWatts total P after diversity, W
  * @param demandVars total Q after diversity, var
- * @param allowanceVoltAmperes part of the demand not carried by any circuit (an NEC dwelling unit load
- *     with no lighting or socket circuits to carry it), spread evenly over the lines at unity power factor,
- *     VA
+ * @param allowanceVoltAmperes part of the demand not carried by any circuit (an NEC dwelling unit
+ *     load with no lighting or socket circuits to carry it), spread evenly over the lines at unity
+ *     power factor, VA
  * @param neutralCurrentAmps neutral current, A (on a single-phase board, the line current)
- * @param unbalancePercent NEMA MG-1 unbalance of the phase currents, %; null on a single-phase board
+ * @param unbalancePercent NEMA MG-1 unbalance of the phase currents, %; null on a single-phase
+ *     board
  * @param unbalanceLimitPercent the limit it is compared with, %
  * @param incomer highest phase current against the incomer device rating In
  * @param busbar against the busbar rating
  * @param supplyFuse against the supply fuse (origin boards only)
- * @param notAssessed inputs missing, each saying what was left out of the figures; empty when complete
+ * @param notAssessed inputs missing, each saying what was left out of the figures; empty when
+ *     complete
  * @param notes other facts about how the figures were made
  */
 public record BoardDemand(

@@ -6,15 +6,15 @@ import java.util.List;
 import java.util.Set;
 
 /**
- * One line of a diversity method: the categories whose loads are pooled, the rule applied to the pool
- * and where it applies.
+ * One line of a diversity method: the categories whose loads are pooled, the rule applied to the
+ * pool and where it applies.
  *
  * @param label name of the line in plain words, e.g. "Cooking appliances"
  * @param categories categories pooled under this rule
  * @param rule the rule
  * @param scope within each circuit or across the board's circuits
- * @param dwellingBasis when not null, the NEC dwelling unit load replaces the connected load of some of
- *     the categories (needs {@link DwellingParameters})
+ * @param dwellingBasis when not null, the NEC dwelling unit load replaces the connected load of
+ *     some of the categories (needs {@link DwellingParameters})
  */
 public record CategoryGroup(
     String label,
@@ -28,7 +28,8 @@ public record CategoryGroup(
   }
 
   /** A group without a dwelling basis. */
-  public CategoryGroup(String label, Set<LoadCategory> categories, DiversityRule rule, RuleScope scope) {
+  public CategoryGroup(
+      String label, Set<LoadCategory> categories, DiversityRule rule, RuleScope scope) {
     this(label, categories, rule, scope, null);
   }
 

@@ -29,8 +29,8 @@ public record ConnectedLoad(double activeWatts, double reactiveVars, String miss
   /**
    * P and Q of a load line from its rating, unit, quantity and lagging power factor.
    *
-   * <p>A rating in W is active power and in VA apparent power, each for one item. A rating in A is the
-   * current per line of one item: S = U0·I single-phase, S = √3·UL·I = 3·U0·I three-phase.
+   * <p>A rating in W is active power and in VA apparent power, each for one item. A rating in A is
+   * the current per line of one item: S = U0·I single-phase, S = √3·UL·I = 3·U0·I three-phase.
    *
    * @param load the load line
    * @param nominalVoltageVolts U0, V
@@ -68,8 +68,8 @@ public record ConnectedLoad(double activeWatts, double reactiveVars, String miss
   }
 
   /**
-   * Design current Ib from apparent power: |S|/U0 on one line, |S|/(3·U0) per line of a three-pole circuit
-   * (equal to |S|/(√3·UL)), A.
+   * Design current Ib from apparent power: |S|/U0 on one line, |S|/(3·U0) per line of a three-pole
+   * circuit (equal to |S|/(√3·UL)), A.
    */
   public static double designCurrentAmps(
       double apparentVoltAmperes, double nominalVoltageVolts, boolean threePhase) {

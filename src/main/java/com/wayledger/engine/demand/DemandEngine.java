@@ -14,9 +14,9 @@ import java.util.Optional;
 /**
  * Entry points of the demand engine. Stateless: every call takes records and returns records.
  *
- * <p>A site is evaluated children first: the demand of a sub-board, times its coincidence factor, is a
- * load on the way of its parent that feeds it ({@link CircuitSpec#feedsBoardId()}). A cycle in the tree
- * is reported in {@link SiteDemand#problems()} and the demand around it is not carried.
+ * <p>A site is evaluated children first: the demand of a sub-board, times its coincidence factor,
+ * is a load on the way of its parent that feeds it ({@link CircuitSpec#feedsBoardId()}). A cycle in
+ * the tree is reported in {@link SiteDemand#problems()} and the demand around it is not carried.
  */
 public final class DemandEngine {
 
@@ -53,22 +53,41 @@ public final class DemandEngine {
     for (BoardSpec board : byId.values()) {
       board.circuits().stream()
           .filter(c -> c.feedsBoardId() != null)
-          .sorted(java.util.Comparator.comparingInt(CircuitSpec::wayNumber).thenComparingLong(CircuitSpec::id))
+          .sorted(
+              java.util.Comparator.comparingInt(CircuitSpec::wayNumber)
+                  .thenComparingLong(CircuitSpec::id))
           .forEach(
               c -> {
                 Long child = c.feedsBoardId();
                 if (!byId.containsKey(child)) {
-                  problems.add("board " + board.reference() + " way " + c.wayNumber() + " feeds board #" + child + ", which is not on this site");
-                } else if (fedFrom.putIfAbsent(child, board.id()) != null && !fedFrom.get(child).equals(board.id())) {
-                  problems.add("board #" + child + " is fed from more than one board; only the way on board #" + fedFrom.get(child) + " carries its demand");
+                  problems.add(
+                      "board "
+                          + board.reference()
+                          + " way "
+                          + c.wayNumber()
+                          + " feeds board #"
+                          + child
+                          + ", which is not on this site");
+                } else if (fedFrom.putIfAbsent(child, board.id()) != null
+                    && !fedFrom.get(child).equals(board.id())) {
+                  problems.add(
+                      "board #"
+                          + child
+                          + " is fed from more than one board; only the way on board #"
+                          + fedFrom.get(child)
+                          + " carries its demand");
                 }
               });
     }
     for (BoardSpec board : byId.values()) {
       Long feeder = fedFrom.get(board.id());
       if (board.parentBoardId() != null && !board.parentBoardId().equals(feeder)) {
-        problems.add("board " + board.reference() + " names board #" + board.parentBoardId()
-            + " as its parent but no way there feeds it; its demand is not carried up");
+        problems.add(
+            "board "
+                + board.reference()
+                + " names board #"
+                + board.parentBoardId()
+                + " as its parent but no way there feeds it; its demand is not carried up");
       }
     }
 
@@ -76,16 +95,38 @@ public final class DemandEngine {
     Map<Long, Boolean> onPath = new HashMap<>();
     List<BoardDemand> ordered = new ArrayList<>(byId.size());
     for (BoardSpec board : byId.values()) {
-      visit(board, byId, fedFrom, methods, site, settings, dwellingByBoardId, u0, done, onPath, ordered, problems, new ArrayList<>());
+      visit(
+          board,
+          byId,
+          fedFrom,
+          methods,
+          site,
+          settings,
+          dwellingByBoardId,
+          u0,
+          done,
+          onPath,
+          ordered,
+          problems,
+          new ArrayList<>());
     }
     return new SiteDemand(site.id(), site.name(), settings, u0, ordered, problems);
   }
 
   private static void visit(
-      BoardSpec board, Map<Long, BoardSpec> byId, Map<Long, Long> fedFrom, DiversityMethodCatalog methods, SiteSpec site,
-      DemandSettings settings, Map<Long, DwellingParameters> dwellingByBoardId, double u0,
-      Map<Long, BoardDemand> done, Map<Long, Boolean> onPath, List<BoardDemand> ordered,
-      List<String> problems, List<String> path) {
+      BoardSpec board,
+      Map<Long, BoardSpec> byId,
+      Map<Long, Long> fedFrom,
+      DiversityMethodCatalog methods,
+      SiteSpec site,
+      DemandSettings settings,
+      Map<Long, DwellingParameters> dwellingByBoardId,
+      double u0,
+      Map<Long, BoardDemand> done,
+      Map<Long, Boolean> onPath,
+      List<BoardDemand> ordered,
+      List<String> problems,
+      List<String> path) {
     if (done.containsKey(board.id()) || Boolean.TRUE.equals(onPath.get(board.id()))) {
       return;
     }
@@ -102,10 +143,26 @@ public final class DemandEngine {
         int start = path.indexOf(child.reference());
         List<String> loop = new ArrayList<>(path.subList(Math.max(0, start), path.size()));
         loop.add(child.reference());
-        problems.add("boards feed each other in a cycle (" + String.join(" → ", loop) + "); the demand is not carried round it");
+        problems.add(
+            "boards feed each other in a cycle ("
+                + String.join(" → ", loop)
+                + "); the demand is not carried round it");
         continue;
       }
-      visit(byId.get(childId), byId, fedFrom, methods, site, settings, dwellingByBoardId, u0, done, onPath, ordered, problems, path);
+      visit(
+          byId.get(childId),
+          byId,
+          fedFrom,
+          methods,
+          site,
+          settings,
+          dwellingByBoardId,
+          u0,
+          done,
+          onPath,
+          ordered,
+          problems,
+          path);
       BoardDemand child = done.get(childId);
       if (child != null && Long.valueOf(board.id()).equals(fedFrom.get(childId))) {
         children.put(childId, child);
@@ -114,15 +171,22 @@ public final class DemandEngine {
     path.remove(path.size() - 1);
     onPath.put(board.id(), false);
     BoardDemand result =
-        evaluateWithChildren(board, site.supply(), methods, site.defaultDiversityMethodKey(), settings,
-            dwellingByBoardId.getOrDefault(board.id(), DwellingParameters.UNKNOWN), u0, children);
+        evaluateWithChildren(
+            board,
+            site.supply(),
+            methods,
+            site.defaultDiversityMethodKey(),
+            settings,
+            dwellingByBoardId.getOrDefault(board.id(), DwellingParameters.UNKNOWN),
+            u0,
+            children);
     done.put(board.id(), result);
     ordered.add(result);
   }
 
   /**
-   * Evaluates one board on its own, with the default settings: ways that feed sub-boards carry only their
-   * own loads, and say so.
+   * Evaluates one board on its own, with the default settings: ways that feed sub-boards carry only
+   * their own loads, and say so.
    *
    * @param board the board
    * @param supply the site's supply (for U0 and the supply fuse); null when unknown
@@ -130,23 +194,51 @@ public final class DemandEngine {
    * @param siteDefaultMethodKey the site's default method key; may be null
    */
   public static BoardDemand evaluateBoard(
-      BoardSpec board, SupplySpec supply, DiversityMethodCatalog methods, String siteDefaultMethodKey) {
-    return evaluateBoard(board, supply, methods, siteDefaultMethodKey, DemandSettings.DEFAULTS, DwellingParameters.UNKNOWN);
+      BoardSpec board,
+      SupplySpec supply,
+      DiversityMethodCatalog methods,
+      String siteDefaultMethodKey) {
+    return evaluateBoard(
+        board,
+        supply,
+        methods,
+        siteDefaultMethodKey,
+        DemandSettings.DEFAULTS,
+        DwellingParameters.UNKNOWN);
   }
 
   /** Evaluates one board on its own with the given settings and NEC dwelling data. */
   public static BoardDemand evaluateBoard(
-      BoardSpec board, SupplySpec supply, DiversityMethodCatalog methods, String siteDefaultMethodKey,
-      DemandSettings settings, DwellingParameters dwelling) {
-    return evaluateWithChildren(board, supply, methods, siteDefaultMethodKey, settings, dwelling,
-        nominalVoltage(supply, settings), Map.of());
+      BoardSpec board,
+      SupplySpec supply,
+      DiversityMethodCatalog methods,
+      String siteDefaultMethodKey,
+      DemandSettings settings,
+      DwellingParameters dwelling) {
+    return evaluateWithChildren(
+        board,
+        supply,
+        methods,
+        siteDefaultMethodKey,
+        settings,
+        dwelling,
+        nominalVoltage(supply, settings),
+        Map.of());
   }
 
   private static BoardDemand evaluateWithChildren(
-      BoardSpec board, SupplySpec supply, DiversityMethodCatalog methods, String siteDefaultMethodKey,
-      DemandSettings settings, DwellingParameters dwelling, double u0, Map<Long, BoardDemand> children) {
+      BoardSpec board,
+      SupplySpec supply,
+      DiversityMethodCatalog methods,
+      String siteDefaultMethodKey,
+      DemandSettings settings,
+      DwellingParameters dwelling,
+      double u0,
+      Map<Long, BoardDemand> children) {
     List<String> notes = new ArrayList<>();
-    DiversityMethod method = methods.resolve(board.diversityMethodKey(), siteDefaultMethodKey, settings.fallbackMethodKey());
+    DiversityMethod method =
+        methods.resolve(
+            board.diversityMethodKey(), siteDefaultMethodKey, settings.fallbackMethodKey());
     noteUnusableKey(board.diversityMethodKey(), "board", methods, notes);
     if (board.diversityMethodKey() == null) {
       noteUnusableKey(siteDefaultMethodKey, "site default", methods, notes);
@@ -155,18 +247,32 @@ public final class DemandEngine {
       notes.add("supply voltage unknown; U0 = " + u0 + " V assumed");
     }
     return BoardCalculation.evaluate(
-        board, new BoardCalculation.Context(u0, method, dwelling, settings, supply, children, notes));
+        board,
+        new BoardCalculation.Context(u0, method, dwelling, settings, supply, children, notes));
   }
 
-  private static void noteUnusableKey(String key, String whose, DiversityMethodCatalog methods, List<String> notes) {
+  private static void noteUnusableKey(
+      String key, String whose, DiversityMethodCatalog methods, List<String> notes) {
     if (key == null) {
       return;
     }
     Optional<DiversityMethod> found = methods.find(key);
     if (found.isEmpty()) {
-      notes.add("the " + whose + " diversity method \"" + key + "\" is unknown; the next choice was used");
+      notes.add(
+          "the "
+              + whose
+              + " diversity method \""
+              + key
+              + "\" is unknown; the next choice was used");
     } else if (!found.get().problems().isEmpty()) {
-      notes.add("the " + whose + " diversity method \"" + key + "\" has problems (" + String.join("; ", found.get().problems()) + "); the next choice was used");
+      notes.add(
+          "the "
+              + whose
+              + " diversity method \""
+              + key
+              + "\" has problems ("
+              + String.join("; ", found.get().problems())
+              + "); the next choice was used");
     }
   }
 

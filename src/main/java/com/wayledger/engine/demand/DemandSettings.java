@@ -1,10 +1,12 @@
 package com.wayledger.engine.demand;
 
 /**
- * Assumptions behind a demand evaluation, echoed in every result so each figure states what it rests on.
+ * Assumptions behind a demand evaluation, echoed in every result so each figure states what it
+ * rests on.
  *
  * @param nominalVoltageVolts U0, line to neutral, used when the site gives no supply voltage, V
- * @param unbalanceLimitPercent unbalance limit used when a board gives none (a limit of 0 or less), %
+ * @param unbalanceLimitPercent unbalance limit used when a board gives none (a limit of 0 or less),
+ *     %
  * @param fallbackMethodKey diversity method used when neither the board nor the site names one
  * @param coincidenceFactor factor between boards used when a board gives none in (0, 1]
  */
@@ -18,8 +20,8 @@ public record DemandSettings(
   public static final double DEFAULT_NOMINAL_VOLTAGE_VOLTS = 230.0;
 
   /**
-   * Unbalance limit used when a board states none (common practice: phase currents within 10 % of their
-   * mean).
+   * Unbalance limit used when a board states none (common practice: phase currents within 10 % of
+   * their mean).
    */
   public static final double DEFAULT_UNBALANCE_LIMIT_PERCENT = 10.0;
 

@@ -7,8 +7,9 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * A diversity method as data: groups of load categories, each with a rule. A category in no group is
- * taken at 100 %. A user's method is a copy of any other with edits ({@link #copyAs}, {@link #withGroup}).
+ * A diversity method as data: groups of load categories, each with a rule. A category in no group
+ * is taken at 100 %. A user's method is a copy of any other with edits ({@link #copyAs}, {@link
+ * #withGroup}).
  *
  * @param key stable identifier stored with a board, e.g. "uk-household"
  * @param name name shown to users
@@ -17,7 +18,11 @@ import java.util.Map;
  * @param needsDwellingParameters whether the method reads {@link DwellingParameters}
  */
 public record DiversityMethod(
-    String key, String name, String source, List<CategoryGroup> groups, boolean needsDwellingParameters) {
+    String key,
+    String name,
+    String source,
+    List<CategoryGroup> groups,
+    boolean needsDwellingParameters) {
 
   public DiversityMethod {
     groups = List.copyOf(groups);
@@ -25,10 +30,13 @@ public record DiversityMethod(
 
   /** A copy under a new key and name, for a user to edit. */
   public DiversityMethod copyAs(String newKey, String newName) {
-    return new DiversityMethod(newKey, newName, "copy of " + key + ": " + source, groups, needsDwellingParameters);
+    return new DiversityMethod(
+        newKey, newName, "copy of " + key + ": " + source, groups, needsDwellingParameters);
   }
 
-  /** This method with the group of the same label replaced, or added when no group has that label. */
+  /**
+   * This method with the group of the same label replaced, or added when no group has that label.
+   */
   public DiversityMethod withGroup(CategoryGroup group) {
     List<CategoryGroup> edited = new ArrayList<>(groups);
     boolean replaced = false;

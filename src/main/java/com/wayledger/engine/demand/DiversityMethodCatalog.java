@@ -42,8 +42,8 @@ public record DiversityMethodCatalog(List<DiversityMethod> methods) {
   }
 
   /**
-   * The method a board uses: its own key, else the site's default key, else the fallback key, else no
-   * diversity. A key that names no method is passed over, and so is a method with problems.
+   * The method a board uses: its own key, else the site's default key, else the fallback key, else
+   * no diversity. A key that names no method is passed over, and so is a method with problems.
    */
   public DiversityMethod resolve(String boardKey, String siteKey, String fallbackKey) {
     for (String key : new String[] {boardKey, siteKey, fallbackKey}) {

@@ -30,8 +30,9 @@ import java.util.Set;
 
 /**
  * The built-in diversity methods, each with a stable key. Figures and their sources are listed in
- * docs/calculations/demand.md; the UK figures follow the allowances for diversity of the IET On-Site Guide
- * (Appendix A) as reproduced in trade references, the NEC figures follow NFPA 70 Article 220.
+ * docs/calculations/demand.md; the UK figures follow the allowances for diversity of the IET
+ * On-Site Guide (Appendix A) as reproduced in trade references, the NEC figures follow NFPA 70
+ * Article 220.
  */
 public final class DiversityMethods {
 
@@ -77,13 +78,21 @@ public final class DiversityMethods {
             new CategoryGroup("Lighting", Set.of(LIGHTING), new Flat(0.66), ACROSS_CIRCUITS),
             new CategoryGroup(
                 "Heating and power",
-                Set.of(SPACE_HEATING, AIR_CONDITIONING, FIXED_APPLIANCE, IT_SMALL_POWER, MOTOR, OTHER),
+                Set.of(
+                    SPACE_HEATING, AIR_CONDITIONING, FIXED_APPLIANCE, IT_SMALL_POWER, MOTOR, OTHER),
                 new FirstAmps(10.0, 0.5, 0.0),
                 ACROSS_CIRCUITS),
-            new CategoryGroup("Cooking appliances", Set.of(COOKING), new FirstAmps(10.0, 0.3, 5.0), WITHIN_CIRCUIT),
+            new CategoryGroup(
+                "Cooking appliances",
+                Set.of(COOKING),
+                new FirstAmps(10.0, 0.3, 5.0),
+                WITHIN_CIRCUIT),
             instantaneousWaterHeaters(),
             new CategoryGroup(
-                "Thermostatic water heaters", Set.of(WATER_HEATING_STORAGE), new Flat(1.0), ACROSS_CIRCUITS),
+                "Thermostatic water heaters",
+                Set.of(WATER_HEATING_STORAGE),
+                new Flat(1.0),
+                ACROSS_CIRCUITS),
             new CategoryGroup(
                 "Standard socket-outlet circuits",
                 Set.of(SOCKET_OUTLETS),
@@ -112,10 +121,16 @@ public final class DiversityMethods {
                 new LargestFirst(1.0, 0.8, 0.6, RankBy.APPLIANCE),
                 ACROSS_CIRCUITS),
             new CategoryGroup(
-                "Motors (not lifts)", Set.of(MOTOR), new LargestFirst(1.0, 0.8, 0.6, RankBy.APPLIANCE), ACROSS_CIRCUITS),
+                "Motors (not lifts)",
+                Set.of(MOTOR),
+                new LargestFirst(1.0, 0.8, 0.6, RankBy.APPLIANCE),
+                ACROSS_CIRCUITS),
             instantaneousWaterHeaters(),
             new CategoryGroup(
-                "Thermostatic water heaters", Set.of(WATER_HEATING_STORAGE), new Flat(1.0), ACROSS_CIRCUITS),
+                "Thermostatic water heaters",
+                Set.of(WATER_HEATING_STORAGE),
+                new Flat(1.0),
+                ACROSS_CIRCUITS),
             new CategoryGroup(
                 "Standard socket-outlet circuits",
                 Set.of(SOCKET_OUTLETS),
@@ -144,10 +159,16 @@ public final class DiversityMethods {
                 new LargestFirst(1.0, 0.8, 0.6, RankBy.APPLIANCE),
                 ACROSS_CIRCUITS),
             new CategoryGroup(
-                "Motors (not lifts)", Set.of(MOTOR), new LargestFirst(1.0, 0.5, 0.5, RankBy.APPLIANCE), ACROSS_CIRCUITS),
+                "Motors (not lifts)",
+                Set.of(MOTOR),
+                new LargestFirst(1.0, 0.5, 0.5, RankBy.APPLIANCE),
+                ACROSS_CIRCUITS),
             instantaneousWaterHeaters(),
             new CategoryGroup(
-                "Thermostatic water heaters", Set.of(WATER_HEATING_STORAGE), new Flat(1.0), ACROSS_CIRCUITS),
+                "Thermostatic water heaters",
+                Set.of(WATER_HEATING_STORAGE),
+                new Flat(1.0),
+                ACROSS_CIRCUITS),
             new CategoryGroup(
                 "Standard socket-outlet circuits",
                 Set.of(SOCKET_OUTLETS),
@@ -167,10 +188,16 @@ public final class DiversityMethods {
             new CategoryGroup(
                 "General lighting, small-appliance and laundry circuits",
                 Set.of(LIGHTING, SOCKET_OUTLETS),
-                new Tiered(List.of(new Tier(3_000.0, 1.0), new Tier(120_000.0, 0.35), new Tier(null, 0.25))),
+                new Tiered(
+                    List.of(
+                        new Tier(3_000.0, 1.0), new Tier(120_000.0, 0.35), new Tier(null, 0.25))),
                 ACROSS_CIRCUITS,
                 necDwellingBasis()),
-            new CategoryGroup("Household cooking appliances", Set.of(COOKING), new NecCookingTable(), ACROSS_CIRCUITS),
+            new CategoryGroup(
+                "Household cooking appliances",
+                Set.of(COOKING),
+                new NecCookingTable(),
+                ACROSS_CIRCUITS),
             new CategoryGroup(
                 "Fastened-in-place appliances",
                 Set.of(FIXED_APPLIANCE, WATER_HEATING_INSTANTANEOUS, WATER_HEATING_STORAGE),
@@ -181,7 +208,8 @@ public final class DiversityMethods {
                 Set.of(SPACE_HEATING, AIR_CONDITIONING),
                 new NonCoincident(1.0, 1.0, 1.0, 1),
                 ACROSS_CIRCUITS),
-            new CategoryGroup("Motors", Set.of(MOTOR), new LargestMotorPlus(0.25), ACROSS_CIRCUITS)),
+            new CategoryGroup(
+                "Motors", Set.of(MOTOR), new LargestMotorPlus(0.25), ACROSS_CIRCUITS)),
         true);
   }
 
@@ -230,6 +258,7 @@ public final class DiversityMethods {
 
   // The On-Site Guide allows no diversity for electric vehicle charge points (from memory)
   private static CategoryGroup electricVehicles() {
-    return new CategoryGroup("EV charge points", Set.of(EV_CHARGING), new Flat(1.0), ACROSS_CIRCUITS);
+    return new CategoryGroup(
+        "EV charge points", Set.of(EV_CHARGING), new Flat(1.0), ACROSS_CIRCUITS);
   }
 }

@@ -5,10 +5,10 @@ import java.util.List;
 
 /**
  * One primitive of a diversity method: how the connected load of a group of load categories becomes
- * demand. Rules are plain data so a method can be copied and edited; {@link #problems()} says what is
- * wrong with an edited one. Amounts are apparent power (VA) unless the rule says amps; amps are turned
- * into VA with U0 times the number of lines the rule acts on (one for a single-phase board or circuit,
- * three for a three-phase one).
+ * demand. Rules are plain data so a method can be copied and edited; {@link #problems()} says what
+ * is wrong with an edited one. Amounts are apparent power (VA) unless the rule says amps; amps are
+ * turned into VA with U0 times the number of lines the rule acts on (one for a single-phase board
+ * or circuit, three for a three-phase one).
  */
 public sealed interface DiversityRule {
 
@@ -51,9 +51,10 @@ public sealed interface DiversityRule {
   }
 
   /**
-   * The largest item at one factor, the second largest at another, every other item at a third, as in the
-   * IET On-Site Guide's "100 % of the largest + 40 % of every other". Items of equal size share the
-   * factors of the places they tie for, so the result does not depend on the order of the schedule.
+   * The largest item at one factor, the second largest at another, every other item at a third, as
+   * in the IET On-Site Guide's "100 % of the largest + 40 % of every other". Items of equal size
+   * share the factors of the places they tie for, so the result does not depend on the order of the
+   * schedule.
    *
    * @param largestFactor factor on the largest item, in [0, 1]
    * @param secondFactor factor on the second largest item, in [0, 1]
@@ -94,16 +95,19 @@ public sealed interface DiversityRule {
    *
    * @param firstAmps current taken at 100 %, A (per line)
    * @param remainderFactor factor on the current above {@code firstAmps}, in [0, 1]
-   * @param socketAdderAmps within a circuit only: allowance, A, for a socket-outlet load on the same
-   *     circuit (a cooker control unit's socket), taken in place of that socket's own load and never more
-   *     than it; 0 for none
+   * @param socketAdderAmps within a circuit only: allowance, A, for a socket-outlet load on the
+   *     same circuit (a cooker control unit's socket), taken in place of that socket's own load and
+   *     never more than it; 0 for none
    */
   record FirstAmps(double firstAmps, double remainderFactor, double socketAdderAmps)
       implements DiversityRule {
     @Override
     public String describe() {
-      String text = "first " + number(firstAmps) + " A + " + percent(remainderFactor) + " of the remainder";
-      return socketAdderAmps > 0 ? text + " + " + number(socketAdderAmps) + " A for a socket-outlet" : text;
+      String text =
+          "first " + number(firstAmps) + " A + " + percent(remainderFactor) + " of the remainder";
+      return socketAdderAmps > 0
+          ? text + " + " + number(socketAdderAmps) + " A for a socket-outlet"
+          : text;
     }
 
     @Override
@@ -144,7 +148,10 @@ public sealed interface DiversityRule {
         if (text.length() > 0) {
           text.append(", ");
         }
-        text.append(tier.upToVoltAmperes() == null ? "above " + number(from) : number(from) + "–" + number(tier.upToVoltAmperes()))
+        text.append(
+                tier.upToVoltAmperes() == null
+                    ? "above " + number(from)
+                    : number(from) + "–" + number(tier.upToVoltAmperes()))
             .append(" VA at ")
             .append(percent(tier.factor()));
         from = tier.upToVoltAmperes() == null ? from : tier.upToVoltAmperes();
@@ -168,7 +175,8 @@ public sealed interface DiversityRule {
             problems.add("tier " + (i + 1) + ": only the last band may be open-ended");
           }
         } else if (!(upTo > previous) || Double.isInfinite(upTo)) {
-          problems.add("tier " + (i + 1) + ": bands must ascend, " + upTo + " VA after " + previous + " VA");
+          problems.add(
+              "tier " + (i + 1) + ": bands must ascend, " + upTo + " VA after " + previous + " VA");
         } else {
           previous = upTo;
         }
@@ -181,7 +189,8 @@ public sealed interface DiversityRule {
       double demand = 0.0;
       double from = 0.0;
       for (Tier tier : tiers) {
-        double upTo = tier.upToVoltAmperes() == null ? Double.POSITIVE_INFINITY : tier.upToVoltAmperes();
+        double upTo =
+            tier.upToVoltAmperes() == null ? Double.POSITIVE_INFINITY : tier.upToVoltAmperes();
         if (connectedVoltAmperes <= from) {
           return demand;
         }
@@ -204,7 +213,8 @@ public sealed interface DiversityRule {
    * One factor when the group holds at least a number of items, 100 % otherwise, as in NEC 220.53
    * (75 % for four or more fastened-in-place appliances).
    *
-   * @param minimumCount number of items (quantities summed) from which the factor applies, at least 1
+   * @param minimumCount number of items (quantities summed) from which the factor applies, at least
+   *     1
    * @param factor factor from that count on, in [0, 1]
    */
   record CountThreshold(int minimumCount, double factor) implements DiversityRule {
@@ -251,12 +261,14 @@ public sealed interface DiversityRule {
   }
 
   /**
-   * Non-coincident heating and cooling: only the larger of the two is counted (NEC 220.60, 220.82(C)).
-   * Air conditioning in the group is cooling; every other category in the group is heating.
+   * Non-coincident heating and cooling: only the larger of the two is counted (NEC 220.60,
+   * 220.82(C)). Air conditioning in the group is cooling; every other category in the group is
+   * heating.
    *
    * @param coolingFactor factor on the cooling load, in [0, 1]
    * @param heatingFactor factor on the heating load with fewer than {@code manyUnitsFrom} units
-   * @param heatingFactorManyUnits factor on the heating load with {@code manyUnitsFrom} units or more
+   * @param heatingFactorManyUnits factor on the heating load with {@code manyUnitsFrom} units or
+   *     more
    * @param manyUnitsFrom number of separately controlled heating units from which the second factor
    *     applies, at least 1
    */

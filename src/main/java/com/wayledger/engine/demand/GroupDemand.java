@@ -11,11 +11,11 @@ import java.util.Set;
  * @param scope within each circuit or across the board
  * @param rule the rule in plain words
  * @param connectedVoltAmperes |S| of the connected loads in the pool, VA (sum of line magnitudes)
- * @param basisVoltAmperes the amount the rule was applied to: the connected load, or with an NEC dwelling
- *     basis the dwelling unit load in place of the replaced categories, VA
+ * @param basisVoltAmperes the amount the rule was applied to: the connected load, or with an NEC
+ *     dwelling basis the dwelling unit load in place of the replaced categories, VA
  * @param demandVoltAmperes demand after the rule, VA
- * @param notAssessedReason what is missing when the rule could not be applied (its loads are then taken
- *     at 100 %); null when applied
+ * @param notAssessedReason what is missing when the rule could not be applied (its loads are then
+ *     taken at 100 %); null when applied
  */
 public record GroupDemand(
     String label,

@@ -13,12 +13,14 @@ import com.wayledger.engine.demand.DiversityRule.RankBy;
 import com.wayledger.engine.demand.DiversityRule.Tiered;
 
 /**
- * Applies one rule to a set of load lines and writes each line's demand. Rules that act on a total give
- * every line the same effective factor; ranking rules give each item its own.
+ * Applies one rule to a set of load lines and writes each line's demand. Rules that act on a total
+ * give every line the same effective factor; ranking rules give each item its own.
  */
 final class GroupDemandCalculator {
 
-  /** Sizes closer than this (relative) count as equal when ranking, so ties do not depend on order. */
+  /**
+   * Sizes closer than this (relative) count as equal when ranking, so ties do not depend on order.
+   */
   private static final double TIE_TOLERANCE = 1e-9;
 
   private GroupDemandCalculator() {}
@@ -28,7 +30,8 @@ final class GroupDemandCalculator {
    *
    * @param voltAmperesPerAmp U0 times the number of lines the rule acts on, to turn amps into VA
    */
-  static double apply(DiversityRule rule, LoadLines lines, int[] members, int count, double voltAmperesPerAmp) {
+  static double apply(
+      DiversityRule rule, LoadLines lines, int[] members, int count, double voltAmperesPerAmp) {
     double connected = 0.0;
     for (int m = 0; m < count; m++) {
       connected += lines.apparentVoltAmperes[members[m]];
@@ -41,11 +44,13 @@ final class GroupDemandCalculator {
     }
     if (rule instanceof FirstAmps firstAmps) {
       double demand = firstAmps.demandAmps(connected / voltAmperesPerAmp) * voltAmperesPerAmp;
-      return proportional(lines, members, count, connected > 0 ? demand / connected : 1.0, connected);
+      return proportional(
+          lines, members, count, connected > 0 ? demand / connected : 1.0, connected);
     }
     if (rule instanceof Tiered tiered) {
       double demand = tiered.demandVoltAmperes(connected);
-      return proportional(lines, members, count, connected > 0 ? demand / connected : 1.0, connected);
+      return proportional(
+          lines, members, count, connected > 0 ? demand / connected : 1.0, connected);
     }
     if (rule instanceof CountThreshold threshold) {
       int items = 0;
@@ -53,7 +58,11 @@ final class GroupDemandCalculator {
         items += lines.quantity[members[m]];
       }
       return proportional(
-          lines, members, count, items >= threshold.minimumCount() ? threshold.factor() : 1.0, connected);
+          lines,
+          members,
+          count,
+          items >= threshold.minimumCount() ? threshold.factor() : 1.0,
+          connected);
     }
     if (rule instanceof LargestFirst largest) {
       return largest.rankBy() == RankBy.CIRCUIT
@@ -75,7 +84,8 @@ final class GroupDemandCalculator {
     throw new IllegalStateException("rule without a calculation: " + rule);
   }
 
-  private static double proportional(LoadLines lines, int[] members, int count, double factor, double connected) {
+  private static double proportional(
+      LoadLines lines, int[] members, int count, double factor, double connected) {
     for (int m = 0; m < count; m++) {
       int i = members[m];
       lines.demandVoltAmperes[i] = lines.apparentVoltAmperes[i] * factor;
@@ -83,8 +93,10 @@ final class GroupDemandCalculator {
     return connected * factor;
   }
 
-  private static double largestCircuitFirst(LargestFirst rule, LoadLines lines, int[] members, int count) {
-    // lines of one circuit are contiguous, so a circuit is a run of members with the same circuit index
+  private static double largestCircuitFirst(
+      LargestFirst rule, LoadLines lines, int[] members, int count) {
+    // lines of one circuit are contiguous, so a circuit is a run of members with the same circuit
+    // index
     double[] amounts = new double[count];
     int[] runStart = new int[count + 1];
     int items = 0;
@@ -112,7 +124,8 @@ final class GroupDemandCalculator {
     return total;
   }
 
-  private static double largestApplianceFirst(LargestFirst rule, LoadLines lines, int[] members, int count) {
+  private static double largestApplianceFirst(
+      LargestFirst rule, LoadLines lines, int[] members, int count) {
     double[] amounts = new double[count];
     int[] units = new int[count];
     for (int m = 0; m < count; m++) {
@@ -130,9 +143,9 @@ final class GroupDemandCalculator {
   }
 
   /**
-   * Average factor of each item when items (each {@code units} equal units of {@code amounts}) are ranked
-   * largest first: place 1 takes the largest factor, place 2 the second, the rest the third. Items of equal
-   * size share the places they tie for.
+   * Average factor of each item when items (each {@code units} equal units of {@code amounts}) are
+   * ranked largest first: place 1 takes the largest factor, place 2 the second, the rest the third.
+   * Items of equal size share the places they tie for.
    */
   static double[] rankedFactors(LargestFirst rule, double[] amounts, int[] units, int items) {
     int[] order = new int[items];
@@ -155,7 +168,8 @@ final class GroupDemandCalculator {
       int end = k;
       long tiedUnits = 0;
       double size = amounts[order[k]];
-      while (end < items && Math.abs(amounts[order[end]] - size) <= TIE_TOLERANCE * Math.max(1.0, size)) {
+      while (end < items
+          && Math.abs(amounts[order[end]] - size) <= TIE_TOLERANCE * Math.max(1.0, size)) {
         tiedUnits += units[order[end]];
         end++;
       }
@@ -200,7 +214,8 @@ final class GroupDemandCalculator {
           countC += lines.quantity[i];
           connectedC += lines.apparentVoltAmperes[i];
           // Note 2: ratings under 12 kW count as 12 kW in the average
-          ratingSumC += Math.max(NecCookingDemand.COLUMN_C_BASE_KILOWATTS, kilowatts) * lines.quantity[i];
+          ratingSumC +=
+              Math.max(NecCookingDemand.COLUMN_C_BASE_KILOWATTS, kilowatts) * lines.quantity[i];
         }
         default -> {
           lines.demandVoltAmperes[i] = lines.apparentVoltAmperes[i];
@@ -217,10 +232,14 @@ final class GroupDemandCalculator {
     for (int m = 0; m < count; m++) {
       int i = members[m];
       char column = NecCookingDemand.columnOf(lines.unitVoltAmperes[i] / 1000.0);
-      double factor = column == 'A' ? factorA : column == 'B' ? factorB : column == 'C' ? factorC : 1.0;
+      double factor =
+          column == 'A' ? factorA : column == 'B' ? factorB : column == 'C' ? factorC : 1.0;
       lines.demandVoltAmperes[i] = lines.apparentVoltAmperes[i] * factor;
     }
-    return total + connectedA * factorA + connectedB * factorB + connectedC * (countC == 0 ? 0.0 : factorC);
+    return total
+        + connectedA * factorA
+        + connectedB * factorB
+        + connectedC * (countC == 0 ? 0.0 : factorC);
   }
 
   private static double necDryers(LoadLines lines, int[] members, int count) {
@@ -233,13 +252,16 @@ final class GroupDemandCalculator {
     for (int m = 0; m < count; m++) {
       int i = members[m];
       lines.demandVoltAmperes[i] =
-          NecDryerDemand.loadPerDryerVoltAmperes(lines.unitVoltAmperes[i]) * lines.quantity[i] * factor;
+          NecDryerDemand.loadPerDryerVoltAmperes(lines.unitVoltAmperes[i])
+              * lines.quantity[i]
+              * factor;
       total += lines.demandVoltAmperes[i];
     }
     return total;
   }
 
-  private static double nonCoincident(NonCoincident rule, LoadLines lines, int[] members, int count) {
+  private static double nonCoincident(
+      NonCoincident rule, LoadLines lines, int[] members, int count) {
     double cooling = 0.0;
     double heating = 0.0;
     int heatingUnits = 0;
@@ -252,20 +274,25 @@ final class GroupDemandCalculator {
         heatingUnits += lines.quantity[i];
       }
     }
-    double heatingFactor = heatingUnits >= rule.manyUnitsFrom() ? rule.heatingFactorManyUnits() : rule.heatingFactor();
+    double heatingFactor =
+        heatingUnits >= rule.manyUnitsFrom() ? rule.heatingFactorManyUnits() : rule.heatingFactor();
     boolean heatingGoverns = heating * heatingFactor >= cooling * rule.coolingFactor();
     double total = 0.0;
     for (int m = 0; m < count; m++) {
       int i = members[m];
       boolean isCooling = lines.category[i] == LoadCategory.AIR_CONDITIONING;
-      double factor = isCooling ? (heatingGoverns ? 0.0 : rule.coolingFactor()) : (heatingGoverns ? heatingFactor : 0.0);
+      double factor =
+          isCooling
+              ? (heatingGoverns ? 0.0 : rule.coolingFactor())
+              : (heatingGoverns ? heatingFactor : 0.0);
       lines.demandVoltAmperes[i] = lines.apparentVoltAmperes[i] * factor;
       total += lines.demandVoltAmperes[i];
     }
     return total;
   }
 
-  private static double largestMotorPlus(LargestMotorPlus rule, LoadLines lines, int[] members, int count) {
+  private static double largestMotorPlus(
+      LargestMotorPlus rule, LoadLines lines, int[] members, int count) {
     double largest = 0.0;
     for (int m = 0; m < count; m++) {
       largest = Math.max(largest, lines.unitVoltAmperes[members[m]]);
@@ -281,7 +308,9 @@ final class GroupDemandCalculator {
     for (int m = 0; m < count; m++) {
       int i = members[m];
       double demand = lines.apparentVoltAmperes[i];
-      if (largest > 0 && Math.abs(lines.unitVoltAmperes[i] - largest) <= TIE_TOLERANCE * Math.max(1.0, largest)) {
+      if (largest > 0
+          && Math.abs(lines.unitVoltAmperes[i] - largest)
+              <= TIE_TOLERANCE * Math.max(1.0, largest)) {
         demand += rule.largestExtraFactor() * largest * lines.quantity[i] / tiedUnits;
       }
       lines.demandVoltAmperes[i] = demand;

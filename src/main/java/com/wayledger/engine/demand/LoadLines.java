@@ -4,9 +4,9 @@ import com.wayledger.engine.LoadCategory;
 import java.util.Arrays;
 
 /**
- * The load lines of one board in flat arrays, so a board of hundreds of circuits is evaluated without
- * boxing. Lines of one circuit are contiguous. A line with circuit index -1 is a board-level allowance
- * (the NEC dwelling unit load).
+ * The load lines of one board in flat arrays, so a board of hundreds of circuits is evaluated
+ * without boxing. Lines of one circuit are contiguous. A line with circuit index -1 is a
+ * board-level allowance (the NEC dwelling unit load).
  */
 final class LoadLines {
 
@@ -18,10 +18,12 @@ final class LoadLines {
   double[] activeWatts = new double[64];
   double[] reactiveVars = new double[64];
   double[] apparentVoltAmperes = new double[64];
+
   /** Demand of each line after diversity, VA. */
   double[] demandVoltAmperes = new double[64];
 
-  int add(int circuitIndex, LoadCategory lineCategory, int lineQuantity, double watts, double vars) {
+  int add(
+      int circuitIndex, LoadCategory lineCategory, int lineQuantity, double watts, double vars) {
     if (size == circuit.length) {
       int grown = size * 2;
       circuit = Arrays.copyOf(circuit, grown);

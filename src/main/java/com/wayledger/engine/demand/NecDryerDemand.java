@@ -1,8 +1,8 @@
 package com.wayledger.engine.demand;
 
 /**
- * NEC 220.54: each household clothes dryer at 5,000 VA or its nameplate rating, whichever is larger,
- * with the demand factors of Table 220.54 by number of dryers (2023 edition and earlier).
+ * NEC 220.54: each household clothes dryer at 5,000 VA or its nameplate rating, whichever is
+ * larger, with the demand factors of Table 220.54 by number of dryers (2023 edition and earlier).
  */
 public final class NecDryerDemand {
 

@@ -8,15 +8,17 @@ public final class PhaseCurrents {
   private PhaseCurrents() {}
 
   /**
-   * Neutral current of a four-wire three-phase system, A: the magnitude of the phasor sum of the line
-   * currents, each at its line's voltage angle (L1 0°, L2 −120°, L3 +120°) shifted back by its own
-   * power-factor angle φ = atan2(Q, P). With V = U0∠θ and S = P + jQ the line current is conj(S/V).
+   * Neutral current of a four-wire three-phase system, A: the magnitude of the phasor sum of the
+   * line currents, each at its line's voltage angle (L1 0°, L2 −120°, L3 +120°) shifted back by its
+   * own power-factor angle φ = atan2(Q, P). With V = U0∠θ and S = P + jQ the line current is
+   * conj(S/V).
    *
    * @param activeWatts P per phase in {@link Phase} order, W
    * @param reactiveVars Q per phase in {@link Phase} order, var
    * @param nominalVoltageVolts U0, V
    */
-  public static double neutralCurrentAmps(double[] activeWatts, double[] reactiveVars, double nominalVoltageVolts) {
+  public static double neutralCurrentAmps(
+      double[] activeWatts, double[] reactiveVars, double nominalVoltageVolts) {
     double real = 0.0;
     double imaginary = 0.0;
     Phase[] phases = Phase.values();
@@ -32,10 +34,11 @@ public final class PhaseCurrents {
   }
 
   /**
-   * Unbalance as the NEMA MG-1 definition applied to currents: the largest deviation from the mean of the
-   * three phase currents divided by the mean, %; 0 when the mean is 0.
+   * Unbalance as the NEMA MG-1 definition applied to currents: the largest deviation from the mean
+   * of the three phase currents divided by the mean, %; 0 when the mean is 0.
    */
-  public static double unbalancePercent(double currentL1Amps, double currentL2Amps, double currentL3Amps) {
+  public static double unbalancePercent(
+      double currentL1Amps, double currentL2Amps, double currentL3Amps) {
     double mean = (currentL1Amps + currentL2Amps + currentL3Amps) / 3.0;
     if (mean <= 0.0) {
       return 0.0;

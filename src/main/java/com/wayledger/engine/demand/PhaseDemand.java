@@ -9,10 +9,10 @@ import com.wayledger.engine.Phase;
  * @param demandWatts P, W
  * @param demandVars Q, var
  * @param currentAmps |S|/U0, A
- * @param headroomAmps incomer rating In minus the current, A (negative when overloaded); null when the
- *     incomer rating is not known
- * @param headroomKilowatts the headroom as active power at unity power factor, U0·headroom/1000, kW; null
- *     when the incomer rating is not known
+ * @param headroomAmps incomer rating In minus the current, A (negative when overloaded); null when
+ *     the incomer rating is not known
+ * @param headroomKilowatts the headroom as active power at unity power factor, U0·headroom/1000,
+ *     kW; null when the incomer rating is not known
  */
 public record PhaseDemand(
     Phase phase,

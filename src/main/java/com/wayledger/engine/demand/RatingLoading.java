@@ -18,13 +18,27 @@ public record RatingLoading(
 
   static RatingLoading of(String subject, Double ratingAmps, double highestPhaseCurrentAmps) {
     if (ratingAmps == null) {
-      return new RatingLoading(subject, null, highestPhaseCurrentAmps, null, "not assessed — missing " + subject + " rating");
+      return new RatingLoading(
+          subject,
+          null,
+          highestPhaseCurrentAmps,
+          null,
+          "not assessed — missing " + subject + " rating");
     }
     if (!(ratingAmps > 0)) {
       return new RatingLoading(
-          subject, ratingAmps, highestPhaseCurrentAmps, null, "not assessed — " + subject + " rating must be above 0 A");
+          subject,
+          ratingAmps,
+          highestPhaseCurrentAmps,
+          null,
+          "not assessed — " + subject + " rating must be above 0 A");
     }
-    return new RatingLoading(subject, ratingAmps, highestPhaseCurrentAmps, 100.0 * highestPhaseCurrentAmps / ratingAmps, null);
+    return new RatingLoading(
+        subject,
+        ratingAmps,
+        highestPhaseCurrentAmps,
+        100.0 * highestPhaseCurrentAmps / ratingAmps,
+        null);
   }
 
   static RatingLoading notApplicable(String subject, String reason) {

@@ -3,8 +3,8 @@ package com.wayledger.engine.demand;
 import java.util.List;
 
 /**
- * Demand of every board of a site, evaluated children first so each sub-board's demand is a load on the
- * way that feeds it.
+ * Demand of every board of a site, evaluated children first so each sub-board's demand is a load on
+ * the way that feeds it.
  *
  * @param siteId the site's id
  * @param siteName its name

@@ -14,7 +14,11 @@ import java.util.List;
  * @param circuits one entry per circuit that holds a device
  */
 public record BoardFindings(
-    long boardId, String reference, BoardFaultLevel faultLevel, List<Finding> findings, List<CircuitFindings> circuits) {
+    long boardId,
+    String reference,
+    BoardFaultLevel faultLevel,
+    List<Finding> findings,
+    List<CircuitFindings> circuits) {
 
   public BoardFindings {
     findings = List.copyOf(findings);

@@ -8,13 +8,16 @@ import java.util.Map;
  * What the demand calculation says about one board, as the protection engine needs it.
  *
  * @param boardId the board
- * @param phaseCurrentsAmps design current on each line at the board's incomer, A (a single-phase board uses L1)
+ * @param phaseCurrentsAmps design current on each line at the board's incomer, A (a single-phase
+ *     board uses L1)
  * @param unbalancePercent phase unbalance, %; null for a single-phase board or when not worked out
  */
-public record BoardLoading(long boardId, Map<Phase, Double> phaseCurrentsAmps, Double unbalancePercent) {
+public record BoardLoading(
+    long boardId, Map<Phase, Double> phaseCurrentsAmps, Double unbalancePercent) {
 
   public BoardLoading {
-    phaseCurrentsAmps = phaseCurrentsAmps.isEmpty() ? Map.of() : Map.copyOf(new EnumMap<>(phaseCurrentsAmps));
+    phaseCurrentsAmps =
+        phaseCurrentsAmps.isEmpty() ? Map.of() : Map.copyOf(new EnumMap<>(phaseCurrentsAmps));
   }
 
   /** The largest line current, A; null when no phase current is given. */

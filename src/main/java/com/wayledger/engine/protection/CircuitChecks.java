@@ -33,7 +33,9 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.OptionalDouble;
 
-/** Runs every circuit-level check on one way, turning missing inputs into "not assessed" findings. */
+/**
+ * Runs every circuit-level check on one way, turning missing inputs into "not assessed" findings.
+ */
 final class CircuitChecks {
 
   private CircuitChecks() {}
@@ -51,7 +53,9 @@ final class CircuitChecks {
     if (circuit.status() != WayStatus.IN_USE) {
       // a spare device still has to survive a fault at the board
       if (device != null) {
-        findings.add(BreakingCapacityCheck.assess(device.kind(), device.breakingCapacityKiloAmps(), board.faultCurrentKiloAmps()));
+        findings.add(
+            BreakingCapacityCheck.assess(
+                device.kind(), device.breakingCapacityKiloAmps(), board.faultCurrentKiloAmps()));
       }
       return new CircuitFindings(circuit.id(), circuit.wayNumber(), zs, null, null, null, findings);
     }
@@ -62,19 +66,27 @@ final class CircuitChecks {
     Resolved<CableRating> rating = CurrentCapacity.of(circuit.cable(), threePole ? 3 : 2);
 
     findings.add(overload(designCurrentAmps, device, overcurrent));
-    findings.add(circuit.ringFinal() ? ringCableProtection(circuit, overcurrent, rating) : cableProtection(overcurrent, rating));
+    findings.add(
+        circuit.ringFinal()
+            ? ringCableProtection(circuit, overcurrent, rating)
+            : cableProtection(overcurrent, rating));
     findings.add(
         device == null
-            ? Finding.notAssessed(CheckKind.BREAKING_CAPACITY, "protective device", BreakingCapacityCheck.REFERENCE)
-            : BreakingCapacityCheck.assess(device.kind(), device.breakingCapacityKiloAmps(), board.faultCurrentKiloAmps()));
+            ? Finding.notAssessed(
+                CheckKind.BREAKING_CAPACITY, "protective device", BreakingCapacityCheck.REFERENCE)
+            : BreakingCapacityCheck.assess(
+                device.kind(), device.breakingCapacityKiloAmps(), board.faultCurrentKiloAmps()));
 
     Double ownResidual = residualOf(device);
     Double residual = ownResidual != null ? ownResidual : board.upstreamResidualMilliAmps();
-    boolean finalCircuit = circuit.feedsBoardId() == null
-        && (device == null || device.ratedCurrentAmps() == null
-            || device.ratedCurrentAmps() <= settings.finalCircuitMaxRatedAmps());
+    boolean finalCircuit =
+        circuit.feedsBoardId() == null
+            && (device == null
+                || device.ratedCurrentAmps() == null
+                || device.ratedCurrentAmps() <= settings.finalCircuitMaxRatedAmps());
     Finding loop =
-        LoopImpedanceCheck.assess(supply.earthingSystem(), u0, zs, overcurrent, residual, finalCircuit, limits(settings));
+        LoopImpedanceCheck.assess(
+            supply.earthingSystem(), u0, zs, overcurrent, residual, finalCircuit, limits(settings));
     findings.add(circuit.ringFinal() ? RingFinalCheck.noted(loop, RingFinalCheck.LOOP_NOTE) : loop);
 
     Double totalDrop = null;
@@ -91,7 +103,9 @@ final class CircuitChecks {
     if (surge.isEmpty()) {
       findings.add(SurgeCheck.noSurgeRecorded());
     } else if (!overcurrent.isKnown()) {
-      findings.add(Finding.notAssessedBecause(CheckKind.START_UP_SURGE, "no " + overcurrent.missing(), SurgeCheck.REFERENCE));
+      findings.add(
+          Finding.notAssessedBecause(
+              CheckKind.START_UP_SURGE, "no " + overcurrent.missing(), SurgeCheck.REFERENCE));
     } else {
       findings.add(SurgeCheck.assess(surge.getAsDouble(), overcurrent.value()));
     }
@@ -114,9 +128,13 @@ final class CircuitChecks {
         s.minimumVoltageFactor(), s.measuredLoopImpedanceFraction(), s.touchVoltageLimitVolts());
   }
 
-  private static Finding overload(Double ib, DeviceSpec device, Resolved<DeviceCharacteristic> overcurrent) {
+  private static Finding overload(
+      Double ib, DeviceSpec device, Resolved<DeviceCharacteristic> overcurrent) {
     if (ib == null) {
-      return Finding.notAssessed(CheckKind.WAY_OVERLOAD, "design current Ib (from the demand calculation)", OverloadCheck.REFERENCE);
+      return Finding.notAssessed(
+          CheckKind.WAY_OVERLOAD,
+          "design current Ib (from the demand calculation)",
+          OverloadCheck.REFERENCE);
     }
     if (overcurrent.isKnown()) {
       return OverloadCheck.assess(ib, overcurrent.value().overloadSettingAmps());
@@ -125,72 +143,109 @@ final class CircuitChecks {
     if (device != null && device.kind() == DeviceKind.FUSE && device.ratedCurrentAmps() != null) {
       return OverloadCheck.assess(ib, device.ratedCurrentAmps());
     }
-    return Finding.notAssessedBecause(CheckKind.WAY_OVERLOAD, "no " + overcurrent.missing(), OverloadCheck.REFERENCE);
+    return Finding.notAssessedBecause(
+        CheckKind.WAY_OVERLOAD, "no " + overcurrent.missing(), OverloadCheck.REFERENCE);
   }
 
-  private static Finding cableProtection(Resolved<DeviceCharacteristic> overcurrent, Resolved<CableRating> rating) {
+  private static Finding cableProtection(
+      Resolved<DeviceCharacteristic> overcurrent, Resolved<CableRating> rating) {
     if (!overcurrent.isKnown()) {
-      return Finding.notAssessedBecause(CheckKind.CABLE_PROTECTION, "no " + overcurrent.missing(), CableProtectionCheck.REFERENCE);
-    }
-    if (!rating.isKnown()) {
-      return Finding.notAssessed(CheckKind.CABLE_PROTECTION, rating.missing(), CableProtectionCheck.REFERENCE);
-    }
-    DeviceCharacteristic d = overcurrent.value();
-    return CableProtectionCheck.assess(d.overloadSettingAmps(), d.conventionalTrippingAmps(), rating.value());
-  }
-
-  private static Finding ringCableProtection(
-      CircuitSpec circuit, Resolved<DeviceCharacteristic> overcurrent, Resolved<CableRating> rating) {
-    DeviceSpec device = circuit.device();
-    Double ratedAmps = overcurrent.isKnown() ? Double.valueOf(overcurrent.value().overloadSettingAmps())
-        : device != null && device.kind() == DeviceKind.FUSE ? device.ratedCurrentAmps() : null;
-    if (ratedAmps == null) {
-      String missing = overcurrent.isKnown() ? "device rating In" : overcurrent.missing();
       return Finding.notAssessedBecause(
-          CheckKind.CABLE_PROTECTION, "ring final circuit: no " + missing, RingFinalCheck.CABLE_REFERENCE);
+          CheckKind.CABLE_PROTECTION,
+          "no " + overcurrent.missing(),
+          CableProtectionCheck.REFERENCE);
     }
     if (!rating.isKnown()) {
       return Finding.notAssessed(
-          CheckKind.CABLE_PROTECTION, rating.missing() + " of the ring final circuit", RingFinalCheck.CABLE_REFERENCE);
+          CheckKind.CABLE_PROTECTION, rating.missing(), CableProtectionCheck.REFERENCE);
+    }
+    DeviceCharacteristic d = overcurrent.value();
+    return CableProtectionCheck.assess(
+        d.overloadSettingAmps(), d.conventionalTrippingAmps(), rating.value());
+  }
+
+  private static Finding ringCableProtection(
+      CircuitSpec circuit,
+      Resolved<DeviceCharacteristic> overcurrent,
+      Resolved<CableRating> rating) {
+    DeviceSpec device = circuit.device();
+    Double ratedAmps =
+        overcurrent.isKnown()
+            ? Double.valueOf(overcurrent.value().overloadSettingAmps())
+            : device != null && device.kind() == DeviceKind.FUSE ? device.ratedCurrentAmps() : null;
+    if (ratedAmps == null) {
+      String missing = overcurrent.isKnown() ? "device rating In" : overcurrent.missing();
+      return Finding.notAssessedBecause(
+          CheckKind.CABLE_PROTECTION,
+          "ring final circuit: no " + missing,
+          RingFinalCheck.CABLE_REFERENCE);
+    }
+    if (!rating.isKnown()) {
+      return Finding.notAssessed(
+          CheckKind.CABLE_PROTECTION,
+          rating.missing() + " of the ring final circuit",
+          RingFinalCheck.CABLE_REFERENCE);
     }
     return RingFinalCheck.cableProtection(ratedAmps, circuit.cable(), rating.value());
   }
 
   private static Finding voltageDrop(
-      CircuitSpec circuit, BoardFaultLevel board, Double ib, double u0, boolean threePole, ProtectionSettings s) {
-    boolean lighting = circuit.loads().stream().anyMatch(l -> l.category() == LoadCategory.LIGHTING);
+      CircuitSpec circuit,
+      BoardFaultLevel board,
+      Double ib,
+      double u0,
+      boolean threePole,
+      ProtectionSettings s) {
+    boolean lighting =
+        circuit.loads().stream().anyMatch(l -> l.category() == LoadCategory.LIGHTING);
     SourcedValue boardDrop = board.voltageDropFromOriginPercent();
     if (!boardDrop.isKnown()) {
-      return Finding.notAssessed(CheckKind.VOLTAGE_DROP, boardDrop.missing(), VoltageDropCheck.REFERENCE);
+      return Finding.notAssessed(
+          CheckKind.VOLTAGE_DROP, boardDrop.missing(), VoltageDropCheck.REFERENCE);
     }
     if (ib == null) {
-      return Finding.notAssessed(CheckKind.VOLTAGE_DROP, "design current Ib (from the demand calculation)", VoltageDropCheck.REFERENCE);
+      return Finding.notAssessed(
+          CheckKind.VOLTAGE_DROP,
+          "design current Ib (from the demand calculation)",
+          VoltageDropCheck.REFERENCE);
     }
     CableSpec cable = circuit.cable();
     if (cable == null) {
-      return Finding.notAssessed(CheckKind.VOLTAGE_DROP, "circuit cable", VoltageDropCheck.REFERENCE);
+      return Finding.notAssessed(
+          CheckKind.VOLTAGE_DROP, "circuit cable", VoltageDropCheck.REFERENCE);
     }
     if (cable.lengthMetres() == null) {
-      return Finding.notAssessed(CheckKind.VOLTAGE_DROP, "cable length", VoltageDropCheck.REFERENCE);
+      return Finding.notAssessed(
+          CheckKind.VOLTAGE_DROP, "cable length", VoltageDropCheck.REFERENCE);
     }
     Resolved<Double> mv =
-        VoltageDrop.milliVoltsPerAmpMetre(cable.material(), cable.lineCsaSquareMillimetres(), cable.insulation(), threePole);
+        VoltageDrop.milliVoltsPerAmpMetre(
+            cable.material(), cable.lineCsaSquareMillimetres(), cable.insulation(), threePole);
     if (!mv.isKnown()) {
       return Finding.notAssessed(CheckKind.VOLTAGE_DROP, mv.missing(), VoltageDropCheck.REFERENCE);
     }
     double nominal = threePole ? Math.sqrt(3.0) * u0 : u0;
-    // a ring fed from both ends with the load at its mid-point: a quarter of the whole ring's resistance
-    double length = cable.lengthMetres() * (circuit.ringFinal() ? RingFinalCheck.MID_POINT_FRACTION : 1.0);
+    // a ring fed from both ends with the load at its mid-point: a quarter of the whole ring's
+    // resistance
+    double length =
+        cable.lengthMetres() * (circuit.ringFinal() ? RingFinalCheck.MID_POINT_FRACTION : 1.0);
     double circuitDrop = VoltageDrop.percent(mv.value(), ib, length, nominal);
-    return VoltageDropCheck.assess(boardDrop.value(), circuitDrop, s.voltageDropLimitPercent(lighting), lighting);
+    return VoltageDropCheck.assess(
+        boardDrop.value(), circuitDrop, s.voltageDropLimitPercent(lighting), lighting);
   }
 
-  private static Finding socketRcd(DeviceSpec device, Double own, Double upstream, ProtectionSettings s) {
+  private static Finding socketRcd(
+      DeviceSpec device, Double own, Double upstream, ProtectionSettings s) {
     if (device == null || device.ratedCurrentAmps() == null) {
-      return Finding.notAssessed(CheckKind.SOCKET_RCD, "device rating In", SocketRcdCheck.REFERENCE);
+      return Finding.notAssessed(
+          CheckKind.SOCKET_RCD, "device rating In", SocketRcdCheck.REFERENCE);
     }
     return SocketRcdCheck.assess(
-        device.ratedCurrentAmps(), own, upstream, s.socketRcdMaxRatedAmps(), s.socketRcdMaxResidualMilliAmps());
+        device.ratedCurrentAmps(),
+        own,
+        upstream,
+        s.socketRcdMaxRatedAmps(),
+        s.socketRcdMaxResidualMilliAmps());
   }
 
   static Double residualOf(DeviceSpec device) {

@@ -34,12 +34,13 @@ import java.util.Map;
 import java.util.OptionalDouble;
 
 /**
- * Proposes for a circuit the lowest-rated IEC 60898-1 breaker (rating first, then curve B, C, D, then the smallest
- * standard breaking capacity) that passes every check at once: Ib ≤ In ≤ Iz, start-up surge below the
- * instantaneous band, Zs within the limit for that curve, and breaking capacity at least the fault current (with
- * Ics covering it). An RCBO 30 mA type A is proposed instead of an MCB where a socket-outlet circuit up to 32 A, or
- * a TT circuit, has no residual-current device upstream. The circuit's cable is kept as recorded; when no breaker
- * fits, the reasons say what would have to change.
+ * Proposes for a circuit the lowest-rated IEC 60898-1 breaker (rating first, then curve B, C, D,
+ * then the smallest standard breaking capacity) that passes every check at once: Ib ≤ In ≤ Iz,
+ * start-up surge below the instantaneous band, Zs within the limit for that curve, and breaking
+ * capacity at least the fault current (with Ics covering it). An RCBO 30 mA type A is proposed
+ * instead of an MCB where a socket-outlet circuit up to 32 A, or a TT circuit, has no
+ * residual-current device upstream. The circuit's cable is kept as recorded; when no breaker fits,
+ * the reasons say what would have to change.
  */
 public final class DeviceProposer {
 
@@ -48,22 +49,31 @@ public final class DeviceProposer {
 
   private DeviceProposer() {}
 
-  /** The proposal for circuit {@code circuitId} of {@code site}, with its design current from {@code loading}. */
+  /**
+   * The proposal for circuit {@code circuitId} of {@code site}, with its design current from {@code
+   * loading}.
+   */
   public static DeviceProposal propose(
       SiteSpec site, long circuitId, CircuitLoading loading, ProtectionSettings settings) {
     for (BoardSpec board : site.boards()) {
       for (CircuitSpec circuit : board.circuits()) {
         if (circuit.id() == circuitId) {
           BoardFaultLevel level = FaultLevels.of(site, Map.of()).get(board.id());
-          return propose(site, circuit, level, loading == null ? null : loading.designCurrentAmps(), settings);
+          return propose(
+              site, circuit, level, loading == null ? null : loading.designCurrentAmps(), settings);
         }
       }
     }
-    return new DeviceProposal(circuitId, null, List.of(), List.of("circuit " + circuitId + " is not on the site"));
+    return new DeviceProposal(
+        circuitId, null, List.of(), List.of("circuit " + circuitId + " is not on the site"));
   }
 
   static DeviceProposal propose(
-      SiteSpec site, CircuitSpec circuit, BoardFaultLevel level, Double designCurrentAmps, ProtectionSettings settings) {
+      SiteSpec site,
+      CircuitSpec circuit,
+      BoardFaultLevel level,
+      Double designCurrentAmps,
+      ProtectionSettings settings) {
     long id = circuit.id();
     if (designCurrentAmps == null) {
       return none(id, "missing design current Ib (from the demand calculation)");
@@ -90,9 +100,11 @@ public final class DeviceProposer {
     }
     double u0 = site.supply().nominalVoltageToEarthVolts();
     OptionalDouble surge = StartUpSurge.peakAmps(circuit.loads(), u0, threePole);
-    boolean sockets = circuit.loads().stream().anyMatch(l -> l.category() == LoadCategory.SOCKET_OUTLETS);
+    boolean sockets =
+        circuit.loads().stream().anyMatch(l -> l.category() == LoadCategory.SOCKET_OUTLETS);
     Double upstreamResidual = level.upstreamResidualMilliAmps();
-    boolean upstream30 = upstreamResidual != null && upstreamResidual <= settings.socketRcdMaxResidualMilliAmps();
+    boolean upstream30 =
+        upstreamResidual != null && upstreamResidual <= settings.socketRcdMaxResidualMilliAmps();
     boolean finalCircuit = circuit.feedsBoardId() == null;
     int poles = threePole ? 3 : 1;
     double iz = rating.value().capacityAmps();
@@ -104,30 +116,55 @@ public final class DeviceProposer {
         continue;
       }
       if (in > iz) {
-        reasons.add(reasons.isEmpty()
-            ? "a larger cable is needed: the smallest rating not below Ib " + fixed(ib) + " A is " + fixed(in)
-                + " A, above the cable's Iz " + fixed(iz) + " A"
-            : "a larger cable is needed: no rating from Ib " + fixed(ib) + " A up to the cable's Iz " + fixed(iz)
-                + " A passes (reasons above)");
+        reasons.add(
+            reasons.isEmpty()
+                ? "a larger cable is needed: the smallest rating not below Ib "
+                    + fixed(ib)
+                    + " A is "
+                    + fixed(in)
+                    + " A, above the cable's Iz "
+                    + fixed(iz)
+                    + " A"
+                : "a larger cable is needed: no rating from Ib "
+                    + fixed(ib)
+                    + " A up to the cable's Iz "
+                    + fixed(iz)
+                    + " A passes (reasons above)");
         return new DeviceProposal(id, null, List.of(), reasons);
       }
-      boolean rcbo = (sockets && in <= settings.socketRcdMaxRatedAmps() && !upstream30)
-          || (earthing == EarthingSystem.TT && upstreamResidual == null);
+      boolean rcbo =
+          (sockets && in <= settings.socketRcdMaxRatedAmps() && !upstream30)
+              || (earthing == EarthingSystem.TT && upstreamResidual == null);
       Double ownResidual = rcbo ? PROPOSED_RESIDUAL_MILLIAMPS : null;
       DeviceKind kind = rcbo ? DeviceKind.RCBO : DeviceKind.MCB;
       for (TripCurve curve : TripCurve.values()) {
         DeviceCharacteristic d = DeviceCharacteristic.miniature(kind, curve, in, ownResidual);
         String label = "type " + curve + " " + fixed(in) + " A";
         if (surge.isPresent() && surge.getAsDouble() >= d.lowestInstantaneousAmps()) {
-          reasons.add(label + ": start-up surge " + fixed(surge.getAsDouble()) + " A reaches the instantaneous band from "
-              + fixed(d.lowestInstantaneousAmps()) + " A");
+          reasons.add(
+              label
+                  + ": start-up surge "
+                  + fixed(surge.getAsDouble())
+                  + " A reaches the instantaneous band from "
+                  + fixed(d.lowestInstantaneousAmps())
+                  + " A");
           continue;
         }
-        Finding loop = LoopImpedanceCheck.assess(
-            earthing, u0, zs, Resolved.of(d), ownResidual != null ? ownResidual : upstreamResidual, finalCircuit,
-            CircuitChecks.limits(settings));
+        Finding loop =
+            LoopImpedanceCheck.assess(
+                earthing,
+                u0,
+                zs,
+                Resolved.of(d),
+                ownResidual != null ? ownResidual : upstreamResidual,
+                finalCircuit,
+                CircuitChecks.limits(settings));
         if (loop.verdict() != Verdict.PASS) {
-          reasons.add(label + ": " + loop.summary() + " — a larger cable (lower R1+R2) is needed for this curve");
+          reasons.add(
+              label
+                  + ": "
+                  + loop.summary()
+                  + " — a larger cable (lower R1+R2) is needed for this curve");
           continue;
         }
         Finding breaking = null;
@@ -141,27 +178,43 @@ public final class DeviceProposer {
           }
         }
         if (breaking == null) {
-          reasons.add(label + ": fault current " + fixed(ka.value()) + " kA is beyond the standard MCB breaking"
-              + " capacities (service capacity Ics of 25 kA is 12.5 kA)");
+          reasons.add(
+              label
+                  + ": fault current "
+                  + fixed(ka.value())
+                  + " kA is beyond the standard MCB breaking"
+                  + " capacities (service capacity Ics of 25 kA is 12.5 kA)");
           continue;
         }
         List<Finding> checks = new ArrayList<>();
         checks.add(OverloadCheck.assess(ib, in));
         checks.add(CableProtectionCheck.assess(in, d.conventionalTrippingAmps(), rating.value()));
-        checks.add(surge.isPresent() ? SurgeCheck.assess(surge.getAsDouble(), d) : SurgeCheck.noSurgeRecorded());
+        checks.add(
+            surge.isPresent()
+                ? SurgeCheck.assess(surge.getAsDouble(), d)
+                : SurgeCheck.noSurgeRecorded());
         checks.add(loop);
         checks.add(breaking);
         if (sockets) {
-          checks.add(SocketRcdCheck.assess(in, ownResidual, upstreamResidual,
-              settings.socketRcdMaxRatedAmps(), settings.socketRcdMaxResidualMilliAmps()));
+          checks.add(
+              SocketRcdCheck.assess(
+                  in,
+                  ownResidual,
+                  upstreamResidual,
+                  settings.socketRcdMaxRatedAmps(),
+                  settings.socketRcdMaxResidualMilliAmps()));
         }
-        DeviceSpec device = new DeviceSpec(kind, curve, in, poles, icn, ownResidual, rcbo ? RcdType.A : null);
+        DeviceSpec device =
+            new DeviceSpec(kind, curve, in, poles, icn, ownResidual, rcbo ? RcdType.A : null);
         return new DeviceProposal(id, device, checks, reasons);
       }
     }
     if (reasons.isEmpty()) {
-      reasons.add("design current " + fixed(ib) + " A is above the largest standard MCB rating (125 A): a moulded-case"
-          + " breaker is needed, which the proposer does not choose");
+      reasons.add(
+          "design current "
+              + fixed(ib)
+              + " A is above the largest standard MCB rating (125 A): a moulded-case"
+              + " breaker is needed, which the proposer does not choose");
     }
     return new DeviceProposal(id, null, List.of(), reasons);
   }
@@ -171,6 +224,8 @@ public final class DeviceProposer {
   }
 
   private static String fixed(double v) {
-    return v == Math.rint(v) ? String.valueOf((long) v) : String.format(java.util.Locale.ROOT, "%.2f", v);
+    return v == Math.rint(v)
+        ? String.valueOf((long) v)
+        : String.format(java.util.Locale.ROOT, "%.2f", v);
   }
 }

@@ -26,7 +26,10 @@ public final class ProtectionEngine {
 
   private ProtectionEngine() {}
 
-  /** {@link #check(SiteSpec, Map, Map, RecordedMccbSettings, ProtectionSettings)} with no MCCB settings recorded. */
+  /**
+   * {@link #check(SiteSpec, Map, Map, RecordedMccbSettings, ProtectionSettings)} with no MCCB
+   * settings recorded.
+   */
   public static SiteFindings check(
       SiteSpec site,
       Map<Long, CircuitLoading> loadingByCircuit,
@@ -36,10 +39,11 @@ public final class ProtectionEngine {
   }
 
   /**
-   * Runs every check on every board and circuit of the site. Never throws on incomplete data: a check that lacks
-   * an input returns a {@code NOT_ASSESSED} finding naming it.
+   * Runs every check on every board and circuit of the site. Never throws on incomplete data: a
+   * check that lacks an input returns a {@code NOT_ASSESSED} finding naming it.
    *
-   * @param loadingByCircuit design currents by circuit id (from the demand engine); absent = not known
+   * @param loadingByCircuit design currents by circuit id (from the demand engine); absent = not
+   *     known
    * @param loadingByBoard phase currents and unbalance by board id; absent = not known
    * @param mccbSettings MCCB settings recorded outside the schedule
    */
@@ -95,27 +99,60 @@ public final class ProtectionEngine {
       ProtectionSettings settings) {
     List<Finding> findings = new ArrayList<>();
     Double largest = loading == null ? null : loading.largestPhaseAmps();
-    String missingLoad = "design current of board " + board.reference() + " (from the demand calculation)";
+    String missingLoad =
+        "design current of board " + board.reference() + " (from the demand calculation)";
 
     if (board.incomer() != null && board.incomer().kind() != DeviceKind.RCD) {
-      Resolved<DeviceCharacteristic> incomer = DeviceCharacteristic.of(
-          board.incomer(), mccbSettings.incomerByBoardId().get(board.id()), settings.mccbInstantaneousMultiple());
-      Double rating = incomer.isKnown() ? Double.valueOf(incomer.value().overloadSettingAmps()) : board.incomer().ratedCurrentAmps();
-      findings.add(rated(CheckKind.INCOMER_OVERLOAD, "incomer", largest, rating, missingLoad, "incomer rating", BoardLoadCheck.REFERENCE_OVERLOAD));
+      Resolved<DeviceCharacteristic> incomer =
+          DeviceCharacteristic.of(
+              board.incomer(),
+              mccbSettings.incomerByBoardId().get(board.id()),
+              settings.mccbInstantaneousMultiple());
+      Double rating =
+          incomer.isKnown()
+              ? Double.valueOf(incomer.value().overloadSettingAmps())
+              : board.incomer().ratedCurrentAmps();
+      findings.add(
+          rated(
+              CheckKind.INCOMER_OVERLOAD,
+              "incomer",
+              largest,
+              rating,
+              missingLoad,
+              "incomer rating",
+              BoardLoadCheck.REFERENCE_OVERLOAD));
     }
-    findings.add(rated(CheckKind.BUSBAR_OVERLOAD, "busbar", largest, board.busbarRatingAmps(), missingLoad, "busbar rating", BoardLoadCheck.REFERENCE_BUSBAR));
+    findings.add(
+        rated(
+            CheckKind.BUSBAR_OVERLOAD,
+            "busbar",
+            largest,
+            board.busbarRatingAmps(),
+            missingLoad,
+            "busbar rating",
+            BoardLoadCheck.REFERENCE_BUSBAR));
     if (board.isThreePhase()) {
       findings.add(
           loading == null || loading.unbalancePercent() == null
-              ? Finding.notAssessed(CheckKind.PHASE_UNBALANCE, "phase unbalance of board " + board.reference(), BoardLoadCheck.REFERENCE_UNBALANCE)
-              : BoardLoadCheck.unbalance(loading.unbalancePercent(), board.unbalanceLimitPercent()));
+              ? Finding.notAssessed(
+                  CheckKind.PHASE_UNBALANCE,
+                  "phase unbalance of board " + board.reference(),
+                  BoardLoadCheck.REFERENCE_UNBALANCE)
+              : BoardLoadCheck.unbalance(
+                  loading.unbalancePercent(), board.unbalanceLimitPercent()));
     }
     findings.addAll(selectivity(board, level, mccbSettings, settings));
     return findings;
   }
 
   private static Finding rated(
-      CheckKind check, String what, Double largest, Double rating, String missingLoad, String missingRating, String reference) {
+      CheckKind check,
+      String what,
+      Double largest,
+      Double rating,
+      String missingLoad,
+      String missingRating,
+      String reference) {
     if (rating == null) {
       return Finding.notAssessed(check, missingRating, reference);
     }
@@ -126,44 +163,77 @@ public final class ProtectionEngine {
   }
 
   private static List<Finding> selectivity(
-      BoardSpec board, BoardFaultLevel level, RecordedMccbSettings mccbSettings, ProtectionSettings settings) {
+      BoardSpec board,
+      BoardFaultLevel level,
+      RecordedMccbSettings mccbSettings,
+      ProtectionSettings settings) {
     if (level.upstreamDevice() == null) {
-      return List.of(Finding.notAssessed(CheckKind.SELECTIVITY, "incomer or feeding device of board " + board.reference(), SelectivityCheck.REFERENCE));
+      return List.of(
+          Finding.notAssessed(
+              CheckKind.SELECTIVITY,
+              "incomer or feeding device of board " + board.reference(),
+              SelectivityCheck.REFERENCE));
     }
-    Resolved<DeviceCharacteristic> upstream = DeviceCharacteristic.of(
-        level.upstreamDevice(), mccbSettings.incomerByBoardId().get(board.id()), settings.mccbInstantaneousMultiple());
+    Resolved<DeviceCharacteristic> upstream =
+        DeviceCharacteristic.of(
+            level.upstreamDevice(),
+            mccbSettings.incomerByBoardId().get(board.id()),
+            settings.mccbInstantaneousMultiple());
     if (!upstream.isKnown()) {
-      return List.of(Finding.notAssessedBecause(CheckKind.SELECTIVITY, "upstream device has no " + upstream.missing(), SelectivityCheck.REFERENCE));
+      return List.of(
+          Finding.notAssessedBecause(
+              CheckKind.SELECTIVITY,
+              "upstream device has no " + upstream.missing(),
+              SelectivityCheck.REFERENCE));
     }
     SourcedValue ka = level.faultCurrentKiloAmps();
     if (!ka.isKnown()) {
-      return List.of(Finding.notAssessed(CheckKind.SELECTIVITY, ka.missing(), SelectivityCheck.REFERENCE));
+      return List.of(
+          Finding.notAssessed(CheckKind.SELECTIVITY, ka.missing(), SelectivityCheck.REFERENCE));
     }
     List<Finding> findings = new ArrayList<>();
     for (CircuitSpec c : board.circuits()) {
       if (c.status() != WayStatus.IN_USE || c.device() == null) {
         continue;
       }
-      Resolved<DeviceCharacteristic> out = DeviceCharacteristic.of(
-          c.device(), mccbSettings.byCircuitId().get(c.id()), settings.mccbInstantaneousMultiple());
+      Resolved<DeviceCharacteristic> out =
+          DeviceCharacteristic.of(
+              c.device(),
+              mccbSettings.byCircuitId().get(c.id()),
+              settings.mccbInstantaneousMultiple());
       if (out.isKnown()) {
         Finding f = SelectivityCheck.assess(upstream.value(), out.value(), ka.value() * 1000.0);
-        findings.add(new Finding(f.check(), f.verdict(), "way " + c.wayNumber() + ": " + f.summary(), f.values(), f.reference(), f.remedy()));
+        findings.add(
+            new Finding(
+                f.check(),
+                f.verdict(),
+                "way " + c.wayNumber() + ": " + f.summary(),
+                f.values(),
+                f.reference(),
+                f.remedy()));
       } else {
-        findings.add(Finding.notAssessedBecause(CheckKind.SELECTIVITY, "way " + c.wayNumber() + " has no " + out.missing(), SelectivityCheck.REFERENCE));
+        findings.add(
+            Finding.notAssessedBecause(
+                CheckKind.SELECTIVITY,
+                "way " + c.wayNumber() + " has no " + out.missing(),
+                SelectivityCheck.REFERENCE));
       }
     }
     return findings;
   }
 
   /**
-   * The supply fuse carries the sum of the boards fed from the origin, phase by phase (no diversity between them:
-   * the conservative side).
+   * The supply fuse carries the sum of the boards fed from the origin, phase by phase (no diversity
+   * between them: the conservative side).
    */
   private static List<Finding> supplyFuse(SiteSpec site, Map<Long, BoardLoading> loadingByBoard) {
     Double fuse = site.supply().supplyFuseRatingAmps();
     if (fuse == null) {
-      return List.of(Finding.notAssessed(CheckKind.SUPPLY_FUSE_OVERLOAD, "supply fuse rating", BoardLoadCheck.REFERENCE_OVERLOAD));
+      return List.of(
+          Finding.notAssessed(
+              CheckKind.SUPPLY_FUSE_OVERLOAD,
+              "supply fuse rating",
+              BoardLoadCheck.REFERENCE_OVERLOAD));
     }
     Map<Phase, Double> sum = new EnumMap<>(Phase.class);
     for (BoardSpec board : site.boards()) {
@@ -172,14 +242,28 @@ public final class ProtectionEngine {
       }
       BoardLoading l = loadingByBoard.get(board.id());
       if (l == null || l.phaseCurrentsAmps().isEmpty()) {
-        return List.of(Finding.notAssessed(CheckKind.SUPPLY_FUSE_OVERLOAD, "design current of board " + board.reference(), BoardLoadCheck.REFERENCE_OVERLOAD));
+        return List.of(
+            Finding.notAssessed(
+                CheckKind.SUPPLY_FUSE_OVERLOAD,
+                "design current of board " + board.reference(),
+                BoardLoadCheck.REFERENCE_OVERLOAD));
       }
       l.phaseCurrentsAmps().forEach((p, a) -> sum.merge(p, a, Double::sum));
     }
     if (sum.isEmpty()) {
-      return List.of(Finding.notAssessed(CheckKind.SUPPLY_FUSE_OVERLOAD, "a board fed from the origin", BoardLoadCheck.REFERENCE_OVERLOAD));
+      return List.of(
+          Finding.notAssessed(
+              CheckKind.SUPPLY_FUSE_OVERLOAD,
+              "a board fed from the origin",
+              BoardLoadCheck.REFERENCE_OVERLOAD));
     }
     double largest = sum.values().stream().mapToDouble(Double::doubleValue).max().orElseThrow();
-    return List.of(BoardLoadCheck.overload(CheckKind.SUPPLY_FUSE_OVERLOAD, "supply fuse", largest, fuse, BoardLoadCheck.REFERENCE_OVERLOAD));
+    return List.of(
+        BoardLoadCheck.overload(
+            CheckKind.SUPPLY_FUSE_OVERLOAD,
+            "supply fuse",
+            largest,
+            fuse,
+            BoardLoadCheck.REFERENCE_OVERLOAD));
   }
 }

@@ -11,7 +11,8 @@ import java.util.List;
  * @param siteFindings findings about the origin (supply fuse)
  * @param boards one entry per board, in the site's order
  */
-public record SiteFindings(ProtectionSettings settings, List<Finding> siteFindings, List<BoardFindings> boards) {
+public record SiteFindings(
+    ProtectionSettings settings, List<Finding> siteFindings, List<BoardFindings> boards) {
 
   public SiteFindings {
     siteFindings = List.copyOf(siteFindings);

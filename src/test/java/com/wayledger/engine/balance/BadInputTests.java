@@ -19,7 +19,8 @@ class BadInputTests {
       items.add(new BalanceItem(i, "c" + i, 5.0, Phase.L1, i + 1, true));
     }
     BalanceProblem problem =
-        new BalanceProblem(items, Map.of(), Map.of(Phase.L1, 2, Phase.L2, 2, Phase.L3, 2), null, 10.0, true);
+        new BalanceProblem(
+            items, Map.of(), Map.of(Phase.L1, 2, Phase.L2, 2, Phase.L3, 2), null, 10.0, true);
 
     BalanceResult result = balancer.optimise(problem);
 
@@ -54,7 +55,9 @@ class BadInputTests {
   @Test
   void missingDemandIsNotAssessedAndNamesTheCircuit() {
     List<BalanceItem> items =
-        List.of(new BalanceItem(1, "Walk-in freezer", null, Phase.L1, 1, true), new BalanceItem(2, "b", 3.0, Phase.L2, 1, true));
+        List.of(
+            new BalanceItem(1, "Walk-in freezer", null, Phase.L1, 1, true),
+            new BalanceItem(2, "b", 3.0, Phase.L2, 1, true));
     BalanceProblem problem = new BalanceProblem(items, Map.of(), null, null, 10.0, true);
 
     BalanceResult result = balancer.optimise(problem);
@@ -74,7 +77,9 @@ class BadInputTests {
   @Test
   void duplicateCircuitIdIsInvalid() {
     List<BalanceItem> items =
-        List.of(new BalanceItem(1, "a", 2.0, Phase.L1, 1, true), new BalanceItem(1, "b", 3.0, Phase.L2, 1, true));
+        List.of(
+            new BalanceItem(1, "a", 2.0, Phase.L1, 1, true),
+            new BalanceItem(1, "b", 3.0, Phase.L2, 1, true));
     BalanceProblem problem = new BalanceProblem(items, Map.of(), null, null, 10.0, true);
 
     assertThat(balancer.optimise(problem).outcome()).isEqualTo(BalanceOutcome.INVALID_INPUT);
@@ -98,7 +103,10 @@ class BadInputTests {
 
   @Test
   void missingUnbalanceLimitLeavesOnlyTheLimitAnswerNotAssessed() {
-    List<BalanceItem> items = List.of(new BalanceItem(1, "a", 9.0, Phase.L1, 1, true), new BalanceItem(2, "b", 9.0, Phase.L1, 2, true));
+    List<BalanceItem> items =
+        List.of(
+            new BalanceItem(1, "a", 9.0, Phase.L1, 1, true),
+            new BalanceItem(2, "b", 9.0, Phase.L1, 2, true));
     BalanceProblem problem = new BalanceProblem(items, Map.of(), null, null, null, true);
 
     FewestMovesResult result = balancer.fewestMoves(problem);

@@ -7,14 +7,17 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * Independent reference for the tests: enumerates all 3^n arrangements of the movable circuits, written
- * plainly without any of the engine's bounds. Works in centiamps (each demand rounded to 0.01 A, as the
- * engine documents) and ranks arrangements by (largest phase load, then largest |3·load − total|), which
- * is (largest current, then unbalance) in exact integers.
+ * Independent reference for the tests: enumerates all 3^n arrangements of the movable circuits,
+ * written plainly without any of the engine's bounds. Works in centiamps (each demand rounded to
+ * 0.01 A, as the engine documents) and ranks arrangements by (largest phase load, then largest
+ * |3·load − total|), which is (largest current, then unbalance) in exact integers.
  */
 final class ExhaustiveOracle {
 
-  /** Best (largest, deviation) with at most k moves, per k; the overall optimum; fewest moves to a limit. */
+  /**
+   * Best (largest, deviation) with at most k moves, per k; the overall optimum; fewest moves to a
+   * limit.
+   */
   record Answer(
       long[] bestMaxByMoves,
       long[] bestDeviationByMoves,
@@ -57,12 +60,14 @@ final class ExhaustiveOracle {
     long total = fixed[0] + fixed[1] + fixed[2];
     for (int i = 0; i < n; i++) {
       demand[i] = Math.round(movable.get(i).demandAmps() * 100.0);
-      current[i] = movable.get(i).currentPhase() == null ? -1 : movable.get(i).currentPhase().ordinal();
+      current[i] =
+          movable.get(i).currentPhase() == null ? -1 : movable.get(i).currentPhase().ordinal();
       total += demand[i];
     }
     int[] capacity = new int[3];
     for (Phase phase : Phase.values()) {
-      Integer given = problem.positionsAvailable() == null ? null : problem.positionsAvailable().get(phase);
+      Integer given =
+          problem.positionsAvailable() == null ? null : problem.positionsAvailable().get(phase);
       if (given != null) {
         capacity[phase.ordinal()] = given;
       } else if (problem.freeWays() != null) {
@@ -119,13 +124,16 @@ final class ExhaustiveOracle {
         bestMax[moves] = max;
         bestDev[moves] = dev;
       }
-      if (limit != null && 100.0 * dev <= limit * total + 1e-6 && (fewestToLimit == null || moves < fewestToLimit)) {
+      if (limit != null
+          && 100.0 * dev <= limit * total + 1e-6
+          && (fewestToLimit == null || moves < fewestToLimit)) {
         fewestToLimit = moves;
       }
     }
     // Turn "exactly k moves" into "at most k moves".
     for (int k = 1; k <= n; k++) {
-      if (bestMax[k - 1] < bestMax[k] || (bestMax[k - 1] == bestMax[k] && bestDev[k - 1] < bestDev[k])) {
+      if (bestMax[k - 1] < bestMax[k]
+          || (bestMax[k - 1] == bestMax[k] && bestDev[k - 1] < bestDev[k])) {
         bestMax[k] = bestMax[k - 1];
         bestDev[k] = bestDev[k - 1];
       }

@@ -41,7 +41,9 @@ class FewestMovesTests {
           .isCloseTo(oracle.bestMaxByMoves()[k] / 100.0, within(1e-9));
       assertThat(step.unbalancePercent())
           .as("seed %d, %d moves: unbalance", seed, k)
-          .isCloseTo(oracle.total() == 0 ? 0.0 : 100.0 * oracle.bestDeviationByMoves()[k] / oracle.total(), within(1e-9));
+          .isCloseTo(
+              oracle.total() == 0 ? 0.0 : 100.0 * oracle.bestDeviationByMoves()[k] / oracle.total(),
+              within(1e-9));
       assertThat(step.plan()).as("seed %d, %d moves: plan length", seed, k).hasSize(k);
     }
   }
@@ -64,7 +66,9 @@ class FewestMovesTests {
           oracle.bestMaxByMoves()[k] < oracle.bestMaxByMoves()[k - 1]
               || (oracle.bestMaxByMoves()[k] == oracle.bestMaxByMoves()[k - 1]
                   && oracle.bestDeviationByMoves()[k] < oracle.bestDeviationByMoves()[k - 1]);
-      assertThat(listed.contains(k)).as("seed %d: step %d listed iff it improves", seed, k).isEqualTo(improves);
+      assertThat(listed.contains(k))
+          .as("seed %d: step %d listed iff it improves", seed, k)
+          .isEqualTo(improves);
     }
   }
 
@@ -83,17 +87,25 @@ class FewestMovesTests {
     if (oracle.fewestMovesToLimit() == null) {
       assertThat(result.limitVerdict()).as("seed %d", seed).isEqualTo(LimitVerdict.NOT_REACHABLE);
     } else {
-      assertThat(result.movesToReachLimit()).as("seed %d: moves to limit", seed).isEqualTo(oracle.fewestMovesToLimit());
+      assertThat(result.movesToReachLimit())
+          .as("seed %d: moves to limit", seed)
+          .isEqualTo(oracle.fewestMovesToLimit());
       assertThat(result.limitVerdict())
           .as("seed %d", seed)
-          .isEqualTo(oracle.fewestMovesToLimit() == 0 ? LimitVerdict.ALREADY_WITHIN : LimitVerdict.REACHED);
-      assertThat(result.limitPlan()).as("seed %d: limit plan", seed).hasSize(oracle.fewestMovesToLimit());
+          .isEqualTo(
+              oracle.fewestMovesToLimit() == 0
+                  ? LimitVerdict.ALREADY_WITHIN
+                  : LimitVerdict.REACHED);
+      assertThat(result.limitPlan())
+          .as("seed %d: limit plan", seed)
+          .hasSize(oracle.fewestMovesToLimit());
     }
   }
 
   @Test
   void threeEqualCircuitsOnOneLineNeedTwoMovesToBalance() {
-    // By hand: 10 A, 10 A, 10 A all on L1 gives 30/0/0 A. One move: 20/10/0 A. Two moves: 10/10/10 A,
+    // By hand: 10 A, 10 A, 10 A all on L1 gives 30/0/0 A. One move: 20/10/0 A. Two moves: 10/10/10
+    // A,
     // the optimum and within any limit.
     List<BalanceItem> items =
         List.of(

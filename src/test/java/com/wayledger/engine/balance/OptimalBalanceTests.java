@@ -10,9 +10,9 @@ import java.util.List;
 import java.util.Map;
 import java.util.Random;
 import java.util.stream.LongStream;
+import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
-import org.junit.jupiter.api.Test;
 
 class OptimalBalanceTests {
 
@@ -32,7 +32,9 @@ class OptimalBalanceTests {
     BalanceResult result = balancer.optimise(problem);
 
     if (!oracle.anyFeasible() || problem.items().stream().noneMatch(BalanceItem::movable)) {
-      assertThat(result.outcome()).as("seed %d: outcome", seed).isNotEqualTo(BalanceOutcome.PROVED_OPTIMAL);
+      assertThat(result.outcome())
+          .as("seed %d: outcome", seed)
+          .isNotEqualTo(BalanceOutcome.PROVED_OPTIMAL);
       return;
     }
     assertThat(result.provedOptimal()).as("seed %d: proved", seed).isTrue();
@@ -59,14 +61,17 @@ class OptimalBalanceTests {
     for (BalanceItem item : problem.items()) {
       Phase assigned = result.assignment().get(item.circuitId());
       if (!item.movable()) {
-        assertThat(assigned).as("seed %d: locked circuit %d stays", seed, item.circuitId()).isEqualTo(item.currentPhase());
+        assertThat(assigned)
+            .as("seed %d: locked circuit %d stays", seed, item.circuitId())
+            .isEqualTo(item.currentPhase());
       } else {
         movableOn.merge(assigned, 1, Integer::sum);
       }
     }
     if (problem.freeWays() != null) {
       for (Phase phase : Phase.values()) {
-        long now = problem.items().stream().filter(i -> i.movable() && i.currentPhase() == phase).count();
+        long now =
+            problem.items().stream().filter(i -> i.movable() && i.currentPhase() == phase).count();
         long positions = now + problem.freeWays().get(phase).size();
         assertThat(movableOn.getOrDefault(phase, 0).longValue())
             .as("seed %d: circuits on %s within %d positions", seed, phase, positions)
@@ -106,7 +111,9 @@ class OptimalBalanceTests {
     if (result.after() == null) {
       return;
     }
-    assertThat(result.after().totalAmps()).as("seed %d: total", seed).isCloseTo(result.before().totalAmps(), within(1e-6));
+    assertThat(result.after().totalAmps())
+        .as("seed %d: total", seed)
+        .isCloseTo(result.before().totalAmps(), within(1e-6));
   }
 
   @ParameterizedTest(name = "seed {0}")
@@ -126,14 +133,20 @@ class OptimalBalanceTests {
         changed.add(item.circuitId());
       }
     }
-    assertThat(result.moves()).extracting(CircuitMove::circuitId).as("seed %d", seed).containsExactlyInAnyOrderElementsOf(changed);
+    assertThat(result.moves())
+        .extracting(CircuitMove::circuitId)
+        .as("seed %d", seed)
+        .containsExactlyInAnyOrderElementsOf(changed);
   }
 
   @Test
   void largestFirstMissesTheOptimumOnGrahamsExampleButTheSearchDoesNot() {
-    // By hand: {5,5,4,4,3,3,3} A into three lines. Largest-first puts 5, 5, 4 on L1, L2, L3, then 4 on L3
-    // (8), 3 on L1 (8), 3 on L2 (8) and the last 3 on a line at 8 A: 11 A. The optimum is {5,4} {5,4}
-    // {3,3,3} = 9/9/9 A. (The tight example for largest-first on three machines, Graham 1969, from memory.)
+    // By hand: {5,5,4,4,3,3,3} A into three lines. Largest-first puts 5, 5, 4 on L1, L2, L3, then 4
+    // on L3
+    // (8), 3 on L1 (8), 3 on L2 (8) and the last 3 on a line at 8 A: 11 A. The optimum is {5,4}
+    // {5,4}
+    // {3,3,3} = 9/9/9 A. (The tight example for largest-first on three machines, Graham 1969, from
+    // memory.)
     BalanceProblem problem = unplaced(5, 5, 4, 4, 3, 3, 3);
 
     BalanceResult greedy = balancer.largestFirst(problem);
@@ -146,8 +159,10 @@ class OptimalBalanceTests {
 
   @Test
   void eightSevenSixFiveFourCannotReachTenOnEveryLine() {
-    // By hand: {8,7,6,5,4} A, total 30 A, so 10 A per line would be perfect, but 8 A cannot share a line
-    // without exceeding 10 A (smallest partner 4 A gives 12 A); alone it leaves 22 A for two lines, so the
+    // By hand: {8,7,6,5,4} A, total 30 A, so 10 A per line would be perfect, but 8 A cannot share a
+    // line
+    // without exceeding 10 A (smallest partner 4 A gives 12 A); alone it leaves 22 A for two lines,
+    // so the
     // largest line is at least 11 A, reached by {8} {7,4} {6,5} = 8/11/11 A.
     BalanceProblem problem = unplaced(8, 7, 6, 5, 4);
 
@@ -159,8 +174,10 @@ class OptimalBalanceTests {
 
   @Test
   void tightPositionsForceASmallCircuitOntoEachHeavyLine() {
-    // By hand: {6,6,1,1,1,1} A with two positions per line. Without the limit {6} {6} {1,1,1,1} gives 6 A;
-    // with two circuits per line each 6 A circuit needs a partner, so the best is {6,1} {6,1} {1,1}: 7 A.
+    // By hand: {6,6,1,1,1,1} A with two positions per line. Without the limit {6} {6} {1,1,1,1}
+    // gives 6 A;
+    // with two circuits per line each 6 A circuit needs a partner, so the best is {6,1} {6,1}
+    // {1,1}: 7 A.
     List<BalanceItem> items = new ArrayList<>();
     double[] amps = {6, 6, 1, 1, 1, 1};
     for (int i = 0; i < amps.length; i++) {
@@ -177,7 +194,8 @@ class OptimalBalanceTests {
 
   @Test
   void fixedThreePoleLoadIsCountedOnEveryLine() {
-    // By hand: 10 A three-pole load on every line plus 12 A locked on L1; movable 12 A and 12 A go to L2
+    // By hand: 10 A three-pole load on every line plus 12 A locked on L1; movable 12 A and 12 A go
+    // to L2
     // and L3, giving 22/22/22 A.
     List<BalanceItem> items =
         List.of(
@@ -202,7 +220,8 @@ class OptimalBalanceTests {
 
     assertThat(result.provedOptimal()).isFalse();
     assertThat(result.outcome()).isEqualTo(BalanceOutcome.BEST_WITHIN_BUDGET);
-    assertThat(result.after().largestAmps() - result.gapAmps()).isCloseTo(result.lowerBoundAmps(), within(1e-9));
+    assertThat(result.after().largestAmps() - result.gapAmps())
+        .isCloseTo(result.lowerBoundAmps(), within(1e-9));
   }
 
   static BalanceProblem unplaced(double... amps) {

@@ -14,8 +14,8 @@ final class RandomBoards {
 
   /**
    * A board with the given number of circuits, some locked, some fixed load, and (on about half the
-   * boards) tight position limits with a few free ways. Demands are random to 0.01 A; about a third of the
-   * boards use whole amps drawn from a short list, so equal circuits and ties are common.
+   * boards) tight position limits with a few free ways. Demands are random to 0.01 A; about a third
+   * of the boards use whole amps drawn from a short list, so equal circuits and ties are common.
    */
   static BalanceProblem board(Random random, int circuits) {
     boolean wholeAmps = random.nextInt(3) == 0;
@@ -24,12 +24,16 @@ final class RandomBoards {
     int[] movableOn = new int[3];
     for (int i = 0; i < circuits; i++) {
       Phase phase = Phase.values()[random.nextInt(3)];
-      double amps = wholeAmps ? 2 + random.nextInt(6) * 2 : Math.round((0.5 + random.nextDouble() * 29.5) * 100) / 100.0;
+      double amps =
+          wholeAmps
+              ? 2 + random.nextInt(6) * 2
+              : Math.round((0.5 + random.nextDouble() * 29.5) * 100) / 100.0;
       boolean movable = random.nextInt(7) != 0;
       if (movable) {
         movableOn[phase.ordinal()]++;
       }
-      items.add(new BalanceItem(100 + i, "Circuit " + i, amps, phase, ++ways[phase.ordinal()], movable));
+      items.add(
+          new BalanceItem(100 + i, "Circuit " + i, amps, phase, ++ways[phase.ordinal()], movable));
     }
     Map<Phase, Double> fixed = new EnumMap<>(Phase.class);
     if (random.nextBoolean()) {

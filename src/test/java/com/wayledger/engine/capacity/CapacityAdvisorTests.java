@@ -26,14 +26,17 @@ import java.util.Set;
 import org.junit.jupiter.api.Test;
 
 /**
- * Constructed boards where the right place for a new load is worked out by hand. No diversity method is
- * chosen anywhere, so the engine applies none: currents are plain P / (U0·cos φ) with U0 = 230 V.
+ * Constructed boards where the right place for a new load is worked out by hand. No diversity
+ * method is chosen anywhere, so the engine applies none: currents are plain P / (U0·cos φ) with U0
+ * = 230 V.
  */
 class CapacityAdvisorTests {
 
   private static final double U0 = 230.0;
+
   /** 7 kW at unity power factor on one line: 7000 / 230 = 30.43 A. */
   private static final double CHARGER_AMPS = 7000.0 / U0;
+
   /** 4.6 kW at unity power factor: 20.0 A. */
   private static final double EXISTING_AMPS = 4600.0 / U0;
 
@@ -41,22 +44,66 @@ class CapacityAdvisorTests {
       new NewLoad("Van charger", LoadCategory.EV_CHARGING, 7.0, RatingUnit.W, 1.0, false, null);
 
   /**
-   * Three-phase board, two ways: way 1 L1 in use at 20 A (4.6 kW), way 1 L2 a spare 16 A breaker, way 1 L3 a
-   * spare 40 A breaker, way 2 free. Incomer and busbar 100 A. No fault-level data, so the checks that need it
-   * are not assessed (not problems).
+   * Three-phase board, two ways: way 1 L1 in use at 20 A (4.6 kW), way 1 L2 a spare 16 A breaker,
+   * way 1 L3 a spare 40 A breaker, way 2 free. Incomer and busbar 100 A. No fault-level data, so
+   * the checks that need it are not assessed (not problems).
    */
   private static SiteSpec smallBoard() {
-    CircuitSpec inUse = circuit(1, 1, PhasePosition.L1, WayStatus.IN_USE, mcb(32.0, 1),
-        List.of(new LoadSpec("Oven", LoadCategory.FIXED_APPLIANCE, 1, 4600, RatingUnit.W, 1.0, null, null, false)));
-    CircuitSpec spare16 = circuit(2, 1, PhasePosition.L2, WayStatus.SPARE_DEVICE, mcb(16.0, 1), List.of());
-    CircuitSpec spare40 = circuit(3, 1, PhasePosition.L3, WayStatus.SPARE_DEVICE, mcb(40.0, 1), List.of());
-    BoardSpec board = new BoardSpec(10, "DB-X", 3, 2, 100.0, new DeviceSpec(DeviceKind.MCCB, null, 100.0, 3, null, null, null),
-        null, null, 10.0, 1.0, null, null, null, List.of(inUse, spare16, spare40));
-    return new SiteSpec(1, "Test", new SupplySpec(EarthingSystem.TN_S, U0, 3, 50.0, null, null, null), null, List.of(board));
+    CircuitSpec inUse =
+        circuit(
+            1,
+            1,
+            PhasePosition.L1,
+            WayStatus.IN_USE,
+            mcb(32.0, 1),
+            List.of(
+                new LoadSpec(
+                    "Oven",
+                    LoadCategory.FIXED_APPLIANCE,
+                    1,
+                    4600,
+                    RatingUnit.W,
+                    1.0,
+                    null,
+                    null,
+                    false)));
+    CircuitSpec spare16 =
+        circuit(2, 1, PhasePosition.L2, WayStatus.SPARE_DEVICE, mcb(16.0, 1), List.of());
+    CircuitSpec spare40 =
+        circuit(3, 1, PhasePosition.L3, WayStatus.SPARE_DEVICE, mcb(40.0, 1), List.of());
+    BoardSpec board =
+        new BoardSpec(
+            10,
+            "DB-X",
+            3,
+            2,
+            100.0,
+            new DeviceSpec(DeviceKind.MCCB, null, 100.0, 3, null, null, null),
+            null,
+            null,
+            10.0,
+            1.0,
+            null,
+            null,
+            null,
+            List.of(inUse, spare16, spare40));
+    return new SiteSpec(
+        1,
+        "Test",
+        new SupplySpec(EarthingSystem.TN_S, U0, 3, 50.0, null, null, null),
+        null,
+        List.of(board));
   }
 
-  private static CircuitSpec circuit(long id, int way, PhasePosition position, WayStatus status, DeviceSpec device, List<LoadSpec> loads) {
-    return new CircuitSpec(id, way, position, "circuit " + id, status, false, device, null, loads, null, null);
+  private static CircuitSpec circuit(
+      long id,
+      int way,
+      PhasePosition position,
+      WayStatus status,
+      DeviceSpec device,
+      List<LoadSpec> loads) {
+    return new CircuitSpec(
+        id, way, position, "circuit " + id, status, false, device, null, loads, null, null);
   }
 
   private static DeviceSpec mcb(double amps, int poles) {
@@ -64,7 +111,8 @@ class CapacityAdvisorTests {
   }
 
   private static CapacityAnswer ask(SiteSpec site, NewLoad load) {
-    return CapacityAdvisor.ask(site, Set.of(), load, DiversityMethods.builtIn(), ProtectionSettings.DEFAULTS);
+    return CapacityAdvisor.ask(
+        site, Set.of(), load, DiversityMethods.builtIn(), ProtectionSettings.DEFAULTS);
   }
 
   @Test
@@ -72,12 +120,20 @@ class CapacityAdvisorTests {
     CapacityAnswer answer = ask(smallBoard(), CHARGER);
 
     CandidateOutcome best = answer.best();
-    assertThat(best.candidate().kind()).as("kind of the best candidate").isEqualTo(CandidateKind.SPARE_WAY);
-    assertThat(best.candidate().position()).as("line of the best candidate").isEqualTo(PhasePosition.L3);
-    assertThat(best.designCurrentAmps()).as("Ib of the charger").isCloseTo(CHARGER_AMPS, within(0.01));
+    assertThat(best.candidate().kind())
+        .as("kind of the best candidate")
+        .isEqualTo(CandidateKind.SPARE_WAY);
+    assertThat(best.candidate().position())
+        .as("line of the best candidate")
+        .isEqualTo(PhasePosition.L3);
+    assertThat(best.designCurrentAmps())
+        .as("Ib of the charger")
+        .isCloseTo(CHARGER_AMPS, within(0.01));
     assertThat(best.phaseAfter(Phase.L3)).as("L3 after").isCloseTo(CHARGER_AMPS, within(0.01));
     assertThat(best.phaseAfter(Phase.L1)).as("L1 unchanged").isCloseTo(EXISTING_AMPS, within(0.01));
-    assertThat(best.incomerLoadingPercent()).as("incomer loading = 30.43 A of 100 A").isCloseTo(30.43, within(0.01));
+    assertThat(best.incomerLoadingPercent())
+        .as("incomer loading = 30.43 A of 100 A")
+        .isCloseTo(30.43, within(0.01));
     assertThat(best.isClean()).as("no new danger or warning").isTrue();
   }
 
@@ -86,73 +142,119 @@ class CapacityAdvisorTests {
     List<CandidateOutcome> outcomes = ask(smallBoard(), CHARGER).outcomes();
 
     CandidateOutcome last = outcomes.get(outcomes.size() - 1);
-    assertThat(last.candidate().position()).as("line of the last candidate").isEqualTo(PhasePosition.L2);
+    assertThat(last.candidate().position())
+        .as("line of the last candidate")
+        .isEqualTo(PhasePosition.L2);
     assertThat(last.candidate().kind()).isEqualTo(CandidateKind.SPARE_WAY);
-    assertThat(last.newFindings()).as("new findings of the 16 A spare")
-        .anySatisfy(f -> {
-          assertThat(f.check()).isEqualTo(CheckKind.WAY_OVERLOAD);
-          assertThat(f.verdict()).isEqualTo(Verdict.WARNING);
-        });
-    assertThat(last.wayLoadingPercent()).as("30.43 A on 16 A").isCloseTo(100.0 * CHARGER_AMPS / 16.0, within(0.01));
+    assertThat(last.newFindings())
+        .as("new findings of the 16 A spare")
+        .anySatisfy(
+            f -> {
+              assertThat(f.check()).isEqualTo(CheckKind.WAY_OVERLOAD);
+              assertThat(f.verdict()).isEqualTo(Verdict.WARNING);
+            });
+    assertThat(last.wayLoadingPercent())
+        .as("30.43 A on 16 A")
+        .isCloseTo(100.0 * CHARGER_AMPS / 16.0, within(0.01));
   }
 
   @Test
   void candidatesAreTheTwoSparesAndTheFirstFreePositionOnEachLine() {
-    List<String> labels = ask(smallBoard(), CHARGER).outcomes().stream().map(o -> o.candidate().label()).toList();
+    List<String> labels =
+        ask(smallBoard(), CHARGER).outcomes().stream().map(o -> o.candidate().label()).toList();
 
-    // L1 already carries 20 A, so a new circuit there leaves the largest line at 50.43 A: below the two
+    // L1 already carries 20 A, so a new circuit there leaves the largest line at 50.43 A: below the
+    // two
     // free lines (30.43 A each), above nothing but the overloaded spare.
-    assertThat(labels).as("ranked candidates").containsExactly(
-        "DB-X way 1 L3", "DB-X way 2 L2", "DB-X way 2 L3", "DB-X way 2 L1", "DB-X way 1 L2");
+    assertThat(labels)
+        .as("ranked candidates")
+        .containsExactly(
+            "DB-X way 1 L3", "DB-X way 2 L2", "DB-X way 2 L3", "DB-X way 2 L1", "DB-X way 1 L2");
   }
 
   @Test
   void newCircuitGetsTheSmallestStandardBreakerAboveIbAndTheCableIsLeftToSize() {
-    CandidateOutcome freeL2 = ask(smallBoard(), CHARGER).outcomes().stream()
-        .filter(o -> o.candidate().kind() == CandidateKind.EMPTY_POSITION && o.candidate().position() == PhasePosition.L2)
-        .findFirst().orElseThrow();
+    CandidateOutcome freeL2 =
+        ask(smallBoard(), CHARGER).outcomes().stream()
+            .filter(
+                o ->
+                    o.candidate().kind() == CandidateKind.EMPTY_POSITION
+                        && o.candidate().position() == PhasePosition.L2)
+            .findFirst()
+            .orElseThrow();
 
-    // IEC 60898-1 preferred ratings (from memory): ... 25, 32, 40 A; the first not below 30.43 A is 32 A.
+    // IEC 60898-1 preferred ratings (from memory): ... 25, 32, 40 A; the first not below 30.43 A is
+    // 32 A.
     assertThat(freeL2.candidate().device().ratedCurrentAmps()).as("proposed In").isEqualTo(32.0);
-    assertThat(freeL2.candidate().device().curve()).as("no surge, so type B").isEqualTo(TripCurve.B);
-    assertThat(freeL2.candidate().deviceNote()).as("note on the cable").contains("cable must be sized");
+    assertThat(freeL2.candidate().device().curve())
+        .as("no surge, so type B")
+        .isEqualTo(TripCurve.B);
+    assertThat(freeL2.candidate().deviceNote())
+        .as("note on the cable")
+        .contains("cable must be sized");
   }
 
   @Test
   void motorWithSevenTimesStartingSurgeNeedsTypeDAtThirtyTwoAmps() {
     NewLoad mixer = new NewLoad("Mixer", LoadCategory.MOTOR, 5.5, RatingUnit.W, 0.82, false, 7.0);
-    CandidateOutcome freeL2 = ask(smallBoard(), mixer).outcomes().stream()
-        .filter(o -> o.candidate().kind() == CandidateKind.EMPTY_POSITION && o.candidate().position() == PhasePosition.L2)
-        .findFirst().orElseThrow();
+    CandidateOutcome freeL2 =
+        ask(smallBoard(), mixer).outcomes().stream()
+            .filter(
+                o ->
+                    o.candidate().kind() == CandidateKind.EMPTY_POSITION
+                        && o.candidate().position() == PhasePosition.L2)
+            .findFirst()
+            .orElseThrow();
 
-    // Ib = 5500 / (0.82 · 230) = 29.16 A, so In = 32 A; surge 7 × 29.16 = 204 A. Lowest instantaneous
-    // trip (IEC 60898-1): B 3 × 32 = 96 A, C 5 × 32 = 160 A (both reached), D 10 × 32 = 320 A (not reached).
-    assertThat(freeL2.designCurrentAmps()).as("Ib of the mixer").isCloseTo(5500.0 / (0.82 * U0), within(0.01));
+    // Ib = 5500 / (0.82 · 230) = 29.16 A, so In = 32 A; surge 7 × 29.16 = 204 A. Lowest
+    // instantaneous
+    // trip (IEC 60898-1): B 3 × 32 = 96 A, C 5 × 32 = 160 A (both reached), D 10 × 32 = 320 A (not
+    // reached).
+    assertThat(freeL2.designCurrentAmps())
+        .as("Ib of the mixer")
+        .isCloseTo(5500.0 / (0.82 * U0), within(0.01));
     assertThat(freeL2.candidate().device().ratedCurrentAmps()).isEqualTo(32.0);
-    assertThat(freeL2.candidate().device().curve()).as("curve clear of the surge").isEqualTo(TripCurve.D);
+    assertThat(freeL2.candidate().device().curve())
+        .as("curve clear of the surge")
+        .isEqualTo(TripCurve.D);
   }
 
   @Test
   void threePhaseLoadGoesOnlyToAFreeThreePoleWayOfAThreePhaseBoard() {
-    NewLoad oven = new NewLoad("Deck oven", LoadCategory.COOKING, 18.0, RatingUnit.W, 1.0, true, null);
+    NewLoad oven =
+        new NewLoad("Deck oven", LoadCategory.COOKING, 18.0, RatingUnit.W, 1.0, true, null);
     CapacityAnswer answer = ask(smallBoard(), oven);
 
-    assertThat(answer.outcomes()).as("only way 2 is wholly free").singleElement()
-        .satisfies(o -> {
-          assertThat(o.candidate().label()).isEqualTo("DB-X way 2 L1–L3");
-          // 18 kW balanced: 18000 / (3 · 230) = 26.09 A per line; L1 carries the existing 20 A as well.
-          assertThat(o.phaseAfter(Phase.L2)).isCloseTo(18000.0 / (3 * U0), within(0.01));
-          assertThat(o.phaseAfter(Phase.L1)).isCloseTo(18000.0 / (3 * U0) + EXISTING_AMPS, within(0.01));
-          assertThat(o.candidate().device().poles()).as("three-pole device").isEqualTo(3);
-        });
+    assertThat(answer.outcomes())
+        .as("only way 2 is wholly free")
+        .singleElement()
+        .satisfies(
+            o -> {
+              assertThat(o.candidate().label()).isEqualTo("DB-X way 2 L1–L3");
+              // 18 kW balanced: 18000 / (3 · 230) = 26.09 A per line; L1 carries the existing 20 A
+              // as well.
+              assertThat(o.phaseAfter(Phase.L2)).isCloseTo(18000.0 / (3 * U0), within(0.01));
+              assertThat(o.phaseAfter(Phase.L1))
+                  .isCloseTo(18000.0 / (3 * U0) + EXISTING_AMPS, within(0.01));
+              assertThat(o.candidate().device().poles()).as("three-pole device").isEqualTo(3);
+            });
   }
 
   @Test
   void singlePhaseBoardCannotTakeAThreePhaseLoadAndSaysWhy() {
-    BoardSpec single = new BoardSpec(20, "FLAT", 1, 4, 63.0, null, null, null, 10.0, 1.0, null, null, null, List.of());
-    SiteSpec site = new SiteSpec(2, "Flat", new SupplySpec(EarthingSystem.TN_S, U0, 1, 50.0, null, null, null), null, List.of(single));
+    BoardSpec single =
+        new BoardSpec(
+            20, "FLAT", 1, 4, 63.0, null, null, null, 10.0, 1.0, null, null, null, List.of());
+    SiteSpec site =
+        new SiteSpec(
+            2,
+            "Flat",
+            new SupplySpec(EarthingSystem.TN_S, U0, 1, 50.0, null, null, null),
+            null,
+            List.of(single));
 
-    CapacityAnswer answer = ask(site, new NewLoad("Oven", LoadCategory.COOKING, 9.0, RatingUnit.W, 1.0, true, null));
+    CapacityAnswer answer =
+        ask(site, new NewLoad("Oven", LoadCategory.COOKING, 9.0, RatingUnit.W, 1.0, true, null));
 
     assertThat(answer.outcomes()).isEmpty();
     assertThat(answer.notes()).singleElement().asString().contains("single-phase board");
@@ -160,9 +262,13 @@ class CapacityAdvisorTests {
 
   @Test
   void sharingACircuitOfTheSameCategoryAddsTheLoadToItsWay() {
-    NewLoad fryer = new NewLoad("Fryer", LoadCategory.FIXED_APPLIANCE, 2.3, RatingUnit.W, 1.0, false, null);
-    CandidateOutcome shared = ask(smallBoard(), fryer).outcomes().stream()
-        .filter(o -> o.candidate().kind() == CandidateKind.SHARED_CIRCUIT).findFirst().orElseThrow();
+    NewLoad fryer =
+        new NewLoad("Fryer", LoadCategory.FIXED_APPLIANCE, 2.3, RatingUnit.W, 1.0, false, null);
+    CandidateOutcome shared =
+        ask(smallBoard(), fryer).outcomes().stream()
+            .filter(o -> o.candidate().kind() == CandidateKind.SHARED_CIRCUIT)
+            .findFirst()
+            .orElseThrow();
 
     // 4.6 kW + 2.3 kW = 6.9 kW on way 1 L1: 30.0 A on the 32 A breaker.
     assertThat(shared.candidate().label()).isEqualTo("DB-X way 1 L1");

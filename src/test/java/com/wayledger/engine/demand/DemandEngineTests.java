@@ -32,9 +32,17 @@ class DemandEngineTests {
 
   @Test
   void circuitWithZeroPowerFactorIsNotAssessedWhileTheRestIsComputed() {
-    BoardDemand demand = evaluate(board(1, DiversityMethods.NONE,
-        circuit(1, 1, PhasePosition.L1, load(LoadCategory.MOTOR, 1, 1_000.0, RatingUnit.W, 0.0)),
-        circuit(2, 2, PhasePosition.L1, amps(LoadCategory.OTHER, 10.0))));
+    BoardDemand demand =
+        evaluate(
+            board(
+                1,
+                DiversityMethods.NONE,
+                circuit(
+                    1,
+                    1,
+                    PhasePosition.L1,
+                    load(LoadCategory.MOTOR, 1, 1_000.0, RatingUnit.W, 0.0)),
+                circuit(2, 2, PhasePosition.L1, amps(LoadCategory.OTHER, 10.0))));
 
     assertThat(demand.circuits().get(0).notAssessedReason()).contains("power factor");
     assertThat(demand.onPhase(Phase.L1).currentAmps()).isCloseTo(10.0, within(1e-9));
@@ -42,15 +50,23 @@ class DemandEngineTests {
 
   @Test
   void circuitWithoutPositionIsNotAssessedAndSaysSo() {
-    BoardDemand demand = evaluate(board(3, DiversityMethods.NONE, circuit(1, 1, null, amps(LoadCategory.OTHER, 10.0))));
+    BoardDemand demand =
+        evaluate(
+            board(3, DiversityMethods.NONE, circuit(1, 1, null, amps(LoadCategory.OTHER, 10.0))));
 
-    assertThat(demand.notAssessed()).anySatisfy(reason -> assertThat(reason).contains("missing position"));
+    assertThat(demand.notAssessed())
+        .anySatisfy(reason -> assertThat(reason).contains("missing position"));
   }
 
   @Test
   void incomerLoadingIsHighestPhaseCurrentOverRating() {
     // by hand from loading = I / In: 50 A on a 100 A incomer → 50 %
-    BoardDemand demand = evaluate(board(1, DiversityMethods.NONE, circuit(1, 1, PhasePosition.L1, amps(LoadCategory.OTHER, 50.0))));
+    BoardDemand demand =
+        evaluate(
+            board(
+                1,
+                DiversityMethods.NONE,
+                circuit(1, 1, PhasePosition.L1, amps(LoadCategory.OTHER, 50.0))));
 
     assertThat(demand.incomer().loadingPercent()).isCloseTo(50.0, within(1e-9));
   }
@@ -58,22 +74,42 @@ class DemandEngineTests {
   @Test
   void headroomIsIncomerRatingLessPhaseCurrent() {
     // by hand: 100 A − 30 A = 70 A; 70 A × 230 V = 16.1 kW at unity power factor
-    BoardDemand demand = evaluate(board(1, DiversityMethods.NONE, circuit(1, 1, PhasePosition.L1, amps(LoadCategory.OTHER, 30.0))));
+    BoardDemand demand =
+        evaluate(
+            board(
+                1,
+                DiversityMethods.NONE,
+                circuit(1, 1, PhasePosition.L1, amps(LoadCategory.OTHER, 30.0))));
 
     assertThat(demand.onPhase(Phase.L1).headroomKilowatts()).isCloseTo(16.1, within(1e-9));
   }
 
   @Test
   void missingBusbarRatingIsNotAssessed() {
-    BoardDemand demand = evaluate(board(1, DiversityMethods.NONE, circuit(1, 1, PhasePosition.L1, amps(LoadCategory.OTHER, 30.0))));
+    BoardDemand demand =
+        evaluate(
+            board(
+                1,
+                DiversityMethods.NONE,
+                circuit(1, 1, PhasePosition.L1, amps(LoadCategory.OTHER, 30.0))));
 
-    assertThat(demand.busbar().notAssessedReason()).isEqualTo("not assessed — missing busbar rating");
+    assertThat(demand.busbar().notAssessedReason())
+        .isEqualTo("not assessed — missing busbar rating");
   }
 
   @Test
   void supplyFuseIsAssessedOnOriginBoardOnly() {
-    BoardSpec child = board(2, 1, 1L, DiversityMethods.NONE, 63.0, List.of(circuit(21, 1, PhasePosition.L1, amps(LoadCategory.OTHER, 20.0))));
-    BoardSpec parent = board(1, 3, null, DiversityMethods.NONE, 100.0, List.of(feeder(11, 1, PhasePosition.L1, 2)));
+    BoardSpec child =
+        board(
+            2,
+            1,
+            1L,
+            DiversityMethods.NONE,
+            63.0,
+            List.of(circuit(21, 1, PhasePosition.L1, amps(LoadCategory.OTHER, 20.0))));
+    BoardSpec parent =
+        board(
+            1, 3, null, DiversityMethods.NONE, 100.0, List.of(feeder(11, 1, PhasePosition.L1, 2)));
 
     SiteDemand demand = DemandEngine.evaluate(site(parent, child), DiversityMethods.builtIn());
 
@@ -84,9 +120,25 @@ class DemandEngineTests {
   @Test
   void subBoardDemandTimesCoincidenceIsALoadOnTheFeedingWay() {
     // by hand: child 40 A on L1 × coincidence 0.5 → 20 A on the parent's L2 way
-    BoardSpec child = new BoardSpec(2, "DB2", 1, 12, null, Fixtures.mcb(63.0), 1L, null, 10.0, 0.5, null, null, null,
-        List.of(circuit(21, 1, PhasePosition.L1, amps(LoadCategory.OTHER, 40.0))));
-    BoardSpec parent = board(1, 3, null, DiversityMethods.NONE, 100.0, List.of(feeder(11, 1, PhasePosition.L2, 2)));
+    BoardSpec child =
+        new BoardSpec(
+            2,
+            "DB2",
+            1,
+            12,
+            null,
+            Fixtures.mcb(63.0),
+            1L,
+            null,
+            10.0,
+            0.5,
+            null,
+            null,
+            null,
+            List.of(circuit(21, 1, PhasePosition.L1, amps(LoadCategory.OTHER, 40.0))));
+    BoardSpec parent =
+        board(
+            1, 3, null, DiversityMethods.NONE, 100.0, List.of(feeder(11, 1, PhasePosition.L2, 2)));
 
     SiteDemand demand = DemandEngine.evaluate(site(parent, child), DiversityMethods.builtIn());
 
@@ -96,10 +148,24 @@ class DemandEngineTests {
   @Test
   void threePhaseSubBoardKeepsItsPhaseCurrentsOnAThreePoleFeeder() {
     // by hand: child 10 A on L1 and 30 A on L3, fed by a three-pole way → parent L1 10 A, L3 30 A
-    BoardSpec child = board(2, 3, 1L, DiversityMethods.NONE, 63.0, List.of(
-        circuit(21, 1, PhasePosition.L1, amps(LoadCategory.OTHER, 10.0)),
-        circuit(22, 2, PhasePosition.L3, amps(LoadCategory.OTHER, 30.0))));
-    BoardSpec parent = board(1, 3, null, DiversityMethods.NONE, 100.0, List.of(feeder(11, 1, PhasePosition.THREE_POLE, 2)));
+    BoardSpec child =
+        board(
+            2,
+            3,
+            1L,
+            DiversityMethods.NONE,
+            63.0,
+            List.of(
+                circuit(21, 1, PhasePosition.L1, amps(LoadCategory.OTHER, 10.0)),
+                circuit(22, 2, PhasePosition.L3, amps(LoadCategory.OTHER, 30.0))));
+    BoardSpec parent =
+        board(
+            1,
+            3,
+            null,
+            DiversityMethods.NONE,
+            100.0,
+            List.of(feeder(11, 1, PhasePosition.THREE_POLE, 2)));
 
     SiteDemand demand = DemandEngine.evaluate(site(parent, child), DiversityMethods.builtIn());
 
@@ -108,8 +174,10 @@ class DemandEngineTests {
 
   @Test
   void boardsFeedingEachOtherAreReportedAsACycle() {
-    BoardSpec first = board(1, 1, 2L, DiversityMethods.NONE, 63.0, List.of(feeder(11, 1, PhasePosition.L1, 2)));
-    BoardSpec second = board(2, 1, 1L, DiversityMethods.NONE, 63.0, List.of(feeder(21, 1, PhasePosition.L1, 1)));
+    BoardSpec first =
+        board(1, 1, 2L, DiversityMethods.NONE, 63.0, List.of(feeder(11, 1, PhasePosition.L1, 2)));
+    BoardSpec second =
+        board(2, 1, 1L, DiversityMethods.NONE, 63.0, List.of(feeder(21, 1, PhasePosition.L1, 1)));
 
     SiteDemand demand = DemandEngine.evaluate(site(first, second), DiversityMethods.builtIn());
 
@@ -120,7 +188,9 @@ class DemandEngineTests {
   @Test
   void childBoardIsEvaluatedBeforeItsParent() {
     BoardSpec child = board(2, 1, 1L, DiversityMethods.NONE, 63.0, List.of());
-    BoardSpec parent = board(1, 3, null, DiversityMethods.NONE, 100.0, List.of(feeder(11, 1, PhasePosition.L1, 2)));
+    BoardSpec parent =
+        board(
+            1, 3, null, DiversityMethods.NONE, 100.0, List.of(feeder(11, 1, PhasePosition.L1, 2)));
 
     SiteDemand demand = DemandEngine.evaluate(site(parent, child), DiversityMethods.builtIn());
 
@@ -146,10 +216,14 @@ class DemandEngineTests {
   @Test
   void unbalanceOfPhaseCurrentsFollowsNemaDefinition() {
     // NEMA MG-1 definition applied to currents (from memory): 460, 467, 450 A → 1.96 %
-    BoardDemand demand = evaluate(board(3, DiversityMethods.NONE,
-        circuit(1, 1, PhasePosition.L1, amps(LoadCategory.OTHER, 460.0)),
-        circuit(2, 2, PhasePosition.L2, amps(LoadCategory.OTHER, 467.0)),
-        circuit(3, 3, PhasePosition.L3, amps(LoadCategory.OTHER, 450.0))));
+    BoardDemand demand =
+        evaluate(
+            board(
+                3,
+                DiversityMethods.NONE,
+                circuit(1, 1, PhasePosition.L1, amps(LoadCategory.OTHER, 460.0)),
+                circuit(2, 2, PhasePosition.L2, amps(LoadCategory.OTHER, 467.0)),
+                circuit(3, 3, PhasePosition.L3, amps(LoadCategory.OTHER, 450.0))));
 
     assertThat(demand.unbalancePercent()).isCloseTo(1.96, within(0.005));
   }

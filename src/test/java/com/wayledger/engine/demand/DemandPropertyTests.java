@@ -20,7 +20,10 @@ import org.junit.jupiter.params.provider.ValueSource;
 class DemandPropertyTests {
 
   private static final String[] DIVERSIFYING = {
-    DiversityMethods.NONE, DiversityMethods.UK_HOUSEHOLD, DiversityMethods.UK_SMALL_SHOP, DiversityMethods.UK_SMALL_HOTEL
+    DiversityMethods.NONE,
+    DiversityMethods.UK_HOUSEHOLD,
+    DiversityMethods.UK_SMALL_SHOP,
+    DiversityMethods.UK_SMALL_HOTEL
   };
 
   /** A random three-phase board; every load item and position drawn from the seed. */
@@ -35,13 +38,47 @@ class DemandPropertyTests {
       for (int l = 0; l < loadCount; l++) {
         RatingUnit unit = units[random.nextInt(units.length)];
         double rating = unit == RatingUnit.A ? 1 + random.nextInt(40) : 50 + random.nextInt(9_000);
-        loads.add(new LoadSpec("load", categories[random.nextInt(categories.length)], 1 + random.nextInt(4), rating, unit,
-            0.5 + 0.5 * random.nextDouble(), null, null, false));
+        loads.add(
+            new LoadSpec(
+                "load",
+                categories[random.nextInt(categories.length)],
+                1 + random.nextInt(4),
+                rating,
+                unit,
+                0.5 + 0.5 * random.nextDouble(),
+                null,
+                null,
+                false));
       }
-      circuits.add(new CircuitSpec(c + 1, c + 1, positions[random.nextInt(positions.length)], "way", WayStatus.IN_USE, false,
-          Fixtures.mcb(32.0), null, loads, null, null));
+      circuits.add(
+          new CircuitSpec(
+              c + 1,
+              c + 1,
+              positions[random.nextInt(positions.length)],
+              "way",
+              WayStatus.IN_USE,
+              false,
+              Fixtures.mcb(32.0),
+              null,
+              loads,
+              null,
+              null));
     }
-    return new BoardSpec(1, "DB1", 3, circuitCount, 400.0, Fixtures.mcb(400.0), null, null, 10.0, 1.0, methodKey, null, null, circuits);
+    return new BoardSpec(
+        1,
+        "DB1",
+        3,
+        circuitCount,
+        400.0,
+        Fixtures.mcb(400.0),
+        null,
+        null,
+        10.0,
+        1.0,
+        methodKey,
+        null,
+        null,
+        circuits);
   }
 
   @ParameterizedTest
@@ -61,12 +98,19 @@ class DemandPropertyTests {
   @ValueSource(longs = {5L, 6L, 7L, 8L, 2024L, 777_777L})
   void perPhaseDemandsSumToTheBoardTotal(long seed) {
     Random random = new Random(seed);
-    for (String key : DiversityMethods.builtIn().methods().stream().map(DiversityMethod::key).toList()) {
-      BoardDemand demand = Fixtures.evaluate(randomBoard(random, key, 1 + random.nextInt(40)), new DwellingParameters(2_000.0, 2, 1));
-      double sumOfCircuitWatts = demand.circuits().stream().mapToDouble(CircuitDemand::demandWatts).sum() + demand.allowanceVoltAmperes();
+    for (String key :
+        DiversityMethods.builtIn().methods().stream().map(DiversityMethod::key).toList()) {
+      BoardDemand demand =
+          Fixtures.evaluate(
+              randomBoard(random, key, 1 + random.nextInt(40)),
+              new DwellingParameters(2_000.0, 2, 1));
+      double sumOfCircuitWatts =
+          demand.circuits().stream().mapToDouble(CircuitDemand::demandWatts).sum()
+              + demand.allowanceVoltAmperes();
       double sumOfPhaseWatts = demand.phases().stream().mapToDouble(PhaseDemand::demandWatts).sum();
 
-      assertThat(sumOfPhaseWatts).as("phase sum = circuit sum, method %s, seed %d", key, seed)
+      assertThat(sumOfPhaseWatts)
+          .as("phase sum = circuit sum, method %s, seed %d", key, seed)
           .isCloseTo(sumOfCircuitWatts, within(1e-6 * Math.max(1, sumOfCircuitWatts)));
     }
   }
@@ -79,29 +123,55 @@ class DemandPropertyTests {
     for (int c = 0; c < 12; c++) {
       double rating = 100 + random.nextInt(5_000);
       double powerFactor = 0.6 + 0.4 * random.nextDouble();
-      for (PhasePosition position : new PhasePosition[] {PhasePosition.L1, PhasePosition.L2, PhasePosition.L3}) {
-        circuits.add(Fixtures.circuit(circuits.size() + 1, circuits.size() + 1, position,
-            Fixtures.load(LoadCategory.OTHER, 1, rating, RatingUnit.VA, powerFactor)));
+      for (PhasePosition position :
+          new PhasePosition[] {PhasePosition.L1, PhasePosition.L2, PhasePosition.L3}) {
+        circuits.add(
+            Fixtures.circuit(
+                circuits.size() + 1,
+                circuits.size() + 1,
+                position,
+                Fixtures.load(LoadCategory.OTHER, 1, rating, RatingUnit.VA, powerFactor)));
       }
-      circuits.add(Fixtures.circuit(circuits.size() + 1, circuits.size() + 1, PhasePosition.THREE_POLE,
-          Fixtures.load(LoadCategory.MOTOR, 1, rating, RatingUnit.VA, powerFactor)));
+      circuits.add(
+          Fixtures.circuit(
+              circuits.size() + 1,
+              circuits.size() + 1,
+              PhasePosition.THREE_POLE,
+              Fixtures.load(LoadCategory.MOTOR, 1, rating, RatingUnit.VA, powerFactor)));
     }
-    BoardDemand demand = Fixtures.evaluate(Fixtures.board(1, 3, null, DiversityMethods.NONE, 400.0, circuits));
+    BoardDemand demand =
+        Fixtures.evaluate(Fixtures.board(1, 3, null, DiversityMethods.NONE, 400.0, circuits));
 
-    assertThat(demand.neutralCurrentAmps()).as("neutral current, seed %d", seed).isCloseTo(0.0, within(1e-6));
+    assertThat(demand.neutralCurrentAmps())
+        .as("neutral current, seed %d", seed)
+        .isCloseTo(0.0, within(1e-6));
   }
 
   @ParameterizedTest
   @ValueSource(longs = {21L, 22L, 23L, 55_555L})
   void resultsDoNotDependOnCircuitOrder(long seed) {
     Random random = new Random(seed);
-    for (String key : DiversityMethods.builtIn().methods().stream().map(DiversityMethod::key).toList()) {
+    for (String key :
+        DiversityMethods.builtIn().methods().stream().map(DiversityMethod::key).toList()) {
       BoardSpec board = randomBoard(random, key, 30);
       List<CircuitSpec> shuffled = new ArrayList<>(board.circuits());
       Collections.shuffle(shuffled, random);
-      BoardSpec reordered = new BoardSpec(board.id(), board.reference(), board.phases(), board.wayCount(), board.busbarRatingAmps(),
-          board.incomer(), board.parentBoardId(), board.submainCable(), board.unbalanceLimitPercent(), board.coincidenceFactor(),
-          board.diversityMethodKey(), null, null, shuffled);
+      BoardSpec reordered =
+          new BoardSpec(
+              board.id(),
+              board.reference(),
+              board.phases(),
+              board.wayCount(),
+              board.busbarRatingAmps(),
+              board.incomer(),
+              board.parentBoardId(),
+              board.submainCable(),
+              board.unbalanceLimitPercent(),
+              board.coincidenceFactor(),
+              board.diversityMethodKey(),
+              null,
+              null,
+              shuffled);
       DwellingParameters dwelling = new DwellingParameters(1_800.0, 2, 1);
 
       BoardDemand original = Fixtures.evaluate(board, dwelling);

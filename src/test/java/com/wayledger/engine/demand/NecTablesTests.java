@@ -28,7 +28,8 @@ class NecTablesTests {
   @Test
   void lightingTiersAbove120000TakeTwentyFivePercent() {
     // by hand from NEC Table 220.42: 3,000 + 35 % × 117,000 + 25 % × 10,000 = 46,450 VA
-    assertThat(LIGHTING_TABLE_220_42.demandVoltAmperes(130_000.0)).isCloseTo(46_450.0, within(1e-6));
+    assertThat(LIGHTING_TABLE_220_42.demandVoltAmperes(130_000.0))
+        .isCloseTo(46_450.0, within(1e-6));
   }
 
   @Test
@@ -57,7 +58,8 @@ class NecTablesTests {
 
   @Test
   void thirtyUnequalRangesAverageThirteenPointSixAreFortyNinePointFiveKilowatts() {
-    // NEC Annex D Example D6 B: 30 ranges, average 13.6 kW (1.6 kW over → 2 kW) → 45 kW × 1.10 = 49.5 kW
+    // NEC Annex D Example D6 B: 30 ranges, average 13.6 kW (1.6 kW over → 2 kW) → 45 kW × 1.10 =
+    // 49.5 kW
     assertThat(NecCookingDemand.columnCKilowatts(30, 408.0 / 30)).isCloseTo(49.5, within(1e-9));
   }
 
@@ -69,13 +71,15 @@ class NecTablesTests {
 
   @Test
   void halfKilowattOverTwelveIsNotAMajorFraction() {
-    // NEC Table 220.55 Note 1: "each kilowatt or major fraction thereof"; 0.5 kW is not more than half
+    // NEC Table 220.55 Note 1: "each kilowatt or major fraction thereof"; 0.5 kW is not more than
+    // half
     assertThat(NecCookingDemand.columnCKilowatts(1, 12.5)).isCloseTo(8.0, within(1e-9));
   }
 
   @Test
   void threeMidSizeCookingAppliancesTakeColumnBFiftyFivePercent() {
-    // NEC Annex D Example D2(b): two 4 kW ovens + 5.1 kW cooktop = 13.1 kVA, Table 220.55 permits 55 %
+    // NEC Annex D Example D2(b): two 4 kW ovens + 5.1 kW cooktop = 13.1 kVA, Table 220.55 permits
+    // 55 %
     assertThat(NecCookingDemand.columnBFactor(3)).isCloseTo(0.55, within(1e-9));
   }
 

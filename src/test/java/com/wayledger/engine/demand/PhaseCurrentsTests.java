@@ -14,7 +14,8 @@ class PhaseCurrentsTests {
 
   @Test
   void nemaUnbalanceOfWorkedExampleIsMaxDeviationOverMean() {
-    // NEMA MG-1 14.35 worked example (from memory): 460, 467, 450 → mean 459, max deviation 9, 1.96 %
+    // NEMA MG-1 14.35 worked example (from memory): 460, 467, 450 → mean 459, max deviation 9, 1.96
+    // %
     assertThat(PhaseCurrents.unbalancePercent(460.0, 467.0, 450.0)).isCloseTo(1.96, within(0.005));
   }
 
@@ -37,7 +38,8 @@ class PhaseCurrentsTests {
       vars[k] = amps[k] * U0 * sin;
     }
 
-    assertThat(PhaseCurrents.neutralCurrentAmps(watts, vars, U0)).isCloseTo(Math.sqrt(300.0), within(1e-9));
+    assertThat(PhaseCurrents.neutralCurrentAmps(watts, vars, U0))
+        .isCloseTo(Math.sqrt(300.0), within(1e-9));
   }
 
   @Test
@@ -62,7 +64,10 @@ class PhaseCurrentsTests {
       watts[k] = U0 * amps * Math.cos(phi);
       vars[k] = U0 * amps * Math.sin(phi);
       // independent cross-check: I = |I|∠(θ − φ) built with Commons Math
-      sum = sum.add(Complex.valueOf(amps, 0).multiply(new Complex(0, Math.toRadians(angles[k]) - phi).exp()));
+      sum =
+          sum.add(
+              Complex.valueOf(amps, 0)
+                  .multiply(new Complex(0, Math.toRadians(angles[k]) - phi).exp()));
     }
 
     assertThat(PhaseCurrents.neutralCurrentAmps(watts, vars, U0))

@@ -31,7 +31,15 @@ final class Fixtures {
 
   static CableSpec twinAndEarth(double line, double cpc, Double lengthMetres) {
     return new CableSpec(
-        line, cpc, ConductorMaterial.COPPER, Insulation.THERMOPLASTIC_70, lengthMetres, InstallationMethod.C, 30.0, 1, 0);
+        line,
+        cpc,
+        ConductorMaterial.COPPER,
+        Insulation.THERMOPLASTIC_70,
+        lengthMetres,
+        InstallationMethod.C,
+        30.0,
+        1,
+        0);
   }
 
   static DeviceSpec mcb(TripCurve curve, double amps) {
@@ -47,39 +55,90 @@ final class Fixtures {
   }
 
   static LoadSpec motor(double runningAmps, double surgeMultiple) {
-    return new LoadSpec("motor", LoadCategory.MOTOR, 1, runningAmps, RatingUnit.A, 0.85, surgeMultiple, 10.0, true);
+    return new LoadSpec(
+        "motor", LoadCategory.MOTOR, 1, runningAmps, RatingUnit.A, 0.85, surgeMultiple, 10.0, true);
   }
 
   static CircuitSpec circuit(long id, DeviceSpec device, CableSpec cable, List<LoadSpec> loads) {
-    return new CircuitSpec(id, (int) id, PhasePosition.L1, "circuit " + id, WayStatus.IN_USE, false, device, cable, loads, null, null);
+    return new CircuitSpec(
+        id,
+        (int) id,
+        PhasePosition.L1,
+        "circuit " + id,
+        WayStatus.IN_USE,
+        false,
+        device,
+        cable,
+        loads,
+        null,
+        null);
   }
 
   static CircuitSpec measured(CircuitSpec c, double zsOhms) {
-    return new CircuitSpec(c.id(), c.wayNumber(), c.position(), c.description(), c.status(), c.lockedForBalancing(),
-        c.device(), c.cable(), c.loads(), c.feedsBoardId(), zsOhms, c.ringFinal());
+    return new CircuitSpec(
+        c.id(),
+        c.wayNumber(),
+        c.position(),
+        c.description(),
+        c.status(),
+        c.lockedForBalancing(),
+        c.device(),
+        c.cable(),
+        c.loads(),
+        c.feedsBoardId(),
+        zsOhms,
+        c.ringFinal());
   }
 
   static CircuitSpec withDevice(CircuitSpec c, DeviceSpec device) {
-    return new CircuitSpec(c.id(), c.wayNumber(), c.position(), c.description(), c.status(), c.lockedForBalancing(),
-        device, c.cable(), c.loads(), c.feedsBoardId(), c.measuredLoopImpedanceOhms(), c.ringFinal());
+    return new CircuitSpec(
+        c.id(),
+        c.wayNumber(),
+        c.position(),
+        c.description(),
+        c.status(),
+        c.lockedForBalancing(),
+        device,
+        c.cable(),
+        c.loads(),
+        c.feedsBoardId(),
+        c.measuredLoopImpedanceOhms(),
+        c.ringFinal());
   }
 
-  /** The same circuit recorded as a ring final circuit (its cable length is then the whole ring). */
+  /**
+   * The same circuit recorded as a ring final circuit (its cable length is then the whole ring).
+   */
   static CircuitSpec ring(CircuitSpec c) {
-    return new CircuitSpec(c.id(), c.wayNumber(), c.position(), c.description(), c.status(), c.lockedForBalancing(),
-        c.device(), c.cable(), c.loads(), c.feedsBoardId(), c.measuredLoopImpedanceOhms(), true);
+    return new CircuitSpec(
+        c.id(),
+        c.wayNumber(),
+        c.position(),
+        c.description(),
+        c.status(),
+        c.lockedForBalancing(),
+        c.device(),
+        c.cable(),
+        c.loads(),
+        c.feedsBoardId(),
+        c.measuredLoopImpedanceOhms(),
+        true);
   }
 
   /** A single-phase board at the origin (no submain, no incomer recorded), 100 A busbar. */
   static BoardSpec originBoard(long id, List<CircuitSpec> circuits) {
-    return new BoardSpec(id, "DB-" + id, 1, 12, 100.0, null, null, null, 10.0, 1.0, null, null, null, circuits);
+    return new BoardSpec(
+        id, "DB-" + id, 1, 12, 100.0, null, null, null, 10.0, 1.0, null, null, null, circuits);
   }
 
   static SiteSpec site(SupplySpec supply, BoardSpec... boards) {
     return new SiteSpec(1, "test", supply, null, List.of(boards));
   }
 
-  /** TN-C-S, Ze 0.35 Ω, 6 kA at the origin: the usual UK values (BS 7671 / IET On-Site Guide, from memory). */
+  /**
+   * TN-C-S, Ze 0.35 Ω, 6 kA at the origin: the usual UK values (BS 7671 / IET On-Site Guide, from
+   * memory).
+   */
   static SiteSpec oneCircuitSite(CircuitSpec circuit) {
     return site(supply(EarthingSystem.TN_C_S, 0.35, 6.0), originBoard(10, List.of(circuit)));
   }

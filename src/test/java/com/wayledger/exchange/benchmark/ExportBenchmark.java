@@ -21,18 +21,21 @@ import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.Warmup;
 
 /**
- * Export of a generated site of 10,000 circuits (105 three-phase boards of up to 96 circuits, one load each,
- * fixed seed): both engines over the whole site, then the whole workbook (summary, 105 board sheets with
- * their formulas, findings, methods) written by the streaming writer and thrown away. Targets: at most 3 s
- * per export, and the fork runs with a 256 MB heap ceiling (-Xmx256m), so completing at all shows the peak
- * heap stays under 256 MB; run with -prof gc for the allocation figures.
+ * Export of a generated site of 10,000 circuits (105 three-phase boards of up to 96 circuits, one
+ * load each, fixed seed): both engines over the whole site, then the whole workbook (summary, 105
+ * board sheets with their formulas, findings, methods) written by the streaming writer and thrown
+ * away. Targets: at most 3 s per export, and the fork runs with a 256 MB heap ceiling (-Xmx256m),
+ * so completing at all shows the peak heap stays under 256 MB; run with -prof gc for the allocation
+ * figures.
  */
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.SingleShotTime)
 @OutputTimeUnit(TimeUnit.MILLISECONDS)
 @Warmup(iterations = 2)
 @Measurement(iterations = 3)
-@Fork(value = 1, jvmArgsAppend = {"-Xmx256m", "-Xms256m"})
+@Fork(
+    value = 1,
+    jvmArgsAppend = {"-Xmx256m", "-Xms256m"})
 public class ExportBenchmark {
 
   private List<BoardEntry> boards;

@@ -4,8 +4,8 @@ import com.wayledger.engine.CableSpec;
 import com.wayledger.engine.protection.result.Resolved;
 
 /**
- * Whole-length resistances of a cable used by the fault-path calculation: R1+R2 (line plus protective conductor)
- * hot for the earth fault loop, and R1 cold for the largest fault current.
+ * Whole-length resistances of a cable used by the fault-path calculation: R1+R2 (line plus
+ * protective conductor) hot for the earth fault loop, and R1 cold for the largest fault current.
  */
 public final class CableImpedance {
 
@@ -24,7 +24,9 @@ public final class CableImpedance {
         .flatMap(
             r1 ->
                 ConductorResistance.milliOhmsPerMetreHot(
-                        cable.material(), cable.protectiveCsaSquareMillimetres(), cable.insulation())
+                        cable.material(),
+                        cable.protectiveCsaSquareMillimetres(),
+                        cable.insulation())
                     .map(r2 -> r1 + r2));
   }
 
@@ -33,12 +35,15 @@ public final class CableImpedance {
     return length(cable).flatMap(l -> r1PlusR2MilliOhmsPerMetre(cable).map(r -> r * l / 1000.0));
   }
 
-  /** R1 of the whole length at 20 °C, Ω: the cold value gives the largest prospective fault current. */
+  /**
+   * R1 of the whole length at 20 °C, Ω: the cold value gives the largest prospective fault current.
+   */
   public static Resolved<Double> lineOhmsCold(CableSpec cable) {
     return length(cable)
         .flatMap(
             l ->
-                ConductorResistance.ohmsPerKmAt20Celsius(cable.material(), cable.lineCsaSquareMillimetres())
+                ConductorResistance.ohmsPerKmAt20Celsius(
+                        cable.material(), cable.lineCsaSquareMillimetres())
                     .map(r -> r * l / 1000.0));
   }
 
@@ -46,6 +51,8 @@ public final class CableImpedance {
     if (cable == null) {
       return Resolved.missing("cable");
     }
-    return cable.lengthMetres() == null ? Resolved.missing("cable length") : Resolved.of(cable.lengthMetres());
+    return cable.lengthMetres() == null
+        ? Resolved.missing("cable length")
+        : Resolved.of(cable.lengthMetres());
   }
 }

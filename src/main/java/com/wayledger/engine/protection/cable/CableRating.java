@@ -9,7 +9,10 @@ package com.wayledger.engine.protection.cable;
  * @param thermalInsulationFactor Ci
  */
 public record CableRating(
-    double tabulatedAmps, double ambientFactor, double groupingFactor, double thermalInsulationFactor) {
+    double tabulatedAmps,
+    double ambientFactor,
+    double groupingFactor,
+    double thermalInsulationFactor) {
 
   /** Iz, amperes. */
   public double capacityAmps() {

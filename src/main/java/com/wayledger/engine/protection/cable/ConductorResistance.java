@@ -6,13 +6,16 @@ import com.wayledger.engine.protection.data.DataTable;
 import com.wayledger.engine.protection.result.Resolved;
 
 /**
- * DC resistance of copper conductors from IEC 60228 Table 2, corrected to the insulation's maximum operating
- * temperature with α20 = 0.004 /K. That gives the multipliers 1.20 (70 °C) and 1.28 (90 °C) that BS 7671 uses
- * for R1+R2, so both conventions agree.
+ * DC resistance of copper conductors from IEC 60228 Table 2, corrected to the insulation's maximum
+ * operating temperature with α20 = 0.004 /K. That gives the multipliers 1.20 (70 °C) and 1.28 (90
+ * °C) that BS 7671 uses for R1+R2, so both conventions agree.
  */
 public final class ConductorResistance {
 
-  /** Temperature coefficient of resistance of copper at 20 °C, per kelvin (the rounded value used by the trade). */
+  /**
+   * Temperature coefficient of resistance of copper at 20 °C, per kelvin (the rounded value used by
+   * the trade).
+   */
   public static final double COPPER_ALPHA_PER_KELVIN = 0.004;
 
   private static final DataTable TABLE = DataTable.load("conductor-resistance.csv");
@@ -24,21 +27,30 @@ public final class ConductorResistance {
     return TABLE;
   }
 
-  /** Resistance of one conductor at 20 °C, Ω/km (= mΩ/m); missing for aluminium or a size not tabulated. */
-  public static Resolved<Double> ohmsPerKmAt20Celsius(ConductorMaterial material, Double csaSquareMillimetres) {
+  /**
+   * Resistance of one conductor at 20 °C, Ω/km (= mΩ/m); missing for aluminium or a size not
+   * tabulated.
+   */
+  public static Resolved<Double> ohmsPerKmAt20Celsius(
+      ConductorMaterial material, Double csaSquareMillimetres) {
     if (material != ConductorMaterial.COPPER) {
-      return Resolved.missing("resistance data for " + material + " conductors (only copper is tabulated)");
+      return Resolved.missing(
+          "resistance data for " + material + " conductors (only copper is tabulated)");
     }
     if (csaSquareMillimetres == null) {
       return Resolved.missing("conductor cross-section");
     }
     double r = TABLE.exact(csaSquareMillimetres, "copperOhmsPerKm");
     return Double.isNaN(r)
-        ? Resolved.missing("resistance for a " + csaSquareMillimetres + " mm² conductor (not a tabulated size)")
+        ? Resolved.missing(
+            "resistance for a " + csaSquareMillimetres + " mm² conductor (not a tabulated size)")
         : Resolved.of(r);
   }
 
-  /** Ratio R(θ)/R(20 °C) at the insulation's maximum conductor temperature: 1.20 for 70 °C, 1.28 for 90 °C. */
+  /**
+   * Ratio R(θ)/R(20 °C) at the insulation's maximum conductor temperature: 1.20 for 70 °C, 1.28 for
+   * 90 °C.
+   */
   public static double operatingTemperatureMultiplier(Insulation insulation) {
     return 1.0 + COPPER_ALPHA_PER_KELVIN * (insulation.maxConductorTemperatureCelsius() - 20.0);
   }

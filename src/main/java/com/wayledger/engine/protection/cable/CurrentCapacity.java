@@ -8,9 +8,9 @@ import com.wayledger.engine.protection.data.DataTable;
 import com.wayledger.engine.protection.result.Resolved;
 
 /**
- * Current-carrying capacity of copper cables from IEC 60364-5-52 Annex B (methods A1, A2, B1, B2, C, E; 2 or 3
- * loaded conductors) with the ambient (B.52.14), grouping (B.52.17 item 1) and thermal-insulation (BS 7671
- * Table 52.2) correction factors.
+ * Current-carrying capacity of copper cables from IEC 60364-5-52 Annex B (methods A1, A2, B1, B2,
+ * C, E; 2 or 3 loaded conductors) with the ambient (B.52.14), grouping (B.52.17 item 1) and
+ * thermal-insulation (BS 7671 Table 52.2) correction factors.
  */
 public final class CurrentCapacity {
 
@@ -33,15 +33,20 @@ public final class CurrentCapacity {
    * @param loadedConductors 2 (single-phase) or 3 (three-phase)
    */
   public static Resolved<Double> tabulatedAmps(
-      Insulation insulation, InstallationMethod method, double csaSquareMillimetres, int loadedConductors) {
+      Insulation insulation,
+      InstallationMethod method,
+      double csaSquareMillimetres,
+      int loadedConductors) {
     String column = method + "_" + loadedConductors;
     DataTable table = table(insulation);
     if (!table.hasColumn(column)) {
-      return Resolved.missing("capacity table for installation method " + method + " (not shipped)");
+      return Resolved.missing(
+          "capacity table for installation method " + method + " (not shipped)");
     }
     double it = table.exact(csaSquareMillimetres, column);
     return Double.isNaN(it)
-        ? Resolved.missing("capacity for " + csaSquareMillimetres + " mm² (outside the shipped table)")
+        ? Resolved.missing(
+            "capacity for " + csaSquareMillimetres + " mm² (outside the shipped table)")
         : Resolved.of(it);
   }
 
@@ -49,7 +54,8 @@ public final class CurrentCapacity {
   public static Resolved<Double> ambientFactor(Insulation insulation, double ambientCelsius) {
     double f = AMBIENT.atOrAbove(ambientCelsius, insulation.name());
     return Double.isNaN(f)
-        ? Resolved.missing("ambient factor: " + ambientCelsius + " °C is beyond the insulation's range")
+        ? Resolved.missing(
+            "ambient factor: " + ambientCelsius + " °C is beyond the insulation's range")
         : Resolved.of(f);
   }
 
@@ -64,7 +70,9 @@ public final class CurrentCapacity {
         : Resolved.of(f);
   }
 
-  /** Ci for a cable surrounded by thermal insulation over {@code lengthMillimetres}; 0 gives 1.0. */
+  /**
+   * Ci for a cable surrounded by thermal insulation over {@code lengthMillimetres}; 0 gives 1.0.
+   */
   public static double thermalInsulationFactor(int lengthMillimetres) {
     if (lengthMillimetres <= 0) {
       return 1.0;
@@ -74,15 +82,16 @@ public final class CurrentCapacity {
   }
 
   /**
-   * The rating of a recorded cable. A null ambient, grouping or insulation length is missing, not assumed: Iz
-   * depends on them.
+   * The rating of a recorded cable. A null ambient, grouping or insulation length is missing, not
+   * assumed: Iz depends on them.
    */
   public static Resolved<CableRating> of(CableSpec cable, int loadedConductors) {
     if (cable == null) {
       return Resolved.missing("cable");
     }
     if (cable.material() != ConductorMaterial.COPPER) {
-      return Resolved.missing("capacity table for " + cable.material() + " conductors (only copper is shipped)");
+      return Resolved.missing(
+          "capacity table for " + cable.material() + " conductors (only copper is shipped)");
     }
     if (cable.insulation() == null) {
       return Resolved.missing("cable insulation");
@@ -103,7 +112,10 @@ public final class CurrentCapacity {
       return Resolved.missing("length in thermal insulation");
     }
     return tabulatedAmps(
-            cable.insulation(), cable.installationMethod(), cable.lineCsaSquareMillimetres(), loadedConductors)
+            cable.insulation(),
+            cable.installationMethod(),
+            cable.lineCsaSquareMillimetres(),
+            loadedConductors)
         .flatMap(
             it ->
                 ambientFactor(cable.insulation(), cable.ambientCelsius())
@@ -116,6 +128,7 @@ public final class CurrentCapacity {
                                             it,
                                             ca,
                                             cg,
-                                            thermalInsulationFactor(cable.thermalInsulationMillimetres())))));
+                                            thermalInsulationFactor(
+                                                cable.thermalInsulationMillimetres())))));
   }
 }

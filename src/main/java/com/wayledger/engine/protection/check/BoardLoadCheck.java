@@ -6,11 +6,15 @@ import com.wayledger.engine.protection.result.Quantity;
 import com.wayledger.engine.protection.result.Verdict;
 import java.util.List;
 
-/** Board-level loading: incomer, busbar and supply fuse against the largest phase current, and phase unbalance. */
+/**
+ * Board-level loading: incomer, busbar and supply fuse against the largest phase current, and phase
+ * unbalance.
+ */
 public final class BoardLoadCheck {
 
   public static final String REFERENCE_OVERLOAD = "BS 7671 433.1.1 / IEC 60364-4-43 433.1: Ib ≤ In";
-  public static final String REFERENCE_BUSBAR = "IEC 61439-1 (rated current of the assembly's busbar)";
+  public static final String REFERENCE_BUSBAR =
+      "IEC 61439-1 (rated current of the assembly's busbar)";
   public static final String REFERENCE_UNBALANCE =
       "unbalance = largest deviation from the mean phase current / mean (NEMA MG-1 definition applied to currents);"
           + " limit set per board";
@@ -22,20 +26,31 @@ public final class BoardLoadCheck {
    *
    * @param what "incomer", "busbar" or "supply fuse"
    */
-  public static Finding overload(CheckKind check, String what, double largestPhaseAmps, double ratedAmps, String reference) {
+  public static Finding overload(
+      CheckKind check, String what, double largestPhaseAmps, double ratedAmps, String reference) {
     List<Quantity> values =
-        List.of(new Quantity("largest phase current", largestPhaseAmps, "A"), new Quantity(what + " rating", ratedAmps, "A"));
+        List.of(
+            new Quantity("largest phase current", largestPhaseAmps, "A"),
+            new Quantity(what + " rating", ratedAmps, "A"));
     if (largestPhaseAmps <= ratedAmps) {
       return Finding.pass(
           check,
-          what + ": largest phase " + Rounding.amps(largestPhaseAmps) + " ≤ " + Rounding.amps(ratedAmps),
+          what
+              + ": largest phase "
+              + Rounding.amps(largestPhaseAmps)
+              + " ≤ "
+              + Rounding.amps(ratedAmps),
           values,
           reference);
     }
     return new Finding(
         check,
         Verdict.WARNING,
-        what + " overloaded: largest phase " + Rounding.amps(largestPhaseAmps) + " > " + Rounding.amps(ratedAmps),
+        what
+            + " overloaded: largest phase "
+            + Rounding.amps(largestPhaseAmps)
+            + " > "
+            + Rounding.amps(ratedAmps),
         values,
         reference,
         "rebalance the phases, move load to another board, or uprate the " + what);
@@ -43,18 +58,26 @@ public final class BoardLoadCheck {
 
   public static Finding unbalance(double unbalancePercent, double limitPercent) {
     List<Quantity> values =
-        List.of(new Quantity("unbalance", unbalancePercent, "%"), new Quantity("limit", limitPercent, "%"));
+        List.of(
+            new Quantity("unbalance", unbalancePercent, "%"),
+            new Quantity("limit", limitPercent, "%"));
     if (unbalancePercent <= limitPercent) {
       return Finding.pass(
           CheckKind.PHASE_UNBALANCE,
-          "unbalance " + Rounding.percent(unbalancePercent) + " ≤ " + Rounding.percent(limitPercent),
+          "unbalance "
+              + Rounding.percent(unbalancePercent)
+              + " ≤ "
+              + Rounding.percent(limitPercent),
           values,
           REFERENCE_UNBALANCE);
     }
     return new Finding(
         CheckKind.PHASE_UNBALANCE,
         Verdict.WARNING,
-        "phases unbalanced: " + Rounding.percent(unbalancePercent) + " > " + Rounding.percent(limitPercent),
+        "phases unbalanced: "
+            + Rounding.percent(unbalancePercent)
+            + " > "
+            + Rounding.percent(limitPercent),
         values,
         REFERENCE_UNBALANCE,
         "move single-phase circuits between L1, L2 and L3 (see phase balancing)");

@@ -8,12 +8,14 @@ import com.wayledger.engine.protection.result.Verdict;
 import java.util.List;
 
 /**
- * Cable protected against overload by its device: In ≤ Iz and I2 ≤ 1.45·Iz. For an IEC 60898-1 breaker I2 is
- * 1.45·In, so the second condition is the first again; for an IEC 60947-2 breaker I2 = 1.30·Ir.
+ * Cable protected against overload by its device: In ≤ Iz and I2 ≤ 1.45·Iz. For an IEC 60898-1
+ * breaker I2 is 1.45·In, so the second condition is the first again; for an IEC 60947-2 breaker I2
+ * = 1.30·Ir.
  */
 public final class CableProtectionCheck {
 
-  public static final String REFERENCE = "BS 7671 433.1.1 (ii), (iii) / IEC 60364-4-43 433.1: In ≤ Iz, I2 ≤ 1.45·Iz";
+  public static final String REFERENCE =
+      "BS 7671 433.1.1 (ii), (iii) / IEC 60364-4-43 433.1: In ≤ Iz, I2 ≤ 1.45·Iz";
 
   private CableProtectionCheck() {}
 
@@ -22,7 +24,8 @@ public final class CableProtectionCheck {
    * @param conventionalTrippingAmps I2, A
    * @param rating the cable's It and correction factors
    */
-  public static Finding assess(double ratedAmps, double conventionalTrippingAmps, CableRating rating) {
+  public static Finding assess(
+      double ratedAmps, double conventionalTrippingAmps, CableRating rating) {
     double iz = rating.capacityAmps();
     List<Quantity> values =
         List.of(
@@ -43,15 +46,21 @@ public final class CableProtectionCheck {
           values,
           REFERENCE);
     }
-    String why = !inOk
-        ? "In " + Rounding.amps(ratedAmps) + " > Iz " + Rounding.amps(iz)
-        : "I2 " + Rounding.amps(conventionalTrippingAmps) + " > 1.45·Iz " + Rounding.amps(1.45 * iz);
+    String why =
+        !inOk
+            ? "In " + Rounding.amps(ratedAmps) + " > Iz " + Rounding.amps(iz)
+            : "I2 "
+                + Rounding.amps(conventionalTrippingAmps)
+                + " > 1.45·Iz "
+                + Rounding.amps(1.45 * iz);
     return new Finding(
         CheckKind.CABLE_PROTECTION,
         Verdict.DANGER,
         "cable not protected against overload: " + why,
         values,
         REFERENCE,
-        "fit a device rated at most " + Rounding.amps(iz) + " if the load allows, or a larger cable");
+        "fit a device rated at most "
+            + Rounding.amps(iz)
+            + " if the load allows, or a larger cable");
   }
 }

@@ -6,7 +6,9 @@ import com.wayledger.engine.protection.result.Quantity;
 import com.wayledger.engine.protection.result.Verdict;
 import java.util.List;
 
-/** Way overloaded: the design current Ib is above the device's rating (or MCCB overload setting). */
+/**
+ * Way overloaded: the design current Ib is above the device's rating (or MCCB overload setting).
+ */
 public final class OverloadCheck {
 
   public static final String REFERENCE = "BS 7671 433.1.1 (i) / IEC 60364-4-43 433.1: Ib ≤ In";
@@ -18,7 +20,8 @@ public final class OverloadCheck {
    * @param ratedAmps In, or Ir for an MCCB, A
    */
   public static Finding assess(double designCurrentAmps, double ratedAmps) {
-    List<Quantity> values = List.of(new Quantity("Ib", designCurrentAmps, "A"), new Quantity("In", ratedAmps, "A"));
+    List<Quantity> values =
+        List.of(new Quantity("Ib", designCurrentAmps, "A"), new Quantity("In", ratedAmps, "A"));
     if (designCurrentAmps <= ratedAmps) {
       return Finding.pass(
           CheckKind.WAY_OVERLOAD,
@@ -29,7 +32,10 @@ public final class OverloadCheck {
     return new Finding(
         CheckKind.WAY_OVERLOAD,
         Verdict.WARNING,
-        "way overloaded: Ib " + Rounding.amps(designCurrentAmps) + " > In " + Rounding.amps(ratedAmps),
+        "way overloaded: Ib "
+            + Rounding.amps(designCurrentAmps)
+            + " > In "
+            + Rounding.amps(ratedAmps),
         values,
         REFERENCE,
         "split the load over more ways, or fit a larger device if the cable's Iz allows it");

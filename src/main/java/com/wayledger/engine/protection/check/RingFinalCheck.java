@@ -11,16 +11,19 @@ import com.wayledger.engine.protection.result.Verdict;
 import java.util.List;
 
 /**
- * Ring final circuits: a cable that leaves the board and returns to it, so every point is fed by two paths.
+ * Ring final circuits: a cable that leaves the board and returns to it, so every point is fed by
+ * two paths.
  *
- * <p>Cable protection follows the ring rule of BS 7671 433.1.204 (from memory, not read in a document at hand):
- * a ring of 2.5 mm² copper line conductors with a 1.5 mm² protective conductor, thermoplastic (70 °C) or
- * thermosetting (90 °C) insulated, on a device of In ≤ 32 A, is protected when the cable's Iz (after correction
- * factors) is at least 20 A. Any other ring is not assessed: no source at hand gives a rule for it.
+ * <p>Cable protection follows the ring rule of BS 7671 433.1.204 (from memory, not read in a
+ * document at hand): a ring of 2.5 mm² copper line conductors with a 1.5 mm² protective conductor,
+ * thermoplastic (70 °C) or thermosetting (90 °C) insulated, on a device of In ≤ 32 A, is protected
+ * when the cable's Iz (after correction factors) is at least 20 A. Any other ring is not assessed:
+ * no source at hand gives a rule for it.
  *
- * <p>Loop impedance and voltage drop use the trade's common practice for a ring whose recorded length is the
- * whole ring: the end-to-end resistances r1 + r2 give (R1+R2) = (r1+r2)/4 at the mid-point, and a load taken at
- * the mid-point sees a quarter of the ring's resistance (two halves of half the length in parallel).
+ * <p>Loop impedance and voltage drop use the trade's common practice for a ring whose recorded
+ * length is the whole ring: the end-to-end resistances r1 + r2 give (R1+R2) = (r1+r2)/4 at the
+ * mid-point, and a load taken at the mid-point sees a quarter of the ring's resistance (two halves
+ * of half the length in parallel).
  */
 public final class RingFinalCheck {
 
@@ -40,7 +43,10 @@ public final class RingFinalCheck {
   /** The smallest cable Iz the ring rule asks for, A. */
   public static final double MIN_CAPACITY_AMPS = 20.0;
 
-  /** A ring's end-to-end resistance seen at its mid-point: two halves in parallel, each half as long. */
+  /**
+   * A ring's end-to-end resistance seen at its mid-point: two halves in parallel, each half as
+   * long.
+   */
   public static final double MID_POINT_FRACTION = 0.25;
 
   private static final double LINE_MM2 = 2.5;
@@ -48,11 +54,15 @@ public final class RingFinalCheck {
 
   private RingFinalCheck() {}
 
-  /** Whether the cable is the one the ring rule covers: 2.5/1.5 mm² copper, thermoplastic or thermosetting. */
+  /**
+   * Whether the cable is the one the ring rule covers: 2.5/1.5 mm² copper, thermoplastic or
+   * thermosetting.
+   */
   public static boolean coveredCable(CableSpec cable) {
     return cable != null
         && cable.material() == ConductorMaterial.COPPER
-        && (cable.insulation() == Insulation.THERMOPLASTIC_70 || cable.insulation() == Insulation.THERMOSETTING_90)
+        && (cable.insulation() == Insulation.THERMOPLASTIC_70
+            || cable.insulation() == Insulation.THERMOSETTING_90)
         && same(cable.lineCsaSquareMillimetres(), LINE_MM2)
         && same(cable.protectiveCsaSquareMillimetres(), CPC_MM2);
   }
@@ -90,7 +100,8 @@ public final class RingFinalCheck {
       return new Finding(
           CheckKind.CABLE_PROTECTION,
           Verdict.NOT_ASSESSED,
-          "not assessed — ring final circuit of this size: In " + Rounding.amps(ratedAmps)
+          "not assessed — ring final circuit of this size: In "
+              + Rounding.amps(ratedAmps)
               + " is above the 32 A the ring rule covers; check against the standard",
           values,
           CABLE_REFERENCE,
@@ -99,21 +110,29 @@ public final class RingFinalCheck {
     if (iz + 1e-9 >= MIN_CAPACITY_AMPS) {
       return Finding.pass(
           CheckKind.CABLE_PROTECTION,
-          "ring final circuit: In " + Rounding.amps(ratedAmps) + " ≤ 32 A and Iz " + Rounding.amps(iz) + " ≥ 20 A",
+          "ring final circuit: In "
+              + Rounding.amps(ratedAmps)
+              + " ≤ 32 A and Iz "
+              + Rounding.amps(iz)
+              + " ≥ 20 A",
           values,
           CABLE_REFERENCE);
     }
     return new Finding(
         CheckKind.CABLE_PROTECTION,
         Verdict.DANGER,
-        "ring final circuit: cable not protected against overload: Iz " + Rounding.amps(iz)
+        "ring final circuit: cable not protected against overload: Iz "
+            + Rounding.amps(iz)
             + " < 20 A the ring rule needs",
         values,
         CABLE_REFERENCE,
         "route the ring out of thermal insulation or away from grouped cables, or use a larger cable");
   }
 
-  /** A loop impedance or voltage drop finding with the ring's basis named in its summary and reference. */
+  /**
+   * A loop impedance or voltage drop finding with the ring's basis named in its summary and
+   * reference.
+   */
   public static Finding noted(Finding finding, String note) {
     return new Finding(
         finding.check(),

@@ -8,10 +8,10 @@ import com.wayledger.engine.protection.result.Verdict;
 import java.util.List;
 
 /**
- * Selectivity between a board's upstream device (incomer, else the way feeding the board) and one outgoing device,
- * by comparing standard bands only (no manufacturer's selectivity tables): a fault current at the board that
- * reaches both instantaneous bands may trip both devices, so selectivity is only partial, up to the upstream
- * device's lowest instantaneous trip current.
+ * Selectivity between a board's upstream device (incomer, else the way feeding the board) and one
+ * outgoing device, by comparing standard bands only (no manufacturer's selectivity tables): a fault
+ * current at the board that reaches both instantaneous bands may trip both devices, so selectivity
+ * is only partial, up to the upstream device's lowest instantaneous trip current.
  */
 public final class SelectivityCheck {
 
@@ -23,7 +23,8 @@ public final class SelectivityCheck {
   /**
    * @param faultCurrentAmps prospective fault current at the board, A
    */
-  public static Finding assess(DeviceCharacteristic upstream, DeviceCharacteristic outgoing, double faultCurrentAmps) {
+  public static Finding assess(
+      DeviceCharacteristic upstream, DeviceCharacteristic outgoing, double faultCurrentAmps) {
     List<Quantity> values =
         List.of(
             new Quantity("fault current at board", faultCurrentAmps, "A"),
@@ -53,7 +54,8 @@ public final class SelectivityCheck {
       return new Finding(
           CheckKind.SELECTIVITY,
           Verdict.WARNING,
-          pair + ": the upstream instantaneous band starts at or below the outgoing one, so a fault may trip the"
+          pair
+              + ": the upstream instantaneous band starts at or below the outgoing one, so a fault may trip the"
               + " upstream device first",
           values,
           REFERENCE,
@@ -62,9 +64,13 @@ public final class SelectivityCheck {
     return new Finding(
         CheckKind.SELECTIVITY,
         Verdict.ADVICE,
-        "partial selectivity: " + pair + " selective only up to about "
-            + Rounding.amps(upstream.lowestInstantaneousAmps()) + "; the fault current at the board ("
-            + Rounding.amps(faultCurrentAmps) + ") can trip both",
+        "partial selectivity: "
+            + pair
+            + " selective only up to about "
+            + Rounding.amps(upstream.lowestInstantaneousAmps())
+            + "; the fault current at the board ("
+            + Rounding.amps(faultCurrentAmps)
+            + ") can trip both",
         values,
         REFERENCE,
         "check the manufacturer's selectivity tables, or use a time-delayed or higher-setting upstream device");

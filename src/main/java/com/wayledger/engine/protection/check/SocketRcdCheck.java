@@ -7,9 +7,10 @@ import com.wayledger.engine.protection.result.Verdict;
 import java.util.List;
 
 /**
- * Additional protection of socket-outlet circuits up to 32 A by a residual-current device of IΔn ≤ 30 mA. The
- * engine sees the way's own device, the board's incomer and the incomers and ways above; an RCD outside the
- * schedule (an RCD socket-outlet, a separate RCD unit) cannot be seen, so a missing RCD is a warning to look.
+ * Additional protection of socket-outlet circuits up to 32 A by a residual-current device of IΔn ≤
+ * 30 mA. The engine sees the way's own device, the board's incomer and the incomers and ways above;
+ * an RCD outside the schedule (an RCD socket-outlet, a separate RCD unit) cannot be seen, so a
+ * missing RCD is a warning to look.
  */
 public final class SocketRcdCheck {
 
@@ -31,7 +32,10 @@ public final class SocketRcdCheck {
     if (ratedAmps > maxRatedAmps) {
       return Finding.pass(
           CheckKind.SOCKET_RCD,
-          "socket-outlet circuit rated " + Rounding.amps(ratedAmps) + ", above the " + Rounding.amps(maxRatedAmps)
+          "socket-outlet circuit rated "
+              + Rounding.amps(ratedAmps)
+              + ", above the "
+              + Rounding.amps(maxRatedAmps)
               + " the rule covers",
           List.of(new Quantity("In", ratedAmps, "A")),
           REFERENCE);
@@ -53,7 +57,10 @@ public final class SocketRcdCheck {
     return new Finding(
         CheckKind.SOCKET_RCD,
         Verdict.WARNING,
-        "socket-outlet circuit up to " + Rounding.amps(maxRatedAmps) + " with no " + (long) maxResidualMilliAmps
+        "socket-outlet circuit up to "
+            + Rounding.amps(maxRatedAmps)
+            + " with no "
+            + (long) maxResidualMilliAmps
             + " mA residual-current device on the schedule (an RCD outside the schedule cannot be seen)",
         List.of(new Quantity("In", ratedAmps, "A")),
         REFERENCE,

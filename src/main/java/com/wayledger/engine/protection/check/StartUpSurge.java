@@ -6,19 +6,22 @@ import java.util.List;
 import java.util.OptionalDouble;
 
 /**
- * Peak start-up current of a circuit's loads. Rule: the one item with the largest surge starts while every other
- * item of the circuit already runs, so peak = (largest item surge) + (running current of all the rest). Items are
- * taken at their connected (not diversified) running current, which is the conservative side for nuisance trips.
+ * Peak start-up current of a circuit's loads. Rule: the one item with the largest surge starts
+ * while every other item of the circuit already runs, so peak = (largest item surge) + (running
+ * current of all the rest). Items are taken at their connected (not diversified) running current,
+ * which is the conservative side for nuisance trips.
  */
 public final class StartUpSurge {
 
   private StartUpSurge() {}
 
   /**
-   * Running current of one item, A: the rating in A as it stands; W as P/(U·cos φ); VA as S/U, with U = U0 for a
-   * single-pole circuit and 3·U0 for a three-pole one (current per line of a balanced load).
+   * Running current of one item, A: the rating in A as it stands; W as P/(U·cos φ); VA as S/U, with
+   * U = U0 for a single-pole circuit and 3·U0 for a three-pole one (current per line of a balanced
+   * load).
    */
-  public static double itemRunningAmps(LoadSpec load, double nominalVoltageToEarthVolts, boolean threePole) {
+  public static double itemRunningAmps(
+      LoadSpec load, double nominalVoltageToEarthVolts, boolean threePole) {
     double volts = threePole ? 3.0 * nominalVoltageToEarthVolts : nominalVoltageToEarthVolts;
     RatingUnit unit = load.ratingUnit();
     if (unit == RatingUnit.A) {
@@ -31,7 +34,8 @@ public final class StartUpSurge {
   }
 
   /** Peak start-up current, A; empty when no load records a surge multiple. */
-  public static OptionalDouble peakAmps(List<LoadSpec> loads, double nominalVoltageToEarthVolts, boolean threePole) {
+  public static OptionalDouble peakAmps(
+      List<LoadSpec> loads, double nominalVoltageToEarthVolts, boolean threePole) {
     double running = 0.0;
     double bestExtra = -1.0;
     for (LoadSpec load : loads) {

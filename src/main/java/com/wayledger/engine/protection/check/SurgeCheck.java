@@ -8,8 +8,9 @@ import com.wayledger.engine.protection.result.Verdict;
 import java.util.List;
 
 /**
- * Nuisance trip on start-up: a surge at or above the lowest current of the instantaneous band may trip the breaker.
- * A surge of some 10 ms does not operate the thermal element (common practice), so only the magnetic band counts.
+ * Nuisance trip on start-up: a surge at or above the lowest current of the instantaneous band may
+ * trip the breaker. A surge of some 10 ms does not operate the thermal element (common practice),
+ * so only the magnetic band counts.
  */
 public final class SurgeCheck {
 
@@ -21,20 +22,32 @@ public final class SurgeCheck {
   public static Finding assess(double surgeAmps, DeviceCharacteristic device) {
     double trip = device.lowestInstantaneousAmps();
     List<Quantity> values =
-        List.of(new Quantity("start-up surge", surgeAmps, "A"), new Quantity("lowest instantaneous trip", trip, "A"));
+        List.of(
+            new Quantity("start-up surge", surgeAmps, "A"),
+            new Quantity("lowest instantaneous trip", trip, "A"));
     if (surgeAmps < trip) {
       return Finding.pass(
           CheckKind.START_UP_SURGE,
-          "start-up surge " + Rounding.amps(surgeAmps) + " below the " + device.label() + " instantaneous band ("
-              + Rounding.amps(trip) + ")",
+          "start-up surge "
+              + Rounding.amps(surgeAmps)
+              + " below the "
+              + device.label()
+              + " instantaneous band ("
+              + Rounding.amps(trip)
+              + ")",
           values,
           REFERENCE);
     }
     return new Finding(
         CheckKind.START_UP_SURGE,
         Verdict.WARNING,
-        "start-up surge " + Rounding.amps(surgeAmps) + " reaches the " + device.label() + " instantaneous band (from "
-            + Rounding.amps(trip) + "): nuisance trips likely",
+        "start-up surge "
+            + Rounding.amps(surgeAmps)
+            + " reaches the "
+            + device.label()
+            + " instantaneous band (from "
+            + Rounding.amps(trip)
+            + "): nuisance trips likely",
         values,
         REFERENCE,
         "use a curve with a higher instantaneous band (C or D) if Zs allows it, a soft starter, or stagger the"
@@ -42,6 +55,7 @@ public final class SurgeCheck {
   }
 
   public static Finding noSurgeRecorded() {
-    return Finding.pass(CheckKind.START_UP_SURGE, "no load records a start-up surge", List.of(), REFERENCE);
+    return Finding.pass(
+        CheckKind.START_UP_SURGE, "no load records a start-up surge", List.of(), REFERENCE);
   }
 }

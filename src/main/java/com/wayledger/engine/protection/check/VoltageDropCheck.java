@@ -6,7 +6,10 @@ import com.wayledger.engine.protection.result.Quantity;
 import com.wayledger.engine.protection.result.Verdict;
 import java.util.List;
 
-/** Voltage drop from the origin to the end of the circuit: the board's drop up the tree plus the circuit's own. */
+/**
+ * Voltage drop from the origin to the end of the circuit: the board's drop up the tree plus the
+ * circuit's own.
+ */
 public final class VoltageDropCheck {
 
   public static final String REFERENCE =
@@ -33,15 +36,22 @@ public final class VoltageDropCheck {
     if (total <= limitPercent) {
       return Finding.pass(
           CheckKind.VOLTAGE_DROP,
-          "voltage drop from the origin " + Rounding.percent(total) + " ≤ " + Rounding.percent(limitPercent),
+          "voltage drop from the origin "
+              + Rounding.percent(total)
+              + " ≤ "
+              + Rounding.percent(limitPercent),
           values,
           REFERENCE);
     }
     return new Finding(
         CheckKind.VOLTAGE_DROP,
         Verdict.WARNING,
-        "voltage drop from the origin " + Rounding.percent(total) + " above the " + Rounding.percent(limitPercent)
-            + " limit for " + (lighting ? "lighting" : "other uses"),
+        "voltage drop from the origin "
+            + Rounding.percent(total)
+            + " above the "
+            + Rounding.percent(limitPercent)
+            + " limit for "
+            + (lighting ? "lighting" : "other uses"),
         values,
         REFERENCE,
         circuitDropPercent >= boardDropPercent

@@ -10,9 +10,9 @@ import java.util.ArrayList;
 import java.util.List;
 
 /**
- * A numeric table read from a classpath CSV file. Lines starting with {@code #} are provenance notes (source,
- * confidence) kept in {@link #notes()}; the first other line is the header; an empty cell is NaN (no value).
- * The first column is the key, ascending.
+ * A numeric table read from a classpath CSV file. Lines starting with {@code #} are provenance
+ * notes (source, confidence) kept in {@link #notes()}; the first other line is the header; an empty
+ * cell is NaN (no value). The first column is the key, ascending.
  */
 public final class DataTable {
 
@@ -29,8 +29,8 @@ public final class DataTable {
   }
 
   /**
-   * Reads {@code engine/protection/<name>} from the classpath. A missing or malformed file is a packaging error,
-   * not a user-data problem, so it fails loudly.
+   * Reads {@code engine/protection/<name>} from the classpath. A missing or malformed file is a
+   * packaging error, not a user-data problem, so it fails loudly.
    */
   public static DataTable load(String name) {
     String resource = "/engine/protection/" + name;
@@ -67,7 +67,8 @@ public final class DataTable {
   private static double[] parseRow(String line, int width, String resource) {
     String[] cells = line.split(",", -1);
     if (cells.length != width) {
-      throw new IllegalStateException("row width " + cells.length + " ≠ header width " + width + " in " + resource);
+      throw new IllegalStateException(
+          "row width " + cells.length + " ≠ header width " + width + " in " + resource);
     }
     double[] row = new double[width];
     for (int i = 0; i < width; i++) {
@@ -89,7 +90,10 @@ public final class DataTable {
     return header.contains(column);
   }
 
-  /** The value in {@code column} on the row whose key equals {@code key}; NaN when no such row or cell. */
+  /**
+   * The value in {@code column} on the row whose key equals {@code key}; NaN when no such row or
+   * cell.
+   */
   public double exact(double key, String column) {
     int c = header.indexOf(column);
     if (c < 0) {
@@ -104,8 +108,9 @@ public final class DataTable {
   }
 
   /**
-   * The value in {@code column} on the first row whose key is at least {@code key} (the next row up, which is the
-   * conservative reading for correction factors that fall as the key rises); NaN when the key is beyond the table.
+   * The value in {@code column} on the first row whose key is at least {@code key} (the next row
+   * up, which is the conservative reading for correction factors that fall as the key rises); NaN
+   * when the key is beyond the table.
    */
   public double atOrAbove(double key, String column) {
     int c = header.indexOf(column);

@@ -6,7 +6,8 @@ import com.wayledger.engine.TripCurve;
 import com.wayledger.engine.protection.result.Resolved;
 
 /**
- * The overcurrent characteristic of a breaker, reduced to the points the checks use. All currents in amperes.
+ * The overcurrent characteristic of a breaker, reduced to the points the checks use. All currents
+ * in amperes.
  *
  * @param kind MCB, RCBO or MCCB
  * @param curve B, C or D for MCBs and RCBOs; null for MCCBs
@@ -15,11 +16,13 @@ import com.wayledger.engine.protection.result.Resolved;
  * @param conventionalNonTrippingAmps I1: 1.13·In (IEC 60898-1) or 1.05·Ir (IEC 60947-2)
  * @param conventionalTrippingAmps I2: 1.45·In (IEC 60898-1) or 1.30·Ir (IEC 60947-2)
  * @param conventionalTimeHours time within which I2 trips and I1 does not, h
- * @param lowestInstantaneousAmps below this the magnetic element never trips within 0.1 s (3/5/10·In, or 0.8·Ii)
- * @param highestInstantaneousAmps at or above this it always trips within 0.1 s: Ia for the disconnection-time
- *     check (5/10/20·In, or 1.2·Ii)
+ * @param lowestInstantaneousAmps below this the magnetic element never trips within 0.1 s
+ *     (3/5/10·In, or 0.8·Ii)
+ * @param highestInstantaneousAmps at or above this it always trips within 0.1 s: Ia for the
+ *     disconnection-time check (5/10/20·In, or 1.2·Ii)
  * @param residualCurrentMilliAmps IΔn of an RCBO; null for a device without a residual element
- * @param settingsAssumed true when an MCCB had no recorded settings and Ir = In, Ii = default multiple were assumed
+ * @param settingsAssumed true when an MCCB had no recorded settings and Ir = In, Ii = default
+ *     multiple were assumed
  */
 public record DeviceCharacteristic(
     DeviceKind kind,
@@ -71,10 +74,11 @@ public record DeviceCharacteristic(
   }
 
   /**
-   * The characteristic of a recorded device, or why there is none: a fuse (no characteristic shipped), an RCD
-   * (no overcurrent element), or a missing rating or curve.
+   * The characteristic of a recorded device, or why there is none: a fuse (no characteristic
+   * shipped), an RCD (no overcurrent element), or a missing rating or curve.
    *
-   * @param mccbSettings recorded MCCB settings; null to assume Ir = In and Ii = {@code defaultMccbInstantMultiple}·In
+   * @param mccbSettings recorded MCCB settings; null to assume Ir = In and Ii = {@code
+   *     defaultMccbInstantMultiple}·In
    */
   public static Resolved<DeviceCharacteristic> of(
       DeviceSpec device, MccbSettings mccbSettings, double defaultMccbInstantMultiple) {
@@ -96,7 +100,8 @@ public record DeviceCharacteristic(
     double in = device.ratedCurrentAmps();
     if (device.kind() == DeviceKind.MCCB) {
       boolean assumed = mccbSettings == null;
-      MccbSettings s = assumed ? new MccbSettings(in, defaultMccbInstantMultiple * in) : mccbSettings;
+      MccbSettings s =
+          assumed ? new MccbSettings(in, defaultMccbInstantMultiple * in) : mccbSettings;
       return Resolved.of(mouldedCase(in, s, assumed));
     }
     if (device.curve() == null) {
@@ -111,22 +116,35 @@ public record DeviceCharacteristic(
     return amps >= highestInstantaneousAmps;
   }
 
-  /** Whether a current this large might trip the magnetic element (it is inside or above the instantaneous band). */
+  /**
+   * Whether a current this large might trip the magnetic element (it is inside or above the
+   * instantaneous band).
+   */
   public boolean mayTripInstantlyAt(double amps) {
     return amps >= lowestInstantaneousAmps;
   }
 
   /**
-   * A short label such as "C20", "MCCB 160 A (Ir 125 A, Ii 800 A, recorded)" or "MCCB 160 A (Ir 160 A, Ii 1600 A,
-   * assumed)": a moulded-case breaker's label says whether its settings were recorded or assumed.
+   * A short label such as "C20", "MCCB 160 A (Ir 125 A, Ii 800 A, recorded)" or "MCCB 160 A (Ir 160
+   * A, Ii 1600 A, assumed)": a moulded-case breaker's label says whether its settings were recorded
+   * or assumed.
    */
   public String label() {
     String amps = trim(ratedCurrentAmps);
     if (curve != null) {
       return curve + amps;
     }
-    return "MCCB " + amps + " A (Ir " + trim(overloadSettingAmps) + " A, Ii " + trim(Math.round(10 * highestInstantaneousAmps / (1.0 + MccbStandard.INSTANTANEOUS_TOLERANCE)) / 10.0)
-        + " A, " + (settingsAssumed ? "assumed" : "recorded") + ")";
+    return "MCCB "
+        + amps
+        + " A (Ir "
+        + trim(overloadSettingAmps)
+        + " A, Ii "
+        + trim(
+            Math.round(10 * highestInstantaneousAmps / (1.0 + MccbStandard.INSTANTANEOUS_TOLERANCE))
+                / 10.0)
+        + " A, "
+        + (settingsAssumed ? "assumed" : "recorded")
+        + ")";
   }
 
   private static String trim(double v) {

@@ -5,13 +5,28 @@ import java.util.List;
 /** Figures of IEC 60898-1 for household and similar circuit-breakers. */
 public final class McbStandard {
 
-  /** Conventional non-tripping current, multiple of In: no trip within the conventional time from cold (Table 7 a). */
+  /**
+   * Conventional non-tripping current, multiple of In: no trip within the conventional time from
+   * cold (Table 7 a).
+   */
   public static final double CONVENTIONAL_NON_TRIPPING_MULTIPLE = 1.13;
-  /** Conventional tripping current I2, multiple of In: trip within the conventional time (Table 7 b). */
+
+  /**
+   * Conventional tripping current I2, multiple of In: trip within the conventional time (Table 7
+   * b).
+   */
   public static final double CONVENTIONAL_TRIPPING_MULTIPLE = 1.45;
-  /** The 2.55·In test point of Table 7 c: trip after more than 1 s and within 60 s (In ≤ 32 A) or 120 s. */
+
+  /**
+   * The 2.55·In test point of Table 7 c: trip after more than 1 s and within 60 s (In ≤ 32 A) or
+   * 120 s.
+   */
   public static final double THERMAL_TEST_MULTIPLE = 2.55;
-  /** Time within which the instantaneous element must (or must not) operate at the band edges, s (Table 7 d, e). */
+
+  /**
+   * Time within which the instantaneous element must (or must not) operate at the band edges, s
+   * (Table 7 d, e).
+   */
   public static final double INSTANTANEOUS_TIME_SECONDS = 0.1;
 
   /** Preferred rated currents In, A. */
@@ -35,8 +50,8 @@ public final class McbStandard {
   }
 
   /**
-   * Service short-circuit capacity Ics from Icn, kA: Ics = Icn up to 6 kA; 0.75·Icn (at least 6 kA) from 6 to
-   * 10 kA; 0.5·Icn (at least 7.5 kA) above 10 kA.
+   * Service short-circuit capacity Ics from Icn, kA: Ics = Icn up to 6 kA; 0.75·Icn (at least 6 kA)
+   * from 6 to 10 kA; 0.5·Icn (at least 7.5 kA) above 10 kA.
    */
   public static double serviceBreakingCapacityKiloAmps(double icnKiloAmps) {
     if (icnKiloAmps <= 6.0) {

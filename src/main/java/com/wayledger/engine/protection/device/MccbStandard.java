@@ -5,8 +5,10 @@ public final class MccbStandard {
 
   /** Conventional non-tripping current, multiple of Ir (Table 6). */
   public static final double CONVENTIONAL_NON_TRIPPING_MULTIPLE = 1.05;
+
   /** Conventional tripping current, multiple of Ir (Table 6). */
   public static final double CONVENTIONAL_TRIPPING_MULTIPLE = 1.30;
+
   /** Tolerance of the instantaneous pick-up around its setting Ii (±20 %). */
   public static final double INSTANTANEOUS_TOLERANCE = 0.20;
 

@@ -1,8 +1,9 @@
 package com.wayledger.engine.protection.device;
 
 /**
- * Maximum break times of general (non-delayed) residual-current devices, IEC 61008-1 / IEC 61009-1 Table 1:
- * 300 ms at IΔn, 150 ms at 2·IΔn, 40 ms at 5·IΔn and above. Below 0.5·IΔn the device must not trip.
+ * Maximum break times of general (non-delayed) residual-current devices, IEC 61008-1 / IEC 61009-1
+ * Table 1: 300 ms at IΔn, 150 ms at 2·IΔn, 40 ms at 5·IΔn and above. Below 0.5·IΔn the device must
+ * not trip.
  */
 public final class ResidualTripTimes {
 
@@ -12,8 +13,9 @@ public final class ResidualTripTimes {
   private ResidualTripTimes() {}
 
   /**
-   * Maximum break time, s, at {@code multipleOfRated}·IΔn; null below IΔn where tripping is not required. Between
-   * the tabulated points the time of the lower point applies (the standard gives only these points).
+   * Maximum break time, s, at {@code multipleOfRated}·IΔn; null below IΔn where tripping is not
+   * required. Between the tabulated points the time of the lower point applies (the standard gives
+   * only these points).
    */
   public static Double maxBreakSeconds(double multipleOfRated) {
     if (multipleOfRated < 1.0) {

@@ -7,15 +7,16 @@ import com.wayledger.engine.protection.result.SourcedValue;
  * Fault-path figures at one board.
  *
  * @param boardId the board
- * @param externalLoopImpedanceOhms Ze at the board, Ω (measured, or origin Ze plus the submains' R1+R2 hot)
- * @param faultCurrentKiloAmps prospective fault current at the board, kA (measured, or from the origin value and
- *     the submains' line resistance cold)
- * @param voltageDropFromOriginPercent the submains' voltage drop from the origin to the board at the boards'
- *     design currents, % of nominal
- * @param upstreamDevice the device that protects the board: its incomer, else the parent's way that feeds it;
- *     null when neither is recorded
- * @param upstreamResidualMilliAmps smallest IΔn of any residual-current device on this board's incomer or on the
- *     incomers and ways above it; null when none is recorded
+ * @param externalLoopImpedanceOhms Ze at the board, Ω (measured, or origin Ze plus the submains'
+ *     R1+R2 hot)
+ * @param faultCurrentKiloAmps prospective fault current at the board, kA (measured, or from the
+ *     origin value and the submains' line resistance cold)
+ * @param voltageDropFromOriginPercent the submains' voltage drop from the origin to the board at
+ *     the boards' design currents, % of nominal
+ * @param upstreamDevice the device that protects the board: its incomer, else the parent's way that
+ *     feeds it; null when neither is recorded
+ * @param upstreamResidualMilliAmps smallest IΔn of any residual-current device on this board's
+ *     incomer or on the incomers and ways above it; null when none is recorded
  */
 public record BoardFaultLevel(
     long boardId,

@@ -19,11 +19,11 @@ import java.util.Set;
 /**
  * Walks a site's board tree from the origin and works out each board's {@link BoardFaultLevel}.
  *
- * <p>Ze(board) = Ze(parent, or origin) + (R1+R2) of the submain at operating temperature. The prospective fault
- * current goes the other way: the source impedance U0/Ipf(parent) plus the submain's line resistance at 20 °C
- * (cold, so the current is the largest possible): twice R1 for a single-phase board (line and neutral), R1 once for
- * a three-phase board (per-phase impedance of a symmetrical fault). A board with no parent and no submain cable
- * is taken to be at the origin.
+ * <p>Ze(board) = Ze(parent, or origin) + (R1+R2) of the submain at operating temperature. The
+ * prospective fault current goes the other way: the source impedance U0/Ipf(parent) plus the
+ * submain's line resistance at 20 °C (cold, so the current is the largest possible): twice R1 for a
+ * single-phase board (line and neutral), R1 once for a three-phase board (per-phase impedance of a
+ * symmetrical fault). A board with no parent and no submain cable is taken to be at the origin.
  */
 public final class FaultLevels {
 
@@ -42,8 +42,9 @@ public final class FaultLevels {
   /**
    * Fault levels of every board of the site.
    *
-   * @param boardCurrentAmps each board's largest phase design current, A, for the submain voltage drop; a board
-   *     absent from the map has its voltage drop (and its sub-boards') reported missing
+   * @param boardCurrentAmps each board's largest phase design current, A, for the submain voltage
+   *     drop; a board absent from the map has its voltage drop (and its sub-boards') reported
+   *     missing
    */
   public static Map<Long, BoardFaultLevel> of(SiteSpec site, Map<Long, Double> boardCurrentAmps) {
     FaultLevels walk = new FaultLevels(site, boardCurrentAmps);
@@ -62,7 +63,12 @@ public final class FaultLevels {
     if (!visiting.add(board.id())) {
       String loop = "a board tree without loops (board " + board.reference() + " feeds itself)";
       return new BoardFaultLevel(
-          board.id(), SourcedValue.missing(loop), SourcedValue.missing(loop), SourcedValue.missing(loop), null, null);
+          board.id(),
+          SourcedValue.missing(loop),
+          SourcedValue.missing(loop),
+          SourcedValue.missing(loop),
+          null,
+          null);
     }
     BoardFaultLevel level = compute(board);
     visiting.remove(board.id());
@@ -75,7 +81,10 @@ public final class FaultLevels {
     double u0 = supply.nominalVoltageToEarthVolts();
     BoardSpec parent = board.parentBoardId() == null ? null : boardsById.get(board.parentBoardId());
     CircuitSpec feedingWay = parent == null ? null : feedingWay(parent, board.id());
-    CableSpec submain = board.submainCable() != null ? board.submainCable() : feedingWay == null ? null : feedingWay.cable();
+    CableSpec submain =
+        board.submainCable() != null
+            ? board.submainCable()
+            : feedingWay == null ? null : feedingWay.cable();
     boolean atOrigin = board.parentBoardId() == null && submain == null;
 
     SourcedValue upstreamZe;
@@ -83,16 +92,23 @@ public final class FaultLevels {
     SourcedValue upstreamDrop;
     Double upstreamResidual;
     if (board.parentBoardId() == null) {
-      upstreamZe = supply.externalLoopImpedanceOhms() == null
-          ? SourcedValue.missing("Ze at the origin")
-          : SourcedValue.calculated(supply.externalLoopImpedanceOhms());
-      upstreamKa = supply.prospectiveFaultCurrentKiloAmps() == null
-          ? SourcedValue.missing("prospective fault current at the origin")
-          : SourcedValue.calculated(supply.prospectiveFaultCurrentKiloAmps());
+      upstreamZe =
+          supply.externalLoopImpedanceOhms() == null
+              ? SourcedValue.missing("Ze at the origin")
+              : SourcedValue.calculated(supply.externalLoopImpedanceOhms());
+      upstreamKa =
+          supply.prospectiveFaultCurrentKiloAmps() == null
+              ? SourcedValue.missing("prospective fault current at the origin")
+              : SourcedValue.calculated(supply.prospectiveFaultCurrentKiloAmps());
       upstreamDrop = SourcedValue.calculated(0.0);
       upstreamResidual = null;
     } else if (parent == null) {
-      String why = "parent board " + board.parentBoardId() + " of " + board.reference() + " (not on the site)";
+      String why =
+          "parent board "
+              + board.parentBoardId()
+              + " of "
+              + board.reference()
+              + " (not on the site)";
       upstreamZe = SourcedValue.missing(why);
       upstreamKa = SourcedValue.missing(why);
       upstreamDrop = SourcedValue.missing(why);
@@ -102,7 +118,10 @@ public final class FaultLevels {
       upstreamZe = p.externalLoopImpedanceOhms();
       upstreamKa = p.faultCurrentKiloAmps();
       upstreamDrop = p.voltageDropFromOriginPercent();
-      upstreamResidual = smaller(p.upstreamResidualMilliAmps(), residualOf(feedingWay == null ? null : feedingWay.device()));
+      upstreamResidual =
+          smaller(
+              p.upstreamResidualMilliAmps(),
+              residualOf(feedingWay == null ? null : feedingWay.device()));
     }
 
     String submainName = "submain to " + board.reference();
@@ -114,8 +133,10 @@ public final class FaultLevels {
     } else if (!upstreamZe.isKnown()) {
       ze = upstreamZe;
     } else {
-      ze = SourcedValue.calculated(
-          prefix(submainName, CableImpedance.r1PlusR2Ohms(submain)).map(r -> upstreamZe.value() + r));
+      ze =
+          SourcedValue.calculated(
+              prefix(submainName, CableImpedance.r1PlusR2Ohms(submain))
+                  .map(r -> upstreamZe.value() + r));
     }
 
     SourcedValue ka;
@@ -126,20 +147,24 @@ public final class FaultLevels {
     } else {
       double sourceOhms = u0 / (upstreamKa.value() * 1000.0);
       double conductors = board.isThreePhase() ? 1.0 : 2.0;
-      ka = SourcedValue.calculated(
-          prefix(submainName, CableImpedance.lineOhmsCold(submain))
-              .map(r1 -> u0 / (sourceOhms + conductors * r1) / 1000.0));
+      ka =
+          SourcedValue.calculated(
+              prefix(submainName, CableImpedance.lineOhmsCold(submain))
+                  .map(r1 -> u0 / (sourceOhms + conductors * r1) / 1000.0));
     }
 
     SourcedValue drop;
     if (atOrigin || !upstreamDrop.isKnown()) {
       drop = upstreamDrop;
     } else {
-      drop = SourcedValue.calculated(prefix(submainName, submainDropPercent(board, submain, u0))
-          .map(d -> upstreamDrop.value() + d));
+      drop =
+          SourcedValue.calculated(
+              prefix(submainName, submainDropPercent(board, submain, u0))
+                  .map(d -> upstreamDrop.value() + d));
     }
 
-    DeviceSpec upstreamDevice = board.incomer() != null ? board.incomer() : feedingWay == null ? null : feedingWay.device();
+    DeviceSpec upstreamDevice =
+        board.incomer() != null ? board.incomer() : feedingWay == null ? null : feedingWay.device();
     Double residual = smaller(upstreamResidual, residualOf(board.incomer()));
     return new BoardFaultLevel(board.id(), ze, ka, drop, upstreamDevice, residual);
   }
@@ -158,7 +183,10 @@ public final class FaultLevels {
     boolean three = board.isThreePhase();
     return VoltageDrop.milliVoltsPerAmpMetre(
             submain.material(), submain.lineCsaSquareMillimetres(), submain.insulation(), three)
-        .map(mv -> VoltageDrop.percent(mv, amps, submain.lengthMetres(), three ? Math.sqrt(3.0) * u0 : u0));
+        .map(
+            mv ->
+                VoltageDrop.percent(
+                    mv, amps, submain.lengthMetres(), three ? Math.sqrt(3.0) * u0 : u0));
   }
 
   private static CircuitSpec feedingWay(BoardSpec parent, long boardId) {

@@ -6,9 +6,9 @@ import com.wayledger.engine.protection.check.RingFinalCheck;
 import com.wayledger.engine.protection.result.SourcedValue;
 
 /**
- * A circuit's earth fault loop impedance Zs = Ze(board) + (R1+R2) at operating temperature, or its measured value.
- * For a ring final circuit whose recorded length is the whole ring, R1+R2 at the mid-point is a quarter of the
- * end-to-end r1+r2 (common practice; see {@link RingFinalCheck}).
+ * A circuit's earth fault loop impedance Zs = Ze(board) + (R1+R2) at operating temperature, or its
+ * measured value. For a ring final circuit whose recorded length is the whole ring, R1+R2 at the
+ * mid-point is a quarter of the end-to-end r1+r2 (common practice; see {@link RingFinalCheck}).
  */
 public final class LoopImpedance {
 
@@ -24,6 +24,7 @@ public final class LoopImpedance {
       return ze;
     }
     double share = circuit.ringFinal() ? RingFinalCheck.MID_POINT_FRACTION : 1.0;
-    return SourcedValue.calculated(CableImpedance.r1PlusR2Ohms(circuit.cable()).map(r -> ze.value() + r * share));
+    return SourcedValue.calculated(
+        CableImpedance.r1PlusR2Ohms(circuit.cable()).map(r -> ze.value() + r * share));
   }
 }

@@ -1,6 +1,9 @@
 package com.wayledger.engine.protection.result;
 
-/** The protection and cable checks the engine runs, with a plain-words title for screens and exports. */
+/**
+ * The protection and cable checks the engine runs, with a plain-words title for screens and
+ * exports.
+ */
 public enum CheckKind {
   WAY_OVERLOAD("Way overloaded (Ib > In)"),
   CABLE_PROTECTION("Cable protected by its device (In ≤ Iz, I2 ≤ 1.45·Iz)"),

@@ -13,7 +13,12 @@ import java.util.List;
  * @param remedy what to do about it; empty for a pass
  */
 public record Finding(
-    CheckKind check, Verdict verdict, String summary, List<Quantity> values, String reference, String remedy) {
+    CheckKind check,
+    Verdict verdict,
+    String summary,
+    List<Quantity> values,
+    String reference,
+    String remedy) {
 
   public Finding {
     values = List.copyOf(values);
@@ -32,10 +37,12 @@ public record Finding(
 
   /** A finding that could not be assessed for a reason other than a missing input (e.g. fuses). */
   public static Finding notAssessedBecause(CheckKind check, String reason, String reference) {
-    return new Finding(check, Verdict.NOT_ASSESSED, "not assessed — " + reason, List.of(), reference, "");
+    return new Finding(
+        check, Verdict.NOT_ASSESSED, "not assessed — " + reason, List.of(), reference, "");
   }
 
-  public static Finding pass(CheckKind check, String summary, List<Quantity> values, String reference) {
+  public static Finding pass(
+      CheckKind check, String summary, List<Quantity> values, String reference) {
     return new Finding(check, Verdict.PASS, summary, values, reference, "");
   }
 
@@ -45,6 +52,10 @@ public record Finding(
 
   /** The value named {@code name}, or NaN when the finding carries none. */
   public double value(String name) {
-    return values.stream().filter(q -> q.name().equals(name)).mapToDouble(Quantity::value).findFirst().orElse(Double.NaN);
+    return values.stream()
+        .filter(q -> q.name().equals(name))
+        .mapToDouble(Quantity::value)
+        .findFirst()
+        .orElse(Double.NaN);
   }
 }

@@ -9,7 +9,10 @@ package com.wayledger.engine.protection.result;
  */
 public record Quantity(String name, double value, String unit) {
 
-  /** "Ib = 9.72 A": three significant figures, at most three decimals, for people to read; {@link #value()} keeps all. */
+  /**
+   * "Ib = 9.72 A": three significant figures, at most three decimals, for people to read; {@link
+   * #value()} keeps all.
+   */
   @Override
   public String toString() {
     return name + " = " + readable(value) + (unit.isEmpty() ? "" : " " + unit);
@@ -20,7 +23,8 @@ public record Quantity(String name, double value, String unit) {
       return String.valueOf(value);
     }
     java.math.BigDecimal rounded =
-        new java.math.BigDecimal(value).round(new java.math.MathContext(3, java.math.RoundingMode.HALF_UP));
+        new java.math.BigDecimal(value)
+            .round(new java.math.MathContext(3, java.math.RoundingMode.HALF_UP));
     if (rounded.scale() > 3) {
       rounded = rounded.setScale(3, java.math.RoundingMode.HALF_UP);
     }

@@ -3,8 +3,8 @@ package com.wayledger.engine.protection.result;
 import java.util.function.Function;
 
 /**
- * A value that is either known or missing for a stated reason, so that a calculation deep in the tree can tell
- * the finding at the top what input it lacked.
+ * A value that is either known or missing for a stated reason, so that a calculation deep in the
+ * tree can tell the finding at the top what input it lacked.
  *
  * @param value the value; null when missing
  * @param missing what is missing or why it cannot be had, e.g. "cable length"; null when known

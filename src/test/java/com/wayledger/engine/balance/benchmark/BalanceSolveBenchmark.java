@@ -15,8 +15,8 @@ import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
 
 /**
- * Per-board solve time of the optimal mode over the 1,000 generated 72-circuit boards, cycling through
- * them; sample mode reports the median (p0.50) and p0.99 across boards.
+ * Per-board solve time of the optimal mode over the 1,000 generated 72-circuit boards, cycling
+ * through them; sample mode reports the median (p0.50) and p0.99 across boards.
  */
 @State(Scope.Thread)
 @BenchmarkMode(Mode.SampleTime)

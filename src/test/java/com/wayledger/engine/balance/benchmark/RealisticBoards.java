@@ -12,9 +12,9 @@ import java.util.Random;
 
 /**
  * Generated benchmark boards (invented demo data, not measurements): 72 single-phase circuits on a
- * 24-way three-phase board, 24 positions per line, all full, in a random current arrangement. Mix: 40 %
- * lighting 1–6 A, 35 % socket circuits 8–20 A, 15 % heaters 8–13 A, 10 % cookers 15–30 A, each demand
- * uniform in its range to 0.01 A.
+ * 24-way three-phase board, 24 positions per line, all full, in a random current arrangement. Mix:
+ * 40 % lighting 1–6 A, 35 % socket circuits 8–20 A, 15 % heaters 8–13 A, 10 % cookers 15–30 A, each
+ * demand uniform in its range to 0.01 A.
  */
 public final class RealisticBoards {
 
@@ -67,7 +67,9 @@ public final class RealisticBoards {
       }
       double amps = Math.round((low + random.nextDouble() * (high - low)) * 100) / 100.0;
       Phase phase = slots.get(i);
-      items.add(new BalanceItem(i + 1, kind + " " + (i + 1), amps, phase, ++nextWay[phase.ordinal()], true));
+      items.add(
+          new BalanceItem(
+              i + 1, kind + " " + (i + 1), amps, phase, ++nextWay[phase.ordinal()], true));
     }
     Map<Phase, Integer> positions = new EnumMap<>(Phase.class);
     Map<Phase, List<Integer>> free = new EnumMap<>(Phase.class);
