@@ -23,7 +23,12 @@ public final class CsvWriter {
 
   private CsvWriter() {}
 
-  public static void write(ExportData data, BoardEntry board, Writer out) throws IOException {
+  /**
+   * Writes the schedule, then a blank line and the caution. The importer stops reading our own
+   * export at its first blank line, so the caution never becomes a row.
+   */
+  public static void write(ExportData data, BoardEntry board, String caution, Writer out)
+      throws IOException {
     BoardFigures figures = new BoardFigures(board, data.demand(), data.findings());
     List<String> header = new ArrayList<>();
     for (ScheduleColumn column : ScheduleColumn.values()) {
@@ -45,6 +50,8 @@ public final class CsvWriter {
         }
       }
     }
+    printer.println();
+    printer.printRecord("Caution: " + caution);
     printer.flush();
   }
 

@@ -59,7 +59,7 @@ public class ExportController {
         "text/csv;charset=UTF-8",
         fileName(data.siteName() + "-" + data.boards().get(0).reference()) + ".csv");
     Writer out = new OutputStreamWriter(response.getOutputStream(), StandardCharsets.UTF_8);
-    CsvWriter.write(data, data.boards().get(0), out);
+    CsvWriter.write(data, data.boards().get(0), caution(), out);
     out.flush();
   }
 

@@ -50,7 +50,7 @@ class ImportReadingTests {
 
   static byte[] csv(ExportData data) throws IOException {
     StringWriter out = new StringWriter();
-    CsvWriter.write(data, data.boards().get(0), out);
+    CsvWriter.write(data, data.boards().get(0), ExchangeFixtures.CAUTION, out);
     return out.toString().getBytes(StandardCharsets.UTF_8);
   }
 
@@ -97,6 +97,14 @@ class ImportReadingTests {
             e ->
                 e.circuit().description().equals("Cooker")
                     && Boolean.FALSE.equals(e.circuit().ringFinal()));
+  }
+
+  @Test
+  void ourCsvEndsWithTheCautionAfterABlankLine() throws IOException {
+    String[] lines =
+        new String(csv(ExchangeFixtures.shopExport()), StandardCharsets.UTF_8).split("\r?\n");
+    assertThat(lines[lines.length - 2]).as("blank line before the caution").isEmpty();
+    assertThat(lines[lines.length - 1]).contains("Caution: " + ExchangeFixtures.CAUTION);
   }
 
   @Test
