@@ -58,76 +58,6 @@ public record CircuitForm(
     @Positive @DecimalMax("63000") Double deviceInstantaneousSettingAmps) {
 
   /**
-   * A circuit with no moulded-case breaker settings: the argument list from before Ir and Ii were
-   * recorded.
-   */
-  public CircuitForm(
-      Integer wayNumber,
-      PhasePosition position,
-      String description,
-      WayStatus status,
-      Boolean lockedForBalancing,
-      DeviceKind deviceKind,
-      TripCurve deviceCurve,
-      Double deviceRatingAmps,
-      Integer devicePoles,
-      Double deviceBreakingCapacityKiloAmps,
-      Double deviceResidualMilliAmps,
-      RcdType deviceRcdType,
-      Double cableLineCsa,
-      Double cableCpcCsa,
-      ConductorMaterial cableMaterial,
-      Insulation cableInsulation,
-      Double cableLengthMetres,
-      InstallationMethod cableInstallationMethod,
-      Double cableAmbientCelsius,
-      Integer cableGroupedCircuits,
-      Integer cableThermalInsulationMm,
-      Double measuredLoopImpedanceOhms,
-      String loadDescription,
-      LoadCategory loadCategory,
-      Integer loadQuantity,
-      Double loadRatingValue,
-      RatingUnit loadRatingUnit,
-      Double loadPowerFactor,
-      Long version,
-      Boolean ringFinal) {
-    this(
-        wayNumber,
-        position,
-        description,
-        status,
-        lockedForBalancing,
-        deviceKind,
-        deviceCurve,
-        deviceRatingAmps,
-        devicePoles,
-        deviceBreakingCapacityKiloAmps,
-        deviceResidualMilliAmps,
-        deviceRcdType,
-        cableLineCsa,
-        cableCpcCsa,
-        cableMaterial,
-        cableInsulation,
-        cableLengthMetres,
-        cableInstallationMethod,
-        cableAmbientCelsius,
-        cableGroupedCircuits,
-        cableThermalInsulationMm,
-        measuredLoopImpedanceOhms,
-        loadDescription,
-        loadCategory,
-        loadQuantity,
-        loadRatingValue,
-        loadRatingUnit,
-        loadPowerFactor,
-        version,
-        ringFinal,
-        null,
-        null);
-  }
-
-  /**
    * A radial circuit (not a ring final circuit): the argument list from before rings were recorded.
    */
   public CircuitForm(
@@ -190,11 +120,115 @@ public record CircuitForm(
         loadRatingUnit,
         loadPowerFactor,
         version,
-        false);
+        false,
+        null,
+        null);
   }
 
   /** The same row marked as a ring final circuit or not. */
   public CircuitForm withRingFinal(boolean ring) {
+    return copy(
+        cableThermalInsulationMm, ring, deviceOverloadSettingAmps, deviceInstantaneousSettingAmps);
+  }
+
+  /** The same row with moulded-case breaker settings Ir and Ii (A; null when not recorded). */
+  public CircuitForm withMccbSettings(Double overloadSettingAmps, Double instantaneousSettingAmps) {
+    return copy(cableThermalInsulationMm, ringFinal, overloadSettingAmps, instantaneousSettingAmps);
+  }
+
+  /** The same row with this length of its cable surrounded by thermal insulation, mm. */
+  public CircuitForm withThermalInsulationMm(Integer millimetres) {
+    return copy(millimetres, ringFinal, deviceOverloadSettingAmps, deviceInstantaneousSettingAmps);
+  }
+
+  /**
+   * The circuit put in use under a new description. A replacement device, when given, also replaces
+   * the moulded-case breaker settings (which belonged to the old device); without one the device is
+   * kept whole.
+   */
+  public CircuitForm inUseAs(String newDescription, com.wayledger.engine.DeviceSpec replacement) {
+    if (replacement == null) {
+      return copy(
+          newDescription,
+          WayStatus.IN_USE,
+          deviceDetails(),
+          deviceOverloadSettingAmps,
+          deviceInstantaneousSettingAmps,
+          null,
+          null,
+          null,
+          null,
+          null,
+          null);
+    }
+    return copy(
+        newDescription,
+        WayStatus.IN_USE,
+        DeviceDetails.fromSpec(replacement),
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null);
+  }
+
+  private CircuitForm copy(
+      String newDescription,
+      WayStatus newStatus,
+      DeviceDetails device,
+      Double overloadSettingAmps,
+      Double instantaneousSettingAmps,
+      String firstLoadDescription,
+      LoadCategory firstLoadCategory,
+      Integer firstLoadQuantity,
+      Double firstLoadRatingValue,
+      RatingUnit firstLoadRatingUnit,
+      Double firstLoadPowerFactor) {
+    boolean hasDevice = device != null;
+    return new CircuitForm(
+        wayNumber,
+        position,
+        newDescription,
+        newStatus,
+        lockedForBalancing,
+        hasDevice ? device.getKind() : null,
+        hasDevice ? device.getCurve() : null,
+        hasDevice ? device.getRatingAmps() : null,
+        hasDevice ? device.getPoles() : null,
+        hasDevice ? device.getBreakingCapacityKiloAmps() : null,
+        hasDevice ? device.getResidualMilliAmps() : null,
+        hasDevice ? device.getRcdType() : null,
+        cableLineCsa,
+        cableCpcCsa,
+        cableMaterial,
+        cableInsulation,
+        cableLengthMetres,
+        cableInstallationMethod,
+        cableAmbientCelsius,
+        cableGroupedCircuits,
+        cableThermalInsulationMm,
+        measuredLoopImpedanceOhms,
+        firstLoadDescription,
+        firstLoadCategory,
+        firstLoadQuantity,
+        firstLoadRatingValue,
+        firstLoadRatingUnit,
+        firstLoadPowerFactor,
+        version,
+        ringFinal,
+        overloadSettingAmps,
+        instantaneousSettingAmps);
+  }
+
+  /** The one place the withers copy the whole row, with the fields they may change. */
+  private CircuitForm copy(
+      Integer thermalInsulationMm,
+      Boolean ring,
+      Double overloadSettingAmps,
+      Double instantaneousSettingAmps) {
     return new CircuitForm(
         wayNumber,
         position,
@@ -216,7 +250,7 @@ public record CircuitForm(
         cableInstallationMethod,
         cableAmbientCelsius,
         cableGroupedCircuits,
-        cableThermalInsulationMm,
+        thermalInsulationMm,
         measuredLoopImpedanceOhms,
         loadDescription,
         loadCategory,
@@ -226,43 +260,6 @@ public record CircuitForm(
         loadPowerFactor,
         version,
         ring,
-        deviceOverloadSettingAmps,
-        deviceInstantaneousSettingAmps);
-  }
-
-  /** The same row with moulded-case breaker settings Ir and Ii (A; null when not recorded). */
-  public CircuitForm withMccbSettings(Double overloadSettingAmps, Double instantaneousSettingAmps) {
-    return new CircuitForm(
-        wayNumber,
-        position,
-        description,
-        status,
-        lockedForBalancing,
-        deviceKind,
-        deviceCurve,
-        deviceRatingAmps,
-        devicePoles,
-        deviceBreakingCapacityKiloAmps,
-        deviceResidualMilliAmps,
-        deviceRcdType,
-        cableLineCsa,
-        cableCpcCsa,
-        cableMaterial,
-        cableInsulation,
-        cableLengthMetres,
-        cableInstallationMethod,
-        cableAmbientCelsius,
-        cableGroupedCircuits,
-        cableThermalInsulationMm,
-        measuredLoopImpedanceOhms,
-        loadDescription,
-        loadCategory,
-        loadQuantity,
-        loadRatingValue,
-        loadRatingUnit,
-        loadPowerFactor,
-        version,
-        ringFinal,
         overloadSettingAmps,
         instantaneousSettingAmps);
   }

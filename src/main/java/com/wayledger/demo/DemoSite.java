@@ -126,7 +126,9 @@ class DemoSite implements ApplicationRunner {
                     70.0,
                     35.0,
                     6.0,
-                    InstallationMethod.C)
+                    InstallationMethod.C,
+                    1.0,
+                    null)
                 .withIncomerMccbSettings(180.0, 1600.0));
     Circuit feedBakery =
         add(
@@ -240,51 +242,50 @@ class DemoSite implements ApplicationRunner {
                     35.0,
                     16.0,
                     18.0,
-                    0.9)
+                    0.9,
+                    null)
                 .withIncomerMccbSettings(125.0, 1000.0));
     bakeryCircuits(bakery);
 
     Board flat1 =
         boards.create(
             siteId,
-            withMethod(
-                    subBoard(
-                        "FLAT-1",
-                        "Flat 1 hallway cupboard",
-                        1,
-                        10,
-                        100.0,
-                        DeviceKind.MCCB,
-                        null,
-                        100.0,
-                        main,
-                        feedFlat1,
-                        25.0,
-                        16.0,
-                        22.0,
-                        0.8),
+            subBoard(
+                    "FLAT-1",
+                    "Flat 1 hallway cupboard",
+                    1,
+                    10,
+                    100.0,
+                    DeviceKind.MCCB,
+                    null,
+                    100.0,
+                    main,
+                    feedFlat1,
+                    25.0,
+                    16.0,
+                    22.0,
+                    0.8,
                     "uk-household")
                 .withIncomerMccbSettings(100.0, 800.0));
     flatCircuits(flat1, 1);
     Board flat2 =
         boards.create(
             siteId,
-            withMethod(
-                    subBoard(
-                        "FLAT-2",
-                        "Flat 2 hallway cupboard",
-                        1,
-                        10,
-                        100.0,
-                        DeviceKind.MCCB,
-                        null,
-                        100.0,
-                        main,
-                        feedFlat2,
-                        25.0,
-                        16.0,
-                        26.0,
-                        0.8),
+            subBoard(
+                    "FLAT-2",
+                    "Flat 2 hallway cupboard",
+                    1,
+                    10,
+                    100.0,
+                    DeviceKind.MCCB,
+                    null,
+                    100.0,
+                    main,
+                    feedFlat2,
+                    25.0,
+                    16.0,
+                    26.0,
+                    0.8,
                     "uk-household")
                 .withIncomerMccbSettings(100.0, 800.0));
     flatCircuits(flat2, 2);
@@ -306,7 +307,8 @@ class DemoSite implements ApplicationRunner {
                 16.0,
                 16.0,
                 14.0,
-                1.0));
+                1.0,
+                null));
     landlordCircuits(landlord);
   }
 
@@ -739,7 +741,7 @@ class DemoSite implements ApplicationRunner {
             second ? InstallationMethod.C : InstallationMethod.A1);
     add(
         flat,
-        second ? kitchen : withThermalInsulation(kitchen, 400),
+        second ? kitchen : kitchen.withThermalInsulationMm(400),
         load("Kitchen appliances", LoadCategory.SOCKET_OUTLETS, 1, 3000, RatingUnit.W, 1.0));
     add(
         flat,
@@ -929,7 +931,9 @@ class DemoSite implements ApplicationRunner {
       Double csa,
       Double cpc,
       Double lengthMetres,
-      InstallationMethod method) {
+      InstallationMethod method,
+      double coincidence,
+      String methodKey) {
     return new BoardForm(
         reference,
         location,
@@ -955,8 +959,8 @@ class DemoSite implements ApplicationRunner {
         1,
         0,
         BoardForm.DEFAULT_UNBALANCE_LIMIT_PERCENT,
-        1.0,
-        null,
+        coincidence,
+        methodKey,
         null,
         null,
         null);
@@ -976,87 +980,26 @@ class DemoSite implements ApplicationRunner {
       Double csa,
       Double cpc,
       Double lengthMetres,
-      double coincidence) {
-    BoardForm base =
-        board(
-            reference,
-            location,
-            phases,
-            ways,
-            busbar,
-            incomerKind,
-            incomerCurve,
-            incomerAmps,
-            incomerKind == DeviceKind.RCD ? null : 10.0,
-            parent.getId(),
-            feed.getId(),
-            csa,
-            cpc,
-            lengthMetres,
-            InstallationMethod.C);
-    return new BoardForm(
-        base.reference(),
-        base.location(),
-        base.phases(),
-        base.wayCount(),
-        base.busbarRatingAmps(),
-        base.incomerKind(),
-        base.incomerCurve(),
-        base.incomerRatingAmps(),
-        base.incomerPoles(),
-        base.incomerBreakingCapacityKiloAmps(),
-        base.incomerResidualMilliAmps(),
-        base.incomerRcdType(),
-        base.parentBoardId(),
-        base.fedFromCircuitId(),
-        base.submainLineCsa(),
-        base.submainCpcCsa(),
-        base.submainMaterial(),
-        base.submainInsulation(),
-        base.submainLengthMetres(),
-        base.submainInstallationMethod(),
-        base.submainAmbientCelsius(),
-        base.submainGroupedCircuits(),
-        base.submainThermalInsulationMm(),
-        base.unbalanceLimitPercent(),
+      double coincidence,
+      String methodKey) {
+    return board(
+        reference,
+        location,
+        phases,
+        ways,
+        busbar,
+        incomerKind,
+        incomerCurve,
+        incomerAmps,
+        incomerKind == DeviceKind.RCD ? null : 10.0,
+        parent.getId(),
+        feed.getId(),
+        csa,
+        cpc,
+        lengthMetres,
+        InstallationMethod.C,
         coincidence,
-        null,
-        null,
-        null,
-        null);
-  }
-
-  private static BoardForm withMethod(BoardForm form, String methodKey) {
-    return new BoardForm(
-        form.reference(),
-        form.location(),
-        form.phases(),
-        form.wayCount(),
-        form.busbarRatingAmps(),
-        form.incomerKind(),
-        form.incomerCurve(),
-        form.incomerRatingAmps(),
-        form.incomerPoles(),
-        form.incomerBreakingCapacityKiloAmps(),
-        form.incomerResidualMilliAmps(),
-        form.incomerRcdType(),
-        form.parentBoardId(),
-        form.fedFromCircuitId(),
-        form.submainLineCsa(),
-        form.submainCpcCsa(),
-        form.submainMaterial(),
-        form.submainInsulation(),
-        form.submainLengthMetres(),
-        form.submainInstallationMethod(),
-        form.submainAmbientCelsius(),
-        form.submainGroupedCircuits(),
-        form.submainThermalInsulationMm(),
-        form.unbalanceLimitPercent(),
-        form.coincidenceFactor(),
-        methodKey,
-        null,
-        null,
-        null);
+        methodKey);
   }
 
   private static CircuitForm way(
@@ -1102,40 +1045,6 @@ class DemoSite implements ApplicationRunner {
         null,
         null,
         null);
-  }
-
-  private static CircuitForm withThermalInsulation(CircuitForm form, int millimetres) {
-    return new CircuitForm(
-        form.wayNumber(),
-        form.position(),
-        form.description(),
-        form.status(),
-        form.lockedForBalancing(),
-        form.deviceKind(),
-        form.deviceCurve(),
-        form.deviceRatingAmps(),
-        form.devicePoles(),
-        form.deviceBreakingCapacityKiloAmps(),
-        form.deviceResidualMilliAmps(),
-        form.deviceRcdType(),
-        form.cableLineCsa(),
-        form.cableCpcCsa(),
-        form.cableMaterial(),
-        form.cableInsulation(),
-        form.cableLengthMetres(),
-        form.cableInstallationMethod(),
-        form.cableAmbientCelsius(),
-        form.cableGroupedCircuits(),
-        millimetres,
-        form.measuredLoopImpedanceOhms(),
-        null,
-        null,
-        null,
-        null,
-        null,
-        null,
-        null,
-        form.ringFinal());
   }
 
   private static CircuitForm spare(

@@ -7,7 +7,6 @@ import com.wayledger.board.CircuitForm;
 import com.wayledger.board.LoadForm;
 import com.wayledger.board.ScheduleService;
 import com.wayledger.engine.DeviceSpec;
-import com.wayledger.engine.WayStatus;
 import com.wayledger.engine.capacity.CandidateKind;
 import com.wayledger.engine.capacity.CandidateOutcome;
 import com.wayledger.engine.capacity.CapacityAdvisor;
@@ -75,15 +74,13 @@ public class CapacityService {
       Circuit existing = schedule.circuit(candidate.circuitId());
       CircuitForm now = CircuitForm.of(existing);
       DeviceSpec device = candidate.kind() == CandidateKind.SPARE_WAY ? null : candidate.device();
-      schedule.updateCircuit(existing.getId(), inUse(now, load.description(), device), reason);
+      schedule.updateCircuit(existing.getId(), now.inUseAs(load.description(), device), reason);
       circuitId = existing.getId();
     } else {
       CircuitForm blank = CircuitForm.blankAt(candidate.wayNumber(), candidate.position());
       Circuit added =
           schedule.addCircuit(
-              boardId,
-              inUse(withoutFirstLoad(blank), load.description(), candidate.device()),
-              reason);
+              boardId, blank.inUseAs(load.description(), candidate.device()), reason);
       circuitId = added.getId();
     }
     schedule.addLoad(circuitId, loadForm, reason);
@@ -116,75 +113,5 @@ public class CapacityService {
         spec.startUpSurgeMultiple(),
         spec.startUpSurgeMillis(),
         false);
-  }
-
-  private static CircuitForm withoutFirstLoad(CircuitForm f) {
-    return new CircuitForm(
-        f.wayNumber(),
-        f.position(),
-        f.description(),
-        f.status(),
-        f.lockedForBalancing(),
-        f.deviceKind(),
-        f.deviceCurve(),
-        f.deviceRatingAmps(),
-        f.devicePoles(),
-        f.deviceBreakingCapacityKiloAmps(),
-        f.deviceResidualMilliAmps(),
-        f.deviceRcdType(),
-        f.cableLineCsa(),
-        f.cableCpcCsa(),
-        f.cableMaterial(),
-        f.cableInsulation(),
-        f.cableLengthMetres(),
-        f.cableInstallationMethod(),
-        f.cableAmbientCelsius(),
-        f.cableGroupedCircuits(),
-        f.cableThermalInsulationMm(),
-        f.measuredLoopImpedanceOhms(),
-        null,
-        null,
-        null,
-        null,
-        null,
-        null,
-        f.version(),
-        f.ringFinal());
-  }
-
-  /** The form put in use for the load; {@code device}, when given, replaces the form's device. */
-  private static CircuitForm inUse(CircuitForm f, String description, DeviceSpec device) {
-    boolean newDevice = device != null;
-    return new CircuitForm(
-        f.wayNumber(),
-        f.position(),
-        description,
-        WayStatus.IN_USE,
-        f.lockedForBalancing(),
-        newDevice ? device.kind() : f.deviceKind(),
-        newDevice ? device.curve() : f.deviceCurve(),
-        newDevice ? device.ratedCurrentAmps() : f.deviceRatingAmps(),
-        newDevice ? Integer.valueOf(device.poles()) : f.devicePoles(),
-        newDevice ? device.breakingCapacityKiloAmps() : f.deviceBreakingCapacityKiloAmps(),
-        newDevice ? device.residualCurrentMilliAmps() : f.deviceResidualMilliAmps(),
-        newDevice ? device.rcdType() : f.deviceRcdType(),
-        f.cableLineCsa(),
-        f.cableCpcCsa(),
-        f.cableMaterial(),
-        f.cableInsulation(),
-        f.cableLengthMetres(),
-        f.cableInstallationMethod(),
-        f.cableAmbientCelsius(),
-        f.cableGroupedCircuits(),
-        f.cableThermalInsulationMm(),
-        f.measuredLoopImpedanceOhms(),
-        null,
-        null,
-        null,
-        null,
-        null,
-        null,
-        f.version(),
-        f.ringFinal());
   }
 }
