@@ -10,7 +10,7 @@ class SupplySpecTests {
   @Test
   void lineVoltageOfA230VoltSupplyIsNominally400Volts() {
     SupplySpec supply = new SupplySpec(EarthingSystem.TN_C_S, 230.0, 3, 50.0, null, null, null);
-    // IEC 60038 Table 1: 230/400 V three-phase systems; √3 × 230 = 398.4 V, quoted as 400 V.
+    // IEC 60038 Table 1 (from memory): 230/400 V systems; √3 × 230 = 398.4 V, quoted as 400 V.
     assertThat(supply.lineVoltageVolts()).as("UL = √3·U0").isCloseTo(398.37, within(0.01));
   }
 
