@@ -33,6 +33,13 @@ public final class ContinuityLimits {
   /** Readings above this multiple of the expected value fail (Wayledger's own threshold). */
   public static final double FAR_ABOVE_RATIO = 1.5;
 
+  /**
+   * Readings below this are too small to tell cable sizes apart (instrument resolution, leads and
+   * terminations weigh too much): no record-mismatch finding is raised from them. Wayledger's own
+   * threshold.
+   */
+  public static final double MISMATCH_MIN_OHMS = 0.25;
+
   /** A common pair matches a reading when within this fraction of it. */
   static final double PAIR_MATCH_FRACTION = 0.15;
 
@@ -197,7 +204,7 @@ public final class ContinuityLimits {
       double recordedLineCsa,
       double recordedProtectiveCsa) {
     List<GradedValue> out = new ArrayList<>();
-    if (lengthMetres <= 0) {
+    if (lengthMetres <= 0 || readingOhms < MISMATCH_MIN_OHMS) {
       return out;
     }
     double perKm = readingOhms / (lengthMetres / 1000.0) / temperatureFactor(testCelsius);
@@ -224,7 +231,8 @@ public final class ContinuityLimits {
                   + size(recordedLineCsa)
                   + "/"
                   + size(recordedProtectiveCsa)
-                  + " mm²: check the cable and correct the schedule",
+                  + " mm²: a smaller cable than recorded or a poor connection — find out which"
+                  + " before correcting the schedule",
               SOURCE));
     }
     return out;

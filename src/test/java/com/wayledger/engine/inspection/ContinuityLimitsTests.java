@@ -69,6 +69,13 @@ class ContinuityLimitsTests {
   }
 
   @Test
+  void readingsTooSmallToTellSizesApartRaiseNoMismatch() {
+    // 10/4 mm² over 11 m is 0.07 Ω (IEC 60228 from memory); 0.09 Ω would match 4/4 mm², but below
+    // 0.25 Ω the leads and terminations weigh too much (Wayledger's own threshold)
+    assertThat(ContinuityLimits.recordMismatch(0.09, 11, 20, 10, 4)).isEmpty();
+  }
+
+  @Test
   void readingThatMatchesTheRecordRaisesNoMismatch() {
     assertThat(ContinuityLimits.recordMismatch(0.39, 20, 20, 2.5, 1.5)).isEmpty();
   }
