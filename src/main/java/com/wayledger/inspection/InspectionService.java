@@ -89,7 +89,7 @@ public class InspectionService {
             "",
             rows,
             List.of());
-    return sheet(board, form, new LinkedHashMap<>(), false);
+    return sheet(board, form, new LinkedHashMap<>(), false, false);
   }
 
   /** A grid pre-filled from an earlier record, to correct it with a new one. */
@@ -127,13 +127,13 @@ public class InspectionService {
             "",
             rows,
             observations);
-    return sheet(board, form, new LinkedHashMap<>(), true);
+    return sheet(board, form, new LinkedHashMap<>(), true, false);
   }
 
   /** The grid graded as typed, with observations proposed from failing values and findings. */
   @Transactional(readOnly = true)
   public InspectionSheet grade(long boardId, InspectionForm form) {
-    return sheet(boards.get(boardId), form, new LinkedHashMap<>(), true);
+    return sheet(boards.get(boardId), form, new LinkedHashMap<>(), true, true);
   }
 
   /**
@@ -142,9 +142,22 @@ public class InspectionService {
    */
   @Transactional
   public Recorded record(long boardId, InspectionForm form) {
+    return record(boardId, form, true);
+  }
+
+  /**
+   * Records with exactly the observations given (no proposals merged in): the API's way, where the
+   * client graded first and sends the observations it keeps.
+   */
+  @Transactional
+  public Recorded recordAsGiven(long boardId, InspectionForm form) {
+    return record(boardId, form, false);
+  }
+
+  private Recorded record(long boardId, InspectionForm form, boolean mergeProposals) {
     Board board = boards.get(boardId);
     Map<String, String> errors = new LinkedHashMap<>();
-    InspectionSheet sheet = sheet(board, form, errors, true);
+    InspectionSheet sheet = sheet(board, form, errors, mergeProposals, true);
     if (!Objects.equals(sheet.outcome().name(), form.confirmedOutcome())) {
       errors.put("confirmedOutcome", "inspection.error.confirm");
     }
@@ -257,8 +270,16 @@ public class InspectionService {
 
   // --- building the sheet ---
 
+  /**
+   * @param withProposals merge proposed observations into the form's
+   * @param submitted the inspector submitted the grid (so an empty grid is an error)
+   */
   private InspectionSheet sheet(
-      Board board, InspectionForm form, Map<String, String> errors, boolean withProposals) {
+      Board board,
+      InspectionForm form,
+      Map<String, String> errors,
+      boolean withProposals,
+      boolean submitted) {
     Site site = board.getSite();
     Readings readings = new Readings(errors);
     Double celsius = readings.number("testCelsius", form.testCelsius());
@@ -348,7 +369,7 @@ public class InspectionService {
     boolean anything =
         rows.stream().anyMatch(r -> !r.entry().equals(ResultEntry.blank(r.circuitId())))
             || !boardResults.equals(BoardResults.NONE);
-    if (!anything && withProposals) {
+    if (!anything && submitted) {
       errors.put("rows", "inspection.error.nothingEntered");
     }
     List<ObservationEntry> shown = new ArrayList<>(observations);
