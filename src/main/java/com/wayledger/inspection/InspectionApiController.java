@@ -64,7 +64,7 @@ public class InspectionApiController {
       Double rcdRatedMillis,
       Double rcdFiveTimesMillis,
       Boolean rcdButtonWorks,
-      boolean rcdDelayed) {}
+      Boolean rcdDelayed) {}
 
   /** An observation to keep: circuitId null for the board. */
   public record ObservationIn(Long circuitId, Urgency urgency, String text) {}
@@ -203,7 +203,7 @@ public class InspectionApiController {
                       r.rcdRatedMillis(),
                       r.rcdFiveTimesMillis(),
                       r.rcdButtonWorks(),
-                      r.rcdDelayed())));
+                      Boolean.TRUE.equals(r.rcdDelayed()))));
         }
       }
     }
