@@ -26,9 +26,13 @@ public class ExportController {
   private final ExportReader reader;
   private final MessageSource messages;
 
-  public ExportController(ExportReader reader, MessageSource messages) {
+  private final java.util.List<WorkbookSheet> extraSheets;
+
+  public ExportController(
+      ExportReader reader, MessageSource messages, java.util.List<WorkbookSheet> extraSheets) {
     this.reader = reader;
     this.messages = messages;
+    this.extraSheets = extraSheets;
   }
 
   @GetMapping("/boards/{boardId}/export.xlsx")
@@ -39,7 +43,7 @@ public class ExportController {
         response,
         XLSX,
         fileName(data.siteName() + "-" + data.boards().get(0).reference()) + ".xlsx");
-    new WorkbookWriter(caution()).write(data, false, response.getOutputStream());
+    new WorkbookWriter(caution()).write(data, false, extraSheets, response.getOutputStream());
   }
 
   @GetMapping("/sites/{siteId}/export.xlsx")
@@ -47,7 +51,7 @@ public class ExportController {
       throws IOException {
     ExportData data = reader.site(siteId);
     attachment(response, XLSX, fileName(data.siteName()) + ".xlsx");
-    new WorkbookWriter(caution()).write(data, true, response.getOutputStream());
+    new WorkbookWriter(caution()).write(data, true, extraSheets, response.getOutputStream());
   }
 
   @GetMapping("/boards/{boardId}/export.csv")

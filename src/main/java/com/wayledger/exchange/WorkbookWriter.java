@@ -82,6 +82,13 @@ public final class WorkbookWriter {
    * @param out where to write; not closed
    */
   public void write(ExportData data, boolean withSummary, OutputStream out) throws IOException {
+    write(data, withSummary, List.of(), out);
+  }
+
+  /** Writes the workbook with other features' sheets appended (see {@link WorkbookSheet}). */
+  public void write(
+      ExportData data, boolean withSummary, List<WorkbookSheet> extraSheets, OutputStream out)
+      throws IOException {
     SXSSFWorkbook workbook = new FastWorkbook(WINDOW_ROWS);
     try {
       WorkbookStyles styles = new WorkbookStyles(workbook);
@@ -107,6 +114,11 @@ public final class WorkbookWriter {
         writeFindings(workbook.createSheet(FINDINGS_SHEET), findingRows, data, styles);
       }
       writeMethods(workbook.createSheet(METHODS_SHEET), data, styles);
+      for (WorkbookSheet extra : extraSheets) {
+        if (extra.appliesTo(data)) {
+          extra.write(workbook.createSheet(uniqueName(extra.name(), names)), data, caution);
+        }
+      }
       workbook.setForceFormulaRecalculation(true);
       workbook.write(out);
     } finally {

@@ -201,6 +201,26 @@ class InspectionPagesIntegrationTests {
         .andExpect(content().string(containsString("RCD at IΔn 26 ms → 340 ms")));
   }
 
+  @Test
+  void theBoardWorkbookCarriesTheLatestResultsGradedWithTheCaution() throws Exception {
+    byte[] xlsx =
+        mvc.perform(get("/boards/{b}/export.xlsx", flat1()).with(viewer()))
+            .andExpect(status().isOk())
+            .andReturn()
+            .getResponse()
+            .getContentAsByteArray();
+    try (var workbook =
+        new org.apache.poi.xssf.usermodel.XSSFWorkbook(new java.io.ByteArrayInputStream(xlsx))) {
+      var sheet = workbook.getSheet("Test results");
+      assertThat(sheet).as("results sheet").isNotNull();
+      StringBuilder text = new StringBuilder();
+      sheet.forEach(row -> row.forEach(cell -> text.append(cell.toString()).append('|')));
+      assertThat(text.toString())
+          .contains(
+              "Caution: ", "2025-06-03", "RCD at IΔn 340 ms slower than 300 ms", "UNSATISFACTORY");
+    }
+  }
+
   // --- helpers ---
 
   private MockHttpServletRequestBuilder grid(String action, Map<String, String> values) {
