@@ -23,7 +23,7 @@
     var ok = input.value.trim() === "" || READING.test(input.value);
     input.classList.toggle("invalid", !ok);
     input.setAttribute("aria-invalid", ok ? "false" : "true");
-    input.title = ok ? "" : "Enter a number, such as 0.45 or >299";
+    input.title = ok ? "" : grid.getAttribute("data-invalid-message");
   }
 
   function moveDown(from) {

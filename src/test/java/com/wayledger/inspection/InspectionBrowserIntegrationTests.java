@@ -156,6 +156,16 @@ class InspectionBrowserIntegrationTests {
         .as("Enter moved to the next row's R1+R2")
         .isEqualTo(rows.get(1).findElement(By.cssSelector("[data-col=r1r2]")));
 
+    // checked as typed: a typo is marked at once, and cleared when corrected
+    first.click();
+    first.sendKeys("0,3x");
+    assertThat(first.getAttribute("aria-invalid"))
+        .as("'0,3x' marked while typing")
+        .isEqualTo("true");
+    first.sendKeys(Keys.BACK_SPACE);
+    assertThat(first.getAttribute("aria-invalid")).as("'0,3' accepted").isEqualTo("false");
+    first.clear();
+
     // the whole board typed from the keyboard: values and Tab, row after row
     first.click();
     for (WebElement row : rows) {
