@@ -17,11 +17,11 @@ import org.springframework.stereotype.Service;
 @Service
 public class DiagramPicture {
 
-  /** Largest picture in pixels (width × height): about 48 MB of memory while rendering. */
-  static final double MAX_PIXELS = 12_000_000;
+  /** Largest picture in pixels (width × height): about 32 MB of memory while rendering. */
+  static final double MAX_PIXELS = 8_000_000;
 
-  /** Scale of a small diagram: 1.5 pixels per SVG unit, for sharp text when printed. */
-  static final double PREFERRED_SCALE = 1.5;
+  /** Scale of a small diagram: 1.25 pixels per SVG unit, for sharp text when printed. */
+  static final double PREFERRED_SCALE = 1.25;
 
   private final DiagramReader reader;
   private final MessageSource messages;

@@ -18,8 +18,8 @@ final class DiagramSheet {
 
   static final String NAME = "Diagram";
 
-  /** Pixels of the picture per pixel shown (the picture is rendered at 1.5 × for print). */
-  private static final double SHRINK = 1.5;
+  /** Pixels of the picture per pixel shown (the picture is rendered at 1.25 × for print). */
+  private static final double SHRINK = 1.25;
 
   /** Default column width and row height in pixels at 100 % zoom. */
   private static final double COLUMN_PIXELS = 64;

@@ -107,7 +107,7 @@ class DiagramSvgTests {
 
   @Test
   void pictureIsAPngOfTheDrawingsProportions() throws Exception {
-    SiteDiagram diagram = DiagramFixtures.generated(12, 3, null);
+    SiteDiagram diagram = DiagramFixtures.generated(4, 3, null);
     String svg = DiagramFixtures.svg(diagram);
     byte[] png = DiagramPicture.png(svg);
     var image = ImageIO.read(new ByteArrayInputStream(png));
