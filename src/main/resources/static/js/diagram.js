@@ -110,8 +110,11 @@
   frame.addEventListener("pointerup", stop);
   frame.addEventListener("pointercancel", stop);
 
-  // A link to one board (#sld-board-N, as after "show ways") scrolls that board into view.
-  var target = location.hash && document.getElementById(location.hash.substring(1));
+  // A link to one board (#sld-board-N, as after "show ways"), or the board chosen in "Go to board",
+  // scrolls that board into view.
+  var expanded = new URLSearchParams(location.search).get("expand");
+  var wanted = location.hash ? location.hash.substring(1) : expanded ? "sld-board-" + expanded : "";
+  var target = wanted && document.getElementById(wanted);
   if (target && target.getBBox) {
     var b = target.getBBox();
     frame.scrollLeft = b.x - 40;

@@ -37,6 +37,18 @@ class DiagramSvgTests {
         .as("one submain edge per board fed from another board (seed %d)", seed)
         .containsExactlyInAnyOrderElementsOf(DiagramFixtures.expectedSubmains(diagram));
     assertThat(drawing.overlappingBoxes()).as("overlapping board boxes").isEmpty();
+    keepForAPerson("generated-100-boards-seed-" + seed + ".svg", DiagramFixtures.svg(diagram));
+  }
+
+  /** Keeps a drawing under target/diagrams for a person to look at; not an assertion. */
+  private static void keepForAPerson(String name, String svg) {
+    try {
+      java.nio.file.Path dir =
+          java.nio.file.Files.createDirectories(java.nio.file.Path.of("target", "diagrams"));
+      java.nio.file.Files.writeString(dir.resolve(name), svg);
+    } catch (java.io.IOException ignored) {
+      // a missing copy must not fail the test
+    }
   }
 
   @Test
