@@ -64,6 +64,14 @@ public final class WorkbookWriter {
     this.caution = caution;
   }
 
+  private byte[] diagramPng;
+
+  /** Adds a sheet with the site's single-line diagram (a PNG); null for none. */
+  public WorkbookWriter withDiagram(byte[] png) {
+    this.diagramPng = png;
+    return this;
+  }
+
   /** Where a board sheet's totals are, so that other sheets can refer to them. */
   record TotalsCells(
       String sheetName,
@@ -108,6 +116,9 @@ public final class WorkbookWriter {
       }
       if (summary != null) {
         writeSummary(summary, data, totals, styles);
+      }
+      if (diagramPng != null) {
+        DiagramSheet.write(workbook, uniqueName(DiagramSheet.NAME, names), diagramPng, caution);
       }
       List<FindingRow> findingRows = findingRows(data);
       if (!findingRows.isEmpty()) {
