@@ -75,7 +75,7 @@ public class SecurityConfig {
                         "/css/**",
                         "/js/**",
                         "/webjars/**",
-                        "/favicon.svg",
+                        "/favicon*.svg",
                         "/actuator/health",
                         "/error")
                     .permitAll()
