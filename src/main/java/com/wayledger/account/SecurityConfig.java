@@ -1,5 +1,6 @@
 package com.wayledger.account;
 
+import org.springframework.beans.factory.ObjectProvider;
 import org.springframework.context.annotation.Bean;
 import org.springframework.context.annotation.Configuration;
 import org.springframework.core.annotation.Order;
@@ -40,7 +41,7 @@ public class SecurityConfig {
 
   @Bean
   @Order(1)
-  SecurityFilterChain api(HttpSecurity http, ApiTokens tokens) throws Exception {
+  SecurityFilterChain api(HttpSecurity http, ObjectProvider<ApiTokens> tokens) throws Exception {
     http.securityMatcher("/api/**")
         .authorizeHttpRequests(
             auth ->

@@ -23,6 +23,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.atomic.AtomicLong;
+import org.springframework.beans.factory.ObjectProvider;
 import org.springframework.beans.factory.annotation.Value;
 import org.springframework.stereotype.Service;
 import org.springframework.transaction.PlatformTransactionManager;
@@ -51,16 +52,20 @@ public class AnalysisService {
       SiteService sites,
       BoardRepository boards,
       MethodLibrary methodLibrary,
-      SiteGenerations generations,
-      PlatformTransactionManager transactions,
+      ObjectProvider<SiteGenerations> generations,
+      ObjectProvider<PlatformTransactionManager> transactions,
       @Value("${wayledger.analysis.kept-sites:64}") int keptSites) {
     this.sites = sites;
     this.boards = boards;
     this.methodLibrary = methodLibrary;
-    this.generations = generations;
-    this.kept = new AnalysisCache(keptSites);
-    this.readOnly = new TransactionTemplate(transactions);
-    this.readOnly.setReadOnly(true);
+    // Without a database (web slice tests) nothing is kept: every read computes.
+    this.generations = generations.getIfAvailable();
+    PlatformTransactionManager manager = transactions.getIfAvailable();
+    this.kept = new AnalysisCache(this.generations == null || manager == null ? 0 : keptSites);
+    this.readOnly = manager == null ? null : new TransactionTemplate(manager);
+    if (readOnly != null) {
+      readOnly.setReadOnly(true);
+    }
   }
 
   /** The diversity methods a board may choose from: built-in and user-defined. */
@@ -78,7 +83,7 @@ public class AnalysisService {
         TransactionSynchronizationManager.isActualTransactionActive()
             && (!TransactionSynchronizationManager.isCurrentTransactionReadOnly()
                 || SiteGenerations.changesPending());
-    if (mayHaveChanged) {
+    if (mayHaveChanged || generations == null || readOnly == null) {
       return computeOfSite(siteId);
     }
     // The generation is read before the data, so what is kept is never older than its generation.
