@@ -60,9 +60,9 @@ class App:
     def url(self, path):
         return f"http://127.0.0.1:{self.port}{path}"
 
-    def start(self, log_dir, heap):
+    def start(self, log_dir, heap, jvm=()):
         log = open(os.path.join(log_dir, f"{self.name}.log"), "w")
-        cmd = ["java", f"-Xmx{heap}", "-jar", self.jar, f"--server.port={self.port}",
+        cmd = ["java", f"-Xmx{heap}", *jvm, "-jar", self.jar, f"--server.port={self.port}",
                "--server.address=127.0.0.1"] + self.args
         started = time.monotonic()
         self.proc = subprocess.Popen(cmd, stdout=log, stderr=subprocess.STDOUT, cwd=log_dir)
@@ -193,6 +193,8 @@ def main():
     p.add_argument("--heap", default="512m")
     p.add_argument("--skip-build", action="store_true")
     p.add_argument("--online", action="store_true", help="let Maven download (default offline)")
+    p.add_argument("--jfr", action="store_true",
+                   help="record Wayledger with Java Flight Recorder and summarise where its CPU samples fall")
     p.add_argument("--board", help="reference of the demo board to measure (default: the one with most circuits)")
     args = p.parse_args()
     for tool in ("wrk", "java"):
@@ -206,6 +208,7 @@ def main():
         wl_jar, bare_jar = build(not args.online)
 
     work = tempfile.mkdtemp(prefix="wayledger-bench-")
+    jfr_file = os.path.join(OUT, "wayledger.jfr")
     wl = App("wayledger", wl_jar, args.port,
              ["--spring.profiles.active=demo",
               f"--spring.datasource.url=jdbc:h2:file:{work}/db;MODE=PostgreSQL;DATABASE_TO_LOWER=TRUE;DEFAULT_NULL_ORDERING=HIGH"],
@@ -219,7 +222,9 @@ def main():
         start = {}
         for app in (bare, wl):
             load_before = load()
-            secs = app.start(work, args.heap)
+            jvm = ([f"-XX:StartFlightRecording=filename={jfr_file},settings=profile,dumponexit=true"]
+                   if args.jfr and app is wl else [])
+            secs = app.start(work, args.heap, jvm)
             time.sleep(10)
             start[app.name] = (secs, app.rss_mb(), load_before)
             print(f"{app.name}: first page after {secs:.1f} s, idle RSS {start[app.name][1]:.0f} MB", flush=True)
@@ -275,6 +280,50 @@ def main():
         for app in (wl, bare):
             app.stop()
         shutil.rmtree(work, ignore_errors=True)
+    if args.jfr and os.path.exists(jfr_file):
+        summarise_jfr(jfr_file)
+
+
+# Where a CPU sample falls: the first of these buckets whose package appears anywhere on its stack.
+JFR_BUCKETS = [
+    ("link rewriting (ResourceUrlProvider and resolvers)", "org.springframework.web.servlet.resource."),
+    ("message look-up", "org.springframework.context.support.AbstractMessageSource"),
+    ("security expressions in templates", "org.thymeleaf.extras.springsecurity"),
+    ("SpEL evaluation", "org.springframework.expression."),
+    ("site analysis: engines", "com.wayledger.engine."),
+    ("site analysis: loading (JPA/JDBC)", "org.hibernate."),
+    ("database (H2)", "org.h2."),
+    ("password hashing (bcrypt)", "org.springframework.security.crypto.bcrypt."),
+    ("JSON writing", "tools.jackson."),
+    ("template engine (Thymeleaf)", "org.thymeleaf."),
+    ("compression", "java.util.zip."),
+    ("Wayledger code", "com.wayledger."),
+    ("Spring Security filters", "org.springframework.security."),
+    ("Tomcat", "org.apache."),
+]
+
+
+def summarise_jfr(path):
+    """Counts request-thread CPU samples per bucket (first bucket found anywhere on the stack)."""
+    out = subprocess.run(["jfr", "print", "--events", "jdk.ExecutionSample", "--stack-depth", "128", path],
+                         capture_output=True, text=True).stdout
+    counts, total = {}, 0
+    for event in out.split("jdk.ExecutionSample")[1:]:
+        frames = re.findall(r"^\s+([\w.$<>]+)\(", event, re.M)
+        if not any(f.startswith(("org.apache.catalina", "org.apache.tomcat", "org.springframework.web"))
+                   for f in frames):
+            continue  # not a request thread (start-up, JIT, GC helpers)
+        total += 1
+        bucket = next((name for name, prefix in JFR_BUCKETS if any(f.startswith(prefix) for f in frames)), "other")
+        counts[bucket] = counts.get(bucket, 0) + 1
+    lines = ["", f"JFR CPU samples on request threads: {total}", "", "| where (first bucket of the list in run.py found on the stack) | share |",
+             "|---|---|"]
+    for name, n in sorted(counts.items(), key=lambda kv: -kv[1]):
+        lines.append(f"| {name} | {100 * n / total:.0f} % |")
+    text = "\n".join(lines) + "\n"
+    with open(os.path.join(OUT, "results.md"), "a") as f:
+        f.write(text)
+    print(text)
 
 
 def basic(user, password):

@@ -122,9 +122,9 @@ public class ApiTokens {
 
   /**
    * The signed-in owner of a presented token, or empty when it is unknown, revoked or its owner is
-   * disabled. Notes the day of use (one write per token per day at most).
+   * disabled. Notes the day of use (one write per token per day at most). No transaction: one
+   * SELECT, and on a token's first use of the day one UPDATE, each on its own.
    */
-  @Transactional
   public Optional<Authentication> authenticate(String presented) {
     if (presented == null || !presented.startsWith(PREFIX) || presented.length() > 100) {
       return Optional.empty();

@@ -79,16 +79,24 @@ public class AnalysisService {
    * rolled-back change never reaches another reader.
    */
   public SiteAnalysis ofSite(long siteId) {
-    boolean mayHaveChanged =
-        TransactionSynchronizationManager.isActualTransactionActive()
-            && (!TransactionSynchronizationManager.isCurrentTransactionReadOnly()
-                || SiteGenerations.changesPending());
-    if (mayHaveChanged || generations == null || readOnly == null) {
+    if (!mayKeep()) {
       return computeOfSite(siteId);
     }
     // The generation is read before the data, so what is kept is never older than its generation.
     long generation = generations.current(siteId);
     return kept.get(siteId, generation, () -> readOnly.execute(status -> computeOfSite(siteId)));
+  }
+
+  /**
+   * Whether a read may use and keep an analysis: there is a database generation to key it by, and
+   * the caller's transaction (if any) cannot have changed data.
+   */
+  private boolean mayKeep() {
+    boolean mayHaveChanged =
+        TransactionSynchronizationManager.isActualTransactionActive()
+            && (!TransactionSynchronizationManager.isCurrentTransactionReadOnly()
+                || SiteGenerations.changesPending());
+    return !mayHaveChanged && generations != null && readOnly != null;
   }
 
   /**
@@ -119,8 +127,19 @@ public class AnalysisService {
     return ScheduleMapper.mccbSettingsOf(onSite);
   }
 
-  @Transactional(readOnly = true)
+  /** The analysis of the site a board is on (see {@link #ofSite(long)}). */
   public SiteAnalysis ofBoard(long boardId) {
+    if (mayKeep()) {
+      // one query for the board's site and its generation: no entity loaded on a kept read
+      SiteGenerations.Stamp stamp =
+          generations
+              .ofBoard(boardId)
+              .orElseThrow(() -> new com.wayledger.system.NotFoundException("Board", boardId));
+      return kept.get(
+          stamp.siteId(),
+          stamp.generation(),
+          () -> readOnly.execute(status -> computeOfSite(stamp.siteId())));
+    }
     Board board =
         boards
             .findById(boardId)

@@ -49,6 +49,22 @@ public class SiteGenerations {
         .orElseThrow(() -> new NotFoundException("Site", siteId));
   }
 
+  /** A site and its current generation. */
+  public record Stamp(long siteId, long generation) {}
+
+  /**
+   * The site of a board and that site's current generation, in one query (empty for an unknown
+   * board).
+   */
+  public java.util.Optional<Stamp> ofBoard(long boardId) {
+    return jdbc.sql(
+            "SELECT s.id, s.data_generation FROM board b JOIN site s ON s.id = b.site_id"
+                + " WHERE b.id = ?")
+        .param(boardId)
+        .query((row, n) -> new Stamp(row.getLong(1), row.getLong(2)))
+        .optional();
+  }
+
   /** Whether the caller's transaction has changed data whose generation is not yet moved on. */
   public static boolean changesPending() {
     return TransactionSynchronizationManager.hasResource(PENDING);
