@@ -66,7 +66,7 @@ class App:
                "--server.address=127.0.0.1"] + self.args
         started = time.monotonic()
         self.proc = subprocess.Popen(cmd, stdout=log, stderr=subprocess.STDOUT, cwd=log_dir)
-        while time.monotonic() - started < 180:
+        while time.monotonic() - started < 900:
             try:
                 with urllib.request.urlopen(self.url(self.ready_path), timeout=2) as r:
                     if r.status == 200:
@@ -77,7 +77,7 @@ class App:
             if self.proc.poll() is not None:
                 raise SystemExit(f"{self.name} exited; see {log.name}")
             time.sleep(0.1)
-        raise SystemExit(f"{self.name} did not answer {self.ready_path} within 180 s")
+        raise SystemExit(f"{self.name} did not answer {self.ready_path} within 900 s")
 
     def rss_mb(self):
         with open(f"/proc/{self.proc.pid}/status") as f:
@@ -286,7 +286,13 @@ def main():
 
 # Where a CPU sample falls: the first of these buckets whose package appears anywhere on its stack.
 JFR_BUCKETS = [
-    ("link rewriting (ResourceUrlProvider and resolvers)", "org.springframework.web.servlet.resource."),
+    ("link rewriting (ResourceUrlProvider and resolvers)",
+     ("org.springframework.web.servlet.resource.ResourceUrlProvider",
+      "org.springframework.web.servlet.resource.ResourceUrlEncodingFilter$ResourceUrlEncodingResponseWrapper",
+      "org.springframework.web.servlet.resource.LiteWebJarsResourceResolver",
+      "org.springframework.web.servlet.resource.PathResourceResolver",
+      "org.springframework.web.servlet.resource.CachingResourceResolver",
+      "org.springframework.web.servlet.resource.VersionResourceResolver")),
     ("message look-up", "org.springframework.context.support.AbstractMessageSource"),
     ("security expressions in templates", "org.thymeleaf.extras.springsecurity"),
     ("SpEL evaluation", "org.springframework.expression."),
@@ -314,7 +320,9 @@ def summarise_jfr(path):
                    for f in frames):
             continue  # not a request thread (start-up, JIT, GC helpers)
         total += 1
-        bucket = next((name for name, prefix in JFR_BUCKETS if any(f.startswith(prefix) for f in frames)), "other")
+        bucket = next((name for name, prefix in JFR_BUCKETS
+                       if any(f.startswith(prefix if isinstance(prefix, tuple) else (prefix,)) for f in frames)),
+                      "other")
         counts[bucket] = counts.get(bucket, 0) + 1
     lines = ["", f"JFR CPU samples on request threads: {total}", "", "| where (first bucket of the list in run.py found on the stack) | share |",
              "|---|---|"]

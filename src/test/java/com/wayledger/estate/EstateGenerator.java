@@ -1,19 +1,21 @@
 package com.wayledger.estate;
 
+import com.wayledger.WayledgerApplication;
 import java.sql.Connection;
 import java.sql.DriverManager;
 import java.sql.PreparedStatement;
 import java.sql.SQLException;
 import java.sql.Statement;
 import java.util.Random;
-import org.flywaydb.core.Flyway;
+import org.springframework.boot.WebApplicationType;
+import org.springframework.boot.builder.SpringApplicationBuilder;
 
 /**
  * Fills an empty database with a generated estate (invented data, fixed seed): by default 500
  * sites, each with 20 three-phase boards (one main board feeding 19 sub-boards) of 50 single-pole
  * circuits with one load each — 10,000 boards and 500,000 circuits. Rows go in by JDBC batches with
- * explicit ids, the schema by the application's own Flyway migrations. Test scope only; run by
- * {@code src/benchmark/estate.sh}, never by {@code ./mvnw verify}.
+ * explicit ids; the schema comes from starting the application once (its own migrations). Test
+ * scope only; run by {@code src/benchmark/estate.sh}, never by {@code ./mvnw verify}.
  *
  * <pre>
  * java -cp ... com.wayledger.estate.EstateGenerator jdbc:postgresql://127.0.0.1:5432/db user password
@@ -43,11 +45,17 @@ public final class EstateGenerator {
     if (circuitsPerBoard > 72) {
       throw new IllegalArgumentException("a 24-way three-phase board holds at most 72 circuits");
     }
-    Flyway.configure()
-        .dataSource(url, user, password)
-        .locations("classpath:db/migration")
-        .load()
-        .migrate();
+    // The application itself migrates the schema (its Java migrations included), then stops.
+    new SpringApplicationBuilder(WayledgerApplication.class)
+        .web(WebApplicationType.SERVLET) // the security setup needs the web layer; loopback, any free port
+        .run(
+            "--server.port=0",
+            "--server.address=127.0.0.1",
+            "--spring.datasource.url=" + url,
+            "--spring.datasource.username=" + user,
+            "--spring.datasource.password=" + password,
+            "--logging.level.root=WARN")
+        .close();
     long started = System.nanoTime();
     try (Connection db = DriverManager.getConnection(url, user, password)) {
       db.setAutoCommit(false);
@@ -106,6 +114,8 @@ public final class EstateGenerator {
                     + " cable_installation_method)"
                     + " VALUES (?, ?, ?, ?, ?, ?, 'MCB', 'B', ?, 1, 10, ?, ?, 'COPPER',"
                     + " 'THERMOPLASTIC_70', ?, 'C')");
+        PreparedStatement feed =
+            db.prepareStatement("UPDATE board SET fed_from_circuit_id = ? WHERE id = ?");
         PreparedStatement slot =
             db.prepareStatement(
                 "INSERT INTO way_slot (board_id, way_number, phase, circuit_id) VALUES (?, ?, ?, ?)");
@@ -125,9 +135,10 @@ public final class EstateGenerator {
         for (int b = 0; b < boardsPerSite; b++) {
           boardId++;
           boolean main = b == 0;
-          long feeder = 0;
+          long feeder;
           if (main) {
             mainBoard = boardId;
+            feeder = 0;
           } else {
             // a three-pole way of the main board feeds this sub-board
             feederWay++;
@@ -156,7 +167,10 @@ public final class EstateGenerator {
             board.setNull(14, java.sql.Types.VARCHAR);
           } else {
             board.setLong(7, mainBoard);
-            board.setLong(8, feeder);
+            board.setNull(8, java.sql.Types.BIGINT); // set once the feeder circuit is stored
+            feed.setLong(1, feeder);
+            feed.setLong(2, boardId);
+            feed.addBatch();
             board.setDouble(9, 16);
             board.setDouble(10, 16);
             board.setString(11, "COPPER");
@@ -198,6 +212,7 @@ public final class EstateGenerator {
         site.executeBatch();
         board.executeBatch();
         circuit.executeBatch();
+        feed.executeBatch();
         slot.executeBatch();
         load.executeBatch();
         if (s % 50 == 0) {
