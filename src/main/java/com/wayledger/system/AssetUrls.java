@@ -22,6 +22,18 @@ public class AssetUrls {
     this.resources = resources;
   }
 
+  public String getCss() {
+    return url("/css/wayledger.css");
+  }
+
+  public String getIcon() {
+    return url("/favicon.svg");
+  }
+
+  public String getHtmx() {
+    return url("/webjars/htmx.org/dist/htmx.min.js");
+  }
+
   /** The content-hashed or versioned path of an asset; the path itself when none is known. */
   public String url(String path) {
     String found = known.get(path);

@@ -30,11 +30,13 @@ public final class EstateAnalysis {
     String password = args.length > 2 ? args[2] : "";
     try (ConfigurableApplicationContext app =
         new SpringApplicationBuilder(WayledgerApplication.class)
-            .web(WebApplicationType.SERVLET) // the security setup needs the web layer; loopback, any free port
+            .web(
+                WebApplicationType
+                    .SERVLET) // the security setup needs the web layer; loopback, any free port
             .run(
                 "--server.port=0",
-            "--server.address=127.0.0.1",
-            "--spring.datasource.url=" + url,
+                "--server.address=127.0.0.1",
+                "--spring.datasource.url=" + url,
                 "--spring.datasource.username=" + user,
                 "--spring.datasource.password=" + password,
                 "--wayledger.analysis.kept-sites=0",

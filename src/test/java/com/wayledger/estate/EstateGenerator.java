@@ -47,7 +47,9 @@ public final class EstateGenerator {
     }
     // The application itself migrates the schema (its Java migrations included), then stops.
     new SpringApplicationBuilder(WayledgerApplication.class)
-        .web(WebApplicationType.SERVLET) // the security setup needs the web layer; loopback, any free port
+        .web(
+            WebApplicationType
+                .SERVLET) // the security setup needs the web layer; loopback, any free port
         .run(
             "--server.port=0",
             "--server.address=127.0.0.1",
