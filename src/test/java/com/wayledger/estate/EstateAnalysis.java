@@ -24,6 +24,13 @@ public final class EstateAnalysis {
 
   private EstateAnalysis() {}
 
+  private static long processCpuNanos() {
+    return ManagementFactory.getOperatingSystemMXBean()
+            instanceof com.sun.management.OperatingSystemMXBean os
+        ? os.getProcessCpuTime()
+        : -1;
+  }
+
   public static void main(String[] args) {
     String url = args[0];
     String user = args.length > 1 ? args[1] : "postgres";
@@ -50,6 +57,8 @@ public final class EstateAnalysis {
       List<Double> perSite = new ArrayList<>();
       long circuits = 0;
       long started = System.nanoTime();
+      long threadCpuBefore = ManagementFactory.getThreadMXBean().getCurrentThreadCpuTime();
+      long processCpuBefore = processCpuNanos();
       for (long site : sites) {
         long one = System.nanoTime();
         circuits +=
@@ -59,6 +68,9 @@ public final class EstateAnalysis {
         perSite.add((System.nanoTime() - one) / 1e6);
       }
       double total = (System.nanoTime() - started) / 1e9;
+      double threadCpu =
+          (ManagementFactory.getThreadMXBean().getCurrentThreadCpuTime() - threadCpuBefore) / 1e9;
+      double processCpu = (processCpuNanos() - processCpuBefore) / 1e9;
       Collections.sort(perSite);
       long peak = 0;
       for (MemoryPoolMXBean pool : ManagementFactory.getMemoryPoolMXBeans()) {
@@ -67,11 +79,14 @@ public final class EstateAnalysis {
         }
       }
       System.out.printf(
-          "Analysed %d sites (%d circuits) in %.1f s on %d processor(s): per site median %.0f ms,"
-              + " slowest %.0f ms; peak heap used %d MB of max %d MB%n",
+          "Analysed %d sites (%d circuits) in %.1f s wall, %.1f s CPU of the analysing thread, %.1f s"
+              + " CPU of the whole process (GC and JIT included), on %d processor(s): per site"
+              + " median %.0f ms, slowest %.0f ms; peak heap used %d MB of max %d MB%n",
           sites.size(),
           circuits,
           total,
+          threadCpu,
+          processCpu,
           Runtime.getRuntime().availableProcessors(),
           perSite.isEmpty() ? 0 : perSite.get(perSite.size() / 2),
           perSite.isEmpty() ? 0 : perSite.get(perSite.size() - 1),
