@@ -5,6 +5,7 @@ import com.wayledger.engine.demand.DiversityMethod;
 import com.wayledger.engine.demand.DiversityMethodCatalog;
 import com.wayledger.engine.demand.DiversityMethods;
 import com.wayledger.system.NotFoundException;
+import com.wayledger.system.RowLocks;
 import com.wayledger.system.RuleViolation;
 import com.wayledger.system.StaleEditException;
 import java.util.ArrayList;
@@ -26,8 +27,10 @@ public class MethodLibrary {
   private static final String KEY_PATTERN = "[a-z0-9][a-z0-9-]{1,59}";
 
   private final StoredMethodRepository stored;
+  private final RowLocks locks;
 
-  public MethodLibrary(StoredMethodRepository stored) {
+  public MethodLibrary(StoredMethodRepository stored, RowLocks locks) {
+    this.locks = locks;
     this.stored = stored;
   }
 
@@ -90,8 +93,16 @@ public class MethodLibrary {
   @Transactional
   public Map<String, String> update(
       String key, long version, String name, Map<String, String> submitted, String user) {
+    // Exclusive before reading: a second save from the same version waits, then sees the first
+    // one's version and becomes a conflict instead of an overwrite.
+    if (!locks.exclusive("diversity_method", key)) {
+      if (DiversityMethods.builtIn().find(key).isPresent()) {
+        throw new RuleViolation("key", "method.builtIn.readOnly");
+      }
+      throw new NotFoundException("Diversity method", key);
+    }
     StoredMethod row =
-        stored.findById(key).orElseThrow(() -> new RuleViolation("key", "method.builtIn.readOnly"));
+        stored.findById(key).orElseThrow(() -> new NotFoundException("Diversity method", key));
     if (row.getVersion() != version) {
       throw new StaleEditException("Diversity method " + key);
     }

@@ -3,12 +3,14 @@ package com.wayledger.site;
 import com.wayledger.diversity.MethodLibrary;
 import com.wayledger.system.ChangeKind;
 import com.wayledger.system.NotFoundException;
+import com.wayledger.system.RowLocks;
 import com.wayledger.system.RuleViolation;
 import com.wayledger.system.ScheduleChanged;
 import com.wayledger.system.StaleEditException;
 import java.util.List;
 import java.util.Objects;
 import org.springframework.context.ApplicationEventPublisher;
+import org.springframework.jdbc.core.simple.JdbcClient;
 import org.springframework.stereotype.Service;
 import org.springframework.transaction.annotation.Transactional;
 
@@ -23,12 +25,20 @@ public class SiteService {
   private final SiteRepository sites;
   private final MethodLibrary methods;
   private final ApplicationEventPublisher events;
+  private final RowLocks locks;
+  private final JdbcClient jdbc;
 
   public SiteService(
-      SiteRepository sites, MethodLibrary methods, ApplicationEventPublisher events) {
+      SiteRepository sites,
+      MethodLibrary methods,
+      ApplicationEventPublisher events,
+      RowLocks locks,
+      JdbcClient jdbc) {
     this.sites = sites;
     this.methods = methods;
     this.events = events;
+    this.locks = locks;
+    this.jdbc = jdbc;
   }
 
   @Transactional(readOnly = true)
@@ -58,11 +68,28 @@ public class SiteService {
 
   @Transactional
   public Site update(long id, SiteForm form, String reason) {
+    // Exclusive: a board being added or edited meanwhile (it holds the site shared) finishes first,
+    // so the check of the boards' phases below sees it.
+    if (!locks.exclusive("site", id)) {
+      throw new NotFoundException("Site", id);
+    }
     Site site = get(id);
     if (form.version() != null && !Objects.equals(form.version(), site.getVersion())) {
-      throw new StaleEditException("Site " + site.getName());
+      throw new StaleEditException("Site " + site.getName(), SiteForm.of(site));
     }
     checkRules(form, id);
+    if (form.phases() == 1) {
+      List<String> threePhase =
+          jdbc.sql(
+                  "SELECT reference FROM board WHERE site_id = ? AND phases = 3 ORDER BY reference")
+              .param(id)
+              .query(String.class)
+              .list();
+      if (!threePhase.isEmpty()) {
+        throw new RuleViolation(
+            "phases", "site.phases.boardsThreePhase", String.join(", ", threePhase));
+      }
+    }
     SiteForm before = SiteForm.of(site);
     site.apply(form);
     Site saved = sites.saveAndFlush(site);
