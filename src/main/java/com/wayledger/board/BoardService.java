@@ -109,7 +109,7 @@ public class BoardService {
   @Transactional
   public Board update(long boardId, BoardForm form, String reason) {
     // The site shared (its supply cannot change meanwhile), then the board exclusive: circuits
-    // being saved (they hold the board shared) finish first, so the position check below sees them.
+    // being saved (they hold the board shared) finish first, so checks of its circuits see them.
     Long siteId =
         boards.findSiteIdOf(boardId).orElseThrow(() -> new NotFoundException("Board", boardId));
     locks.shared("site", siteId);
@@ -119,15 +119,6 @@ public class BoardService {
     Board board = get(boardId);
     if (form.version() != null && !Objects.equals(form.version(), board.getVersion())) {
       throw new StaleEditException("Board " + board.getReference(), BoardForm.of(board));
-    }
-    if (form.phases() == 1) {
-      List<String> offL1 = circuits.positionsOffL1(boardId);
-      if (!offL1.isEmpty()) {
-        throw new RuleViolation(
-            "phases",
-            "board.phases.circuitsOffL1",
-            String.join(", ", offL1.subList(0, Math.min(5, offL1.size()))));
-      }
     }
     Board parent = checkRules(board.getSite(), form, board);
     var before = ScheduleMapper.headerOf(board);

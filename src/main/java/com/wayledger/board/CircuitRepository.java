@@ -12,10 +12,4 @@ public interface CircuitRepository extends JpaRepository<Circuit, Long> {
 
   @Query("select c from Circuit c where c.board.id = :boardId order by c.wayNumber, c.position")
   List<Circuit> findByBoard(@Param("boardId") long boardId);
-
-  /** Way labels ("4", …) of the board's circuits that use a line other than L1. */
-  @Query(
-      "select concat('', c.wayNumber) from Circuit c where c.board.id = :boardId"
-          + " and c.position <> com.wayledger.engine.PhasePosition.L1 order by c.wayNumber")
-  List<String> positionsOffL1(@Param("boardId") long boardId);
 }

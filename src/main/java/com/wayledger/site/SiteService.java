@@ -10,7 +10,6 @@ import com.wayledger.system.StaleEditException;
 import java.util.List;
 import java.util.Objects;
 import org.springframework.context.ApplicationEventPublisher;
-import org.springframework.jdbc.core.simple.JdbcClient;
 import org.springframework.stereotype.Service;
 import org.springframework.transaction.annotation.Transactional;
 
@@ -26,19 +25,16 @@ public class SiteService {
   private final MethodLibrary methods;
   private final ApplicationEventPublisher events;
   private final RowLocks locks;
-  private final JdbcClient jdbc;
 
   public SiteService(
       SiteRepository sites,
       MethodLibrary methods,
       ApplicationEventPublisher events,
-      RowLocks locks,
-      JdbcClient jdbc) {
+      RowLocks locks) {
     this.sites = sites;
     this.methods = methods;
     this.events = events;
     this.locks = locks;
-    this.jdbc = jdbc;
   }
 
   @Transactional(readOnly = true)
@@ -69,7 +65,7 @@ public class SiteService {
   @Transactional
   public Site update(long id, SiteForm form, String reason) {
     // Exclusive: a board being added or edited meanwhile (it holds the site shared) finishes first,
-    // so the check of the boards' phases below sees it.
+    // so a check of the site's boards made here sees it.
     if (!locks.exclusive("site", id)) {
       throw new NotFoundException("Site", id);
     }
@@ -78,18 +74,6 @@ public class SiteService {
       throw new StaleEditException("Site " + site.getName(), SiteForm.of(site));
     }
     checkRules(form, id);
-    if (form.phases() == 1) {
-      List<String> threePhase =
-          jdbc.sql(
-                  "SELECT reference FROM board WHERE site_id = ? AND phases = 3 ORDER BY reference")
-              .param(id)
-              .query(String.class)
-              .list();
-      if (!threePhase.isEmpty()) {
-        throw new RuleViolation(
-            "phases", "site.phases.boardsThreePhase", String.join(", ", threePhase));
-      }
-    }
     SiteForm before = SiteForm.of(site);
     site.apply(form);
     Site saved = sites.saveAndFlush(site);

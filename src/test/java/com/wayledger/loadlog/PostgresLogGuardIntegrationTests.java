@@ -141,8 +141,7 @@ class PostgresLogGuardIntegrationTests {
         "CREATE TABLE change_log_copy (id BIGINT)",
         "UPDATE change_log SET summary = 'rewritten'",
         "DELETE FROM change_log",
-        "TRUNCATE change_log",
-        "GRANT UPDATE ON change_log TO PUBLIC"
+        "TRUNCATE change_log"
       })
   void theApplicationsRoleCannot(String attack) throws SQLException {
     Site site = sites.create(LogFixtures.site());
@@ -155,6 +154,25 @@ class PostgresLogGuardIntegrationTests {
     }
     assertThat(triggersEnabled()).as("both guards still in place").isEqualTo(2);
     assertThat(log.verify(site.getId()).intact()).as("chain intact after: " + attack).isTrue();
+  }
+
+  @Test
+  void theApplicationsRoleCannotGrantItselfMore() throws SQLException {
+    try (Connection app = appConnection();
+        Statement s = app.createStatement()) {
+      // PostgreSQL answers a grant without the right to grant with a warning, not an error.
+      s.execute("GRANT UPDATE, DELETE, TRUNCATE ON change_log TO PUBLIC");
+      try (ResultSet rs =
+          s.executeQuery(
+              "SELECT has_table_privilege(current_user, 'change_log', 'UPDATE')"
+                  + " OR has_table_privilege(current_user, 'change_log', 'DELETE')"
+                  + " OR has_table_privilege(current_user, 'change_log', 'TRUNCATE')")) {
+        rs.next();
+        assertThat(rs.getBoolean(1)).as("still only SELECT and INSERT").isFalse();
+      }
+      assertThatThrownBy(() -> s.execute("UPDATE change_log SET summary = 'x'"))
+          .isInstanceOf(SQLException.class);
+    }
   }
 
   @Test
