@@ -176,6 +176,35 @@ class PostgresLogGuardIntegrationTests {
   }
 
   @Test
+  void everyAppendOnlyTableIsReadAndAppendOnlyForTheApplicationsRole() throws SQLException {
+    try (Connection admin = adminConnection();
+        PreparedStatement q =
+            admin.prepareStatement(
+                "SELECT c.relname, has_table_privilege(?, c.oid, 'SELECT'),"
+                    + " has_table_privilege(?, c.oid, 'INSERT'),"
+                    + " has_table_privilege(?, c.oid, 'UPDATE')"
+                    + " OR has_table_privilege(?, c.oid, 'DELETE')"
+                    + " OR has_table_privilege(?, c.oid, 'TRUNCATE')"
+                    + " FROM pg_trigger t JOIN pg_class c ON c.oid = t.tgrelid"
+                    + " WHERE t.tgname = c.relname || '_no_update_or_delete'")) {
+      for (int i = 1; i <= 5; i++) {
+        q.setString(i, guarded.app());
+      }
+      int tables = 0;
+      try (ResultSet rs = q.executeQuery()) {
+        while (rs.next()) {
+          tables++;
+          assertThat(rs.getBoolean(2) && rs.getBoolean(3))
+              .as(rs.getString(1) + " readable")
+              .isTrue();
+          assertThat(rs.getBoolean(4)).as(rs.getString(1) + " not changeable").isFalse();
+        }
+      }
+      assertThat(tables).as("the change log at least").isPositive();
+    }
+  }
+
+  @Test
   void theApplicationsRoleOwnsNothing() throws SQLException {
     try (Connection admin = adminConnection();
         PreparedStatement q =
