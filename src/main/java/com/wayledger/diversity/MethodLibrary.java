@@ -6,6 +6,7 @@ import com.wayledger.engine.demand.DiversityMethodCatalog;
 import com.wayledger.engine.demand.DiversityMethods;
 import com.wayledger.system.MethodsChanged;
 import com.wayledger.system.NotFoundException;
+import com.wayledger.system.RowLocks;
 import com.wayledger.system.RuleViolation;
 import com.wayledger.system.StaleEditException;
 import java.util.ArrayList;
@@ -29,8 +30,11 @@ public class MethodLibrary {
 
   private final StoredMethodRepository stored;
   private final ApplicationEventPublisher events;
+  private final RowLocks locks;
 
-  public MethodLibrary(StoredMethodRepository stored, ApplicationEventPublisher events) {
+  public MethodLibrary(
+      StoredMethodRepository stored, ApplicationEventPublisher events, RowLocks locks) {
+    this.locks = locks;
     this.stored = stored;
     this.events = events;
   }
@@ -94,8 +98,16 @@ public class MethodLibrary {
   @Transactional
   public Map<String, String> update(
       String key, long version, String name, Map<String, String> submitted, String user) {
+    // Exclusive before reading: a second save from the same version waits, then sees the first
+    // one's version and becomes a conflict instead of an overwrite.
+    if (!locks.exclusive("diversity_method", key)) {
+      if (DiversityMethods.builtIn().find(key).isPresent()) {
+        throw new RuleViolation("key", "method.builtIn.readOnly");
+      }
+      throw new NotFoundException("Diversity method", key);
+    }
     StoredMethod row =
-        stored.findById(key).orElseThrow(() -> new RuleViolation("key", "method.builtIn.readOnly"));
+        stored.findById(key).orElseThrow(() -> new NotFoundException("Diversity method", key));
     if (row.getVersion() != version) {
       throw new StaleEditException("Diversity method " + key);
     }

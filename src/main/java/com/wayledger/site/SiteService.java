@@ -3,6 +3,7 @@ package com.wayledger.site;
 import com.wayledger.diversity.MethodLibrary;
 import com.wayledger.system.ChangeKind;
 import com.wayledger.system.NotFoundException;
+import com.wayledger.system.RowLocks;
 import com.wayledger.system.RuleViolation;
 import com.wayledger.system.ScheduleChanged;
 import com.wayledger.system.StaleEditException;
@@ -25,12 +26,17 @@ public class SiteService {
   private final SiteRepository sites;
   private final MethodLibrary methods;
   private final ApplicationEventPublisher events;
+  private final RowLocks locks;
 
   public SiteService(
-      SiteRepository sites, MethodLibrary methods, ApplicationEventPublisher events) {
+      SiteRepository sites,
+      MethodLibrary methods,
+      ApplicationEventPublisher events,
+      RowLocks locks) {
     this.sites = sites;
     this.methods = methods;
     this.events = events;
+    this.locks = locks;
   }
 
   @Transactional(readOnly = true)
@@ -78,9 +84,14 @@ public class SiteService {
 
   @Transactional
   public Site update(long id, SiteForm form, String reason) {
+    // Exclusive: a board being added or edited meanwhile (it holds the site shared) finishes first,
+    // so a check of the site's boards made here sees it.
+    if (!locks.exclusive("site", id)) {
+      throw new NotFoundException("Site", id);
+    }
     Site site = get(id);
     if (form.version() != null && !Objects.equals(form.version(), site.getVersion())) {
-      throw new StaleEditException("Site " + site.getName());
+      throw new StaleEditException("Site " + site.getName(), SiteForm.of(site));
     }
     checkRules(form, id);
     SiteForm before = SiteForm.of(site);

@@ -45,6 +45,7 @@ class SiteControllerIntegrationTests {
   @Autowired MockMvc mvc;
   @MockitoBean SiteService sites;
   @MockitoBean StoredMethodRepository storedMethods;
+  @MockitoBean com.wayledger.system.RowLocks rowLocks;
 
   static Site storedSite(long id, String name) {
     Site site = new Site(name);
