@@ -115,7 +115,7 @@ public class ExportController {
   }
 
   /** Rows a door chart prints in one column before it splits into two. */
-  static final int ONE_COLUMN_ROWS = 24;
+  static final int ONE_COLUMN_ROWS = 16;
 
   /**
    * The address the door chart's code links to: the documented setting {@code

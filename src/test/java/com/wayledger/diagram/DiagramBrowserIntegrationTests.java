@@ -143,7 +143,9 @@ class DiagramBrowserIntegrationTests {
     String codeSvg = browser.findElement(By.cssSelector("svg.door-code")).getAttribute("outerHTML");
     assertThat(QrImages.decodeSvg(codeSvg)).as("the printed code").isEqualTo(codeLink);
     assertThat(browser.findElement(By.id("free-positions")).getText()).startsWith("Free positions");
-    assertThat(pages(printA4())).as("KB1's door chart on A4").isEqualTo(1);
+    byte[] kb1Pdf = printA4();
+    keep("door-chart-kb1.pdf", kb1Pdf);
+    assertThat(pages(kb1Pdf)).as("KB1's door chart on A4").isEqualTo(1);
     shot("door-chart");
 
     Circuit spare =
@@ -220,6 +222,16 @@ class DiagramBrowserIntegrationTests {
   }
 
   private byte[] printA4() {
+    // print only once the page and its style sheet are in: on a busy machine a print taken earlier
+    // shows the page unstyled
+    wait(
+        d ->
+            Boolean.TRUE.equals(
+                ((JavascriptExecutor) d)
+                    .executeScript(
+                        "var s = document.querySelector('.sheet');"
+                            + " return document.readyState === 'complete' && s !== null"
+                            + " && getComputedStyle(s).borderTopStyle === 'solid';")));
     PrintOptions options = new PrintOptions();
     options.setPageSize(A4);
     return Base64.getDecoder().decode(((PrintsPage) browser).print(options).getContent());
@@ -254,6 +266,16 @@ class DiagramBrowserIntegrationTests {
 
   private void wait(java.util.function.Function<WebDriver, Boolean> condition) {
     new WebDriverWait(browser, Duration.ofSeconds(20)).until(condition::apply);
+  }
+
+  /** Keeps a file under target/screenshots for a person to look at; not an assertion. */
+  private static void keep(String name, byte[] content) {
+    try {
+      Path dir = Files.createDirectories(Path.of("target", "screenshots"));
+      Files.write(dir.resolve(name), content);
+    } catch (java.io.IOException ignored) {
+      // a missing copy must not fail the flow
+    }
   }
 
   /** Keeps a screenshot under target/screenshots for a person to look at; not an assertion. */
