@@ -89,7 +89,7 @@ public class BoardService {
 
   @Transactional
   public Board create(long siteId, BoardForm form, String reason) {
-    if (!locks.shared("site", siteId)) {
+    if (!locks.exclusive("site", siteId)) {
       throw new NotFoundException("Site", siteId);
     }
     Site site = sites.get(siteId);
@@ -108,11 +108,12 @@ public class BoardService {
 
   @Transactional
   public Board update(long boardId, BoardForm form, String reason) {
-    // The site shared (its supply cannot change meanwhile), then the board exclusive: circuits
-    // being saved (they hold the board shared) finish first, so checks of its circuits see them.
+    // The site, then the board (the order every change takes, see ScheduleService): circuits being
+    // saved finish first, so checks of its circuits see them, and the supply cannot change
+    // meanwhile.
     Long siteId =
         boards.findSiteIdOf(boardId).orElseThrow(() -> new NotFoundException("Board", boardId));
-    locks.shared("site", siteId);
+    locks.exclusive("site", siteId);
     if (!locks.exclusive("board", boardId)) {
       throw new NotFoundException("Board", boardId);
     }
@@ -138,6 +139,7 @@ public class BoardService {
   /** Deletes a board that feeds no other board; returns its site's id. */
   @Transactional
   public long delete(long boardId, String reason) {
+    boards.findSiteIdOf(boardId).ifPresent(siteId -> locks.exclusive("site", siteId));
     if (!locks.exclusive("board", boardId)) {
       throw new NotFoundException("Board", boardId);
     }

@@ -353,6 +353,13 @@ public class ScheduleService {
   // --- row locks: parent shared, the record itself exclusive, always in this order ---
 
   private Board lockedBoard(long boardId, boolean exclusive) {
+    // The site first: every change of a site also moves the site's data generation (a row update
+    // just before commit) and appends to its change log under a per-site lock, so every change
+    // takes the site row at its start, then the board, then the record. One order, no deadlock;
+    // changes of one site wait for each other instead of being refused.
+    Long siteId =
+        boards.findSiteIdOf(boardId).orElseThrow(() -> new NotFoundException("Board", boardId));
+    locks.exclusive("site", siteId);
     boolean found = exclusive ? locks.exclusive("board", boardId) : locks.shared("board", boardId);
     if (!found) {
       throw new NotFoundException("Board", boardId);
