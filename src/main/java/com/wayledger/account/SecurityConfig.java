@@ -56,6 +56,7 @@ public class SecurityConfig {
                     .anyRequest()
                     .hasRole("EDITOR"))
         .httpBasic(Customizer.withDefaults())
+        .headers(SecurityHeaders::apply)
         .csrf(csrf -> csrf.disable())
         .sessionManagement(
             session -> session.sessionCreationPolicy(SessionCreationPolicy.STATELESS))
@@ -97,8 +98,14 @@ public class SecurityConfig {
                     .hasRole("EDITOR")
                     .anyRequest()
                     .hasRole("VIEWER"))
-        .formLogin(form -> form.loginPage("/login").defaultSuccessUrl("/sites", false).permitAll())
-        .logout(logout -> logout.logoutSuccessUrl("/login?signedOut"));
+        .formLogin(
+            form ->
+                form.loginPage("/login")
+                    .defaultSuccessUrl("/sites", false)
+                    .failureHandler(ThrottledSignIn.formFailure())
+                    .permitAll())
+        .logout(logout -> logout.logoutSuccessUrl("/login?signedOut"))
+        .headers(SecurityHeaders::apply);
     return http.build();
   }
 }

@@ -3,6 +3,7 @@ package com.wayledger.diversity;
 import com.wayledger.engine.demand.CategoryGroup;
 import com.wayledger.system.FormStatus;
 import com.wayledger.system.RuleViolation;
+import com.wayledger.system.StaleEditException;
 import jakarta.servlet.http.HttpServletResponse;
 import java.security.Principal;
 import java.util.ArrayList;
@@ -72,7 +73,16 @@ public class MethodController {
       Principal user,
       Model model,
       HttpServletResponse response) {
-    Map<String, String> problems = library.update(key, version, name, submitted, user.getName());
+    Map<String, String> problems;
+    try {
+      problems = library.update(key, version, name, submitted, user.getName());
+    } catch (StaleEditException stale) {
+      // Someone saved the method since this form was opened: show what was typed against the
+      // current version (the form now carries it), so saving again is a deliberate choice.
+      fill(model, library.entry(key), submitted, Map.of("version", "stale"));
+      response.setStatus(HttpServletResponse.SC_CONFLICT);
+      return "diversity/method";
+    }
     if (problems.isEmpty()) {
       return "redirect:/methods/" + key + "?saved";
     }

@@ -7,6 +7,7 @@ import com.wayledger.engine.demand.DiversityMethods;
 import com.wayledger.system.NotFoundException;
 import com.wayledger.system.RuleViolation;
 import com.wayledger.system.StaleEditException;
+import com.wayledger.system.TextInput;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -78,6 +79,7 @@ public class MethodLibrary {
     if (newName == null || newName.isBlank() || newName.strip().length() > 120) {
       throw new RuleViolation("name", "method.name.required");
     }
+    TextInput.require("name", newName, TextInput.Kind.NAME);
     DiversityMethod copy = source.copyAs(key, newName.strip());
     stored.save(new StoredMethod(key, copy.name(), fromKey, MethodJson.write(copy), user));
     return copy;
@@ -90,8 +92,13 @@ public class MethodLibrary {
   @Transactional
   public Map<String, String> update(
       String key, long version, String name, Map<String, String> submitted, String user) {
-    StoredMethod row =
-        stored.findById(key).orElseThrow(() -> new RuleViolation("key", "method.builtIn.readOnly"));
+    StoredMethod row = stored.findById(key).orElse(null);
+    if (row == null) {
+      if (DiversityMethods.builtIn().methods().stream().anyMatch(m -> m.key().equals(key))) {
+        throw new RuleViolation("key", "method.builtIn.readOnly");
+      }
+      throw new NotFoundException("Diversity method", key);
+    }
     if (row.getVersion() != version) {
       throw new StaleEditException("Diversity method " + key);
     }
@@ -100,6 +107,11 @@ public class MethodLibrary {
     DiversityMethod edited = edit(method, submitted, problems);
     if (name == null || name.isBlank() || name.strip().length() > 120) {
       problems.put("name", "Give the method a name of at most 120 characters.");
+    } else if (!TextInput.acceptable(name, TextInput.Kind.NAME)) {
+      problems.put(
+          "name",
+          "Not accepted as a name: it holds a control or text-direction character, or nothing"
+              + " visible.");
     }
     List<CategoryGroup> groups = edited.groups();
     for (int i = 0; i < groups.size(); i++) {

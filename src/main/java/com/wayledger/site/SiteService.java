@@ -9,6 +9,7 @@ import com.wayledger.system.StaleEditException;
 import java.util.List;
 import java.util.Objects;
 import org.springframework.context.ApplicationEventPublisher;
+import org.springframework.jdbc.core.simple.JdbcClient;
 import org.springframework.stereotype.Service;
 import org.springframework.transaction.annotation.Transactional;
 
@@ -20,12 +21,17 @@ import org.springframework.transaction.annotation.Transactional;
 @Service
 public class SiteService {
 
+  private final JdbcClient jdbc;
   private final SiteRepository sites;
   private final MethodLibrary methods;
   private final ApplicationEventPublisher events;
 
   public SiteService(
-      SiteRepository sites, MethodLibrary methods, ApplicationEventPublisher events) {
+      SiteRepository sites,
+      MethodLibrary methods,
+      ApplicationEventPublisher events,
+      JdbcClient jdbc) {
+    this.jdbc = jdbc;
     this.sites = sites;
     this.methods = methods;
     this.events = events;
@@ -63,6 +69,20 @@ public class SiteService {
       throw new StaleEditException("Site " + site.getName());
     }
     checkRules(form, id);
+    if (form.phases() == 1 && site.getPhases() != 1) {
+      // Consistency across the site: a single-phase supply cannot feed three-phase boards. The
+      // boards are read through the table (the board feature depends on this one, not back).
+      List<String> threePhase =
+          jdbc.sql(
+                  "SELECT reference FROM board WHERE site_id = ? AND phases = 3 ORDER BY reference")
+              .param(id)
+              .query(String.class)
+              .list();
+      if (!threePhase.isEmpty()) {
+        throw new RuleViolation(
+            "phases", "site.phases.boardsThreePhase", String.join(", ", threePhase));
+      }
+    }
     SiteForm before = SiteForm.of(site);
     site.apply(form);
     Site saved = sites.saveAndFlush(site);
