@@ -83,6 +83,9 @@ public class RequestTextGuard implements WebMvcConfigurer {
     @Override
     public boolean preHandle(
         HttpServletRequest request, HttpServletResponse response, Object handler) {
+      if (request.getDispatcherType() == jakarta.servlet.DispatcherType.ERROR) {
+        return true; // the error page of a request already refused or failed: let it show
+      }
       for (Map.Entry<String, String[]> parameter : request.getParameterMap().entrySet()) {
         String name = parameter.getKey();
         check("(a field name)", name);

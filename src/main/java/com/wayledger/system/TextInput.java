@@ -64,7 +64,7 @@ public final class TextInput {
       }
       visible |= isVisible(cp);
     }
-    if (kind == Kind.NAME && !visible) {
+    if (kind == Kind.NAME && !visible && !value.isBlank()) { // plain blanks: @NotBlank says so
       return new Problem("text.invisible", "");
     }
     return null;

@@ -354,6 +354,10 @@ class ExchangeIntegrationTests {
         .andExpect(content().string(org.hamcrest.Matchers.containsString(site.getName())))
         .andExpect(
             content().string(org.hamcrest.Matchers.containsString("assist a competent person")))
+        .andExpect(content().string(org.hamcrest.Matchers.containsString("/css/door-chart.css")));
+    // The print layout lives in its own stylesheet (no inline style under the CSP).
+    mvc.perform(get("/css/door-chart.css"))
+        .andExpect(status().isOk())
         .andExpect(content().string(org.hamcrest.Matchers.containsString("@page")));
   }
 }
