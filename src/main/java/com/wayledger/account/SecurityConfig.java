@@ -94,7 +94,8 @@ public class SecurityConfig {
                         "/circuits/*/edit",
                         "/loads/*/edit",
                         "/boards/*/import",
-                        "/boards/*/import/**")
+                        "/boards/*/import/**",
+                        "/boards/*/inspections/new")
                     .hasRole("EDITOR")
                     .anyRequest()
                     .hasRole("VIEWER"))

@@ -32,8 +32,10 @@ import org.springframework.web.util.WebUtils;
  *       text-direction controls, no broken characters. A refusal is a 400 naming the parameter. The
  *       text fields of the form records (components marked {@link CleanText}) are left to their own
  *       stricter check, so their message appears beside the field instead;
- *   <li>parameter names with brackets ({@code name[0]}) are refused: no form has indexed fields,
- *       and binding them to a record fails inside the framework;
+ *   <li>parameter names with brackets ({@code name[0]}) are refused unless they have the one shape
+ *       a list-binding form uses ({@code rows[3].circuitId}, index below 1000): binding other
+ *       indexed names to a record fails inside the framework (and a malformed path that gets
+ *       through is a 400 from {@link PageErrorHandling});
  *   <li>every text value bound to a form or a parameter is normalised ({@link
  *       TextInput#normalise}).
  * </ul>
@@ -73,6 +75,10 @@ public class RequestTextGuard implements WebMvcConfigurer {
     return Set.copyOf(names);
   }
 
+  /** The one indexed form a list-binding form uses: {@code rows[12].circuitId}. */
+  static final java.util.regex.Pattern LIST_FIELD =
+      java.util.regex.Pattern.compile("[A-Za-z][A-Za-z0-9]*\\[[0-9]{1,3}]\\.[A-Za-z][A-Za-z0-9]*");
+
   static final class Check implements HandlerInterceptor {
     private final Set<String> formTextFields;
 
@@ -89,7 +95,8 @@ public class RequestTextGuard implements WebMvcConfigurer {
       for (Map.Entry<String, String[]> parameter : request.getParameterMap().entrySet()) {
         String name = parameter.getKey();
         check("(a field name)", name);
-        if (name.indexOf('[') >= 0 || name.indexOf(']') >= 0) {
+        if ((name.indexOf('[') >= 0 || name.indexOf(']') >= 0)
+            && !LIST_FIELD.matcher(name).matches()) {
           throw new TextRefused(safe(name), "text.indexedName", "");
         }
         if (formTextFields.contains(name)) {
@@ -137,6 +144,7 @@ public class RequestTextGuard implements WebMvcConfigurer {
   public static class Normalising {
     @InitBinder
     public void normalise(WebDataBinder binder) {
+
       binder.registerCustomEditor(
           String.class,
           new PropertyEditorSupport() {

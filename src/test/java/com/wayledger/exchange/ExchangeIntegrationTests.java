@@ -355,9 +355,9 @@ class ExchangeIntegrationTests {
         .andExpect(
             content().string(org.hamcrest.Matchers.containsString("assist a competent person")))
         .andExpect(content().string(org.hamcrest.Matchers.containsString("/css/door-chart.css")));
-    // The print layout lives in its own stylesheet (no inline style under the CSP).
-    mvc.perform(get("/css/door-chart.css"))
+    // the A4 print rule lives in the chart's style sheet, not in the page
+    mvc.perform(get("/css/door-chart.css").with(VIEWER))
         .andExpect(status().isOk())
-        .andExpect(content().string(org.hamcrest.Matchers.containsString("@page")));
+        .andExpect(content().string(org.hamcrest.Matchers.containsString("size: A4 portrait")));
   }
 }

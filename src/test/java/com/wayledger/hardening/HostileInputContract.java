@@ -282,7 +282,7 @@ abstract class HostileInputContract {
   void lineBreaksAreKeptInNotesButRefusedInAReference() throws Exception {
     MvcResult notes =
         perform(
-            siteForm("Hardening kept", "first line\r\nsecond\tline")
+            siteForm("Hardening kept " + fixture.siteId, "first line\r\nsecond\tline")
                 .with(pageEditor())
                 .with(csrf()));
     assertThat(notes.getResponse().getStatus()).isEqualTo(302);
@@ -305,8 +305,9 @@ abstract class HostileInputContract {
   @Test
   void textIsStoredInNormalFormC() throws Exception {
     // "e" followed by U+0301 COMBINING ACUTE ACCENT is stored as the single U+00E9.
-    perform(siteForm("Cafe\u0301 works", "notes").with(pageEditor()).with(csrf()));
-    assertThat(siteName()).isEqualTo("Caf\u00E9 works");
+    perform(
+        siteForm("Cafe\u0301 works " + fixture.siteId, "notes").with(pageEditor()).with(csrf()));
+    assertThat(siteName()).isEqualTo("Caf\u00E9 works " + fixture.siteId);
   }
 
   @Test
