@@ -164,6 +164,7 @@ public class ScheduleController {
   public String editLoad(@PathVariable long id, Model model) {
     LoadItem load = schedule.load(id);
     model.addAttribute("load", load);
+    model.addAttribute("loadVersion", load.getVersion());
     model.addAttribute("circuitId", load.getCircuit().getId());
     model.addAttribute("loadForm", LoadForm.of(load));
     return "board/load";
@@ -176,6 +177,7 @@ public class ScheduleController {
       BindingResult errors,
       HttpServletRequest request,
       @RequestParam(required = false) String reason,
+      @RequestParam(required = false) Long version,
       Model model,
       HttpServletResponse response) {
     loadForm = FormRecovery.ensure(loadForm, errors, model, "loadForm", LoadForm.class, request);
@@ -183,11 +185,32 @@ public class ScheduleController {
     long circuitId = load.getCircuit().getId();
     if (errors.hasErrors()) {
       model.addAttribute("load", load);
+      model.addAttribute("loadVersion", version);
       model.addAttribute("circuitId", circuitId);
       return FormStatus.invalid(response, "board/load");
     }
-    schedule.updateLoad(id, loadForm, reason);
+    try {
+      schedule.updateLoad(id, version, loadForm, reason);
+    } catch (StaleEditException | ObjectOptimisticLockingFailureException stale) {
+      return loadConflict(id, loadForm, model, response);
+    }
     return "redirect:/circuits/" + circuitId + "/edit";
+  }
+
+  /** As {@link #conflict}, for a load line saved by someone else after its form was opened. */
+  private String loadConflict(long id, LoadForm yours, Model model, HttpServletResponse response) {
+    LoadItem saved = schedule.load(id);
+    LoadForm savedForm = LoadForm.of(saved);
+    model.asMap().remove(BindingResult.MODEL_KEY_PREFIX + "loadForm");
+    model.addAttribute("conflict", RecordDiff.between(yours, savedForm, java.util.Set.of()));
+    model.addAttribute("conflictPrefix", "load.");
+    model.addAttribute("yours", yours);
+    model.addAttribute("load", saved);
+    model.addAttribute("loadVersion", saved.getVersion());
+    model.addAttribute("circuitId", saved.getCircuit().getId());
+    model.addAttribute("loadForm", savedForm);
+    response.setStatus(HttpServletResponse.SC_CONFLICT);
+    return "board/load";
   }
 
   @PostMapping("/loads/{id}/delete")

@@ -8,7 +8,10 @@ import jakarta.servlet.http.HttpServletResponse;
 import java.security.Principal;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
+import org.springframework.context.MessageSource;
+import org.springframework.orm.ObjectOptimisticLockingFailureException;
 import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
 import org.springframework.web.bind.annotation.GetMapping;
@@ -21,9 +24,11 @@ import org.springframework.web.bind.annotation.RequestParam;
 public class MethodController {
 
   private final MethodLibrary library;
+  private final MessageSource messages;
 
-  public MethodController(MethodLibrary library) {
+  public MethodController(MethodLibrary library, MessageSource messages) {
     this.library = library;
+    this.messages = messages;
   }
 
   /** One group of a method as the edit form shows it. */
@@ -76,10 +81,16 @@ public class MethodController {
     Map<String, String> problems;
     try {
       problems = library.update(key, version, name, submitted, user.getName());
-    } catch (StaleEditException stale) {
-      // Someone saved the method since this form was opened: show what was typed against the
-      // current version (the form now carries it), so saving again is a deliberate choice.
-      fill(model, library.entry(key), submitted, Map.of("version", "stale"));
+    } catch (RuleViolation violation) {
+      problems = Map.of("name", messages.getMessage(violation.messageCode(), null, Locale.UK));
+    } catch (StaleEditException | ObjectOptimisticLockingFailureException stale) {
+      // The form comes back with the saved method's version and the user's typed values: saving
+      // again is a deliberate overwrite, and nothing typed is lost.
+      fill(
+          model,
+          library.entry(key),
+          submitted,
+          Map.of("name", messages.getMessage("method.stale", null, Locale.UK)));
       response.setStatus(HttpServletResponse.SC_CONFLICT);
       return "diversity/method";
     }

@@ -4,16 +4,18 @@ import com.wayledger.engine.demand.CategoryGroup;
 import com.wayledger.engine.demand.DiversityMethod;
 import com.wayledger.engine.demand.DiversityMethodCatalog;
 import com.wayledger.engine.demand.DiversityMethods;
+import com.wayledger.system.MethodsChanged;
 import com.wayledger.system.NotFoundException;
+import com.wayledger.system.RowLocks;
 import com.wayledger.system.RuleViolation;
 import com.wayledger.system.StaleEditException;
-import com.wayledger.system.TextInput;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
+import org.springframework.context.ApplicationEventPublisher;
 import org.springframework.stereotype.Service;
 import org.springframework.transaction.annotation.Transactional;
 
@@ -27,9 +29,14 @@ public class MethodLibrary {
   private static final String KEY_PATTERN = "[a-z0-9][a-z0-9-]{1,59}";
 
   private final StoredMethodRepository stored;
+  private final ApplicationEventPublisher events;
+  private final RowLocks locks;
 
-  public MethodLibrary(StoredMethodRepository stored) {
+  public MethodLibrary(
+      StoredMethodRepository stored, ApplicationEventPublisher events, RowLocks locks) {
+    this.locks = locks;
     this.stored = stored;
+    this.events = events;
   }
 
   /**
@@ -79,7 +86,6 @@ public class MethodLibrary {
     if (newName == null || newName.isBlank() || newName.strip().length() > 120) {
       throw new RuleViolation("name", "method.name.required");
     }
-    TextInput.require("name", newName, TextInput.Kind.NAME);
     DiversityMethod copy = source.copyAs(key, newName.strip());
     stored.save(new StoredMethod(key, copy.name(), fromKey, MethodJson.write(copy), user));
     return copy;
@@ -92,13 +98,16 @@ public class MethodLibrary {
   @Transactional
   public Map<String, String> update(
       String key, long version, String name, Map<String, String> submitted, String user) {
-    StoredMethod row = stored.findById(key).orElse(null);
-    if (row == null) {
-      if (DiversityMethods.builtIn().methods().stream().anyMatch(m -> m.key().equals(key))) {
+    // Exclusive before reading: a second save from the same version waits, then sees the first
+    // one's version and becomes a conflict instead of an overwrite.
+    if (!locks.exclusive("diversity_method", key)) {
+      if (DiversityMethods.builtIn().find(key).isPresent()) {
         throw new RuleViolation("key", "method.builtIn.readOnly");
       }
       throw new NotFoundException("Diversity method", key);
     }
+    StoredMethod row =
+        stored.findById(key).orElseThrow(() -> new NotFoundException("Diversity method", key));
     if (row.getVersion() != version) {
       throw new StaleEditException("Diversity method " + key);
     }
@@ -107,11 +116,6 @@ public class MethodLibrary {
     DiversityMethod edited = edit(method, submitted, problems);
     if (name == null || name.isBlank() || name.strip().length() > 120) {
       problems.put("name", "Give the method a name of at most 120 characters.");
-    } else if (!TextInput.acceptable(name, TextInput.Kind.NAME)) {
-      problems.put(
-          "name",
-          "Not accepted as a name: it holds a control or text-direction character, or nothing"
-              + " visible.");
     }
     List<CategoryGroup> groups = edited.groups();
     for (int i = 0; i < groups.size(); i++) {
@@ -128,6 +132,8 @@ public class MethodLibrary {
               edited.groups(),
               edited.needsDwellingParameters());
       row.update(renamed.name(), MethodJson.write(renamed), user);
+      // Any site's boards may use the method: their stored analyses are now stale.
+      events.publishEvent(new MethodsChanged(key));
     }
     return problems;
   }

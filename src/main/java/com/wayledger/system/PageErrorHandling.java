@@ -6,6 +6,7 @@ import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 import org.springframework.context.MessageSource;
 import org.springframework.dao.DataIntegrityViolationException;
+import org.springframework.dao.PessimisticLockingFailureException;
 import org.springframework.http.HttpStatus;
 import org.springframework.http.converter.HttpMessageNotReadableException;
 import org.springframework.orm.ObjectOptimisticLockingFailureException;
@@ -72,7 +73,11 @@ public class PageErrorHandling {
     return problem(HttpStatus.BAD_REQUEST, "error.badRequest", model, response);
   }
 
-  @ExceptionHandler({StaleEditException.class, ObjectOptimisticLockingFailureException.class})
+  @ExceptionHandler({
+    StaleEditException.class,
+    ObjectOptimisticLockingFailureException.class,
+    PessimisticLockingFailureException.class
+  })
   public String stale(Exception e, Model model, HttpServletResponse response) {
     return problem(HttpStatus.CONFLICT, "error.stale", model, response);
   }

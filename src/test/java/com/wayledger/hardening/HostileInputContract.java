@@ -84,7 +84,7 @@ abstract class HostileInputContract {
                 .with(csrf()));
     assertThat(stale.getResponse().getStatus()).isEqualTo(409);
     assertThat(stale.getResponse().getContentAsString())
-        .contains("Someone saved this method after you opened it")
+        .contains("Someone else saved this method after you opened it")
         .contains("Edited meanwhile");
   }
 
