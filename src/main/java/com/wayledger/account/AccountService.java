@@ -52,6 +52,7 @@ public class AccountService implements UserDetailsService {
     if (users.existsByUsernameIgnoreCase(form.username().strip())) {
       throw new RuleViolation("username", "user.username.taken");
     }
+    PasswordPolicy.check(form.username(), form.password());
     AppUser user =
         new AppUser(
             form.username().strip(),

@@ -52,7 +52,16 @@ class FirstAdmin implements ApplicationRunner {
     try {
       accounts.create(new UserForm(username, username, password, Role.ADMIN));
       LOG.info("Created the first administrator '{}'.", username);
-    } catch (RuleViolation | DataIntegrityViolationException createdElsewhere) {
+    } catch (RuleViolation refused) {
+      if ("password".equals(refused.field())) {
+        LOG.error(
+            "WAYLEDGER_ADMIN_PASSWORD is refused by the password policy ({}); no administrator was"
+                + " created. Choose a longer, less common password.",
+            refused.messageCode());
+        return;
+      }
+      LOG.info("The first administrator '{}' was created by another instance.", username);
+    } catch (DataIntegrityViolationException createdElsewhere) {
       // Two replicas starting together on one database: the other one created the administrator
       // first.
       LOG.info("The first administrator '{}' was created by another instance.", username);

@@ -61,6 +61,7 @@ public class SecurityConfig {
         // slow path (bcrypt of the password on every request).
         .addFilterBefore(new BearerTokenFilter(tokens), BasicAuthenticationFilter.class)
         .httpBasic(Customizer.withDefaults())
+        .headers(SecurityHeaders::apply)
         .csrf(csrf -> csrf.disable())
         .sessionManagement(
             session -> session.sessionCreationPolicy(SessionCreationPolicy.STATELESS))
@@ -103,8 +104,14 @@ public class SecurityConfig {
                     .hasRole("EDITOR")
                     .anyRequest()
                     .hasRole("VIEWER"))
-        .formLogin(form -> form.loginPage("/login").defaultSuccessUrl("/sites", false).permitAll())
-        .logout(logout -> logout.logoutSuccessUrl("/login?signedOut"));
+        .formLogin(
+            form ->
+                form.loginPage("/login")
+                    .defaultSuccessUrl("/sites", false)
+                    .failureHandler(ThrottledSignIn.formFailure())
+                    .permitAll())
+        .logout(logout -> logout.logoutSuccessUrl("/login?signedOut"))
+        .headers(SecurityHeaders::apply);
     return http.build();
   }
 }

@@ -107,10 +107,12 @@ public class AnalysisApiController {
                                     "unbalanceLimitPercent": 10, "coincidenceFactor": 1,
                                     "circuits": [
                                      {"id": 11, "wayNumber": 1, "position": "THREE_POLE", "description": "Oven", "status": "IN_USE",
+                                      "lockedForBalancing": false, "ringFinal": false,
                                       "device": {"kind": "MCB", "curve": "C", "ratedCurrentAmps": 32, "poles": 3, "breakingCapacityKiloAmps": 10},
                                       "loads": [{"description": "Oven", "category": "COOKING", "quantity": 1, "ratingValue": 15000,
                                                  "ratingUnit": "W", "powerFactor": 1, "continuous": false}]},
                                      {"id": 12, "wayNumber": 2, "position": "L1", "description": "Sockets", "status": "IN_USE",
+                                      "lockedForBalancing": false, "ringFinal": false,
                                       "device": {"kind": "RCBO", "curve": "B", "ratedCurrentAmps": 32, "poles": 1,
                                                  "breakingCapacityKiloAmps": 6, "residualCurrentMilliAmps": 30, "rcdType": "A"},
                                       "loads": [{"description": "Sockets", "category": "SOCKET_OUTLETS", "quantity": 1,

@@ -6,6 +6,8 @@ import com.wayledger.engine.InstallationMethod;
 import com.wayledger.engine.Insulation;
 import com.wayledger.engine.RcdType;
 import com.wayledger.engine.TripCurve;
+import com.wayledger.system.CleanText;
+import com.wayledger.system.TextInput.Kind;
 import jakarta.validation.constraints.DecimalMax;
 import jakarta.validation.constraints.DecimalMin;
 import jakarta.validation.constraints.Max;
@@ -17,8 +19,8 @@ import jakarta.validation.constraints.Size;
 
 /** What a user may edit on a board. */
 public record BoardForm(
-    @NotBlank @Size(max = 40) String reference,
-    @Size(max = 200) String location,
+    @NotBlank @Size(max = 40) @CleanText(Kind.NAME) String reference,
+    @Size(max = 200) @CleanText(Kind.LINE) String location,
     @NotNull Integer phases,
     @NotNull @Min(1) @Max(96) Integer wayCount,
     @Positive @DecimalMax("6300") Double busbarRatingAmps,
@@ -43,7 +45,7 @@ public record BoardForm(
     @NotNull @DecimalMin(value = "0", inclusive = false) @DecimalMax("100")
         Double unbalanceLimitPercent,
     @NotNull @DecimalMin(value = "0", inclusive = false) @DecimalMax("1") Double coincidenceFactor,
-    @Size(max = 60) String diversityMethod,
+    @Size(max = 60) @CleanText(Kind.LINE) String diversityMethod,
     @Positive @DecimalMax("100") Double measuredExternalLoopImpedanceOhms,
     @Positive @DecimalMax("200") Double measuredFaultCurrentKiloAmps,
     Long version,

@@ -1,6 +1,7 @@
 package com.wayledger.board;
 
 import com.wayledger.diversity.MethodLibrary;
+import com.wayledger.engine.PhasePosition;
 import com.wayledger.site.Site;
 import com.wayledger.site.SiteService;
 import com.wayledger.system.ChangeKind;
@@ -168,6 +169,36 @@ public class BoardService {
             reason));
   }
 
+  /**
+   * A three-phase board turned single-phase keeps only L1: circuits on L2, L3 or all three lines,
+   * and three-phase boards fed from it, must be moved or changed first; the message names them.
+   */
+  private void checkCanBecomeSinglePhase(Board board) {
+    List<String> ways =
+        circuits.findByBoard(board.getId()).stream()
+            .filter(circuit -> circuit.getPosition() != PhasePosition.L1)
+            .map(circuit -> circuit.getWayNumber() + " " + circuit.getPosition().name())
+            .distinct()
+            .toList();
+    if (!ways.isEmpty()) {
+      throw new RuleViolation("phases", "board.phases.circuitsBeyondL1", String.join(", ", ways));
+    }
+    List<String> children =
+        boards.findBySite(board.getSite().getId()).stream()
+            .filter(
+                child ->
+                    child.getParent() != null
+                        && child.getParent().getId().equals(board.getId())
+                        && child.isThreePhase())
+            .map(Board::getReference)
+            .sorted()
+            .toList();
+    if (!children.isEmpty()) {
+      throw new RuleViolation(
+          "phases", "board.phases.childrenThreePhase", String.join(", ", children));
+    }
+  }
+
   private Board checkRules(Site site, BoardForm form, Board existing) {
     if (form.phases() != 1 && form.phases() != 3) {
       throw new RuleViolation("phases", "board.phases.invalid");
@@ -195,6 +226,9 @@ public class BoardService {
                 site.getId(), reference, existing.getId());
     if (taken) {
       throw new RuleViolation("reference", "board.reference.taken");
+    }
+    if (existing != null && form.phases() == 1 && existing.isThreePhase()) {
+      checkCanBecomeSinglePhase(existing);
     }
     if (existing != null) {
       Integer highestWay = circuits.highestWay(existing.getId());

@@ -10,6 +10,8 @@ import com.wayledger.engine.RatingUnit;
 import com.wayledger.engine.RcdType;
 import com.wayledger.engine.TripCurve;
 import com.wayledger.engine.WayStatus;
+import com.wayledger.system.CleanText;
+import com.wayledger.system.TextInput.Kind;
 import jakarta.validation.constraints.DecimalMax;
 import jakarta.validation.constraints.DecimalMin;
 import jakarta.validation.constraints.Max;
@@ -26,7 +28,7 @@ import jakarta.validation.constraints.Size;
 public record CircuitForm(
     @NotNull @Min(1) @Max(96) Integer wayNumber,
     @NotNull PhasePosition position,
-    @NotBlank @Size(max = 120) String description,
+    @NotBlank @Size(max = 120) @CleanText(Kind.NAME) String description,
     @NotNull WayStatus status,
     Boolean lockedForBalancing,
     DeviceKind deviceKind,
@@ -46,7 +48,7 @@ public record CircuitForm(
     @Min(1) @Max(100) Integer cableGroupedCircuits,
     @Min(0) @Max(100000) Integer cableThermalInsulationMm,
     @Positive @DecimalMax("100") Double measuredLoopImpedanceOhms,
-    @Size(max = 120) String loadDescription,
+    @Size(max = 120) @CleanText(Kind.LINE) String loadDescription,
     LoadCategory loadCategory,
     @Min(1) @Max(10000) Integer loadQuantity,
     @Positive @DecimalMax("10000000") Double loadRatingValue,

@@ -2,6 +2,8 @@ package com.wayledger.board;
 
 import com.wayledger.engine.LoadCategory;
 import com.wayledger.engine.RatingUnit;
+import com.wayledger.system.CleanText;
+import com.wayledger.system.TextInput.Kind;
 import jakarta.validation.constraints.DecimalMax;
 import jakarta.validation.constraints.DecimalMin;
 import jakarta.validation.constraints.Max;
@@ -13,7 +15,7 @@ import jakarta.validation.constraints.Size;
 
 /** One load line as typed by a user. */
 public record LoadForm(
-    @NotBlank @Size(max = 120) String description,
+    @NotBlank @Size(max = 120) @CleanText(Kind.NAME) String description,
     @NotNull LoadCategory category,
     @NotNull @Min(1) @Max(10000) Integer quantity,
     @NotNull @Positive @DecimalMax("10000000") Double ratingValue,

@@ -28,6 +28,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
+import org.springframework.beans.factory.annotation.Value;
 import org.springframework.context.SmartLifecycle;
 import org.springframework.context.annotation.Profile;
 import org.springframework.stereotype.Component;
@@ -57,13 +58,19 @@ class DemoSite implements SmartLifecycle {
   private final ScheduleService schedule;
   private final AccountService accounts;
   private final TransactionTemplate transaction;
+  private final String adminUsername;
+  private final String adminPassword;
 
   DemoSite(
       SiteService sites,
       BoardService boards,
       ScheduleService schedule,
       AccountService accounts,
-      TransactionTemplate transaction) {
+      TransactionTemplate transaction,
+      @Value("${wayledger.admin.username:}") String adminUsername,
+      @Value("${wayledger.admin.password:}") String adminPassword) {
+    this.adminUsername = adminUsername;
+    this.adminPassword = adminPassword;
     this.sites = sites;
     this.boards = boards;
     this.schedule = schedule;
@@ -100,14 +107,27 @@ class DemoSite implements SmartLifecycle {
 
   void loadOnce() {
     if (!accounts.anyUser()) {
-      accounts.create(new UserForm(DEMO_USER, "Demo editor", DEMO_PASSWORD, Role.ADMIN));
-      accounts.create(new UserForm(VIEWER_USER, "Demo visitor", VIEWER_PASSWORD, Role.VIEWER));
+      for (UserForm account : demoAccounts(adminUsername, adminPassword)) {
+        accounts.create(account);
+      }
     }
     if (sites.all().stream().anyMatch(site -> site.getName().equals(SITE_NAME))) {
       return;
     }
     transaction.executeWithoutResult(status -> load());
     LOG.info("Loaded the demo site '{}'.", SITE_NAME);
+  }
+
+  /**
+   * Exactly the accounts the README lists: an administrator ({@code demo}, or the one named by
+   * WAYLEDGER_ADMIN_USERNAME / _PASSWORD when both are set) and the read-only {@code visitor}.
+   */
+  static List<UserForm> demoAccounts(String adminUsername, String adminPassword) {
+    UserForm admin =
+        adminUsername.isBlank() || adminPassword.isBlank()
+            ? new UserForm(DEMO_USER, "Demo editor", DEMO_PASSWORD, Role.ADMIN)
+            : new UserForm(adminUsername.strip(), adminUsername.strip(), adminPassword, Role.ADMIN);
+    return List.of(admin, new UserForm(VIEWER_USER, "Demo visitor", VIEWER_PASSWORD, Role.VIEWER));
   }
 
   private void load() {

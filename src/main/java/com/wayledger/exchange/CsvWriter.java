@@ -12,6 +12,7 @@ import java.util.List;
 import java.util.Locale;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
+import org.apache.commons.csv.QuoteMode;
 
 /**
  * Writes one board's schedule as CSV: a header row, then one row per load line with the same
@@ -37,7 +38,15 @@ public final class CsvWriter {
     // not closed here: the caller owns the writer (a response stream, say)
     CSVPrinter printer =
         new CSVPrinter(
-            out, CSVFormat.RFC4180.builder().setHeader(header.toArray(String[]::new)).get());
+            out,
+            CSVFormat.RFC4180
+                .builder()
+                .setHeader(header.toArray(String[]::new))
+                // Every cell in quotes: a program that splits on ";" or a tab (common in locales
+                // with a decimal comma) keeps "safe;=1+1" as one text cell instead of running
+                // "=1+1" as a formula from the second half.
+                .setQuoteMode(QuoteMode.ALL_NON_NULL)
+                .get());
     {
       for (CircuitEntry entry : board.circuits()) {
         BoardFigures.CircuitFigures f = figures.circuit(entry.circuitId());

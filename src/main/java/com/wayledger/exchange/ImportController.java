@@ -69,6 +69,7 @@ public class ImportController {
       SheetTable table = SpreadsheetReader.read(bytes, file.getOriginalFilename(), -1);
       UploadStore.Upload upload =
           uploads.save(boardId, principal.getName(), file.getOriginalFilename(), bytes);
+      uploads.remember(upload, -1, table);
       String next;
       if (table.isOwnExport()) {
         upload = upload.withMapping(table.sheetIndex(), ColumnGuesser.guess(table));
@@ -97,7 +98,7 @@ public class ImportController {
       Model model) {
     UploadStore.Upload upload = upload(token, boardId, principal);
     int sheetIndex = sheet != null ? sheet : upload.sheetIndex();
-    SheetTable table = SpreadsheetReader.read(uploads.bytes(upload), upload.fileName(), sheetIndex);
+    SheetTable table = uploads.table(upload, sheetIndex);
     List<ImportField> mapping =
         sheet == null
                 && upload.mapping().size() == table.headers().size()
@@ -121,7 +122,7 @@ public class ImportController {
       HttpServletRequest request,
       Principal principal) {
     UploadStore.Upload upload = upload(token, boardId, principal);
-    SheetTable table = SpreadsheetReader.read(uploads.bytes(upload), upload.fileName(), sheet);
+    SheetTable table = uploads.table(upload, sheet);
     List<ImportField> mapping = new ArrayList<>();
     for (int c = 0; c < table.headers().size(); c++) {
       String value = request.getParameter("column" + c);
@@ -207,8 +208,7 @@ public class ImportController {
   }
 
   private ImportPlan fillPreview(long boardId, UploadStore.Upload upload, Model model) {
-    SheetTable table =
-        SpreadsheetReader.read(uploads.bytes(upload), upload.fileName(), upload.sheetIndex());
+    SheetTable table = uploads.table(upload, upload.sheetIndex());
     List<ImportField> mapping = upload.mapping();
     if (mapping.size() != table.headers().size()) {
       mapping = ColumnGuesser.guess(table);

@@ -50,6 +50,19 @@ public final class SpreadsheetReader {
   /** Most data rows accepted below the header. */
   public static final int MAX_ROWS = 5_000;
 
+  /**
+   * Most rows read from a sheet, empty ones included: a workbook padded with hundreds of thousands
+   * of formatted but empty rows is refused after reading this many instead of being parsed whole.
+   */
+  public static final int MAX_ROWS_READ = 20_000;
+
+  /** Most cells read from a sheet, empty ones included. */
+  public static final int MAX_CELLS_READ = 200_000;
+
+  /** How many times a file has been parsed into a table (for tests of parse-once). */
+  static final java.util.concurrent.atomic.AtomicLong PARSES =
+      new java.util.concurrent.atomic.AtomicLong();
+
   /** Most columns read; cells further right are ignored. */
   public static final int MAX_COLUMNS = 80;
 
@@ -180,6 +193,7 @@ public final class SpreadsheetReader {
         }
       }
     }
+    PARSES.incrementAndGet();
     List<SheetTable.Row> raw = kind == Kind.CSV ? readCsv(bytes) : readSheet(bytes, index);
     return tableOf(names, index, raw);
   }
@@ -237,7 +251,28 @@ public final class SpreadsheetReader {
 
   // ------------------------------------------------------------------ CSV
 
+  /** Counts rows and cells as they are read, and stops the reading past the bounds. */
+  static final class ReadBounds {
+    private long rows;
+    private long cells;
+
+    void row(int cellsInRow) {
+      if (++rows > MAX_ROWS_READ) {
+        throw new ImportRefused("import.refused.tooManyRowsRead", MAX_ROWS_READ);
+      }
+      cell(cellsInRow);
+    }
+
+    void cell(int count) {
+      cells += count;
+      if (cells > MAX_CELLS_READ) {
+        throw new ImportRefused("import.refused.tooManyCells", MAX_CELLS_READ);
+      }
+    }
+  }
+
   private static List<SheetTable.Row> readCsv(byte[] bytes) {
+    ReadBounds counted = new ReadBounds();
     String text = new String(bytes, StandardCharsets.UTF_8);
     if (text.startsWith("\uFEFF")) {
       text = text.substring(1);
@@ -249,6 +284,7 @@ public final class SpreadsheetReader {
     try (Reader reader = new StringReader(text);
         CSVParser parser = CSVParser.parse(reader, format)) {
       for (CSVRecord record : parser) {
+        counted.row(record.size());
         List<String> cells = new ArrayList<>();
         for (int i = 0; i < Math.min(record.size(), MAX_COLUMNS); i++) {
           cells.add(CellText.fromCsv(record.get(i).strip()));
@@ -382,10 +418,12 @@ public final class SpreadsheetReader {
 
   private static final class RowCollector implements XSSFSheetXMLHandler.SheetContentsHandler {
     final List<SheetTable.Row> rows = new ArrayList<>();
+    private final ReadBounds counted = new ReadBounds();
     private List<String> cells;
 
     @Override
     public void startRow(int rowNum) {
+      counted.row(0);
       cells = new ArrayList<>();
     }
 
@@ -396,6 +434,7 @@ public final class SpreadsheetReader {
 
     @Override
     public void cell(String reference, String formattedValue, XSSFComment comment) {
+      counted.cell(1);
       int column = reference == null ? cells.size() : new CellReference(reference).getCol();
       if (column >= MAX_COLUMNS) {
         return;

@@ -13,7 +13,9 @@ import java.time.Duration;
 import java.time.Instant;
 import java.util.ArrayList;
 import java.util.HexFormat;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.Properties;
 import java.util.regex.Pattern;
@@ -31,7 +33,24 @@ public class UploadStore {
   private static final Pattern TOKEN = Pattern.compile("[0-9a-f]{32}");
   private static final Duration KEEP = Duration.ofHours(2);
 
+  /** How many parsed sheets are kept in memory, most recently used first. */
+  static final int TABLES_KEPT = 16;
+
   private final SecureRandom random = new SecureRandom();
+
+  /**
+   * Parsed sheets by token and sheet index, so each step of an import reuses the table instead of
+   * parsing the file again (an instance restarted or another replica parses it once more).
+   */
+  private final Map<String, SheetTable> tables =
+      java.util.Collections.synchronizedMap(
+          new LinkedHashMap<>(TABLES_KEPT, 0.75f, true) {
+            @Override
+            protected boolean removeEldestEntry(Map.Entry<String, SheetTable> eldest) {
+              return size() > TABLES_KEPT;
+            }
+          });
+
   private final Path directory;
 
   public UploadStore() throws IOException {
@@ -127,6 +146,23 @@ public class UploadStore {
             mapping));
   }
 
+  /** The upload's sheet as a table, parsed once and then kept (see {@link #TABLES_KEPT}). */
+  public SheetTable table(Upload upload, int sheetIndex) {
+    String key = upload.token() + ":" + sheetIndex;
+    SheetTable table = tables.get(key);
+    if (table == null) {
+      table = SpreadsheetReader.read(bytes(upload), upload.fileName(), sheetIndex);
+      remember(upload, sheetIndex, table);
+    }
+    return table;
+  }
+
+  /** Keeps a table just parsed (under the index asked for and the one it resolved to). */
+  public void remember(Upload upload, int sheetIndex, SheetTable table) {
+    tables.put(upload.token() + ":" + sheetIndex, table);
+    tables.put(upload.token() + ":" + table.sheetIndex(), table);
+  }
+
   public byte[] bytes(Upload upload) {
     try {
       return Files.readAllBytes(directory.resolve(upload.token() + ".bin"));
@@ -136,6 +172,7 @@ public class UploadStore {
   }
 
   public void remove(Upload upload) {
+    tables.keySet().removeIf(key -> key.startsWith(upload.token() + ":"));
     try {
       Files.deleteIfExists(directory.resolve(upload.token() + ".bin"));
       Files.deleteIfExists(directory.resolve(upload.token() + ".properties"));

@@ -213,7 +213,7 @@ public final class WorkbookWriter {
   }
 
   static String uniqueName(String wanted, Set<String> taken) {
-    String base = WorkbookUtil.createSafeSheetName(wanted, '_');
+    String base = WorkbookUtil.createSafeSheetName(xmlSafe(wanted), '_');
     String name = base;
     for (int n = 2; taken.contains(name.toLowerCase(Locale.ROOT)); n++) {
       String suffix = " (" + n + ")";
@@ -221,6 +221,30 @@ public final class WorkbookWriter {
     }
     taken.add(name.toLowerCase(Locale.ROOT));
     return name;
+  }
+
+  /**
+   * A sheet name goes into workbook.xml as an attribute, outside the cell escaping: characters XML
+   * 1.0 cannot hold (control characters, U+FFFE/U+FFFF, half surrogate pairs) become "_", and so do
+   * text-direction controls, which would make the tab read differently than the board reference.
+   */
+  static String xmlSafe(String text) {
+    if (text == null) {
+      return "";
+    }
+    StringBuilder out = new StringBuilder(text.length());
+    for (int i = 0; i < text.length(); i++) {
+      char c = text.charAt(i);
+      boolean lonelySurrogate =
+          Character.isHighSurrogate(c)
+                  && (i + 1 >= text.length() || !Character.isLowSurrogate(text.charAt(i + 1)))
+              || Character.isLowSurrogate(c)
+                  && (i == 0 || !Character.isHighSurrogate(text.charAt(i - 1)));
+      boolean direction = (c >= '\u202a' && c <= '\u202e') || (c >= '\u2066' && c <= '\u2069');
+      out.append(
+          Character.isISOControl(c) || c >= '\ufffe' || lonelySurrogate || direction ? '_' : c);
+    }
+    return out.toString();
   }
 
   // ---------------------------------------------------------------- board sheet

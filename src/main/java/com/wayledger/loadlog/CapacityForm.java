@@ -3,6 +3,8 @@ package com.wayledger.loadlog;
 import com.wayledger.engine.LoadCategory;
 import com.wayledger.engine.RatingUnit;
 import com.wayledger.engine.capacity.NewLoad;
+import com.wayledger.system.CleanText;
+import com.wayledger.system.TextInput.Kind;
 import jakarta.validation.constraints.DecimalMax;
 import jakarta.validation.constraints.DecimalMin;
 import jakarta.validation.constraints.NotBlank;
@@ -17,7 +19,7 @@ import jakarta.validation.constraints.Size;
  * @param threePhase true for a three-phase load
  */
 public record CapacityForm(
-    @NotBlank @Size(max = 120) String description,
+    @NotBlank @Size(max = 120) @CleanText(Kind.NAME) String description,
     @NotNull LoadCategory category,
     @NotNull @Positive @DecimalMax("2000") Double ratingValue,
     @NotNull RatingUnit ratingUnit,

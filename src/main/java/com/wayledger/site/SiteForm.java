@@ -1,6 +1,8 @@
 package com.wayledger.site;
 
 import com.wayledger.engine.EarthingSystem;
+import com.wayledger.system.CleanText;
+import com.wayledger.system.TextInput.Kind;
 import jakarta.validation.constraints.DecimalMax;
 import jakarta.validation.constraints.DecimalMin;
 import jakarta.validation.constraints.NotBlank;
@@ -10,8 +12,8 @@ import jakarta.validation.constraints.Size;
 
 /** What a user may edit on a site; the version guards against overwriting someone else's change. */
 public record SiteForm(
-    @NotBlank @Size(max = 120) String name,
-    @Size(max = 500) String address,
+    @NotBlank @Size(max = 120) @CleanText(Kind.NAME) String name,
+    @Size(max = 500) @CleanText(Kind.LINE) String address,
     @NotNull EarthingSystem earthingSystem,
     @NotNull @DecimalMin(value = "50") @DecimalMax(value = "1000") Double nominalVoltageVolts,
     @NotNull Integer phases,
@@ -19,8 +21,8 @@ public record SiteForm(
     @Positive @DecimalMax("100") Double externalLoopImpedanceOhms,
     @Positive @DecimalMax("200") Double prospectiveFaultCurrentKiloAmps,
     @Positive @DecimalMax("6300") Double supplyFuseRatingAmps,
-    @Size(max = 60) String defaultDiversityMethod,
-    @Size(max = 2000) String notes,
+    @Size(max = 60) @CleanText(Kind.LINE) String defaultDiversityMethod,
+    @Size(max = 2000) @CleanText(Kind.MULTI_LINE) String notes,
     Long version,
     @DecimalMin(value = "1") @DecimalMax(value = "100") Double loadingThresholdPercent) {
 

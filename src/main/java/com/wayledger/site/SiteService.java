@@ -12,6 +12,7 @@ import java.util.Objects;
 import org.springframework.context.ApplicationEventPublisher;
 import org.springframework.data.domain.Page;
 import org.springframework.data.domain.PageRequest;
+import org.springframework.jdbc.core.simple.JdbcClient;
 import org.springframework.stereotype.Service;
 import org.springframework.transaction.annotation.Transactional;
 
@@ -23,6 +24,7 @@ import org.springframework.transaction.annotation.Transactional;
 @Service
 public class SiteService {
 
+  private final JdbcClient jdbc;
   private final SiteRepository sites;
   private final MethodLibrary methods;
   private final ApplicationEventPublisher events;
@@ -32,7 +34,9 @@ public class SiteService {
       SiteRepository sites,
       MethodLibrary methods,
       ApplicationEventPublisher events,
-      RowLocks locks) {
+      RowLocks locks,
+      JdbcClient jdbc) {
+    this.jdbc = jdbc;
     this.sites = sites;
     this.methods = methods;
     this.events = events;
@@ -94,6 +98,20 @@ public class SiteService {
       throw new StaleEditException("Site " + site.getName(), SiteForm.of(site));
     }
     checkRules(form, id);
+    if (form.phases() == 1 && site.getPhases() != 1) {
+      // Consistency across the site: a single-phase supply cannot feed three-phase boards. The
+      // boards are read through the table (the board feature depends on this one, not back).
+      List<String> threePhase =
+          jdbc.sql(
+                  "SELECT reference FROM board WHERE site_id = ? AND phases = 3 ORDER BY reference")
+              .param(id)
+              .query(String.class)
+              .list();
+      if (!threePhase.isEmpty()) {
+        throw new RuleViolation(
+            "phases", "site.phases.boardsThreePhase", String.join(", ", threePhase));
+      }
+    }
     SiteForm before = SiteForm.of(site);
     site.apply(form);
     Site saved = sites.saveAndFlush(site);

@@ -48,6 +48,20 @@ public class ApiErrorHandling {
     return problem;
   }
 
+  @ExceptionHandler(TextRefused.class)
+  public ProblemDetail textRefused(TextRefused e) {
+    ProblemDetail problem = problem(HttpStatus.BAD_REQUEST, "A text value is not acceptable.");
+    problem.setProperty(
+        "fields",
+        List.of(
+            Map.of(
+                "field",
+                e.field(),
+                "message",
+                e.messageCode() + (e.character().isEmpty() ? "" : " " + e.character()))));
+    return problem;
+  }
+
   @ExceptionHandler(HttpMessageNotReadableException.class)
   public ProblemDetail unreadable(HttpMessageNotReadableException e) {
     ProblemDetail problem =

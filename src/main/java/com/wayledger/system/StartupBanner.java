@@ -16,17 +16,27 @@ class StartupBanner {
 
   private final Environment environment;
   private final boolean demo;
+  private final String adminUsername;
 
-  StartupBanner(Environment environment, @Value("${wayledger.demo.enabled:false}") boolean demo) {
+  StartupBanner(
+      Environment environment,
+      @Value("${wayledger.demo.enabled:false}") boolean demo,
+      @Value("${wayledger.admin.username:}") String adminUsername) {
     this.environment = environment;
     this.demo = demo;
+    this.adminUsername = adminUsername;
   }
 
   @EventListener(ApplicationReadyEvent.class)
   void announce() {
     String port = environment.getProperty("local.server.port", "8080");
     LOG.info("Wayledger is ready at http://localhost:{}/", port);
-    if (demo) {
+    if (demo && !adminUsername.isBlank()) {
+      LOG.info(
+          "Demo sign-in: the administrator '{}' from WAYLEDGER_ADMIN_USERNAME / _PASSWORD;"
+              + " user 'visitor', password 'wayledger-visit' (read only).",
+          adminUsername.strip());
+    } else if (demo) {
       LOG.info(
           "Demo sign-in: user 'demo', password 'wayledger-demo' (editor and admin);"
               + " user 'visitor', password 'wayledger-visit' (read only).");

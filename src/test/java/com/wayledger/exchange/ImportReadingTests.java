@@ -116,7 +116,7 @@ class ImportReadingTests {
     assertThat(text).as("formula-like load text quoted").contains("'+Water heater");
     assertThat(text.lines().findFirst().orElseThrow())
         .as("header row")
-        .startsWith("Way,Line,Circuit,State");
+        .startsWith("\"Way\",\"Line\",\"Circuit\",\"State\"");
     ImportPlan plan = plan(bytes, "shop.csv", 3, 12);
     assertThat(plan.isAllValid()).as("all rows valid: %s", plan.rows()).isTrue();
     assertThat(imported(plan)).isEqualTo(expected(data.boards().get(0)));

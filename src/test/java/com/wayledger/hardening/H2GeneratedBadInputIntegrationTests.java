@@ -1,0 +1,4 @@
+package com.wayledger.hardening;
+
+/** Generated bad input on the embedded H2 database in PostgreSQL mode. */
+class H2GeneratedBadInputIntegrationTests extends GeneratedBadInputContract {}
