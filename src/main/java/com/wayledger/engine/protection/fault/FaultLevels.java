@@ -7,6 +7,7 @@ import com.wayledger.engine.DeviceSpec;
 import com.wayledger.engine.SiteSpec;
 import com.wayledger.engine.SupplySpec;
 import com.wayledger.engine.protection.cable.CableImpedance;
+import com.wayledger.engine.protection.cable.ConductorResistance;
 import com.wayledger.engine.protection.cable.VoltageDrop;
 import com.wayledger.engine.protection.result.Resolved;
 import com.wayledger.engine.protection.result.SourcedValue;
@@ -91,6 +92,7 @@ public final class FaultLevels {
     SourcedValue upstreamKa;
     SourcedValue upstreamDrop;
     Double upstreamResidual;
+    java.util.List<String> assumptions = new java.util.ArrayList<>();
     if (board.parentBoardId() == null) {
       upstreamZe =
           supply.externalLoopImpedanceOhms() == null
@@ -115,6 +117,7 @@ public final class FaultLevels {
       upstreamResidual = null;
     } else {
       BoardFaultLevel p = levelOf(parent);
+      assumptions.addAll(p.assumptions());
       upstreamZe = p.externalLoopImpedanceOhms();
       upstreamKa = p.faultCurrentKiloAmps();
       upstreamDrop = p.voltageDropFromOriginPercent();
@@ -125,6 +128,9 @@ public final class FaultLevels {
     }
 
     String submainName = "submain to " + board.reference();
+    if (!atOrigin && submain != null && submain.insulation() == null) {
+      assumptions.add(submainName + ": " + ConductorResistance.ASSUMED_HOT_INSULATION);
+    }
     SourcedValue ze;
     if (board.measuredExternalLoopImpedanceOhms() != null) {
       ze = SourcedValue.measured(board.measuredExternalLoopImpedanceOhms());
@@ -166,7 +172,7 @@ public final class FaultLevels {
     DeviceSpec upstreamDevice =
         board.incomer() != null ? board.incomer() : feedingWay == null ? null : feedingWay.device();
     Double residual = smaller(upstreamResidual, residualOf(board.incomer()));
-    return new BoardFaultLevel(board.id(), ze, ka, drop, upstreamDevice, residual);
+    return new BoardFaultLevel(board.id(), ze, ka, drop, upstreamDevice, residual, assumptions);
   }
 
   private Resolved<Double> submainDropPercent(BoardSpec board, CableSpec submain, double u0) {
