@@ -681,7 +681,12 @@ public final class CapacityAdvisor {
         Map<Phase, Double> currents = new EnumMap<>(Phase.class);
         board.phases().forEach(p -> currents.put(p.phase(), p.currentAmps()));
         boards.put(
-            board.boardId(), new BoardLoading(board.boardId(), currents, board.unbalancePercent()));
+            board.boardId(),
+            new BoardLoading(
+                board.boardId(),
+                currents,
+                board.unbalancePercent(),
+                board.lines() == 3 ? board.neutralCurrentAmps() : null));
       }
       return new Analysis(demand, ProtectionEngine.check(site, circuits, boards, mccb, settings));
     }

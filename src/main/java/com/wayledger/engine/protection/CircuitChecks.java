@@ -110,6 +110,9 @@ final class CircuitChecks {
     Finding drop =
         voltageDrop(circuit, board, designCurrentAmps, ibMissing, u0, threePole, settings);
     drop = resistanceAssumptions(drop, circuit, board);
+    if (drop.verdict() != Verdict.NOT_ASSESSED && !board.dropNotes().isEmpty()) {
+      drop = RingFinalCheck.noted(drop, String.join("; ", board.dropNotes()));
+    }
     if (circuit.ringFinal()) {
       drop = RingFinalCheck.noted(drop, RingFinalCheck.DROP_NOTE);
     }
