@@ -520,7 +520,9 @@ public final class WorkbookWriter {
       "Demand A",
       "Sub-boards kW (at export)",
       "Sub-boards kvar (at export)",
-      "Allowance kW (at export)"
+      "Allowance kW (at export)",
+      "Sub-boards connected kW (at export)",
+      "Sub-boards connected kvar (at export)"
     };
     Row head = sheet.createRow(startRow);
     for (int i = 0; i < heads.length; i++) {
@@ -538,20 +540,30 @@ public final class WorkbookWriter {
     for (Phase phase : lines) {
       Row row = sheet.createRow(r - 1);
       text(row, 0, board.isThreePhase() ? phase.name() : "L–N", s.label, null);
-      double connectedKw = cache.connectedKilowatts(phase);
-      double connectedKvar = cache.connectedKilovars(phase);
+      // sub-boards' connected load on this line, so the line reads as the board page does
+      double carriedKw = figures.carriedConnectedWatts(phase) / 1000.0;
+      double carriedKvar = figures.carriedConnectedVars(phase) / 1000.0;
+      double connectedKw = cache.connectedKilowatts(phase) + carriedKw;
+      double connectedKvar = cache.connectedKilovars(phase) + carriedKvar;
       double demandKw =
           cache.demandKilowatts(phase)
               + figures.carriedWatts(phase) / 1000.0
               + figures.allowanceWattsPerLine() / 1000.0;
       double demandKvar = cache.demandKilovars(phase) + figures.carriedVars(phase) / 1000.0;
       double demandAmps = cache.amps(demandKw, demandKvar);
+      number(row, 10, carriedKw, s.kilowatts, null);
+      number(row, 11, carriedKvar, s.kilowatts, null);
       formula(
-          row, 1, phaseSum(CONNECTED_KW, phase, board, from, to), connectedKw, s.kilowatts, null);
+          row,
+          1,
+          phaseSum(CONNECTED_KW, phase, board, from, to) + "+K" + r,
+          connectedKw,
+          s.kilowatts,
+          null);
       formula(
           row,
           2,
-          phaseSum(CONNECTED_KVAR, phase, board, from, to),
+          phaseSum(CONNECTED_KVAR, phase, board, from, to) + "+L" + r,
           connectedKvar,
           s.kilowatts,
           null);
@@ -590,27 +602,17 @@ public final class WorkbookWriter {
     }
     int last = r - 1;
     Row carried = sheet.createRow(r - 1);
-    text(carried, 0, "Sub-boards connected (at export)", s.label, null);
+    text(carried, 0, "Sub-boards connected (at export, in the lines above)", s.label, null);
     number(carried, 1, figures.carriedConnectedWatts() / 1000.0, s.kilowatts, null);
     number(carried, 2, figures.carriedConnectedVars() / 1000.0, s.kilowatts, null);
     int carriedRow = r++;
     Row total = sheet.createRow(r - 1);
     text(total, 0, "Board", s.totalLabel, null);
-    double totalConnectedKw = sumConnectedKw + figures.carriedConnectedWatts() / 1000.0;
+    double totalConnectedKw = sumConnectedKw;
     formula(
-        total,
-        1,
-        "SUM(B" + first + ":B" + last + ")+B" + carriedRow,
-        totalConnectedKw,
-        s.totalKilowatts,
-        null);
+        total, 1, "SUM(B" + first + ":B" + last + ")", totalConnectedKw, s.totalKilowatts, null);
     formula(
-        total,
-        2,
-        "SUM(C" + first + ":C" + last + ")+C" + carriedRow,
-        sumConnectedKvar + figures.carriedConnectedVars() / 1000.0,
-        s.totalKilowatts,
-        null);
+        total, 2, "SUM(C" + first + ":C" + last + ")", sumConnectedKvar, s.totalKilowatts, null);
     formula(total, 4, "SUM(E" + first + ":E" + last + ")", sumDemandKw, s.totalKilowatts, null);
     formula(total, 5, "SUM(F" + first + ":F" + last + ")", sumDemandKvar, s.totalKilowatts, null);
     formula(total, 6, "MAX(G" + first + ":G" + last + ")", highestAmps, s.totalAmps, null);

@@ -389,6 +389,45 @@ class WorkbookWriterTests {
     throw new AssertionError("no row for " + circuit);
   }
 
+  /**
+   * The parent board's lines carry its sub-board's connected load, as the board page shows it (a
+   * three-pole way shares its connected load evenly over its lines): recalculated by POI, each
+   * line's connected current equals the page's figure from the demand engine to 0.01 A.
+   */
+  @Test
+  void parentBoardLinesIncludeTheSubBoardConnectedLoadAsThePageShowsIt() throws IOException {
+    ExportData data = ExchangeFixtures.shopExport();
+    com.wayledger.engine.demand.BoardDemand mdb = data.demand().board(1L);
+    java.util.Map<com.wayledger.engine.Phase, double[]> page =
+        new java.util.EnumMap<>(com.wayledger.engine.Phase.class);
+    for (com.wayledger.engine.Phase p : com.wayledger.engine.Phase.values()) {
+      page.put(p, new double[2]);
+    }
+    boolean feeds = false;
+    for (com.wayledger.engine.demand.CircuitDemand c : mdb.circuits()) {
+      if (!c.isAssessed() || c.position() == null) {
+        continue;
+      }
+      feeds |= c.feedsBoardId() != null;
+      int lines = c.position() == com.wayledger.engine.PhasePosition.THREE_POLE ? 3 : 1;
+      for (com.wayledger.engine.Phase p : c.position().phases()) {
+        page.get(p)[0] += c.connectedWatts() / lines;
+        page.get(p)[1] += c.connectedVars() / lines;
+      }
+    }
+    assertThat(feeds).as("the fixture's MDB feeds a sub-board").isTrue();
+    try (XSSFWorkbook workbook = written(data, true)) {
+      FormulaEvaluator evaluator = workbook.getCreationHelper().createFormulaEvaluator();
+      Totals totals = Totals.find(workbook.getSheet("Board MDB"), evaluator);
+      for (com.wayledger.engine.Phase p : com.wayledger.engine.Phase.values()) {
+        double expected = Math.hypot(page.get(p)[0], page.get(p)[1]) / mdb.nominalVoltageVolts();
+        assertThat(totals.value(p.name(), 3))
+            .as("connected A on %s", p)
+            .isCloseTo(expected, org.assertj.core.api.Assertions.within(0.01));
+      }
+    }
+  }
+
   /** The totals block under a board's rows, found by its labels in column A. */
   record Totals(Sheet sheet, FormulaEvaluator evaluator, List<Row> rows) {
     static Totals find(Sheet sheet, FormulaEvaluator evaluator) {

@@ -452,7 +452,10 @@ final class BoardCalculation {
     RatingLoading incomer =
         board.incomer() == null
             ? RatingLoading.notApplicable("incomer", "not assessed — missing incomer")
-            : RatingLoading.of("incomer", incomerRating, highest);
+            : RatingLoading.of(
+                board.incomerOverloadSettingAmps() != null ? "incomer (Ir)" : "incomer",
+                incomerRating,
+                highest);
     RatingLoading busbar = RatingLoading.of("busbar", board.busbarRatingAmps(), highest);
     RatingLoading supplyFuse;
     if (board.parentBoardId() != null) {
