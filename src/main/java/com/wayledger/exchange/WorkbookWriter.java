@@ -755,7 +755,19 @@ public final class WorkbookWriter {
    * or the same "not assessed" finding of several circuits of a board gathered into one row ({@code
    * circuits} > 1, {@code ways} listing their ways).
    */
-  record FindingRow(String board, Integer way, Finding finding, int circuits, String ways) {}
+  record FindingRow(
+      String board,
+      Integer way,
+      Finding finding,
+      int circuits,
+      String ways,
+      String line,
+      String circuit) {
+
+    FindingRow(String board, Integer way, Finding finding, int circuits, String ways) {
+      this(board, way, finding, circuits, ways, null, null);
+    }
+  }
 
   /**
    * Every danger, warning and advice in full, in board order; checks not assessed on a board's
@@ -787,19 +799,38 @@ public final class WorkbookWriter {
         }
       }
       Map<Finding, List<Integer>> notAssessed = new LinkedHashMap<>();
+      Map<Finding, CircuitFindings> firstOf = new HashMap<>();
       for (CircuitFindings circuit : board.circuits()) {
         for (Finding finding : circuit.findings()) {
           if (finding.verdict() == Verdict.NOT_ASSESSED) {
             notAssessed.computeIfAbsent(finding, f -> new ArrayList<>()).add(circuit.wayNumber());
+            firstOf.putIfAbsent(finding, circuit);
           } else if (finding.verdict() != Verdict.PASS) {
-            rows.add(new FindingRow(board.reference(), circuit.wayNumber(), finding, 1, null));
+            rows.add(
+                new FindingRow(
+                    board.reference(),
+                    circuit.wayNumber(),
+                    finding,
+                    1,
+                    null,
+                    circuit.lineLabel(),
+                    circuit.description()));
           }
         }
       }
       for (Map.Entry<Finding, List<Integer>> gathered : notAssessed.entrySet()) {
         List<Integer> ways = gathered.getValue();
         if (ways.size() == 1) {
-          rows.add(new FindingRow(board.reference(), ways.get(0), gathered.getKey(), 1, null));
+          CircuitFindings circuit = firstOf.get(gathered.getKey());
+          rows.add(
+              new FindingRow(
+                  board.reference(),
+                  ways.get(0),
+                  gathered.getKey(),
+                  1,
+                  null,
+                  circuit.lineLabel(),
+                  circuit.description()));
         } else {
           rows.add(
               new FindingRow(
@@ -838,7 +869,7 @@ public final class WorkbookWriter {
 
   private void writeFindings(
       SXSSFSheet sheet, List<FindingRow> rows, ExportData data, WorkbookStyles s) {
-    Widths w = new Widths(8);
+    Widths w = new Widths(10);
     text(sheet.createRow(0), 0, "Findings — " + data.siteName(), s.title, null);
     text(
         sheet.createRow(1),
@@ -848,7 +879,10 @@ public final class WorkbookWriter {
         s.text,
         null);
     text(sheet.createRow(2), 0, "Caution: " + caution, s.caution, null);
-    String[] heads = {"Board", "Way", "Check", "Verdict", "Finding", "Figures", "Clause", "Remedy"};
+    String[] heads = {
+      "Board", "Way", "Check", "Verdict", "Finding", "Figures", "Clause", "Remedy", "Line",
+      "Circuit"
+    };
     Row head = sheet.createRow(HEADER_ROW);
     for (int i = 0; i < heads.length; i++) {
       text(head, i, heads[i], s.header, w);
@@ -871,6 +905,8 @@ public final class WorkbookWriter {
       text(row, 5, figures, s.text, w);
       text(row, 6, finding.reference(), s.text, w);
       text(row, 7, finding.remedy(), s.text, w);
+      text(row, 8, item.line(), s.text, w);
+      text(row, 9, item.circuit(), s.text, w);
     }
     sheet.setAutoFilter(
         new CellRangeAddress(HEADER_ROW, Math.max(HEADER_ROW + 1, r - 1), 0, heads.length - 1));

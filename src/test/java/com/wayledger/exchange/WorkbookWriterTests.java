@@ -312,6 +312,12 @@ class WorkbookWriterTests {
           assertThat(before).as("one row per board and reason").isNull();
         } else if (Verdict.valueOf(verdict).isProblem()) {
           problemRows++;
+          if (row.getCell(1) != null) {
+            assertThat(row.getCell(9))
+                .as("a circuit's finding names the circuit (row %d)", row.getRowNum())
+                .isNotNull();
+            assertThat(row.getCell(8).getStringCellValue()).as("and its line").startsWith("L");
+          }
         }
       }
       assertThat(problemRows)

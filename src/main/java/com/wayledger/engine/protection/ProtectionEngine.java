@@ -66,12 +66,13 @@ public final class ProtectionEngine {
         CircuitLoading loading = loadingByCircuit.get(circuit.id());
         circuits.add(
             CircuitChecks.assess(
-                site.supply(),
-                circuit,
-                level,
-                loading == null ? null : loading.designCurrentAmps(),
-                mccbSettings.byCircuitId().get(circuit.id()),
-                settings));
+                    site.supply(),
+                    circuit,
+                    level,
+                    loading == null ? null : loading.designCurrentAmps(),
+                    mccbSettings.byCircuitId().get(circuit.id()),
+                    settings)
+                .placed(board.reference(), circuit.position(), circuit.description()));
       }
       List<Finding> own =
           boardFindings(board, level, loadingByBoard.get(board.id()), mccbSettings, settings);
@@ -230,7 +231,14 @@ public final class ProtectionEngine {
             new Finding(
                 f.check(),
                 f.verdict(),
-                "way " + c.wayNumber() + ": " + f.summary(),
+                "way "
+                    + c.wayNumber()
+                    + " "
+                    + CircuitFindings.lineLabel(c.position())
+                    + " “"
+                    + c.description()
+                    + "”: "
+                    + f.summary(),
                 f.values(),
                 f.reference(),
                 f.remedy()));
@@ -238,7 +246,14 @@ public final class ProtectionEngine {
         findings.add(
             Finding.notAssessedBecause(
                 CheckKind.SELECTIVITY,
-                "way " + c.wayNumber() + " has no " + out.missing(),
+                "way "
+                    + c.wayNumber()
+                    + " "
+                    + CircuitFindings.lineLabel(c.position())
+                    + " “"
+                    + c.description()
+                    + "” has no "
+                    + out.missing(),
                 SelectivityCheck.REFERENCE));
       }
     }

@@ -249,4 +249,28 @@ class NoFalsePassTests {
     assertThat(p.found()).isFalse();
     assertThat(p.reasons()).anySatisfy(r -> assertThat(r).contains("start-up multiple"));
   }
+
+  @Test
+  void everyCircuitsFindingsNameTheBoardWayLineAndCircuit() {
+    SiteSpec site =
+        oneCircuitSite(
+            circuit(
+                3,
+                mcb(TripCurve.B, 16),
+                twinAndEarth(2.5, 1.5, 10.0),
+                List.of(Fixtures.amps(LoadCategory.OTHER, 10))));
+
+    CircuitFindings c =
+        ProtectionEngine.check(
+                site,
+                Map.of(3L, new CircuitLoading(3, 10.0)),
+                Map.of(),
+                ProtectionSettings.DEFAULTS)
+            .boards()
+            .get(0)
+            .circuits()
+            .get(0);
+
+    assertThat(c.place()).isEqualTo("DB-10 way 3 L1 “circuit 3”");
+  }
 }
