@@ -4,6 +4,7 @@ import com.wayledger.engine.demand.CategoryGroup;
 import com.wayledger.engine.demand.DiversityMethod;
 import com.wayledger.engine.demand.DiversityMethodCatalog;
 import com.wayledger.engine.demand.DiversityMethods;
+import com.wayledger.system.MethodsChanged;
 import com.wayledger.system.NotFoundException;
 import com.wayledger.system.RuleViolation;
 import com.wayledger.system.StaleEditException;
@@ -13,6 +14,7 @@ import java.util.List;
 import java.util.Map;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
+import org.springframework.context.ApplicationEventPublisher;
 import org.springframework.stereotype.Service;
 import org.springframework.transaction.annotation.Transactional;
 
@@ -26,9 +28,11 @@ public class MethodLibrary {
   private static final String KEY_PATTERN = "[a-z0-9][a-z0-9-]{1,59}";
 
   private final StoredMethodRepository stored;
+  private final ApplicationEventPublisher events;
 
-  public MethodLibrary(StoredMethodRepository stored) {
+  public MethodLibrary(StoredMethodRepository stored, ApplicationEventPublisher events) {
     this.stored = stored;
+    this.events = events;
   }
 
   /**
@@ -116,6 +120,8 @@ public class MethodLibrary {
               edited.groups(),
               edited.needsDwellingParameters());
       row.update(renamed.name(), MethodJson.write(renamed), user);
+      // Any site's boards may use the method: their stored analyses are now stale.
+      events.publishEvent(new MethodsChanged(key));
     }
     return problems;
   }

@@ -62,6 +62,33 @@ public class ChangeLog {
         .list();
   }
 
+  /**
+   * The board's position in the log: the id of the newest entry about it (its own changes and its
+   * circuits' and loads'), or 0 when there is none. A printed door chart carries it, so a later
+   * reader can tell what changed since.
+   */
+  @Transactional(readOnly = true)
+  public long latestPosition(long boardId) {
+    Long newest =
+        jdbc.sql("SELECT MAX(id) FROM change_log WHERE board_id = ?")
+            .param(boardId)
+            .query(Long.class)
+            .optional()
+            .orElse(null);
+    return newest == null ? 0L : newest;
+  }
+
+  /** Entries about a board after a log position, oldest first, at most {@link #PAGE_LIMIT}. */
+  @Transactional(readOnly = true)
+  public List<ChangeLogEntry> boardHistorySince(long boardId, long position) {
+    return jdbc.sql(
+            "SELECT * FROM change_log WHERE board_id = ? AND id > ? ORDER BY id LIMIT "
+                + PAGE_LIMIT)
+        .params(boardId, position)
+        .query(ChangeLog::entry)
+        .list();
+  }
+
   /** One entry by its id. */
   @Transactional(readOnly = true)
   public java.util.Optional<ChangeLogEntry> find(long id) {

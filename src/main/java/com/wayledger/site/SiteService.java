@@ -9,6 +9,8 @@ import com.wayledger.system.StaleEditException;
 import java.util.List;
 import java.util.Objects;
 import org.springframework.context.ApplicationEventPublisher;
+import org.springframework.data.domain.Page;
+import org.springframework.data.domain.PageRequest;
 import org.springframework.stereotype.Service;
 import org.springframework.transaction.annotation.Transactional;
 
@@ -34,6 +36,24 @@ public class SiteService {
   @Transactional(readOnly = true)
   public List<Site> all() {
     return sites.findAllByOrderByNameAsc();
+  }
+
+  /** Sites shown on one page of the site list. */
+  public static final int PAGE_SIZE = 50;
+
+  /**
+   * One page of the sites, by name; with a search text, only the sites whose name or address
+   * contains it, or that hold a board whose reference contains it (ignoring case).
+   */
+  @Transactional(readOnly = true)
+  public Page<Site> page(String text, int page) {
+    PageRequest request = PageRequest.of(Math.max(0, page), PAGE_SIZE);
+    String wanted = text == null ? "" : text.strip().toLowerCase(java.util.Locale.ROOT);
+    if (wanted.isEmpty()) {
+      return sites.pageByName(request);
+    }
+    String escaped = wanted.replace("\\", "\\\\").replace("%", "\\%").replace("_", "\\_");
+    return sites.search("%" + escaped + "%", request);
   }
 
   @Transactional(readOnly = true)

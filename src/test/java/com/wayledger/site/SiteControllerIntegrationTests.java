@@ -92,7 +92,9 @@ class SiteControllerIntegrationTests {
 
   @Test
   void viewerSeesTheSiteList() throws Exception {
-    given(sites.all()).willReturn(List.of(storedSite(1, "Harbour Mill")));
+    given(sites.page("", 0))
+        .willReturn(
+            new org.springframework.data.domain.PageImpl<>(List.of(storedSite(1, "Harbour Mill"))));
 
     mvc.perform(get("/sites").with(viewer()))
         .andExpect(status().isOk())
