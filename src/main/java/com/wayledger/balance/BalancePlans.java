@@ -19,6 +19,10 @@ import java.util.List;
  * @param after the board's demand with the chosen plan applied (computed, not stored)
  * @param placements the chosen plan as placements to apply
  * @param undo the placements that put every moved circuit back
+ * @param stepFigures each fewest-moves row worked out by the demand engine, with the board's own
+ *     diversity method, so the table agrees with the board page and with "as it stands"
+ * @param chosenStepMoves the fewest-moves row previewed; null when the optimal plan is not one of
+ *     them
  */
 public record BalancePlans(
     Basis basis,
@@ -29,7 +33,23 @@ public record BalancePlans(
     BoardDemand before,
     BoardDemand after,
     List<Placement> placements,
-    List<Placement> undo) {
+    List<Placement> undo,
+    List<StepFigures> stepFigures,
+    Integer chosenStepMoves) {
+
+  /**
+   * A fewest-moves row as the demand engine sees the board after its moves.
+   *
+   * @param moves how many circuits move
+   * @param largestAmps largest line current after, A
+   * @param unbalancePercent unbalance after, %; null for a single-phase board
+   */
+  public record StepFigures(int moves, double largestAmps, Double unbalancePercent) {}
+
+  /** The figures of the row with {@code moves} moves; null when there is none. */
+  public StepFigures figuresOf(int moves) {
+    return stepFigures.stream().filter(f -> f.moves() == moves).findFirst().orElse(null);
+  }
 
   /** What each circuit is weighed by. */
   public enum Basis {

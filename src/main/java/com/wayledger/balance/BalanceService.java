@@ -19,6 +19,7 @@ import com.wayledger.engine.balance.MovesStep;
 import com.wayledger.engine.balance.PhaseBalancer;
 import com.wayledger.engine.demand.BoardDemand;
 import com.wayledger.engine.demand.CircuitDemand;
+import com.wayledger.engine.demand.PhaseDemand;
 import com.wayledger.system.NotFoundException;
 import java.util.ArrayList;
 import java.util.EnumMap;
@@ -62,11 +63,24 @@ public class BalanceService {
     FewestMovesResult fewest = balancer.fewestMoves(problem);
     List<CircuitMove> chosen = optimal.moves() == null ? List.of() : optimal.moves();
     String label = "optimal";
+    Integer chosenStep = null;
+    if (movesChoice == null
+        && fewest.optimumReached()
+        && fewest.steps() != null
+        && !fewest.steps().isEmpty()) {
+      // the page recommends the fewest moves that reach the optimum: preview that, not a plan that
+      // moves more circuits for the same largest line current
+      MovesStep last = fewest.steps().get(fewest.steps().size() - 1);
+      chosen = last.plan();
+      label = "optimal, " + last.moves() + " moves";
+      chosenStep = last.moves();
+    }
     if (movesChoice != null && fewest.steps() != null) {
       for (MovesStep step : fewest.steps()) {
         if (step.moves() == movesChoice) {
           chosen = step.plan();
           label = movesChoice + " moves";
+          chosenStep = movesChoice;
         }
       }
     }
@@ -78,7 +92,34 @@ public class BalanceService {
             : analysis
                 .analyse(ScheduleMapper.withPlacements(results.spec(), placements))
                 .boardDemand(boardId);
-    return new BalancePlans(basis, optimal, fewest, chosen, label, before, after, placements, undo);
+    List<BalancePlans.StepFigures> figures = new ArrayList<>();
+    if (fewest.steps() != null) {
+      for (MovesStep step : fewest.steps()) {
+        List<Placement> moved = placementsOf(step.plan());
+        BoardDemand d =
+            moved.isEmpty()
+                ? before
+                : analysis
+                    .analyse(ScheduleMapper.withPlacements(results.spec(), moved))
+                    .boardDemand(boardId);
+        if (d != null) {
+          double largest = d.phases().stream().mapToDouble(p -> p.currentAmps()).max().orElse(0.0);
+          figures.add(new BalancePlans.StepFigures(step.moves(), largest, d.unbalancePercent()));
+        }
+      }
+    }
+    return new BalancePlans(
+        basis,
+        optimal,
+        fewest,
+        chosen,
+        label,
+        before,
+        after,
+        placements,
+        undo,
+        figures,
+        chosenStep);
   }
 
   /** The balancing problem of a board: public so the API can show what was solved. */
@@ -94,6 +135,7 @@ public class BalanceService {
       fixed.put(phase, 0.0);
     }
     Set<String> taken = new HashSet<>();
+    Map<Phase, Double> singlePole = new EnumMap<>(Phase.class);
     for (CircuitSpec circuit : board.circuits()) {
       for (Phase phase : circuit.position().phases()) {
         taken.add(circuit.wayNumber() + ":" + phase);
@@ -112,6 +154,9 @@ public class BalanceService {
         continue;
       }
       Phase phase = circuit.position().phases().iterator().next();
+      if (amps != null) {
+        singlePole.merge(phase, amps, Double::sum);
+      }
       items.add(
           new BalanceItem(
               circuit.id(),
@@ -120,6 +165,17 @@ public class BalanceService {
               phase,
               circuit.wayNumber(),
               !circuit.lockedForBalancing()));
+    }
+    if (basis == Basis.DEMAND && demand != null && board.isThreePhase()) {
+      // the fixed share of each line is what the demand engine puts there beyond the single-pole
+      // circuits: three-pole ways at their own per-line figures (a feeder to an unbalanced
+      // sub-board is not spread evenly), allowances carried by no circuit. "As it stands" then
+      // equals the board page's line currents.
+      for (PhaseDemand line : demand.phases()) {
+        fixed.put(
+            line.phase(),
+            Math.max(0.0, line.currentAmps() - singlePole.getOrDefault(line.phase(), 0.0)));
+      }
     }
     Map<Phase, List<Integer>> freeWays = new EnumMap<>(Phase.class);
     for (Phase phase : Phase.values()) {

@@ -202,7 +202,12 @@ public class AnalysisService {
         currents.put(phase.phase(), phase.currentAmps());
       }
       loadings.put(
-          board.boardId(), new BoardLoading(board.boardId(), currents, board.unbalancePercent()));
+          board.boardId(),
+          new BoardLoading(
+              board.boardId(),
+              currents,
+              board.unbalancePercent(),
+              board.lines() == 3 ? board.neutralCurrentAmps() : null));
     }
     return loadings;
   }

@@ -65,8 +65,9 @@ public class CableDetails {
   }
 
   /**
-   * The engine's view of this cable, or null when nothing is recorded. Copper and 70 °C when
-   * unstated.
+   * The engine's view of this cable, or null when nothing is recorded. A material or insulation
+   * left blank stays blank: the engine either refuses the check or takes the value on the safe side
+   * for that check and says so, never a quiet copper 70 °C.
    */
   CableSpec toSpec() {
     if (!isRecorded()) {
@@ -75,8 +76,8 @@ public class CableDetails {
     return new CableSpec(
         lineCsaSquareMillimetres,
         protectiveCsaSquareMillimetres,
-        material == null ? ConductorMaterial.COPPER : material,
-        insulation == null ? Insulation.THERMOPLASTIC_70 : insulation,
+        material,
+        insulation,
         lengthMetres,
         installationMethod,
         ambientCelsius,

@@ -118,6 +118,15 @@ public class DeviceDetails {
    * one without the other, so a half record can only come from old data; it is not completed with
    * an assumption that would then read as recorded.
    */
+  /**
+   * The current at which the device trips on overload: Ir of a moulded-case breaker with its
+   * settings recorded, In otherwise (the figure every loading is taken against).
+   */
+  public Double tripRatingAmps() {
+    MccbSettings settings = mccbSettings();
+    return settings != null ? Double.valueOf(settings.longTimeSettingAmps()) : getRatingAmps();
+  }
+
   public MccbSettings mccbSettings() {
     if (kind != DeviceKind.MCCB
         || overloadSettingAmps == null

@@ -70,20 +70,7 @@ public final class ScheduleMapper {
         site.boards().stream()
             .map(
                 board ->
-                    new BoardSpec(
-                        board.id(),
-                        board.reference(),
-                        board.phases(),
-                        board.wayCount(),
-                        board.busbarRatingAmps(),
-                        board.incomer(),
-                        board.parentBoardId(),
-                        board.submainCable(),
-                        board.unbalanceLimitPercent(),
-                        board.coincidenceFactor(),
-                        board.diversityMethodKey(),
-                        board.measuredExternalLoopImpedanceOhms(),
-                        board.measuredFaultCurrentKiloAmps(),
+                    board.withCircuits(
                         board.circuits().stream()
                             .map(
                                 circuit -> {
@@ -149,27 +136,15 @@ public final class ScheduleMapper {
         board.getDiversityMethod(),
         board.getMeasuredExternalLoopImpedanceOhms(),
         board.getMeasuredFaultCurrentKiloAmps(),
-        List.of());
+        List.of(),
+        incomerIr(board));
   }
 
   /**
    * A board rebuilt from a logged header and the circuits it held at one moment (the log's replay).
    */
   public static BoardSpec replayed(BoardSpec header, java.util.Collection<CircuitSpec> circuits) {
-    return new BoardSpec(
-        header.id(),
-        header.reference(),
-        header.phases(),
-        header.wayCount(),
-        header.busbarRatingAmps(),
-        header.incomer(),
-        header.parentBoardId(),
-        header.submainCable(),
-        header.unbalanceLimitPercent(),
-        header.coincidenceFactor(),
-        header.diversityMethodKey(),
-        header.measuredExternalLoopImpedanceOhms(),
-        header.measuredFaultCurrentKiloAmps(),
+    return header.withCircuits(
         circuits.stream()
             .sorted(
                 java.util.Comparator.comparingInt(CircuitSpec::wayNumber)
@@ -198,7 +173,14 @@ public final class ScheduleMapper {
         board.getDiversityMethod(),
         board.getMeasuredExternalLoopImpedanceOhms(),
         board.getMeasuredFaultCurrentKiloAmps(),
-        circuits);
+        circuits,
+        incomerIr(board));
+  }
+
+  private static Double incomerIr(Board board) {
+    return board.getIncomer() == null || board.getIncomer().mccbSettings() == null
+        ? null
+        : board.getIncomer().mccbSettings().longTimeSettingAmps();
   }
 
   private static CircuitSpec toSpec(Circuit circuit, Long feedsBoardId) {

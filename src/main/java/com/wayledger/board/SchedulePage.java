@@ -68,7 +68,7 @@ class SchedulePage {
       model.addAttribute(
           "phaseChart",
           PhaseChart.of(
-              demand, board.getIncomer() == null ? null : board.getIncomer().getRatingAmps()));
+              demand, board.getIncomer() == null ? null : board.getIncomer().tripRatingAmps()));
       model.addAttribute("connectedAmps", PhaseChart.connectedAmps(demand));
     }
     return board;

@@ -119,8 +119,7 @@ public class CircuitCheckController {
     return "redirect:/circuits/" + id;
   }
 
-  private static DeviceProposal proposal(
-      SiteAnalysis results, long circuitId, CircuitDemand demand) {
+  static DeviceProposal proposal(SiteAnalysis results, long circuitId, CircuitDemand demand) {
     CircuitSpec spec = specOf(results, circuitId);
     if (spec == null || spec.device() == null) {
       return null;

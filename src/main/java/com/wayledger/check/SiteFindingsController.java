@@ -35,7 +35,12 @@ public class SiteFindingsController {
 
   /** One line of the site's findings list. */
   public record Line(
-      long boardId, String boardReference, Long circuitId, Integer wayNumber, Finding finding) {}
+      long boardId,
+      String boardReference,
+      Long circuitId,
+      Integer wayNumber,
+      Finding finding,
+      String place) {}
 
   @GetMapping("/sites/{id}/findings")
   public String findings(
@@ -50,7 +55,11 @@ public class SiteFindingsController {
       }
       board.findings().stream()
           .filter(finding -> shown(finding, severity))
-          .forEach(finding -> lines.add(new Line(boardId, board.reference(), null, null, finding)));
+          .forEach(
+              finding ->
+                  lines.add(
+                      new Line(
+                          boardId, board.reference(), null, null, finding, board.reference())));
       board
           .circuits()
           .forEach(
@@ -65,7 +74,8 @@ public class SiteFindingsController {
                                       board.reference(),
                                       circuit.circuitId(),
                                       circuit.wayNumber(),
-                                      finding))));
+                                      finding,
+                                      circuit.placeOnBoard()))));
     }
     lines.sort(java.util.Comparator.comparing(line -> line.finding().verdict()));
     model.addAttribute("site", sites.get(id));

@@ -20,6 +20,8 @@ import java.util.List;
  * @param measuredFaultCurrentKiloAmps prospective fault current measured at the board; null when
  *     not measured
  * @param circuits the board's positions that hold a circuit, spare device or empty space record
+ * @param incomerOverloadSettingAmps Ir of a moulded-case incomer when recorded; null otherwise (the
+ *     incomer then trips on its In)
  */
 public record BoardSpec(
     long id,
@@ -35,10 +37,79 @@ public record BoardSpec(
     String diversityMethodKey,
     Double measuredExternalLoopImpedanceOhms,
     Double measuredFaultCurrentKiloAmps,
-    List<CircuitSpec> circuits) {
+    List<CircuitSpec> circuits,
+    Double incomerOverloadSettingAmps) {
 
   public BoardSpec {
     circuits = List.copyOf(circuits);
+  }
+
+  /** A board whose incomer, if any, trips on its In (no MCCB setting recorded). */
+  public BoardSpec(
+      long id,
+      String reference,
+      int phases,
+      int wayCount,
+      Double busbarRatingAmps,
+      DeviceSpec incomer,
+      Long parentBoardId,
+      CableSpec submainCable,
+      double unbalanceLimitPercent,
+      double coincidenceFactor,
+      String diversityMethodKey,
+      Double measuredExternalLoopImpedanceOhms,
+      Double measuredFaultCurrentKiloAmps,
+      List<CircuitSpec> circuits) {
+    this(
+        id,
+        reference,
+        phases,
+        wayCount,
+        busbarRatingAmps,
+        incomer,
+        parentBoardId,
+        submainCable,
+        unbalanceLimitPercent,
+        coincidenceFactor,
+        diversityMethodKey,
+        measuredExternalLoopImpedanceOhms,
+        measuredFaultCurrentKiloAmps,
+        circuits,
+        null);
+  }
+
+  /** The same board holding other circuits. */
+  public BoardSpec withCircuits(List<CircuitSpec> other) {
+    return new BoardSpec(
+        id,
+        reference,
+        phases,
+        wayCount,
+        busbarRatingAmps,
+        incomer,
+        parentBoardId,
+        submainCable,
+        unbalanceLimitPercent,
+        coincidenceFactor,
+        diversityMethodKey,
+        measuredExternalLoopImpedanceOhms,
+        measuredFaultCurrentKiloAmps,
+        other,
+        incomerOverloadSettingAmps);
+  }
+
+  /**
+   * The current at which the incomer trips on overload: Ir for a moulded-case breaker with its
+   * setting recorded, In otherwise; null when no incomer or no rating is recorded. Every loading of
+   * the incomer (demand, headroom, findings, exports) is taken against this one figure.
+   */
+  public Double incomerTripRatingAmps() {
+    if (incomer == null) {
+      return null;
+    }
+    return incomerOverloadSettingAmps != null
+        ? incomerOverloadSettingAmps
+        : incomer.ratedCurrentAmps();
   }
 
   public boolean isThreePhase() {

@@ -37,6 +37,8 @@ final class BoardFigures {
   private final Map<Long, CircuitFigures> byCircuit = new HashMap<>();
   private final double[] carriedWatts = new double[3];
   private final double[] carriedVars = new double[3];
+  private final double[] carriedConnectedWattsByLine = new double[3];
+  private final double[] carriedConnectedVarsByLine = new double[3];
   private double carriedConnectedWatts;
   private double carriedConnectedVars;
 
@@ -62,6 +64,16 @@ final class BoardFigures {
         childConnectedWatts = child.connectedWatts();
         childConnectedVars = child.connectedVars();
         carryToPhases(circuit.position(), child, k);
+        // connected load shares the way's lines as the board page shares it: evenly on three poles
+        if (circuit.position() == PhasePosition.THREE_POLE) {
+          for (int i = 0; i < 3; i++) {
+            carriedConnectedWattsByLine[i] += childConnectedWatts / 3.0;
+            carriedConnectedVarsByLine[i] += childConnectedVars / 3.0;
+          }
+        } else if (circuit.position() != null) {
+          carriedConnectedWattsByLine[circuit.position().ordinal()] += childConnectedWatts;
+          carriedConnectedVarsByLine[circuit.position().ordinal()] += childConnectedVars;
+        }
       }
       double ownConnectedWatts = circuit.connectedWatts() - childConnectedWatts;
       double ownConnectedVars = circuit.connectedVars() - childConnectedVars;
@@ -142,6 +154,15 @@ final class BoardFigures {
 
   double carriedVars(Phase phase) {
     return carriedVars[phase.ordinal()];
+  }
+
+  /** Sub-boards' connected load on the line, as the board page shares it, W. */
+  double carriedConnectedWatts(Phase phase) {
+    return carriedConnectedWattsByLine[phase.ordinal()];
+  }
+
+  double carriedConnectedVars(Phase phase) {
+    return carriedConnectedVarsByLine[phase.ordinal()];
   }
 
   double carriedConnectedWatts() {

@@ -567,7 +567,9 @@ public final class WorkbookWriter {
       "Demand A",
       "Sub-boards kW (at export)",
       "Sub-boards kvar (at export)",
-      "Allowance kW (at export)"
+      "Allowance kW (at export)",
+      "Sub-boards connected kW (at export)",
+      "Sub-boards connected kvar (at export)"
     };
     Row head = sheet.createRow(startRow);
     for (int i = 0; i < heads.length; i++) {
@@ -585,20 +587,30 @@ public final class WorkbookWriter {
     for (Phase phase : lines) {
       Row row = sheet.createRow(r - 1);
       text(row, 0, board.isThreePhase() ? phase.name() : "L–N", s.label, null);
-      double connectedKw = cache.connectedKilowatts(phase);
-      double connectedKvar = cache.connectedKilovars(phase);
+      // sub-boards' connected load on this line, so the line reads as the board page does
+      double carriedKw = figures.carriedConnectedWatts(phase) / 1000.0;
+      double carriedKvar = figures.carriedConnectedVars(phase) / 1000.0;
+      double connectedKw = cache.connectedKilowatts(phase) + carriedKw;
+      double connectedKvar = cache.connectedKilovars(phase) + carriedKvar;
       double demandKw =
           cache.demandKilowatts(phase)
               + figures.carriedWatts(phase) / 1000.0
               + figures.allowanceWattsPerLine() / 1000.0;
       double demandKvar = cache.demandKilovars(phase) + figures.carriedVars(phase) / 1000.0;
       double demandAmps = cache.amps(demandKw, demandKvar);
+      number(row, 10, carriedKw, s.kilowatts, null);
+      number(row, 11, carriedKvar, s.kilowatts, null);
       formula(
-          row, 1, phaseSum(CONNECTED_KW, phase, board, from, to), connectedKw, s.kilowatts, null);
+          row,
+          1,
+          phaseSum(CONNECTED_KW, phase, board, from, to) + "+K" + r,
+          connectedKw,
+          s.kilowatts,
+          null);
       formula(
           row,
           2,
-          phaseSum(CONNECTED_KVAR, phase, board, from, to),
+          phaseSum(CONNECTED_KVAR, phase, board, from, to) + "+L" + r,
           connectedKvar,
           s.kilowatts,
           null);
@@ -637,27 +649,17 @@ public final class WorkbookWriter {
     }
     int last = r - 1;
     Row carried = sheet.createRow(r - 1);
-    text(carried, 0, "Sub-boards connected (at export)", s.label, null);
+    text(carried, 0, "Sub-boards connected (at export, in the lines above)", s.label, null);
     number(carried, 1, figures.carriedConnectedWatts() / 1000.0, s.kilowatts, null);
     number(carried, 2, figures.carriedConnectedVars() / 1000.0, s.kilowatts, null);
     int carriedRow = r++;
     Row total = sheet.createRow(r - 1);
     text(total, 0, "Board", s.totalLabel, null);
-    double totalConnectedKw = sumConnectedKw + figures.carriedConnectedWatts() / 1000.0;
+    double totalConnectedKw = sumConnectedKw;
     formula(
-        total,
-        1,
-        "SUM(B" + first + ":B" + last + ")+B" + carriedRow,
-        totalConnectedKw,
-        s.totalKilowatts,
-        null);
+        total, 1, "SUM(B" + first + ":B" + last + ")", totalConnectedKw, s.totalKilowatts, null);
     formula(
-        total,
-        2,
-        "SUM(C" + first + ":C" + last + ")+C" + carriedRow,
-        sumConnectedKvar + figures.carriedConnectedVars() / 1000.0,
-        s.totalKilowatts,
-        null);
+        total, 2, "SUM(C" + first + ":C" + last + ")", sumConnectedKvar, s.totalKilowatts, null);
     formula(total, 4, "SUM(E" + first + ":E" + last + ")", sumDemandKw, s.totalKilowatts, null);
     formula(total, 5, "SUM(F" + first + ":F" + last + ")", sumDemandKvar, s.totalKilowatts, null);
     formula(total, 6, "MAX(G" + first + ":G" + last + ")", highestAmps, s.totalAmps, null);
@@ -800,7 +802,19 @@ public final class WorkbookWriter {
    * or the same "not assessed" finding of several circuits of a board gathered into one row ({@code
    * circuits} > 1, {@code ways} listing their ways).
    */
-  record FindingRow(String board, Integer way, Finding finding, int circuits, String ways) {}
+  record FindingRow(
+      String board,
+      Integer way,
+      Finding finding,
+      int circuits,
+      String ways,
+      String line,
+      String circuit) {
+
+    FindingRow(String board, Integer way, Finding finding, int circuits, String ways) {
+      this(board, way, finding, circuits, ways, null, null);
+    }
+  }
 
   /**
    * Every danger, warning and advice in full, in board order; checks not assessed on a board's
@@ -832,19 +846,38 @@ public final class WorkbookWriter {
         }
       }
       Map<Finding, List<Integer>> notAssessed = new LinkedHashMap<>();
+      Map<Finding, CircuitFindings> firstOf = new HashMap<>();
       for (CircuitFindings circuit : board.circuits()) {
         for (Finding finding : circuit.findings()) {
           if (finding.verdict() == Verdict.NOT_ASSESSED) {
             notAssessed.computeIfAbsent(finding, f -> new ArrayList<>()).add(circuit.wayNumber());
+            firstOf.putIfAbsent(finding, circuit);
           } else if (finding.verdict() != Verdict.PASS) {
-            rows.add(new FindingRow(board.reference(), circuit.wayNumber(), finding, 1, null));
+            rows.add(
+                new FindingRow(
+                    board.reference(),
+                    circuit.wayNumber(),
+                    finding,
+                    1,
+                    null,
+                    circuit.lineLabel(),
+                    circuit.description()));
           }
         }
       }
       for (Map.Entry<Finding, List<Integer>> gathered : notAssessed.entrySet()) {
         List<Integer> ways = gathered.getValue();
         if (ways.size() == 1) {
-          rows.add(new FindingRow(board.reference(), ways.get(0), gathered.getKey(), 1, null));
+          CircuitFindings circuit = firstOf.get(gathered.getKey());
+          rows.add(
+              new FindingRow(
+                  board.reference(),
+                  ways.get(0),
+                  gathered.getKey(),
+                  1,
+                  null,
+                  circuit.lineLabel(),
+                  circuit.description()));
         } else {
           rows.add(
               new FindingRow(
@@ -883,7 +916,7 @@ public final class WorkbookWriter {
 
   private void writeFindings(
       SXSSFSheet sheet, List<FindingRow> rows, ExportData data, WorkbookStyles s) {
-    Widths w = new Widths(8);
+    Widths w = new Widths(10);
     text(sheet.createRow(0), 0, "Findings — " + data.siteName(), s.title, null);
     text(
         sheet.createRow(1),
@@ -893,7 +926,10 @@ public final class WorkbookWriter {
         s.text,
         null);
     text(sheet.createRow(2), 0, "Caution: " + caution, s.caution, null);
-    String[] heads = {"Board", "Way", "Check", "Verdict", "Finding", "Figures", "Clause", "Remedy"};
+    String[] heads = {
+      "Board", "Way", "Check", "Verdict", "Finding", "Figures", "Clause", "Remedy", "Line",
+      "Circuit"
+    };
     Row head = sheet.createRow(HEADER_ROW);
     for (int i = 0; i < heads.length; i++) {
       text(head, i, heads[i], s.header, w);
@@ -916,6 +952,8 @@ public final class WorkbookWriter {
       text(row, 5, figures, s.text, w);
       text(row, 6, finding.reference(), s.text, w);
       text(row, 7, finding.remedy(), s.text, w);
+      text(row, 8, item.line(), s.text, w);
+      text(row, 9, item.circuit(), s.text, w);
     }
     sheet.setAutoFilter(
         new CellRangeAddress(HEADER_ROW, Math.max(HEADER_ROW + 1, r - 1), 0, heads.length - 1));

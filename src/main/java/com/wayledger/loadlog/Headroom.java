@@ -9,7 +9,8 @@ import java.util.Map;
  * @param boardId the board
  * @param reference its name
  * @param depth its depth in the board tree (0 for a board fed from the origin)
- * @param incomerRatingAmps In of its incomer; null when not recorded
+ * @param incomerRatingAmps the current its incomer trips at: Ir of a moulded-case breaker with its
+ *     setting recorded, In otherwise; null when not recorded
  * @param headroomAmps incomer rating minus the demand current, per line, A; empty when the rating
  *     is unknown
  * @param loadingPercent largest line current ÷ incomer rating, %; null when not assessed

@@ -40,7 +40,7 @@ public class HistoryService {
     Board board = boards.get(boardId);
     return DemandHistoryChart.of(
         points,
-        board.getIncomer() == null ? null : board.getIncomer().getRatingAmps(),
+        board.getIncomer() == null ? null : board.getIncomer().tripRatingAmps(),
         Instant.now());
   }
 }

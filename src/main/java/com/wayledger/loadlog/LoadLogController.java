@@ -120,7 +120,7 @@ public class LoadLogController {
               board.getId(),
               board.getReference(),
               node.depth(),
-              board.getIncomer() == null ? null : board.getIncomer().getRatingAmps(),
+              board.getIncomer() == null ? null : board.getIncomer().tripRatingAmps(),
               room,
               loading,
               loading != null && loading >= site.getLoadingThresholdPercent()));

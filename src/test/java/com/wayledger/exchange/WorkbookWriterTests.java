@@ -308,10 +308,16 @@ class WorkbookWriterTests {
                       row.getCell(2).getStringCellValue()
                           + " | "
                           + row.getCell(4).getStringCellValue(),
-                      row.getCell(5).getStringCellValue());
+                      row.getCell(5) == null ? "" : row.getCell(5).getStringCellValue());
           assertThat(before).as("one row per board and reason").isNull();
         } else if (Verdict.valueOf(verdict).isProblem()) {
           problemRows++;
+          if (row.getCell(1) != null) {
+            assertThat(row.getCell(9))
+                .as("a circuit's finding names the circuit (row %d)", row.getRowNum())
+                .isNotNull();
+            assertThat(row.getCell(8).getStringCellValue()).as("and its line").startsWith("L");
+          }
         }
       }
       assertThat(problemRows)
@@ -329,7 +335,7 @@ class WorkbookWriterTests {
                                 .get(board)
                                 .get(finding.check().name() + " | " + finding.summary()))
                         .as("%s %s: how many circuits and which ways", board, finding.check())
-                        .isEqualTo(circuits + " circuits, ways 1–2"));
+                        .isEqualTo(circuits == 1 ? "" : circuits + " circuits, ways 1–2"));
           });
     }
   }
@@ -387,6 +393,45 @@ class WorkbookWriterTests {
       }
     }
     throw new AssertionError("no row for " + circuit);
+  }
+
+  /**
+   * The parent board's lines carry its sub-board's connected load, as the board page shows it (a
+   * three-pole way shares its connected load evenly over its lines): recalculated by POI, each
+   * line's connected current equals the page's figure from the demand engine to 0.01 A.
+   */
+  @Test
+  void parentBoardLinesIncludeTheSubBoardConnectedLoadAsThePageShowsIt() throws IOException {
+    ExportData data = ExchangeFixtures.shopExport();
+    com.wayledger.engine.demand.BoardDemand mdb = data.demand().board(1L);
+    java.util.Map<com.wayledger.engine.Phase, double[]> page =
+        new java.util.EnumMap<>(com.wayledger.engine.Phase.class);
+    for (com.wayledger.engine.Phase p : com.wayledger.engine.Phase.values()) {
+      page.put(p, new double[2]);
+    }
+    boolean feeds = false;
+    for (com.wayledger.engine.demand.CircuitDemand c : mdb.circuits()) {
+      if (!c.isAssessed() || c.position() == null) {
+        continue;
+      }
+      feeds |= c.feedsBoardId() != null;
+      int lines = c.position() == com.wayledger.engine.PhasePosition.THREE_POLE ? 3 : 1;
+      for (com.wayledger.engine.Phase p : c.position().phases()) {
+        page.get(p)[0] += c.connectedWatts() / lines;
+        page.get(p)[1] += c.connectedVars() / lines;
+      }
+    }
+    assertThat(feeds).as("the fixture's MDB feeds a sub-board").isTrue();
+    try (XSSFWorkbook workbook = written(data, true)) {
+      FormulaEvaluator evaluator = workbook.getCreationHelper().createFormulaEvaluator();
+      Totals totals = Totals.find(workbook.getSheet("Board MDB"), evaluator);
+      for (com.wayledger.engine.Phase p : com.wayledger.engine.Phase.values()) {
+        double expected = Math.hypot(page.get(p)[0], page.get(p)[1]) / mdb.nominalVoltageVolts();
+        assertThat(totals.value(p.name(), 3))
+            .as("connected A on %s", p)
+            .isCloseTo(expected, org.assertj.core.api.Assertions.within(0.01));
+      }
+    }
   }
 
   /** The totals block under a board's rows, found by its labels in column A. */

@@ -23,6 +23,9 @@ import java.util.Map;
  * @param newFindings problem findings (danger, warning) that the change would add or make worse,
  *     anywhere on the site
  * @param reason one line saying why it ranks where it does
+ * @param blockers why this candidate must not be offered as the answer: a line, way, incomer,
+ *     busbar or supply fuse on its path taken beyond its rating, or a new danger-grade finding;
+ *     empty when none
  */
 public record CandidateOutcome(
     Candidate candidate,
@@ -36,12 +39,22 @@ public record CandidateOutcome(
     Double supplyLoadingPercent,
     Double unbalancePercentAfter,
     List<Finding> newFindings,
-    String reason) {
+    String reason,
+    List<String> blockers) {
 
   public CandidateOutcome {
     phaseCurrentsBeforeAmps = Map.copyOf(phaseCurrentsBeforeAmps);
     phaseCurrentsAfterAmps = Map.copyOf(phaseCurrentsAfterAmps);
     newFindings = List.copyOf(newFindings);
+    blockers = List.copyOf(blockers);
+  }
+
+  /**
+   * Whether the candidate may be offered as the answer: it overloads nothing on its path and adds
+   * no danger.
+   */
+  public boolean isAcceptable() {
+    return blockers.isEmpty();
   }
 
   public long newDangerCount() {

@@ -25,6 +25,7 @@ import com.wayledger.engine.protection.ProtectionEngine;
 import com.wayledger.engine.protection.ProtectionSettings;
 import com.wayledger.engine.protection.RecordedMccbSettings;
 import com.wayledger.engine.protection.SiteFindings;
+import com.wayledger.engine.protection.check.ResidualCurrentRules;
 import com.wayledger.engine.protection.device.McbStandard;
 import com.wayledger.engine.protection.result.CheckKind;
 import com.wayledger.engine.protection.result.Finding;
@@ -96,13 +97,13 @@ public final class CapacityAdvisor {
         outcomes.add(evaluate(site, board, candidate, load, before, methods, mccb, settings));
       }
     }
-    outcomes.sort(RANKING);
     return new CapacityAnswer(
-        load, outcomes.stream().map(CapacityAdvisor::withReason).toList(), notes);
+        load, outcomes.stream().map(CapacityAdvisor::withReason).sorted(RANKING).toList(), notes);
   }
 
   static final Comparator<CandidateOutcome> RANKING =
-      Comparator.comparingLong(CandidateOutcome::newDangerCount)
+      Comparator.comparing((CandidateOutcome o) -> o.isAcceptable() ? 0 : 1)
+          .thenComparingLong(CandidateOutcome::newDangerCount)
           .thenComparingLong(CandidateOutcome::newWarningCount)
           .thenComparingDouble(o -> round(o.largestPhaseAmps()))
           .thenComparingDouble(
@@ -251,22 +252,7 @@ public final class CapacityAdvisor {
               null,
               null));
     }
-    BoardSpec changed =
-        new BoardSpec(
-            board.id(),
-            board.reference(),
-            board.phases(),
-            board.wayCount(),
-            board.busbarRatingAmps(),
-            board.incomer(),
-            board.parentBoardId(),
-            board.submainCable(),
-            board.unbalanceLimitPercent(),
-            board.coincidenceFactor(),
-            board.diversityMethodKey(),
-            board.measuredExternalLoopImpedanceOhms(),
-            board.measuredFaultCurrentKiloAmps(),
-            circuits);
+    BoardSpec changed = board.withCircuits(circuits);
     List<BoardSpec> boards =
         site.boards().stream().map(b -> b.id() == board.id() ? changed : b).toList();
     return new SiteSpec(
@@ -358,7 +344,55 @@ public final class CapacityAdvisor {
         supplyLoading(after.findings()),
         boardAfter.unbalancePercent(),
         newProblems(before.findings(), after.findings(), wayId),
-        "");
+        "",
+        blockers(site, board, after, wayId, ib, in));
+  }
+
+  /**
+   * What the change would take beyond its rating on the way's path to the origin (the way, this
+   * board's and every parent board's incomer and busbar, the supply fuse), and any new danger.
+   */
+  static List<String> blockers(
+      SiteSpec site, BoardSpec board, Analysis after, long wayId, double ib, Double in) {
+    List<String> blockers = new ArrayList<>();
+    if (in != null && in > 0 && ib > in + 1e-9) {
+      blockers.add(
+          "load its way beyond its rating (Ib " + fixed(ib) + " A > In " + fixed(in) + " A)");
+    }
+    Map<Long, BoardSpec> byId = new HashMap<>();
+    site.boards().forEach(b -> byId.put(b.id(), b));
+    java.util.Set<Long> path = new java.util.HashSet<>();
+    for (BoardSpec b = board; b != null && path.add(b.id()); ) {
+      BoardDemand d = after.demand().board(b.id());
+      if (d != null) {
+        overloaded(blockers, b.reference() + " incomer", d.incomer());
+        overloaded(blockers, b.reference() + " busbar", d.busbar());
+        overloaded(blockers, "the supply fuse", d.supplyFuse());
+      }
+      b = b.parentBoardId() == null ? null : byId.get(b.parentBoardId());
+    }
+    Double supply = supplyLoading(after.findings());
+    if (supply != null
+        && supply > 100.0 + 1e-9
+        && blockers.stream().noneMatch(x -> x.contains("supply fuse"))) {
+      blockers.add(
+          "take the supply fuse to "
+              + String.format(Locale.ROOT, "%.0f", supply)
+              + " % of its rating");
+    }
+    return blockers;
+  }
+
+  private static void overloaded(
+      List<String> blockers, String what, com.wayledger.engine.demand.RatingLoading loading) {
+    if (loading != null && loading.isOverloaded()) {
+      blockers.add(
+          "take "
+              + what
+              + " to "
+              + String.format(Locale.ROOT, "%.0f", loading.loadingPercent())
+              + " % of its rating");
+    }
   }
 
   private static double designCurrent(SiteDemand demand, long boardId, long circuitId) {
@@ -399,12 +433,24 @@ public final class CapacityAdvisor {
       }
       for (TripCurve curve : TripCurve.values()) {
         if (surgeAmps < curve.lowestInstantMultiple() * rating) {
+          // a category that needs 30 mA additional protection gets it in the device itself
+          ResidualCurrentRules.Rule rcd = ResidualCurrentRules.of(load.category());
+          boolean rcbo = rcd != null && rcd.covers(rating);
           DeviceSpec device =
-              new DeviceSpec(DeviceKind.MCB, curve, rating, poles, null, null, null);
+              rcbo
+                  ? new DeviceSpec(
+                      DeviceKind.RCBO,
+                      curve,
+                      rating,
+                      poles,
+                      null,
+                      DeviceProposer.PROPOSED_RESIDUAL_MILLIAMPS,
+                      com.wayledger.engine.RcdType.A)
+                  : new DeviceSpec(DeviceKind.MCB, curve, rating, poles, null, null, null);
           return withDevice(
               candidate,
               device,
-              "MCB type "
+              (rcbo ? "RCBO 30 mA type A (" + rcd.reference() + ") type " : "MCB type ")
                   + curve
                   + " "
                   + fixed(rating)
@@ -510,6 +556,21 @@ public final class CapacityAdvisor {
   }
 
   private static CandidateOutcome withReason(CandidateOutcome o) {
+    CandidateOutcome blocked =
+        new CandidateOutcome(
+            o.candidate(),
+            o.designCurrentAmps(),
+            o.ratedCurrentAmps(),
+            o.wayLoadingPercent(),
+            o.phaseCurrentsBeforeAmps(),
+            o.phaseCurrentsAfterAmps(),
+            o.incomerLoadingPercent(),
+            o.busbarLoadingPercent(),
+            o.supplyLoadingPercent(),
+            o.unbalancePercentAfter(),
+            o.newFindings(),
+            "",
+            withDanger(o));
     return new CandidateOutcome(
         o.candidate(),
         o.designCurrentAmps(),
@@ -522,7 +583,24 @@ public final class CapacityAdvisor {
         o.supplyLoadingPercent(),
         o.unbalancePercentAfter(),
         o.newFindings(),
-        reason(o));
+        reason(blocked),
+        blocked.blockers());
+  }
+
+  private static List<String> withDanger(CandidateOutcome o) {
+    if (o.newDangerCount() == 0) {
+      return o.blockers();
+    }
+    List<String> all = new ArrayList<>(o.blockers());
+    all.add(
+        "add a danger finding ("
+            + o.newFindings().stream()
+                .filter(f -> f.verdict() == Verdict.DANGER)
+                .findFirst()
+                .map(Finding::summary)
+                .orElse("")
+            + ")");
+    return all;
   }
 
   /** One line: where, the way's loading, the worst line after, and what it would set off. */
@@ -560,6 +638,9 @@ public final class CapacityAdvisor {
       text.append(", unbalance ")
           .append(String.format(Locale.ROOT, "%.1f", o.unbalancePercentAfter()))
           .append(" %");
+    }
+    if (!o.isAcceptable()) {
+      text.append("; not offered: it would ").append(String.join("; ", o.blockers()));
     }
     if (o.isClean()) {
       text.append("; adds no danger or warning finding");
@@ -600,7 +681,12 @@ public final class CapacityAdvisor {
         Map<Phase, Double> currents = new EnumMap<>(Phase.class);
         board.phases().forEach(p -> currents.put(p.phase(), p.currentAmps()));
         boards.put(
-            board.boardId(), new BoardLoading(board.boardId(), currents, board.unbalancePercent()));
+            board.boardId(),
+            new BoardLoading(
+                board.boardId(),
+                currents,
+                board.unbalancePercent(),
+                board.lines() == 3 ? board.neutralCurrentAmps() : null));
       }
       return new Analysis(demand, ProtectionEngine.check(site, circuits, boards, mccb, settings));
     }

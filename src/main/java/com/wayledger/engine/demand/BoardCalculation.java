@@ -291,6 +291,19 @@ final class BoardCalculation {
       addToPhases(phaseWatts, phaseVars, position[c], demandWatts, demandVars);
       double subBoardApparent = 0.0;
       BoardDemand child = subBoard[c];
+      double perLineVolts = u0 * (threePole ? 3 : 1);
+      // a three-pole feeder's Ib is its heaviest line, not the average of the three
+      Double heaviestLineAmps = null;
+      if (child != null && threePole && child.phases().size() == 3) {
+        double k = child.coincidenceFactor();
+        double heaviest = 0.0;
+        for (PhaseDemand phase : child.phases()) {
+          double lineWatts = designWatts[c] / 3.0 + phase.demandWatts() * k;
+          double lineVars = designVars[c] / 3.0 + phase.demandVars() * k;
+          heaviest = Math.max(heaviest, Math.hypot(lineWatts, lineVars) / u0);
+        }
+        heaviestLineAmps = heaviest;
+      }
       if (child != null) {
         double k = child.coincidenceFactor();
         double childWatts = child.demandWatts() * k;
@@ -313,7 +326,6 @@ final class BoardCalculation {
       }
       connectedWatts += ownWatts;
       connectedVars += ownVars;
-      double perLineVolts = u0 * (threePole ? 3 : 1);
       circuitResults.add(
           new CircuitDemand(
               circuit.id(),
@@ -324,7 +336,9 @@ final class BoardCalculation {
               ownWatts,
               ownVars,
               Math.hypot(ownWatts, ownVars) / perLineVolts,
-              Math.hypot(designWatts[c], designVars[c]) / perLineVolts,
+              heaviestLineAmps != null
+                  ? heaviestLineAmps
+                  : Math.hypot(designWatts[c], designVars[c]) / perLineVolts,
               demandWatts,
               demandVars,
               circuit.feedsBoardId(),
@@ -391,7 +405,8 @@ final class BoardCalculation {
               groupDemand[g],
               groupReason[g]));
     }
-    Double incomerRating = board.incomer() == null ? null : board.incomer().ratedCurrentAmps();
+    // the rating that actually trips: Ir for a moulded-case incomer with its setting recorded
+    Double incomerRating = board.incomerTripRatingAmps();
     Phase[] phases = Phase.values();
     List<PhaseDemand> phaseResults = new ArrayList<>(boardLines);
     double[] currents = new double[3];
@@ -437,7 +452,10 @@ final class BoardCalculation {
     RatingLoading incomer =
         board.incomer() == null
             ? RatingLoading.notApplicable("incomer", "not assessed — missing incomer")
-            : RatingLoading.of("incomer", incomerRating, highest);
+            : RatingLoading.of(
+                board.incomerOverloadSettingAmps() != null ? "incomer (Ir)" : "incomer",
+                incomerRating,
+                highest);
     RatingLoading busbar = RatingLoading.of("busbar", board.busbarRatingAmps(), highest);
     RatingLoading supplyFuse;
     if (board.parentBoardId() != null) {

@@ -17,7 +17,8 @@ import com.wayledger.engine.PhasePosition;
  * @param connectedCurrentAmps Ib before any diversity: |S|/U0, or |S|/(3·U0) per line for three
  *     poles, A
  * @param designCurrentAmps Ib after the method's within-circuit rules (e.g. the cooker allowance),
- *     with a fed sub-board's demand, A
+ *     with a fed sub-board's demand, A; for a three-pole way feeding a three-phase sub-board, the
+ *     heaviest of its three line currents (the sub-board's lines after its coincidence factor)
  * @param demandWatts P this circuit adds to the board after all diversity, W
  * @param demandVars Q this circuit adds to the board after all diversity, var
  * @param feedsBoardId the sub-board fed, or null

@@ -11,9 +11,20 @@ import java.util.Map;
  * @param phaseCurrentsAmps design current on each line at the board's incomer, A (a single-phase
  *     board uses L1)
  * @param unbalancePercent phase unbalance, %; null for a single-phase board or when not worked out
+ * @param neutralCurrentAmps neutral current of a three-phase board from the phasor sum of its line
+ *     currents, A; null when not worked out (the submain drop then takes the lines as balanced only
+ *     if they are equal, and otherwise bounds the neutral by the largest line)
  */
 public record BoardLoading(
-    long boardId, Map<Phase, Double> phaseCurrentsAmps, Double unbalancePercent) {
+    long boardId,
+    Map<Phase, Double> phaseCurrentsAmps,
+    Double unbalancePercent,
+    Double neutralCurrentAmps) {
+
+  /** Loading without a neutral current worked out. */
+  public BoardLoading(long boardId, Map<Phase, Double> phaseCurrentsAmps, Double unbalancePercent) {
+    this(boardId, phaseCurrentsAmps, unbalancePercent, null);
+  }
 
   public BoardLoading {
     phaseCurrentsAmps =

@@ -5,16 +5,19 @@ import com.wayledger.engine.CircuitSpec;
 import com.wayledger.engine.DeviceKind;
 import com.wayledger.engine.DeviceSpec;
 import com.wayledger.engine.LoadCategory;
+import com.wayledger.engine.LoadSpec;
 import com.wayledger.engine.PhasePosition;
 import com.wayledger.engine.SupplySpec;
 import com.wayledger.engine.WayStatus;
 import com.wayledger.engine.protection.cable.CableRating;
+import com.wayledger.engine.protection.cable.ConductorResistance;
 import com.wayledger.engine.protection.cable.CurrentCapacity;
 import com.wayledger.engine.protection.cable.VoltageDrop;
 import com.wayledger.engine.protection.check.BreakingCapacityCheck;
 import com.wayledger.engine.protection.check.CableProtectionCheck;
 import com.wayledger.engine.protection.check.LoopImpedanceCheck;
 import com.wayledger.engine.protection.check.OverloadCheck;
+import com.wayledger.engine.protection.check.ResidualCurrentRules;
 import com.wayledger.engine.protection.check.RingFinalCheck;
 import com.wayledger.engine.protection.check.SocketRcdCheck;
 import com.wayledger.engine.protection.check.StartUpSurge;
@@ -60,16 +63,29 @@ final class CircuitChecks {
       return new CircuitFindings(circuit.id(), circuit.wayNumber(), zs, null, null, null, findings);
     }
     double u0 = supply.nominalVoltageToEarthVolts();
+    String ibMissing = IB_FROM_DEMAND;
+    if (circuit.loads().isEmpty()
+        && circuit.feedsBoardId() == null
+        && (designCurrentAmps == null || designCurrentAmps == 0.0)) {
+      // an in-use way with nothing recorded on it: its current is unknown, not 0 A (a caller that
+      // knows Ib otherwise, e.g. from a measurement, passes it)
+      designCurrentAmps = null;
+      ibMissing = NO_LOADS;
+    }
     boolean threePole = circuit.position() == PhasePosition.THREE_POLE;
     Resolved<DeviceCharacteristic> overcurrent =
         DeviceCharacteristic.of(device, mccb, settings.mccbInstantaneousMultiple());
     Resolved<CableRating> rating = CurrentCapacity.of(circuit.cable(), threePole ? 3 : 2);
 
-    findings.add(overload(designCurrentAmps, device, overcurrent));
-    findings.add(
+    findings.add(overload(designCurrentAmps, ibMissing, device, overcurrent));
+    Finding protection =
         circuit.ringFinal()
             ? ringCableProtection(circuit, overcurrent, rating)
-            : cableProtection(overcurrent, rating));
+            : cableProtection(circuit, overcurrent, rating, threePole ? 3 : 2);
+    if (rating.isKnown() && rating.value().assumption() != null) {
+      protection = assumed(protection, rating.value().assumption());
+    }
+    findings.add(protection);
     findings.add(
         device == null
             ? Finding.notAssessed(
@@ -87,10 +103,16 @@ final class CircuitChecks {
     Finding loop =
         LoopImpedanceCheck.assess(
             supply.earthingSystem(), u0, zs, overcurrent, residual, finalCircuit, limits(settings));
+    loop = resistanceAssumptions(loop, circuit, board);
     findings.add(circuit.ringFinal() ? RingFinalCheck.noted(loop, RingFinalCheck.LOOP_NOTE) : loop);
 
     Double totalDrop = null;
-    Finding drop = voltageDrop(circuit, board, designCurrentAmps, u0, threePole, settings);
+    Finding drop =
+        voltageDrop(circuit, board, designCurrentAmps, ibMissing, u0, threePole, settings);
+    drop = resistanceAssumptions(drop, circuit, board);
+    if (drop.verdict() != Verdict.NOT_ASSESSED && !board.dropNotes().isEmpty()) {
+      drop = RingFinalCheck.noted(drop, String.join("; ", board.dropNotes()));
+    }
     if (circuit.ringFinal()) {
       drop = RingFinalCheck.noted(drop, RingFinalCheck.DROP_NOTE);
     }
@@ -100,7 +122,18 @@ final class CircuitChecks {
     }
 
     OptionalDouble surge = StartUpSurge.peakAmps(circuit.loads(), u0, threePole);
-    if (surge.isEmpty()) {
+    LoadSpec unrecordedSurge = SurgeCheck.surgeUnrecorded(circuit.loads());
+    if (circuit.loads().isEmpty() && circuit.feedsBoardId() != null) {
+      findings.add(
+          Finding.notAssessedBecause(
+              CheckKind.START_UP_SURGE,
+              "a sub-board feeder: start-up surges are checked on the sub-board's own ways",
+              SurgeCheck.REFERENCE));
+    } else if (circuit.loads().isEmpty()) {
+      findings.add(Finding.notAssessed(CheckKind.START_UP_SURGE, NO_LOADS, SurgeCheck.REFERENCE));
+    } else if (unrecordedSurge != null) {
+      findings.add(SurgeCheck.missingMultiple(unrecordedSurge));
+    } else if (surge.isEmpty()) {
       findings.add(SurgeCheck.noSurgeRecorded());
     } else if (!overcurrent.isKnown()) {
       findings.add(
@@ -110,8 +143,10 @@ final class CircuitChecks {
       findings.add(SurgeCheck.assess(surge.getAsDouble(), overcurrent.value()));
     }
 
-    if (circuit.loads().stream().anyMatch(l -> l.category() == LoadCategory.SOCKET_OUTLETS)) {
-      findings.add(socketRcd(device, ownResidual, board.upstreamResidualMilliAmps(), settings));
+    ResidualCurrentRules.Rule rcdRule = ResidualCurrentRules.forLoads(circuit.loads());
+    if (rcdRule != null) {
+      findings.add(
+          socketRcd(rcdRule, device, ownResidual, board.upstreamResidualMilliAmps(), settings));
     }
     return new CircuitFindings(
         circuit.id(),
@@ -123,18 +158,51 @@ final class CircuitChecks {
         findings);
   }
 
+  static final String IB_FROM_DEMAND = "design current Ib (from the demand calculation)";
+
+  static final String NO_LOADS =
+      "loads (an in-use way with no load recorded has an unknown design current Ib, not 0 A)";
+
+  /**
+   * A finding that rests on an input taken on the safe side, naming it; unchanged if unassessed.
+   */
+  static Finding assumed(Finding finding, String assumption) {
+    if (finding.verdict() == Verdict.NOT_ASSESSED) {
+      return finding;
+    }
+    return new Finding(
+        finding.check(),
+        finding.verdict(),
+        finding.summary() + " (assumed — " + assumption + ")",
+        finding.values(),
+        finding.reference(),
+        finding.remedy().isEmpty()
+            ? "record the actual value to replace the assumption"
+            : finding.remedy());
+  }
+
+  /**
+   * Names the insulation taken as 90 °C for resistances (the circuit's own cable, or a submain up
+   * the tree) in a Zs or voltage-drop finding.
+   */
+  private static Finding resistanceAssumptions(
+      Finding finding, CircuitSpec circuit, BoardFaultLevel board) {
+    List<String> assumed = new ArrayList<>(board.assumptions());
+    if (circuit.cable() != null && circuit.cable().insulation() == null) {
+      assumed.add(0, "circuit cable: " + ConductorResistance.ASSUMED_HOT_INSULATION);
+    }
+    return assumed.isEmpty() ? finding : assumed(finding, String.join("; ", assumed));
+  }
+
   static LoopImpedanceCheck.Limits limits(ProtectionSettings s) {
     return new LoopImpedanceCheck.Limits(
         s.minimumVoltageFactor(), s.measuredLoopImpedanceFraction(), s.touchVoltageLimitVolts());
   }
 
   private static Finding overload(
-      Double ib, DeviceSpec device, Resolved<DeviceCharacteristic> overcurrent) {
+      Double ib, String ibMissing, DeviceSpec device, Resolved<DeviceCharacteristic> overcurrent) {
     if (ib == null) {
-      return Finding.notAssessed(
-          CheckKind.WAY_OVERLOAD,
-          "design current Ib (from the demand calculation)",
-          OverloadCheck.REFERENCE);
+      return Finding.notAssessed(CheckKind.WAY_OVERLOAD, ibMissing, OverloadCheck.REFERENCE);
     }
     if (overcurrent.isKnown()) {
       return OverloadCheck.assess(ib, overcurrent.value().overloadSettingAmps());
@@ -148,18 +216,35 @@ final class CircuitChecks {
   }
 
   private static Finding cableProtection(
-      Resolved<DeviceCharacteristic> overcurrent, Resolved<CableRating> rating) {
+      CircuitSpec circuit,
+      Resolved<DeviceCharacteristic> overcurrent,
+      Resolved<CableRating> rating,
+      int loadedConductors) {
     if (!overcurrent.isKnown()) {
       return Finding.notAssessedBecause(
           CheckKind.CABLE_PROTECTION,
           "no " + overcurrent.missing(),
           CableProtectionCheck.REFERENCE);
     }
-    if (!rating.isKnown()) {
-      return Finding.notAssessed(
-          CheckKind.CABLE_PROTECTION, rating.missing(), CableProtectionCheck.REFERENCE);
-    }
     DeviceCharacteristic d = overcurrent.value();
+    if (!rating.isKnown()) {
+      // a size outside the table can still be proved too small by the next size up
+      Finding proved =
+          CurrentCapacity.upperBound(circuit.cable(), loadedConductors)
+              .map(
+                  bound ->
+                      CableProtectionCheck.provenBySize(
+                          d.overloadSettingAmps(),
+                          d.conventionalTrippingAmps(),
+                          circuit.cable().lineCsaSquareMillimetres(),
+                          bound.csaSquareMillimetres(),
+                          bound.rating()))
+              .orElse(null);
+      return proved != null
+          ? proved
+          : Finding.notAssessed(
+              CheckKind.CABLE_PROTECTION, rating.missing(), CableProtectionCheck.REFERENCE);
+    }
     return CableProtectionCheck.assess(
         d.overloadSettingAmps(), d.conventionalTrippingAmps(), rating.value());
   }
@@ -193,6 +278,7 @@ final class CircuitChecks {
       CircuitSpec circuit,
       BoardFaultLevel board,
       Double ib,
+      String ibMissing,
       double u0,
       boolean threePole,
       ProtectionSettings s) {
@@ -204,10 +290,7 @@ final class CircuitChecks {
           CheckKind.VOLTAGE_DROP, boardDrop.missing(), VoltageDropCheck.REFERENCE);
     }
     if (ib == null) {
-      return Finding.notAssessed(
-          CheckKind.VOLTAGE_DROP,
-          "design current Ib (from the demand calculation)",
-          VoltageDropCheck.REFERENCE);
+      return Finding.notAssessed(CheckKind.VOLTAGE_DROP, ibMissing, VoltageDropCheck.REFERENCE);
     }
     CableSpec cable = circuit.cable();
     if (cable == null) {
@@ -235,17 +318,24 @@ final class CircuitChecks {
   }
 
   private static Finding socketRcd(
-      DeviceSpec device, Double own, Double upstream, ProtectionSettings s) {
+      ResidualCurrentRules.Rule rule,
+      DeviceSpec device,
+      Double own,
+      Double upstream,
+      ProtectionSettings s) {
     if (device == null || device.ratedCurrentAmps() == null) {
-      return Finding.notAssessed(
-          CheckKind.SOCKET_RCD, "device rating In", SocketRcdCheck.REFERENCE);
+      return Finding.notAssessed(CheckKind.SOCKET_RCD, "device rating In", rule.reference());
+    }
+    if (rule.maxRatedAmps() != null) {
+      return SocketRcdCheck.assess(
+          device.ratedCurrentAmps(),
+          own,
+          upstream,
+          s.socketRcdMaxRatedAmps(),
+          s.socketRcdMaxResidualMilliAmps());
     }
     return SocketRcdCheck.assess(
-        device.ratedCurrentAmps(),
-        own,
-        upstream,
-        s.socketRcdMaxRatedAmps(),
-        s.socketRcdMaxResidualMilliAmps());
+        rule, device.ratedCurrentAmps(), own, upstream, s.socketRcdMaxResidualMilliAmps());
   }
 
   static Double residualOf(DeviceSpec device) {

@@ -14,6 +14,9 @@ import java.util.List;
  * @param voltageDropFromOriginPercent total drop origin-to-end, %; null when not known
  * @param startUpSurgeAmps peak start-up current, A; null when no load records a surge
  * @param findings one finding per applicable check
+ * @param boardReference the board the circuit is on; null when not given
+ * @param position the line(s) the circuit occupies; null when not recorded
+ * @param description what the circuit feeds; null when not given
  */
 public record CircuitFindings(
     long circuitId,
@@ -22,9 +25,79 @@ public record CircuitFindings(
     Double capacityAmps,
     Double voltageDropFromOriginPercent,
     Double startUpSurgeAmps,
-    List<Finding> findings) {
+    List<Finding> findings,
+    String boardReference,
+    com.wayledger.engine.PhasePosition position,
+    String description) {
 
   public CircuitFindings {
     findings = List.copyOf(findings);
+  }
+
+  /** Findings not yet placed on a board. */
+  public CircuitFindings(
+      long circuitId,
+      int wayNumber,
+      SourcedValue loopImpedanceOhms,
+      Double capacityAmps,
+      Double voltageDropFromOriginPercent,
+      Double startUpSurgeAmps,
+      List<Finding> findings) {
+    this(
+        circuitId,
+        wayNumber,
+        loopImpedanceOhms,
+        capacityAmps,
+        voltageDropFromOriginPercent,
+        startUpSurgeAmps,
+        findings,
+        null,
+        null,
+        null);
+  }
+
+  /** The same findings placed: board, line(s) and circuit name. */
+  public CircuitFindings placed(String board, com.wayledger.engine.PhasePosition at, String feeds) {
+    return new CircuitFindings(
+        circuitId,
+        wayNumber,
+        loopImpedanceOhms,
+        capacityAmps,
+        voltageDropFromOriginPercent,
+        startUpSurgeAmps,
+        findings,
+        board,
+        at,
+        feeds);
+  }
+
+  /** The line(s) in words: "L2", "L1–L3"; empty when not recorded. */
+  public String lineLabel() {
+    return lineLabel(position);
+  }
+
+  static String lineLabel(com.wayledger.engine.PhasePosition position) {
+    if (position == null) {
+      return "";
+    }
+    return position == com.wayledger.engine.PhasePosition.THREE_POLE ? "L1–L3" : position.name();
+  }
+
+  /** Where the findings are, in words: "DB2 way 9 L2 “Kitchen sockets”". */
+  public String place() {
+    return boardReference == null ? placeOnBoard() : boardReference + " " + placeOnBoard();
+  }
+
+  /** The same without the board: "way 9 L2 “Kitchen sockets”". */
+  public String placeOnBoard() {
+    StringBuilder text = new StringBuilder();
+    text.append("way ").append(wayNumber);
+    if (position != null) {
+      text.append(' ').append(lineLabel());
+    }
+    if (description != null && !description.isBlank()) {
+      text.append(" “").append(description).append('”');
+    }
+    return text.toString();
   }
 }

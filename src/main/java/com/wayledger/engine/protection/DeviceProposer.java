@@ -5,7 +5,7 @@ import com.wayledger.engine.CircuitSpec;
 import com.wayledger.engine.DeviceKind;
 import com.wayledger.engine.DeviceSpec;
 import com.wayledger.engine.EarthingSystem;
-import com.wayledger.engine.LoadCategory;
+import com.wayledger.engine.LoadSpec;
 import com.wayledger.engine.PhasePosition;
 import com.wayledger.engine.RcdType;
 import com.wayledger.engine.SiteSpec;
@@ -16,6 +16,7 @@ import com.wayledger.engine.protection.check.BreakingCapacityCheck;
 import com.wayledger.engine.protection.check.CableProtectionCheck;
 import com.wayledger.engine.protection.check.LoopImpedanceCheck;
 import com.wayledger.engine.protection.check.OverloadCheck;
+import com.wayledger.engine.protection.check.ResidualCurrentRules;
 import com.wayledger.engine.protection.check.SocketRcdCheck;
 import com.wayledger.engine.protection.check.StartUpSurge;
 import com.wayledger.engine.protection.check.SurgeCheck;
@@ -75,8 +76,17 @@ public final class DeviceProposer {
       Double designCurrentAmps,
       ProtectionSettings settings) {
     long id = circuit.id();
+    if (circuit.loads().isEmpty()
+        && circuit.feedsBoardId() == null
+        && (designCurrentAmps == null || designCurrentAmps == 0.0)) {
+      return none(id, "missing " + CircuitChecks.NO_LOADS);
+    }
     if (designCurrentAmps == null) {
       return none(id, "missing design current Ib (from the demand calculation)");
+    }
+    LoadSpec unrecordedSurge = SurgeCheck.surgeUnrecorded(circuit.loads());
+    if (unrecordedSurge != null) {
+      return none(id, SurgeCheck.missingMultiple(unrecordedSurge).summary());
     }
     if (circuit.ringFinal()) {
       return none(id, "ring final circuit: the proposer chooses devices for radial circuits only");
@@ -100,8 +110,14 @@ public final class DeviceProposer {
     }
     double u0 = site.supply().nominalVoltageToEarthVolts();
     OptionalDouble surge = StartUpSurge.peakAmps(circuit.loads(), u0, threePole);
-    boolean sockets =
-        circuit.loads().stream().anyMatch(l -> l.category() == LoadCategory.SOCKET_OUTLETS);
+    ResidualCurrentRules.Rule rcdRule = ResidualCurrentRules.forLoads(circuit.loads());
+    // never below the breaking capacity fitted, unless a measured fault level proves a lower one
+    double fittedIcn =
+        circuit.device() != null
+                && circuit.device().breakingCapacityKiloAmps() != null
+                && ka.source() != com.wayledger.engine.protection.result.ValueSource.MEASURED
+            ? circuit.device().breakingCapacityKiloAmps()
+            : 0.0;
     Double upstreamResidual = level.upstreamResidualMilliAmps();
     boolean upstream30 =
         upstreamResidual != null && upstreamResidual <= settings.socketRcdMaxResidualMilliAmps();
@@ -133,7 +149,7 @@ public final class DeviceProposer {
         return new DeviceProposal(id, null, List.of(), reasons);
       }
       boolean rcbo =
-          (sockets && in <= settings.socketRcdMaxRatedAmps() && !upstream30)
+          (rcdRule != null && rcdRule.covers(in) && !upstream30)
               || (earthing == EarthingSystem.TT && upstreamResidual == null);
       Double ownResidual = rcbo ? PROPOSED_RESIDUAL_MILLIAMPS : null;
       DeviceKind kind = rcbo ? DeviceKind.RCBO : DeviceKind.MCB;
@@ -170,6 +186,9 @@ public final class DeviceProposer {
         Finding breaking = null;
         Double icn = null;
         for (double candidate : McbStandard.STANDARD_BREAKING_CAPACITIES_KILOAMPS) {
+          if (candidate < fittedIcn - 1e-9) {
+            continue;
+          }
           Finding f = BreakingCapacityCheck.assess(kind, candidate, ka.value(), ka.source());
           if (f.verdict() == Verdict.PASS) {
             breaking = f;
@@ -195,13 +214,13 @@ public final class DeviceProposer {
                 : SurgeCheck.noSurgeRecorded());
         checks.add(loop);
         checks.add(breaking);
-        if (sockets) {
+        if (rcdRule != null) {
           checks.add(
               SocketRcdCheck.assess(
+                  rcdRule,
                   in,
                   ownResidual,
                   upstreamResidual,
-                  settings.socketRcdMaxRatedAmps(),
                   settings.socketRcdMaxResidualMilliAmps()));
         }
         DeviceSpec device =

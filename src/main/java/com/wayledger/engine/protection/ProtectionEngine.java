@@ -53,7 +53,8 @@ public final class ProtectionEngine {
       Map<Long, BoardLoading> loadingByBoard,
       RecordedMccbSettings mccbSettings,
       ProtectionSettings settings) {
-    Map<Long, BoardFaultLevel> levels = FaultLevels.of(site, boardCurrents(loadingByBoard));
+    Map<Long, BoardFaultLevel> levels =
+        FaultLevels.of(site, boardCurrents(loadingByBoard), neutralCurrents(loadingByBoard));
     List<BoardFindings> boards = new ArrayList<>();
     for (BoardSpec board : site.boards()) {
       BoardFaultLevel level = levels.get(board.id());
@@ -65,18 +66,41 @@ public final class ProtectionEngine {
         CircuitLoading loading = loadingByCircuit.get(circuit.id());
         circuits.add(
             CircuitChecks.assess(
-                site.supply(),
-                circuit,
-                level,
-                loading == null ? null : loading.designCurrentAmps(),
-                mccbSettings.byCircuitId().get(circuit.id()),
-                settings));
+                    site.supply(),
+                    circuit,
+                    level,
+                    loading == null ? null : loading.designCurrentAmps(),
+                    mccbSettings.byCircuitId().get(circuit.id()),
+                    settings)
+                .placed(board.reference(), circuit.position(), circuit.description()));
       }
       List<Finding> own =
           boardFindings(board, level, loadingByBoard.get(board.id()), mccbSettings, settings);
       boards.add(new BoardFindings(board.id(), board.reference(), level, own, circuits));
     }
     return new SiteFindings(settings, supplyFuse(site, loadingByBoard), boards);
+  }
+
+  private static Map<Long, Double> neutralCurrents(Map<Long, BoardLoading> loadingByBoard) {
+    Map<Long, Double> amps = new HashMap<>();
+    loadingByBoard.forEach(
+        (id, l) -> {
+          Double neutral = l.neutralCurrentAmps();
+          if (neutral == null && l.phaseCurrentsAmps().size() == 3) {
+            // not worked out: the phasor sum never exceeds the largest line minus the smallest
+            // at unity power factor, but with other angles it can reach the largest line — take
+            // that bound, unless the lines are equal
+            double max =
+                l.phaseCurrentsAmps().values().stream().mapToDouble(d -> d).max().orElse(0);
+            double min =
+                l.phaseCurrentsAmps().values().stream().mapToDouble(d -> d).min().orElse(0);
+            neutral = max - min < 1e-9 ? 0.0 : max;
+          }
+          if (neutral != null) {
+            amps.put(id, neutral);
+          }
+        });
+    return amps;
   }
 
   private static Map<Long, Double> boardCurrents(Map<Long, BoardLoading> loadingByBoard) {
@@ -207,7 +231,14 @@ public final class ProtectionEngine {
             new Finding(
                 f.check(),
                 f.verdict(),
-                "way " + c.wayNumber() + ": " + f.summary(),
+                "way "
+                    + c.wayNumber()
+                    + " "
+                    + CircuitFindings.lineLabel(c.position())
+                    + " “"
+                    + c.description()
+                    + "”: "
+                    + f.summary(),
                 f.values(),
                 f.reference(),
                 f.remedy()));
@@ -215,7 +246,14 @@ public final class ProtectionEngine {
         findings.add(
             Finding.notAssessedBecause(
                 CheckKind.SELECTIVITY,
-                "way " + c.wayNumber() + " has no " + out.missing(),
+                "way "
+                    + c.wayNumber()
+                    + " "
+                    + CircuitFindings.lineLabel(c.position())
+                    + " “"
+                    + c.description()
+                    + "” has no "
+                    + out.missing(),
                 SelectivityCheck.REFERENCE));
       }
     }

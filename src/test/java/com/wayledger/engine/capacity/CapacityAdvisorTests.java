@@ -45,8 +45,9 @@ class CapacityAdvisorTests {
 
   /**
    * Three-phase board, two ways: way 1 L1 in use at 20 A (4.6 kW), way 1 L2 a spare 16 A breaker,
-   * way 1 L3 a spare 40 A breaker, way 2 free. Incomer and busbar 100 A. No fault-level data, so
-   * the checks that need it are not assessed (not problems).
+   * way 1 L3 a spare 40 A RCBO with 30 mA (so a charger there has the residual-current protection
+   * it needs), way 2 free. Incomer and busbar 100 A. No fault-level data, so the checks that need
+   * it are not assessed (not problems).
    */
   private static SiteSpec smallBoard() {
     CircuitSpec inUse =
@@ -70,7 +71,7 @@ class CapacityAdvisorTests {
     CircuitSpec spare16 =
         circuit(2, 1, PhasePosition.L2, WayStatus.SPARE_DEVICE, mcb(16.0, 1), List.of());
     CircuitSpec spare40 =
-        circuit(3, 1, PhasePosition.L3, WayStatus.SPARE_DEVICE, mcb(40.0, 1), List.of());
+        circuit(3, 1, PhasePosition.L3, WayStatus.SPARE_DEVICE, rcbo(40.0), List.of());
     BoardSpec board =
         new BoardSpec(
             10,
@@ -108,6 +109,11 @@ class CapacityAdvisorTests {
 
   private static DeviceSpec mcb(double amps, int poles) {
     return new DeviceSpec(DeviceKind.MCB, TripCurve.B, amps, poles, null, null, null);
+  }
+
+  private static DeviceSpec rcbo(double amps) {
+    return new DeviceSpec(
+        DeviceKind.RCBO, TripCurve.B, amps, 1, null, 30.0, com.wayledger.engine.RcdType.A);
   }
 
   private static CapacityAnswer ask(SiteSpec site, NewLoad load) {
@@ -273,5 +279,54 @@ class CapacityAdvisorTests {
     // 4.6 kW + 2.3 kW = 6.9 kW on way 1 L1: 30.0 A on the 32 A breaker.
     assertThat(shared.candidate().label()).isEqualTo("DB-X way 1 L1");
     assertThat(shared.designCurrentAmps()).isCloseTo(6900.0 / U0, within(0.01));
+  }
+
+  // by hand: the origin board already carries 20 A on L1 behind a 40 A supply fuse; a 7 kW charger
+  // (30.43 A) on L1 makes 50.43 A = 126 % of the fuse, and on L2 or L3 30.43 A; with a 25 A supply
+  // fuse every placement exceeds it, so nothing may be shown as the best answer
+  @Test
+  void noCandidateIsOfferedAsBestWhenEveryPlacementOverloadsTheSupplyFuse() {
+    SiteSpec roomy = smallBoard();
+    SiteSpec site =
+        new SiteSpec(
+            roomy.id(),
+            roomy.name(),
+            new SupplySpec(EarthingSystem.TN_S, U0, 3, 50.0, null, null, 25.0),
+            null,
+            roomy.boards());
+
+    CapacityAnswer answer = ask(site, CHARGER);
+
+    assertThat(answer.outcomes()).as("the candidates are still listed").isNotEmpty();
+    assertThat(answer.best()).as("no overload offered as best").isNull();
+    assertThat(answer.whyNone()).contains("supply fuse");
+    assertThat(answer.outcomes()).allSatisfy(o -> assertThat(o.isAcceptable()).isFalse());
+  }
+
+  @Test
+  void anAcceptableCandidateAlwaysRanksAboveOneThatOverloads() {
+    List<CandidateOutcome> outcomes = ask(smallBoard(), CHARGER).outcomes();
+
+    CandidateOutcome overloadsSpare16 =
+        outcomes.stream()
+            .filter(o -> o.candidate().position() == PhasePosition.L2)
+            .filter(o -> o.candidate().kind() == CandidateKind.SPARE_WAY)
+            .findFirst()
+            .orElseThrow();
+    assertThat(overloadsSpare16.isAcceptable()).as("30.43 A on a 16 A way").isFalse();
+    assertThat(outcomes.get(0).isAcceptable()).isTrue();
+    assertThat(outcomes.indexOf(overloadsSpare16)).isEqualTo(outcomes.size() - 1);
+  }
+
+  @Test
+  void newCircuitForACarChargerGetsAThirtyMilliAmpRcbo() {
+    CandidateOutcome freeL2 =
+        ask(smallBoard(), CHARGER).outcomes().stream()
+            .filter(o -> o.candidate().kind() == CandidateKind.EMPTY_POSITION)
+            .findFirst()
+            .orElseThrow();
+
+    assertThat(freeL2.candidate().device().kind()).isEqualTo(DeviceKind.RCBO);
+    assertThat(freeL2.candidate().device().residualCurrentMilliAmps()).isEqualTo(30.0);
   }
 }

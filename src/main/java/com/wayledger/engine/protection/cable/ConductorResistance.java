@@ -33,6 +33,9 @@ public final class ConductorResistance {
    */
   public static Resolved<Double> ohmsPerKmAt20Celsius(
       ConductorMaterial material, Double csaSquareMillimetres) {
+    if (material == null) {
+      return Resolved.missing("conductor material");
+    }
     if (material != ConductorMaterial.COPPER) {
       return Resolved.missing(
           "resistance data for " + material + " conductors (only copper is tabulated)");
@@ -55,13 +58,28 @@ public final class ConductorResistance {
     return 1.0 + COPPER_ALPHA_PER_KELVIN * (insulation.maxConductorTemperatureCelsius() - 20.0);
   }
 
-  /** Resistance of one conductor at operating temperature, mΩ/m. */
+  /**
+   * The insulation a resistance-based check uses: the recorded one, or 90 °C thermosetting when
+   * none is recorded — the higher operating temperature gives the higher resistance, so Zs and
+   * voltage drop come out no better than the truth (the safe side). Callers name the assumption
+   * with {@link #ASSUMED_HOT_INSULATION}.
+   */
+  public static Insulation forResistance(Insulation recorded) {
+    return recorded == null ? Insulation.THERMOSETTING_90 : recorded;
+  }
+
+  /** How a finding names the assumption of {@link #forResistance(Insulation)}. */
+  public static final String ASSUMED_HOT_INSULATION =
+      "insulation not recorded: assumed 90 °C thermosetting, the higher resistance (safe side)";
+
+  /**
+   * Resistance of one conductor at operating temperature, mΩ/m; an unrecorded insulation is taken
+   * as 90 °C (see {@link #forResistance(Insulation)}).
+   */
   public static Resolved<Double> milliOhmsPerMetreHot(
       ConductorMaterial material, Double csaSquareMillimetres, Insulation insulation) {
-    if (insulation == null) {
-      return Resolved.missing("cable insulation");
-    }
+    Insulation used = forResistance(insulation);
     return ohmsPerKmAt20Celsius(material, csaSquareMillimetres)
-        .map(r -> r * operatingTemperatureMultiplier(insulation));
+        .map(r -> r * operatingTemperatureMultiplier(used));
   }
 }

@@ -81,20 +81,81 @@ public final class CurrentCapacity {
     return Double.isNaN(f) ? THERMAL_INSULATION.last("factor") : f;
   }
 
+  /** How a capacity finding names the insulation it assumed. */
+  public static final String ASSUMED_COOL_INSULATION =
+      "insulation not recorded: assumed the lower of the 70 °C and 90 °C capacities (safe side)";
+
   /**
    * The rating of a recorded cable. A null ambient, grouping or insulation length is missing, not
-   * assumed: Iz depends on them.
+   * assumed: Iz depends on them. An unrecorded insulation is rated both ways and the lower Iz kept,
+   * named in {@link CableRating#assumption()}; an unrecorded material is missing (an aluminium
+   * conductor carries less than a copper one, so copper would be the unsafe guess).
    */
   public static Resolved<CableRating> of(CableSpec cable, int loadedConductors) {
+    Resolved<CableSpec> known = recorded(cable);
+    if (!known.isKnown()) {
+      return Resolved.missing(known.missing());
+    }
+    if (cable.insulation() != null) {
+      return rated(cable, cable.insulation(), cable.lineCsaSquareMillimetres(), loadedConductors);
+    }
+    Resolved<CableRating> cool =
+        rated(
+            cable, Insulation.THERMOPLASTIC_70, cable.lineCsaSquareMillimetres(), loadedConductors);
+    Resolved<CableRating> hot =
+        rated(
+            cable, Insulation.THERMOSETTING_90, cable.lineCsaSquareMillimetres(), loadedConductors);
+    if (!cool.isKnown() || !hot.isKnown()) {
+      return cool.isKnown() ? Resolved.missing(hot.missing()) : cool;
+    }
+    CableRating lower =
+        cool.value().capacityAmps() <= hot.value().capacityAmps() ? cool.value() : hot.value();
+    return Resolved.of(lower.assuming(ASSUMED_COOL_INSULATION));
+  }
+
+  /**
+   * When the conductor size is not in the shipped table (smaller than its first row, or a size
+   * between rows), the rating of the next larger tabulated size with the same corrections: an upper
+   * bound on Iz, since capacity grows with cross-section. Empty when the size is in the table, is
+   * larger than every row, or another input is missing.
+   */
+  public static java.util.Optional<Sized> upperBound(CableSpec cable, int loadedConductors) {
+    if (!recorded(cable).isKnown()) {
+      return java.util.Optional.empty();
+    }
+    Insulation insulation =
+        cable.insulation() == null ? Insulation.THERMOSETTING_90 : cable.insulation();
+    DataTable table = table(insulation);
+    String column = cable.installationMethod() + "_" + loadedConductors;
+    if (!table.hasColumn(column)
+        || !Double.isNaN(table.exact(cable.lineCsaSquareMillimetres(), column))) {
+      return java.util.Optional.empty();
+    }
+    for (double size : table.keys()) {
+      if (size > cable.lineCsaSquareMillimetres()) {
+        // the 90 °C table is the larger capacity: as an upper bound it is the safe reading
+        Resolved<CableRating> r = rated(cable, insulation, size, loadedConductors);
+        return r.isKnown()
+            ? java.util.Optional.of(new Sized(size, r.value()))
+            : java.util.Optional.empty();
+      }
+    }
+    return java.util.Optional.empty();
+  }
+
+  /** A tabulated size and its rating. */
+  public record Sized(double csaSquareMillimetres, CableRating rating) {}
+
+  private static Resolved<CableSpec> recorded(CableSpec cable) {
     if (cable == null) {
       return Resolved.missing("cable");
+    }
+    if (cable.material() == null) {
+      return Resolved.missing("conductor material");
     }
     if (cable.material() != ConductorMaterial.COPPER) {
       return Resolved.missing(
           "capacity table for " + cable.material() + " conductors (only copper is shipped)");
-    }
-    if (cable.insulation() == null) {
-      return Resolved.missing("cable insulation");
     }
     if (cable.installationMethod() == null) {
       return Resolved.missing("installation method");
@@ -111,14 +172,15 @@ public final class CurrentCapacity {
     if (cable.thermalInsulationMillimetres() == null) {
       return Resolved.missing("length in thermal insulation");
     }
-    return tabulatedAmps(
-            cable.insulation(),
-            cable.installationMethod(),
-            cable.lineCsaSquareMillimetres(),
-            loadedConductors)
+    return Resolved.of(cable);
+  }
+
+  private static Resolved<CableRating> rated(
+      CableSpec cable, Insulation insulation, double csa, int loadedConductors) {
+    return tabulatedAmps(insulation, cable.installationMethod(), csa, loadedConductors)
         .flatMap(
             it ->
-                ambientFactor(cable.insulation(), cable.ambientCelsius())
+                ambientFactor(insulation, cable.ambientCelsius())
                     .flatMap(
                         ca ->
                             groupingFactor(cable.groupedCircuits())

@@ -32,25 +32,15 @@ public final class BoardLoadCheck {
         List.of(
             new Quantity("largest phase current", largestPhaseAmps, "A"),
             new Quantity(what + " rating", ratedAmps, "A"));
+    String[] shown = Rounding.comparedAmps(largestPhaseAmps, ratedAmps);
     if (largestPhaseAmps <= ratedAmps) {
       return Finding.pass(
-          check,
-          what
-              + ": largest phase "
-              + Rounding.amps(largestPhaseAmps)
-              + " ≤ "
-              + Rounding.amps(ratedAmps),
-          values,
-          reference);
+          check, what + ": largest phase " + shown[0] + " ≤ " + shown[1], values, reference);
     }
     return new Finding(
         check,
         Verdict.WARNING,
-        what
-            + " overloaded: largest phase "
-            + Rounding.amps(largestPhaseAmps)
-            + " > "
-            + Rounding.amps(ratedAmps),
+        what + " overloaded: largest phase " + shown[0] + " > " + shown[1],
         values,
         reference,
         "rebalance the phases, move load to another board, or uprate the " + what);

@@ -129,11 +129,11 @@ public final class LoopImpedanceCheck {
           Verdict.ADVICE,
           zsName
               + " "
-              + Rounding.ohms(zs.value())
+              + Rounding.comparedOhms(zs.value(), limit)[0]
               + " is above the "
               + d.label()
               + " limit "
-              + Rounding.ohms(limit)
+              + Rounding.comparedOhms(zs.value(), limit)[1]
               + "; disconnection in "
               + timeSeconds
               + " s relies on the "
@@ -166,23 +166,18 @@ public final class LoopImpedanceCheck {
         measured
             ? "80 % of the " + device + " limit (measured value, taken cold)"
             : device + " limit";
+    String[] shown = Rounding.comparedOhms(zs, limit);
     if (zs <= limit) {
       return Finding.pass(
           CheckKind.LOOP_IMPEDANCE,
-          "Zs " + Rounding.ohms(zs) + " ≤ " + Rounding.ohms(limit) + ", " + basis,
+          "Zs " + shown[0] + " ≤ " + shown[1] + ", " + basis,
           values,
           reference);
     }
     return new Finding(
         CheckKind.LOOP_IMPEDANCE,
         Verdict.DANGER,
-        "Zs "
-            + Rounding.ohms(zs)
-            + " above "
-            + Rounding.ohms(limit)
-            + ", "
-            + basis
-            + ": disconnection not in time",
+        "Zs " + shown[0] + " above " + shown[1] + ", " + basis + ": disconnection not in time",
         values,
         reference,
         remedy);

@@ -22,20 +22,15 @@ public final class OverloadCheck {
   public static Finding assess(double designCurrentAmps, double ratedAmps) {
     List<Quantity> values =
         List.of(new Quantity("Ib", designCurrentAmps, "A"), new Quantity("In", ratedAmps, "A"));
+    String[] shown = Rounding.comparedAmps(designCurrentAmps, ratedAmps);
     if (designCurrentAmps <= ratedAmps) {
       return Finding.pass(
-          CheckKind.WAY_OVERLOAD,
-          "Ib " + Rounding.amps(designCurrentAmps) + " ≤ In " + Rounding.amps(ratedAmps),
-          values,
-          REFERENCE);
+          CheckKind.WAY_OVERLOAD, "Ib " + shown[0] + " ≤ In " + shown[1], values, REFERENCE);
     }
     return new Finding(
         CheckKind.WAY_OVERLOAD,
         Verdict.WARNING,
-        "way overloaded: Ib "
-            + Rounding.amps(designCurrentAmps)
-            + " > In "
-            + Rounding.amps(ratedAmps),
+        "way overloaded: Ib " + shown[0] + " > In " + shown[1],
         values,
         REFERENCE,
         "split the load over more ways, or fit a larger device if the cable's Iz allows it");

@@ -66,4 +66,51 @@ public final class SocketRcdCheck {
         REFERENCE,
         "fit a 30 mA RCBO on the way, or confirm on site that an upstream 30 mA RCD covers it");
   }
+
+  /**
+   * The same rule for any category of {@link ResidualCurrentRules}: a car-charging circuit needs
+   * its 30 mA device whatever its rating.
+   */
+  public static Finding assess(
+      ResidualCurrentRules.Rule rule,
+      double ratedAmps,
+      Double ownResidualMilliAmps,
+      Double upstreamResidualMilliAmps,
+      double maxResidualMilliAmps) {
+    if (rule.maxRatedAmps() != null) {
+      return assess(
+          ratedAmps,
+          ownResidualMilliAmps,
+          upstreamResidualMilliAmps,
+          rule.maxRatedAmps(),
+          maxResidualMilliAmps);
+    }
+    Double seen =
+        ownResidualMilliAmps != null && ownResidualMilliAmps <= maxResidualMilliAmps
+            ? ownResidualMilliAmps
+            : upstreamResidualMilliAmps != null && upstreamResidualMilliAmps <= maxResidualMilliAmps
+                ? upstreamResidualMilliAmps
+                : null;
+    if (seen != null) {
+      return Finding.pass(
+          CheckKind.SOCKET_RCD,
+          rule.words()
+              + " protected by "
+              + (seen.equals(ownResidualMilliAmps) ? "the way's own " : "an upstream ")
+              + (long) (double) seen
+              + " mA device",
+          List.of(new Quantity("IΔn", seen, "mA")),
+          rule.reference());
+    }
+    return new Finding(
+        CheckKind.SOCKET_RCD,
+        Verdict.WARNING,
+        rule.words()
+            + " with no "
+            + (long) maxResidualMilliAmps
+            + " mA residual-current device on the schedule (an RCD outside the schedule cannot be seen)",
+        List.of(new Quantity("In", ratedAmps, "A")),
+        rule.reference(),
+        "fit a 30 mA RCBO (type A or as the charger maker requires) on the way");
+  }
 }

@@ -1,5 +1,7 @@
 package com.wayledger.engine.protection.check;
 
+import com.wayledger.engine.LoadCategory;
+import com.wayledger.engine.LoadSpec;
 import com.wayledger.engine.protection.device.DeviceCharacteristic;
 import com.wayledger.engine.protection.result.CheckKind;
 import com.wayledger.engine.protection.result.Finding;
@@ -25,15 +27,16 @@ public final class SurgeCheck {
         List.of(
             new Quantity("start-up surge", surgeAmps, "A"),
             new Quantity("lowest instantaneous trip", trip, "A"));
+    String[] shown = Rounding.comparedAmps(surgeAmps, trip);
     if (surgeAmps < trip) {
       return Finding.pass(
           CheckKind.START_UP_SURGE,
           "start-up surge "
-              + Rounding.amps(surgeAmps)
+              + shown[0]
               + " below the "
               + device.label()
               + " instantaneous band ("
-              + Rounding.amps(trip)
+              + shown[1]
               + ")",
           values,
           REFERENCE);
@@ -42,11 +45,11 @@ public final class SurgeCheck {
         CheckKind.START_UP_SURGE,
         Verdict.WARNING,
         "start-up surge "
-            + Rounding.amps(surgeAmps)
+            + shown[0]
             + " reaches the "
             + device.label()
             + " instantaneous band (from "
-            + Rounding.amps(trip)
+            + shown[1]
             + "): nuisance trips likely",
         values,
         REFERENCE,
@@ -54,8 +57,42 @@ public final class SurgeCheck {
             + " starts; see the device proposal");
   }
 
+  /**
+   * Categories whose loads start with a surge (motors, compressors): a load of these with no
+   * start-up multiple recorded leaves the check not assessed rather than passed. Common practice:
+   * direct-on-line motors draw several times their running current while they start.
+   */
+  public static final java.util.Set<LoadCategory> SURGE_PRONE =
+      java.util.EnumSet.of(LoadCategory.MOTOR, LoadCategory.AIR_CONDITIONING);
+
+  /** The first load of a surge-prone category with no start-up multiple; null when none. */
+  public static LoadSpec surgeUnrecorded(List<LoadSpec> loads) {
+    for (LoadSpec load : loads) {
+      if (SURGE_PRONE.contains(load.category()) && load.startUpSurgeMultiple() == null) {
+        return load;
+      }
+    }
+    return null;
+  }
+
+  /** The check cannot be made: a motor-like load has no start-up multiple recorded. */
+  public static Finding missingMultiple(LoadSpec load) {
+    return Finding.notAssessed(
+        CheckKind.START_UP_SURGE,
+        "start-up multiple of \""
+            + load.description()
+            + "\" ("
+            + load.category().name().toLowerCase(java.util.Locale.ROOT).replace('_', ' ')
+            + " loads start with a surge)",
+        REFERENCE);
+  }
+
+  /** A circuit whose loads are of no surge-prone category and record no start-up multiple. */
   public static Finding noSurgeRecorded() {
     return Finding.pass(
-        CheckKind.START_UP_SURGE, "no load records a start-up surge", List.of(), REFERENCE);
+        CheckKind.START_UP_SURGE,
+        "no motor or air-conditioning load, and no load records a start-up surge",
+        List.of(),
+        REFERENCE);
   }
 }

@@ -33,13 +33,11 @@ public final class VoltageDropCheck {
             new Quantity("drop in circuit", circuitDropPercent, "%"),
             new Quantity("total drop", total, "%"),
             new Quantity(lighting ? "limit (lighting)" : "limit (other uses)", limitPercent, "%"));
+    String[] shown = Rounding.comparedPercent(total, limitPercent);
     if (total <= limitPercent) {
       return Finding.pass(
           CheckKind.VOLTAGE_DROP,
-          "voltage drop from the origin "
-              + Rounding.percent(total)
-              + " ≤ "
-              + Rounding.percent(limitPercent),
+          "voltage drop from the origin " + shown[0] + " ≤ " + shown[1],
           values,
           REFERENCE);
     }
@@ -47,9 +45,9 @@ public final class VoltageDropCheck {
         CheckKind.VOLTAGE_DROP,
         Verdict.WARNING,
         "voltage drop from the origin "
-            + Rounding.percent(total)
+            + shown[0]
             + " above the "
-            + Rounding.percent(limitPercent)
+            + shown[1]
             + " limit for "
             + (lighting ? "lighting" : "other uses"),
         values,

@@ -17,6 +17,11 @@ import com.wayledger.engine.protection.result.SourcedValue;
  *     feeds it; null when neither is recorded
  * @param upstreamResidualMilliAmps smallest IΔn of any residual-current device on this board's
  *     incomer or on the incomers and ways above it; null when none is recorded
+ * @param assumptions inputs of the submains up the tree taken on the safe side because they were
+ *     not recorded, in words (e.g. an insulation taken as 90 °C for R1+R2); empty when none
+ * @param dropNotes how the submains' voltage drop up the tree was worked out where it is not the
+ *     plain balanced formula (an unbalanced board's neutral current, with its figures); empty when
+ *     none
  */
 public record BoardFaultLevel(
     long boardId,
@@ -24,4 +29,31 @@ public record BoardFaultLevel(
     SourcedValue faultCurrentKiloAmps,
     SourcedValue voltageDropFromOriginPercent,
     DeviceSpec upstreamDevice,
-    Double upstreamResidualMilliAmps) {}
+    Double upstreamResidualMilliAmps,
+    java.util.List<String> assumptions,
+    java.util.List<String> dropNotes) {
+
+  public BoardFaultLevel {
+    assumptions = java.util.List.copyOf(assumptions);
+    dropNotes = java.util.List.copyOf(dropNotes);
+  }
+
+  /** Figures resting on recorded inputs only. */
+  public BoardFaultLevel(
+      long boardId,
+      SourcedValue externalLoopImpedanceOhms,
+      SourcedValue faultCurrentKiloAmps,
+      SourcedValue voltageDropFromOriginPercent,
+      DeviceSpec upstreamDevice,
+      Double upstreamResidualMilliAmps) {
+    this(
+        boardId,
+        externalLoopImpedanceOhms,
+        faultCurrentKiloAmps,
+        voltageDropFromOriginPercent,
+        upstreamDevice,
+        upstreamResidualMilliAmps,
+        java.util.List.of(),
+        java.util.List.of());
+  }
+}

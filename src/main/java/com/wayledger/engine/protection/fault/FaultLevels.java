@@ -7,6 +7,7 @@ import com.wayledger.engine.DeviceSpec;
 import com.wayledger.engine.SiteSpec;
 import com.wayledger.engine.SupplySpec;
 import com.wayledger.engine.protection.cable.CableImpedance;
+import com.wayledger.engine.protection.cable.ConductorResistance;
 import com.wayledger.engine.protection.cable.VoltageDrop;
 import com.wayledger.engine.protection.result.Resolved;
 import com.wayledger.engine.protection.result.SourcedValue;
@@ -30,12 +31,15 @@ public final class FaultLevels {
   private final SiteSpec site;
   private final Map<Long, BoardSpec> boardsById = new LinkedHashMap<>();
   private final Map<Long, Double> boardCurrentAmps;
+  private final Map<Long, Double> neutralCurrentAmps;
   private final Map<Long, BoardFaultLevel> done = new HashMap<>();
   private final Set<Long> visiting = new HashSet<>();
 
-  private FaultLevels(SiteSpec site, Map<Long, Double> boardCurrentAmps) {
+  private FaultLevels(
+      SiteSpec site, Map<Long, Double> boardCurrentAmps, Map<Long, Double> neutralCurrentAmps) {
     this.site = site;
     this.boardCurrentAmps = boardCurrentAmps;
+    this.neutralCurrentAmps = neutralCurrentAmps;
     site.boards().forEach(b -> boardsById.put(b.id(), b));
   }
 
@@ -47,7 +51,17 @@ public final class FaultLevels {
    *     missing
    */
   public static Map<Long, BoardFaultLevel> of(SiteSpec site, Map<Long, Double> boardCurrentAmps) {
-    FaultLevels walk = new FaultLevels(site, boardCurrentAmps);
+    return of(site, boardCurrentAmps, Map.of());
+  }
+
+  /**
+   * As {@link #of(SiteSpec, Map)}, with each three-phase board's neutral current, A: a submain to
+   * an unbalanced board then adds the neutral's share to the line-to-neutral drop. A three-phase
+   * board absent from this map is taken as balanced.
+   */
+  public static Map<Long, BoardFaultLevel> of(
+      SiteSpec site, Map<Long, Double> boardCurrentAmps, Map<Long, Double> neutralCurrentAmps) {
+    FaultLevels walk = new FaultLevels(site, boardCurrentAmps, neutralCurrentAmps);
     Map<Long, BoardFaultLevel> result = new LinkedHashMap<>();
     for (BoardSpec board : site.boards()) {
       result.put(board.id(), walk.levelOf(board));
@@ -91,6 +105,8 @@ public final class FaultLevels {
     SourcedValue upstreamKa;
     SourcedValue upstreamDrop;
     Double upstreamResidual;
+    java.util.List<String> assumptions = new java.util.ArrayList<>();
+    java.util.List<String> dropNotes = new java.util.ArrayList<>();
     if (board.parentBoardId() == null) {
       upstreamZe =
           supply.externalLoopImpedanceOhms() == null
@@ -115,6 +131,8 @@ public final class FaultLevels {
       upstreamResidual = null;
     } else {
       BoardFaultLevel p = levelOf(parent);
+      assumptions.addAll(p.assumptions());
+      dropNotes.addAll(p.dropNotes());
       upstreamZe = p.externalLoopImpedanceOhms();
       upstreamKa = p.faultCurrentKiloAmps();
       upstreamDrop = p.voltageDropFromOriginPercent();
@@ -125,6 +143,9 @@ public final class FaultLevels {
     }
 
     String submainName = "submain to " + board.reference();
+    if (!atOrigin && submain != null && submain.insulation() == null) {
+      assumptions.add(submainName + ": " + ConductorResistance.ASSUMED_HOT_INSULATION);
+    }
     SourcedValue ze;
     if (board.measuredExternalLoopImpedanceOhms() != null) {
       ze = SourcedValue.measured(board.measuredExternalLoopImpedanceOhms());
@@ -166,7 +187,24 @@ public final class FaultLevels {
     DeviceSpec upstreamDevice =
         board.incomer() != null ? board.incomer() : feedingWay == null ? null : feedingWay.device();
     Double residual = smaller(upstreamResidual, residualOf(board.incomer()));
-    return new BoardFaultLevel(board.id(), ze, ka, drop, upstreamDevice, residual);
+    Double neutral = neutralCurrentAmps.get(board.id());
+    Double amps = boardCurrentAmps.get(board.id());
+    if (!atOrigin
+        && drop.isKnown()
+        && board.isThreePhase()
+        && neutral != null
+        && amps != null
+        && neutral > NEUTRAL_NEGLIGIBLE_AMPS) {
+      dropNotes.add(
+          submainName
+              + " unbalanced: line-to-neutral drop (IL "
+              + String.format(java.util.Locale.ROOT, "%.1f", amps)
+              + " A + IN "
+              + String.format(java.util.Locale.ROOT, "%.1f", neutral)
+              + " A)·z·L");
+    }
+    return new BoardFaultLevel(
+        board.id(), ze, ka, drop, upstreamDevice, residual, assumptions, dropNotes);
   }
 
   private Resolved<Double> submainDropPercent(BoardSpec board, CableSpec submain, double u0) {
@@ -181,6 +219,15 @@ public final class FaultLevels {
       return Resolved.missing("cable length");
     }
     boolean three = board.isThreePhase();
+    double neutral = neutralCurrentAmps.getOrDefault(board.id(), 0.0);
+    if (three && neutral > NEUTRAL_NEGLIGIBLE_AMPS) {
+      // unbalanced: line-to-neutral drop of the heaviest line, go on its line conductor and return
+      // on the neutral, each conductor at half the single-phase mV/A/m: (IL + IN)·z·L. Adding the
+      // magnitudes bounds the phasor sum IL·Z + IN·Z from above (the safe side).
+      return VoltageDrop.milliVoltsPerAmpMetre(
+              submain.material(), submain.lineCsaSquareMillimetres(), submain.insulation(), false)
+          .map(mv -> VoltageDrop.percent(mv / 2.0, amps + neutral, submain.lengthMetres(), u0));
+    }
     return VoltageDrop.milliVoltsPerAmpMetre(
             submain.material(), submain.lineCsaSquareMillimetres(), submain.insulation(), three)
         .map(
@@ -188,6 +235,9 @@ public final class FaultLevels {
                 VoltageDrop.percent(
                     mv, amps, submain.lengthMetres(), three ? Math.sqrt(3.0) * u0 : u0));
   }
+
+  /** A neutral current below this is taken as a balanced board (√3 formula), A. */
+  static final double NEUTRAL_NEGLIGIBLE_AMPS = 0.01;
 
   private static CircuitSpec feedingWay(BoardSpec parent, long boardId) {
     for (CircuitSpec c : parent.circuits()) {

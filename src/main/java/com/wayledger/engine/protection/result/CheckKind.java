@@ -11,7 +11,7 @@ public enum CheckKind {
   LOOP_IMPEDANCE("Earth fault loop impedance within the disconnection limit"),
   VOLTAGE_DROP("Voltage drop from the origin within the limit"),
   START_UP_SURGE("Start-up surge below the instantaneous trip current"),
-  SOCKET_RCD("30 mA residual-current protection of socket-outlet circuits"),
+  SOCKET_RCD("30 mA residual-current protection where the load category needs it"),
   INCOMER_OVERLOAD("Incomer not overloaded"),
   BUSBAR_OVERLOAD("Busbar not overloaded"),
   SUPPLY_FUSE_OVERLOAD("Supply fuse not overloaded"),
