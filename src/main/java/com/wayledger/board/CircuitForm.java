@@ -370,6 +370,38 @@ public record CircuitForm(
         cableThermalInsulationMm);
   }
 
+  /** Fields that say nothing about the stored row: the edit's version and the first load. */
+  private static final java.util.Set<String> NOT_THE_ROW =
+      java.util.Set.of(
+          "version",
+          "loadDescription",
+          "loadCategory",
+          "loadQuantity",
+          "loadRatingValue",
+          "loadRatingUnit",
+          "loadPowerFactor");
+
+  /**
+   * Whether {@code other} would store the same row as this one (blank text and an unticked box
+   * count as nothing), so that a save which changes nothing records nothing.
+   */
+  boolean sameRowAs(CircuitForm other) {
+    return changedFields(other).isEmpty();
+  }
+
+  /**
+   * The row's fields that differ in {@code other}, blank text and unticked boxes counting as none.
+   */
+  java.util.List<com.wayledger.system.RecordDiff.FieldChange> changedFields(CircuitForm other) {
+    return com.wayledger.system.RecordDiff.between(other, this, NOT_THE_ROW).stream()
+        .filter(change -> !(isUnset(change.yours()) && isUnset(change.theirs())))
+        .toList();
+  }
+
+  private static boolean isUnset(Object value) {
+    return value == null || Boolean.FALSE.equals(value);
+  }
+
   /** Whether the user started typing a first load (any of its value fields filled). */
   boolean hasFirstLoad() {
     return (loadDescription != null && !loadDescription.isBlank()) || loadRatingValue != null;

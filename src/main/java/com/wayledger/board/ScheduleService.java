@@ -108,6 +108,9 @@ public class ScheduleService {
     }
     Board board = circuit.getBoard();
     checkCircuitRules(board, form, circuitId);
+    if (!form.hasFirstLoad() && CircuitForm.of(circuit).sameRowAs(form)) {
+      return circuit; // nothing changed: nothing stored, nothing in the change log
+    }
     var before = snapshot(circuit);
     circuit.apply(form);
     if (form.hasFirstLoad()) {
