@@ -136,6 +136,46 @@ public record CircuitForm(
     return copy(cableThermalInsulationMm, ringFinal, overloadSettingAmps, instantaneousSettingAmps);
   }
 
+  /**
+   * The same row with this conductor material and insulation (null: inherit the board's or site's
+   * default).
+   */
+  public CircuitForm withConductor(ConductorMaterial material, Insulation insulation) {
+    return new CircuitForm(
+        wayNumber,
+        position,
+        description,
+        status,
+        lockedForBalancing,
+        deviceKind,
+        deviceCurve,
+        deviceRatingAmps,
+        devicePoles,
+        deviceBreakingCapacityKiloAmps,
+        deviceResidualMilliAmps,
+        deviceRcdType,
+        cableLineCsa,
+        cableCpcCsa,
+        material,
+        insulation,
+        cableLengthMetres,
+        cableInstallationMethod,
+        cableAmbientCelsius,
+        cableGroupedCircuits,
+        cableThermalInsulationMm,
+        measuredLoopImpedanceOhms,
+        loadDescription,
+        loadCategory,
+        loadQuantity,
+        loadRatingValue,
+        loadRatingUnit,
+        loadPowerFactor,
+        version,
+        ringFinal,
+        deviceOverloadSettingAmps,
+        deviceInstantaneousSettingAmps);
+  }
+
   /** The same row with this length of its cable surrounded by thermal insulation, mm. */
   public CircuitForm withThermalInsulationMm(Integer millimetres) {
     return copy(millimetres, ringFinal, deviceOverloadSettingAmps, deviceInstantaneousSettingAmps);

@@ -64,8 +64,9 @@ public class ScheduleController {
       @RequestParam PhasePosition position,
       @RequestHeader(value = HX, required = false) String htmx,
       Model model) {
-    model.addAttribute("board", boards.get(boardId));
-    model.addAttribute("form", CircuitForm.blankAt(way, position));
+    Board board = boards.get(boardId);
+    model.addAttribute("board", board);
+    model.addAttribute("form", blankFor(board, way, position));
     if (htmx == null) {
       ReturnTo.BOARD.standalone(model, null, boardId);
     }
@@ -267,6 +268,20 @@ public class ScheduleController {
     fillEditor(model, id, saved);
     response.setStatus(HttpServletResponse.SC_CONFLICT);
     return htmx != null ? EDITOR_FRAGMENT : EDITOR_PAGE;
+  }
+
+  /**
+   * A new row; where the board or site sets a conductor material or insulation, the row leaves them
+   * empty so that it inherits them (and follows the default when it changes).
+   */
+  private static CircuitForm blankFor(Board board, int way, PhasePosition position) {
+    CircuitForm blank = CircuitForm.blankAt(way, position);
+    var own = board.getDefaults();
+    var site = board.getSite().getDefaults();
+    boolean materialSet = own.getMaterial() != null || site.getMaterial() != null;
+    boolean insulationSet = own.getInsulation() != null || site.getInsulation() != null;
+    return blank.withConductor(
+        materialSet ? null : blank.cableMaterial(), insulationSet ? null : blank.cableInsulation());
   }
 
   private static String editPage(long circuitId, String back) {

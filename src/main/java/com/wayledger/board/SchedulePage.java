@@ -54,6 +54,10 @@ class SchedulePage {
                 .findFirst()
                 .orElse(null));
     model.addAttribute("circuitCount", onBoard.size());
+    java.util.Map<Long, Inheritance.Values> inherited = new java.util.HashMap<>();
+    onBoard.forEach(
+        circuit -> inherited.put(circuit.getId(), new Inheritance.Values(Inheritance.of(circuit))));
+    model.addAttribute("inheritedByCircuit", inherited);
     SiteAnalysis results = analysis.ofSite(board.getSite().getId());
     var demand = results.boardDemand(boardId);
     model.addAttribute("demand", demand);

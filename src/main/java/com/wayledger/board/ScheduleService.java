@@ -61,6 +61,12 @@ public class ScheduleService {
     return circuits.findById(id).orElseThrow(() -> new NotFoundException("Circuit", id));
   }
 
+  /** The values the circuit takes from its board's or site's defaults. */
+  @Transactional(readOnly = true)
+  public java.util.List<Inheritance.InheritedValue> inheritedBy(long circuitId) {
+    return Inheritance.of(circuit(circuitId));
+  }
+
   /** The circuit's load lines, in order, loaded for display outside the transaction. */
   @Transactional(readOnly = true)
   public java.util.List<LoadItem> loadsOf(long circuitId) {
