@@ -55,7 +55,78 @@ public record CircuitForm(
     Long version,
     Boolean ringFinal,
     @Positive @DecimalMax("63000") Double deviceOverloadSettingAmps,
-    @Positive @DecimalMax("63000") Double deviceInstantaneousSettingAmps) {
+    @Positive @DecimalMax("63000") Double deviceInstantaneousSettingAmps,
+    @DecimalMin("1") @DecimalMax("50") Double loadStartUpMultiple) {
+
+  /** A row without a start-up multiple for its first load: the argument list from before. */
+  public CircuitForm(
+      Integer wayNumber,
+      PhasePosition position,
+      String description,
+      WayStatus status,
+      Boolean lockedForBalancing,
+      DeviceKind deviceKind,
+      TripCurve deviceCurve,
+      Double deviceRatingAmps,
+      Integer devicePoles,
+      Double deviceBreakingCapacityKiloAmps,
+      Double deviceResidualMilliAmps,
+      RcdType deviceRcdType,
+      Double cableLineCsa,
+      Double cableCpcCsa,
+      ConductorMaterial cableMaterial,
+      Insulation cableInsulation,
+      Double cableLengthMetres,
+      InstallationMethod cableInstallationMethod,
+      Double cableAmbientCelsius,
+      Integer cableGroupedCircuits,
+      Integer cableThermalInsulationMm,
+      Double measuredLoopImpedanceOhms,
+      String loadDescription,
+      LoadCategory loadCategory,
+      Integer loadQuantity,
+      Double loadRatingValue,
+      RatingUnit loadRatingUnit,
+      Double loadPowerFactor,
+      Long version,
+      Boolean ringFinal,
+      Double deviceOverloadSettingAmps,
+      Double deviceInstantaneousSettingAmps) {
+    this(
+        wayNumber,
+        position,
+        description,
+        status,
+        lockedForBalancing,
+        deviceKind,
+        deviceCurve,
+        deviceRatingAmps,
+        devicePoles,
+        deviceBreakingCapacityKiloAmps,
+        deviceResidualMilliAmps,
+        deviceRcdType,
+        cableLineCsa,
+        cableCpcCsa,
+        cableMaterial,
+        cableInsulation,
+        cableLengthMetres,
+        cableInstallationMethod,
+        cableAmbientCelsius,
+        cableGroupedCircuits,
+        cableThermalInsulationMm,
+        measuredLoopImpedanceOhms,
+        loadDescription,
+        loadCategory,
+        loadQuantity,
+        loadRatingValue,
+        loadRatingUnit,
+        loadPowerFactor,
+        version,
+        ringFinal,
+        deviceOverloadSettingAmps,
+        deviceInstantaneousSettingAmps,
+        null);
+  }
 
   /**
    * A radial circuit (not a ring final circuit): the argument list from before rings were recorded.
@@ -173,7 +244,8 @@ public record CircuitForm(
         version,
         ringFinal,
         deviceOverloadSettingAmps,
-        deviceInstantaneousSettingAmps);
+        deviceInstantaneousSettingAmps,
+        loadStartUpMultiple);
   }
 
   /** The same row with this length of its cable surrounded by thermal insulation, mm. */
@@ -301,7 +373,8 @@ public record CircuitForm(
         version,
         ring,
         overloadSettingAmps,
-        instantaneousSettingAmps);
+        instantaneousSettingAmps,
+        loadStartUpMultiple);
   }
 
   /**
@@ -419,7 +492,8 @@ public record CircuitForm(
           "loadQuantity",
           "loadRatingValue",
           "loadRatingUnit",
-          "loadPowerFactor");
+          "loadPowerFactor",
+          "loadStartUpMultiple");
 
   /**
    * Whether {@code other} would store the same row as this one (blank text and an unticked box
@@ -456,7 +530,7 @@ public record CircuitForm(
         loadRatingValue,
         loadRatingUnit,
         loadPowerFactor,
-        null,
+        loadStartUpMultiple,
         null,
         false);
   }

@@ -297,6 +297,7 @@ public class ScheduleController {
 
   private void fillEditor(Model model, long circuitId, CircuitForm form) {
     Circuit circuit = schedule.circuit(circuitId);
+    model.addAttribute("missingFields", schedule.missingInputs(circuitId));
     model.addAttribute("circuit", circuit);
     model.addAttribute("circuitLoads", schedule.loadsOf(circuitId));
     model.addAttribute("board", boards.get(circuit.getBoard().getId()));

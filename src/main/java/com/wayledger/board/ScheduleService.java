@@ -67,6 +67,12 @@ public class ScheduleService {
     return Inheritance.of(circuit(circuitId));
   }
 
+  /** Every form input the circuit's checks still lack (defaults counted), all at once. */
+  @Transactional(readOnly = true)
+  public java.util.List<String> missingInputs(long circuitId) {
+    return MissingInputs.of(circuit(circuitId));
+  }
+
   /** The circuit's load lines, in order, loaded for display outside the transaction. */
   @Transactional(readOnly = true)
   public java.util.List<LoadItem> loadsOf(long circuitId) {

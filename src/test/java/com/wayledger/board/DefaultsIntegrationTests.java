@@ -221,6 +221,88 @@ class DefaultsIntegrationTests {
         .isNull();
   }
 
+  @Test
+  void theEditorMarksEveryMissingInputAtOnceAndDefaultsCountAsGiven() throws Exception {
+    long circuitId = addMotorCircuit(null);
+
+    String editor = editorOf(circuitId);
+    for (String field :
+        List.of(
+            "cableInstallationMethod",
+            "cableAmbientCelsius",
+            "cableGroupedCircuits",
+            "cableThermalInsulationMm")) {
+      String fieldBlock =
+          java.util.Arrays.stream(editor.split("<div class=\"field"))
+              .filter(block -> block.contains("name=\"" + field + "\""))
+              .findFirst()
+              .orElseThrow();
+      assertThat(fieldBlock)
+          .as("the editor marks " + field + " as needed, in the same answer as the others")
+          .contains("needed for the checks");
+    }
+    assertThat(schedulePage())
+        .as("the schedule row lists all four at once")
+        .contains("Still needed for full checks (4 inputs)")
+        .contains("installation method,")
+        .contains("thermal insulation");
+
+    mvc.perform(siteDefaults("C", "30", "1", "0", "8")).andExpect(status().is3xxRedirection());
+    assertThat(editorOf(circuitId))
+        .as("with the site's defaults nothing is missing any more")
+        .doesNotContain("needed for the checks");
+    assertThat(schedulePage()).doesNotContain("Still needed");
+  }
+
+  @Test
+  void theFirstLoadTakesItsStartUpMultipleFromTheCircuitForm() throws Exception {
+    mvc.perform(
+            post("/boards/{id}/circuits", boardId)
+                .with(user("ed").roles("EDITOR"))
+                .with(csrf())
+                .param("wayNumber", "2")
+                .param("position", "L2")
+                .param("description", "Extract fan")
+                .param("status", "IN_USE")
+                .param("deviceKind", "MCB")
+                .param("deviceCurve", "C")
+                .param("deviceRatingAmps", "10")
+                .param("loadCategory", "MOTOR")
+                .param("loadQuantity", "1")
+                .param("loadRatingValue", "750")
+                .param("loadRatingUnit", "W")
+                .param("loadPowerFactor", "0.8")
+                .param("loadStartUpMultiple", "7"))
+        .andExpect(status().is3xxRedirection());
+    Double stored =
+        jdbc.sql(
+                "SELECT l.surge_multiple FROM load_item l JOIN circuit c ON c.id = l.circuit_id"
+                    + " WHERE c.board_id = ? AND c.way_number = 2")
+            .param(boardId)
+            .query(Double.class)
+            .single();
+    assertThat(stored).as("start-up multiple of the first load").isEqualTo(7.0);
+  }
+
+  private String editorOf(long circuitId) throws Exception {
+    return mvc.perform(
+            get("/circuits/{id}/edit", circuitId)
+                .header("HX-Request", "true")
+                .with(user("ed").roles("EDITOR")))
+        .andExpect(status().isOk())
+        .andReturn()
+        .getResponse()
+        .getContentAsString();
+  }
+
+  private String schedulePage() throws Exception {
+    return mvc.perform(get("/boards/{id}", boardId).with(user("ed").roles("EDITOR")))
+        .andExpect(status().isOk())
+        .andReturn()
+        .getResponse()
+        .getContentAsString();
+  }
+
   private long logEntries() {
     return jdbc.sql("SELECT COUNT(*) FROM change_log WHERE site_id = ?")
         .param(site.getId())
