@@ -183,6 +183,10 @@ public final class Inheritance {
   /** A circuit's inherited values, for pages that note them beside each finding. */
   public record Values(List<InheritedValue> all) {
 
+    public Values {
+      all = all == null ? List.of() : List.copyOf(all);
+    }
+
     /** The inherited values a check of this kind used (for the note beside its finding). */
     public List<InheritedValue> usedBy(CheckKind check) {
       return check == null ? List.of() : all.stream().filter(value -> value.usedBy(check)).toList();
