@@ -23,8 +23,8 @@ import org.springframework.test.context.ActiveProfiles;
 /**
  * Every main page of the demo site on a 768 px tablet: the page's scroll width does not exceed the
  * viewport (a table may scroll inside its own box; the page may not). The 390 px phone width is not
- * met yet on every page (defaults, circuit editor and history were still too wide when last run), so
- * it is not asserted here; see docs.
+ * met yet on every page (defaults, circuit editor and history were still too wide when last run),
+ * so it is not asserted here; see docs.
  */
 @SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT)
 @ActiveProfiles({"test", "demo"})
