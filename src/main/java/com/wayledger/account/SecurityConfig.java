@@ -1,5 +1,6 @@
 package com.wayledger.account;
 
+import org.springframework.beans.factory.ObjectProvider;
 import org.springframework.context.annotation.Bean;
 import org.springframework.context.annotation.Configuration;
 import org.springframework.core.annotation.Order;
@@ -12,13 +13,14 @@ import org.springframework.security.config.http.SessionCreationPolicy;
 import org.springframework.security.crypto.factory.PasswordEncoderFactories;
 import org.springframework.security.crypto.password.PasswordEncoder;
 import org.springframework.security.web.SecurityFilterChain;
+import org.springframework.security.web.authentication.www.BasicAuthenticationFilter;
 import org.springframework.security.web.context.RequestAttributeSecurityContextRepository;
 
 /**
- * Who may do what. Pages: form sign-in, session in the database, CSRF on every form. API: HTTP
- * Basic on each request and no session, so a browser's cookie never authorises an API call (and
- * CSRF cannot apply there). Reading needs any role; changing needs editor; managing users needs
- * admin.
+ * Who may do what. Pages: form sign-in, session in the database, CSRF on every form. API: a
+ * personal token ({@code Authorization: Bearer}) or HTTP Basic on each request and no session, so a
+ * browser's cookie never authorises an API call (and CSRF cannot apply there). Reading needs any
+ * role; changing needs editor; managing users needs admin.
  */
 @Configuration
 public class SecurityConfig {
@@ -39,7 +41,7 @@ public class SecurityConfig {
 
   @Bean
   @Order(1)
-  SecurityFilterChain api(HttpSecurity http) throws Exception {
+  SecurityFilterChain api(HttpSecurity http, ObjectProvider<ApiTokens> tokens) throws Exception {
     http.securityMatcher("/api/**")
         .authorizeHttpRequests(
             auth ->
@@ -55,6 +57,9 @@ public class SecurityConfig {
                     .hasRole("VIEWER")
                     .anyRequest()
                     .hasRole("EDITOR"))
+        // Personal API tokens (fast: one SHA-256 and one indexed look-up); HTTP Basic stays as the
+        // slow path (bcrypt of the password on every request).
+        .addFilterBefore(new BearerTokenFilter(tokens), BasicAuthenticationFilter.class)
         .httpBasic(Customizer.withDefaults())
         .csrf(csrf -> csrf.disable())
         .sessionManagement(
@@ -75,7 +80,7 @@ public class SecurityConfig {
                         "/css/**",
                         "/js/**",
                         "/webjars/**",
-                        "/favicon.svg",
+                        "/favicon*.svg",
                         "/actuator/health",
                         "/error")
                     .permitAll()
@@ -93,7 +98,8 @@ public class SecurityConfig {
                         "/circuits/*/edit",
                         "/loads/*/edit",
                         "/boards/*/import",
-                        "/boards/*/import/**")
+                        "/boards/*/import/**",
+                        "/boards/*/inspections/new")
                     .hasRole("EDITOR")
                     .anyRequest()
                     .hasRole("VIEWER"))

@@ -44,6 +44,8 @@ public class BalanceController {
     Board board = boards.get(id);
     model.addAttribute("board", board);
     model.addAttribute("site", board.getSite());
+    // The token first: a change saved while the plans are worked out makes the plan stale.
+    model.addAttribute("scheduleToken", schedule.scheduleToken(id));
     model.addAttribute("plans", balancing.plans(id, basis, moves));
     model.addAttribute("chosenMoves", moves);
     model.addAttribute("bases", Basis.values());
@@ -55,7 +57,7 @@ public class BalanceController {
       @PathVariable long id,
       @RequestParam String placements,
       @RequestParam(required = false, defaultValue = "") String undo,
-      @RequestParam long version,
+      @RequestParam String version,
       @RequestParam(required = false, defaultValue = "") String reason,
       RedirectAttributes redirect) {
     List<Placement> parsed = parse(placements);

@@ -17,16 +17,25 @@ import com.wayledger.engine.protection.RecordedMccbSettings;
 import com.wayledger.engine.protection.SiteFindings;
 import com.wayledger.site.Site;
 import com.wayledger.site.SiteService;
+import com.wayledger.system.SiteGenerations;
 import java.util.EnumMap;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.concurrent.atomic.AtomicLong;
+import org.springframework.beans.factory.ObjectProvider;
+import org.springframework.beans.factory.annotation.Value;
 import org.springframework.stereotype.Service;
+import org.springframework.transaction.PlatformTransactionManager;
 import org.springframework.transaction.annotation.Transactional;
+import org.springframework.transaction.support.TransactionSynchronizationManager;
+import org.springframework.transaction.support.TransactionTemplate;
 
 /**
- * Runs the demand and protection engines on a stored site. Results are recomputed on every read, so
- * they can never disagree with the schedule they came from.
+ * Runs the demand and protection engines on a stored site. A stored site's analysis is computed
+ * once per change, not once per read: it is kept with the site's data generation
+ * (system.SiteGenerations, moved on by every committed change), and a read at the same generation
+ * takes the kept result, so it can never disagree with the committed schedule it came from.
  */
 @Service
 public class AnalysisService {
@@ -34,11 +43,29 @@ public class AnalysisService {
   private final SiteService sites;
   private final BoardRepository boards;
   private final MethodLibrary methodLibrary;
+  private final SiteGenerations generations;
+  private final AnalysisCache kept;
+  private final TransactionTemplate readOnly;
+  private final AtomicLong siteAnalysisRuns = new AtomicLong();
 
-  public AnalysisService(SiteService sites, BoardRepository boards, MethodLibrary methodLibrary) {
+  public AnalysisService(
+      SiteService sites,
+      BoardRepository boards,
+      MethodLibrary methodLibrary,
+      ObjectProvider<SiteGenerations> generations,
+      ObjectProvider<PlatformTransactionManager> transactions,
+      @Value("${wayledger.analysis.kept-sites:64}") int keptSites) {
     this.sites = sites;
     this.boards = boards;
     this.methodLibrary = methodLibrary;
+    // Without a database (web slice tests) nothing is kept: every read computes.
+    this.generations = generations.getIfAvailable();
+    PlatformTransactionManager manager = transactions.getIfAvailable();
+    this.kept = new AnalysisCache(this.generations == null || manager == null ? 0 : keptSites);
+    this.readOnly = manager == null ? null : new TransactionTemplate(manager);
+    if (readOnly != null) {
+      readOnly.setReadOnly(true);
+    }
   }
 
   /** The diversity methods a board may choose from: built-in and user-defined. */
@@ -46,8 +73,42 @@ public class AnalysisService {
     return methodLibrary.catalog();
   }
 
-  @Transactional(readOnly = true)
+  /**
+   * The analysis of a stored site as committed: kept per data generation. Inside a transaction that
+   * may have changed data (not read-only), it is computed afresh and not kept, so an uncommitted or
+   * rolled-back change never reaches another reader.
+   */
   public SiteAnalysis ofSite(long siteId) {
+    if (!mayKeep()) {
+      return computeOfSite(siteId);
+    }
+    // The generation is read before the data, so what is kept is never older than its generation.
+    long generation = generations.current(siteId);
+    return kept.get(siteId, generation, () -> readOnly.execute(status -> computeOfSite(siteId)));
+  }
+
+  /**
+   * Whether a read may use and keep an analysis: there is a database generation to key it by, and
+   * the caller's transaction (if any) cannot have changed data.
+   */
+  private boolean mayKeep() {
+    boolean mayHaveChanged =
+        TransactionSynchronizationManager.isActualTransactionActive()
+            && (!TransactionSynchronizationManager.isCurrentTransactionReadOnly()
+                || SiteGenerations.changesPending());
+    return !mayHaveChanged && generations != null && readOnly != null;
+  }
+
+  /**
+   * How many times a stored site's analysis has been computed since start-up (reads that took a
+   * kept result do not count).
+   */
+  public long siteAnalysisRuns() {
+    return siteAnalysisRuns.get();
+  }
+
+  private SiteAnalysis computeOfSite(long siteId) {
+    siteAnalysisRuns.incrementAndGet();
     Site site = sites.get(siteId);
     List<Board> onSite = boards.findBySite(siteId);
     onSite.forEach(board -> board.getCircuits().forEach(circuit -> circuit.getLoads().size()));
@@ -66,8 +127,19 @@ public class AnalysisService {
     return ScheduleMapper.mccbSettingsOf(onSite);
   }
 
-  @Transactional(readOnly = true)
+  /** The analysis of the site a board is on (see {@link #ofSite(long)}). */
   public SiteAnalysis ofBoard(long boardId) {
+    if (mayKeep()) {
+      // one query for the board's site and its generation: no entity loaded on a kept read
+      SiteGenerations.Stamp stamp =
+          generations
+              .ofBoard(boardId)
+              .orElseThrow(() -> new com.wayledger.system.NotFoundException("Board", boardId));
+      return kept.get(
+          stamp.siteId(),
+          stamp.generation(),
+          () -> readOnly.execute(status -> computeOfSite(stamp.siteId())));
+    }
     Board board =
         boards
             .findById(boardId)

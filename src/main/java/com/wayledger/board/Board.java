@@ -179,11 +179,6 @@ public class Board {
     measuredFaultCurrentKiloAmps = form.measuredFaultCurrentKiloAmps();
   }
 
-  /** Marks the board changed so that its version moves when only its circuits changed. */
-  void markScheduleChanged() {
-    updatedAt = Instant.now();
-  }
-
   public boolean isThreePhase() {
     return phases == 3;
   }

@@ -7,6 +7,7 @@ import com.wayledger.engine.WayStatus;
 import io.swagger.v3.oas.annotations.Operation;
 import io.swagger.v3.oas.annotations.tags.Tag;
 import jakarta.validation.Valid;
+import jakarta.validation.constraints.NotNull;
 import java.util.List;
 import org.springframework.http.HttpStatus;
 import org.springframework.transaction.annotation.Transactional;
@@ -70,7 +71,8 @@ public class BoardApiController {
       double powerFactor,
       Double startUpSurgeMultiple,
       Double startUpSurgeMillis,
-      boolean continuous) {
+      boolean continuous,
+      long version) {
 
     static LoadView of(LoadItem load) {
       return new LoadView(
@@ -83,9 +85,13 @@ public class BoardApiController {
           load.getPowerFactor(),
           load.getStartUpSurgeMultiple(),
           load.getStartUpSurgeMillis(),
-          load.isContinuous());
+          load.isContinuous(),
+          load.getVersion());
     }
   }
+
+  /** A load line's new values with the version they were read at. */
+  public record LoadChange(@NotNull Long version, @Valid @NotNull LoadForm load) {}
 
   public record CircuitView(
       long id,
@@ -154,6 +160,41 @@ public class BoardApiController {
   @Operation(summary = "Add a circuit, optionally with its first load (editor)")
   public long addCircuit(@PathVariable long id, @Valid @RequestBody CircuitForm form) {
     return schedule.addCircuit(id, form).getId();
+  }
+
+  @GetMapping("/circuits/{id}")
+  @Operation(summary = "A circuit with its loads; fields.version is what a change must send back")
+  public CircuitView circuit(@PathVariable long id) {
+    return schedule.readCircuit(id, CircuitView::of);
+  }
+
+  @PutMapping("/circuits/{id}")
+  @Operation(
+      summary =
+          "Replace a circuit's fields (editor); send the version you read. A stale version gets"
+              + " 409 with the values saved meanwhile in \"current\"")
+  public CircuitView updateCircuit(@PathVariable long id, @Valid @RequestBody CircuitForm form) {
+    if (form.version() == null) {
+      throw new com.wayledger.system.RuleViolation("version", "api.version.required");
+    }
+    schedule.updateCircuit(id, form);
+    return circuit(id);
+  }
+
+  @GetMapping("/loads/{id}")
+  @Operation(summary = "One load line with its version")
+  public LoadView load(@PathVariable long id) {
+    return LoadView.of(schedule.load(id));
+  }
+
+  @PutMapping("/loads/{id}")
+  @Operation(
+      summary =
+          "Replace a load line (editor); send the version you read. A stale version gets 409 with"
+              + " the values saved meanwhile in \"current\"")
+  public LoadView updateLoad(@PathVariable long id, @Valid @RequestBody LoadChange change) {
+    schedule.updateLoad(id, change.version(), change.load(), null);
+    return load(id);
   }
 
   @DeleteMapping("/circuits/{id}")

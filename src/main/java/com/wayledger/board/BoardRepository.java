@@ -20,4 +20,7 @@ public interface BoardRepository extends JpaRepository<Board, Long> {
 
   @Query("select count(b) from Board b where b.parent.id = :boardId")
   long countChildren(@Param("boardId") long boardId);
+
+  @Query("select b.site.id from Board b where b.id = :id")
+  Optional<Long> findSiteIdOf(@Param("id") long id);
 }

@@ -5,6 +5,7 @@ import com.wayledger.site.Site;
 import com.wayledger.site.SiteService;
 import com.wayledger.system.ChangeKind;
 import com.wayledger.system.NotFoundException;
+import com.wayledger.system.RowLocks;
 import com.wayledger.system.RuleViolation;
 import com.wayledger.system.ScheduleChanged;
 import com.wayledger.system.StaleEditException;
@@ -30,14 +31,17 @@ public class BoardService {
   private final SiteService sites;
   private final MethodLibrary methods;
   private final ApplicationEventPublisher events;
+  private final RowLocks locks;
 
   public BoardService(
       BoardRepository boards,
       CircuitRepository circuits,
       SiteService sites,
       MethodLibrary methods,
-      ApplicationEventPublisher events) {
+      ApplicationEventPublisher events,
+      RowLocks locks) {
     this.events = events;
+    this.locks = locks;
     this.boards = boards;
     this.circuits = circuits;
     this.sites = sites;
@@ -85,6 +89,9 @@ public class BoardService {
 
   @Transactional
   public Board create(long siteId, BoardForm form, String reason) {
+    if (!locks.shared("site", siteId)) {
+      throw new NotFoundException("Site", siteId);
+    }
     Site site = sites.get(siteId);
     Board parent = checkRules(site, form, null);
     Board board = new Board(site);
@@ -101,9 +108,17 @@ public class BoardService {
 
   @Transactional
   public Board update(long boardId, BoardForm form, String reason) {
+    // The site shared (its supply cannot change meanwhile), then the board exclusive: circuits
+    // being saved (they hold the board shared) finish first, so checks of its circuits see them.
+    Long siteId =
+        boards.findSiteIdOf(boardId).orElseThrow(() -> new NotFoundException("Board", boardId));
+    locks.shared("site", siteId);
+    if (!locks.exclusive("board", boardId)) {
+      throw new NotFoundException("Board", boardId);
+    }
     Board board = get(boardId);
     if (form.version() != null && !Objects.equals(form.version(), board.getVersion())) {
-      throw new StaleEditException("Board " + board.getReference());
+      throw new StaleEditException("Board " + board.getReference(), BoardForm.of(board));
     }
     Board parent = checkRules(board.getSite(), form, board);
     var before = ScheduleMapper.headerOf(board);
@@ -128,7 +143,6 @@ public class BoardService {
     }
     var header = ScheduleMapper.headerOf(board);
     board.applyDefaults(form);
-    board.markScheduleChanged();
     Board saved = boards.saveAndFlush(board);
     logged(
         saved,
@@ -149,6 +163,9 @@ public class BoardService {
   /** Deletes a board that feeds no other board; returns its site's id. */
   @Transactional
   public long delete(long boardId, String reason) {
+    if (!locks.exclusive("board", boardId)) {
+      throw new NotFoundException("Board", boardId);
+    }
     Board board = get(boardId);
     if (boards.countChildren(boardId) > 0) {
       throw new RuleViolation("reference", "board.delete.hasChildren");

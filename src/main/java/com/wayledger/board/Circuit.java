@@ -21,6 +21,7 @@ import jakarta.persistence.Table;
 import jakarta.persistence.Version;
 import java.util.ArrayList;
 import java.util.List;
+import org.hibernate.annotations.OptimisticLock;
 
 /** What one position (or three positions, for a three-pole device) of a board holds. */
 @Entity
@@ -98,7 +99,9 @@ public class Circuit {
 
   @Version private long version;
 
+  // Load lines carry their own versions: adding or editing one must not move the circuit's.
   @OneToMany(mappedBy = "circuit", cascade = CascadeType.ALL, orphanRemoval = true)
+  @OptimisticLock(excluded = true)
   @OrderBy("lineNumber")
   private List<LoadItem> loads = new ArrayList<>();
 

@@ -13,6 +13,7 @@ import jakarta.persistence.Id;
 import jakarta.persistence.JoinColumn;
 import jakarta.persistence.ManyToOne;
 import jakarta.persistence.Table;
+import jakarta.persistence.Version;
 
 /** One line of a circuit's load list: a number of identical items with one nameplate rating. */
 @Entity
@@ -48,6 +49,9 @@ public class LoadItem {
   private Double startUpSurgeMillis;
 
   private boolean continuous;
+
+  /** This line's own version: edits of other lines or of the circuit do not move it. */
+  @Version private long version;
 
   protected LoadItem() {}
 
@@ -129,5 +133,9 @@ public class LoadItem {
 
   public boolean isContinuous() {
     return continuous;
+  }
+
+  public long getVersion() {
+    return version;
   }
 }

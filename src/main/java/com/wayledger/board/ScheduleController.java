@@ -206,6 +206,7 @@ public class ScheduleController {
   public String editLoad(@PathVariable long id, Model model) {
     LoadItem load = schedule.load(id);
     model.addAttribute("load", load);
+    model.addAttribute("loadVersion", load.getVersion());
     model.addAttribute("circuitId", load.getCircuit().getId());
     model.addAttribute("loadForm", LoadForm.of(load));
     return "board/load";
@@ -219,6 +220,7 @@ public class ScheduleController {
       HttpServletRequest request,
       @RequestParam(required = false) String reason,
       @RequestParam(required = false) String back,
+      @RequestParam(required = false) Long version,
       Model model,
       HttpServletResponse response) {
     back = back == null || back.isBlank() ? null : back;
@@ -227,11 +229,32 @@ public class ScheduleController {
     long circuitId = load.getCircuit().getId();
     if (errors.hasErrors()) {
       model.addAttribute("load", load);
+      model.addAttribute("loadVersion", version);
       model.addAttribute("circuitId", circuitId);
       return FormStatus.invalid(response, "board/load");
     }
-    schedule.updateLoad(id, loadForm, reason);
+    try {
+      schedule.updateLoad(id, version, loadForm, reason);
+    } catch (StaleEditException | ObjectOptimisticLockingFailureException stale) {
+      return loadConflict(id, loadForm, model, response);
+    }
     return "redirect:" + editPage(circuitId, back);
+  }
+
+  /** As {@link #conflict}, for a load line saved by someone else after its form was opened. */
+  private String loadConflict(long id, LoadForm yours, Model model, HttpServletResponse response) {
+    LoadItem saved = schedule.load(id);
+    LoadForm savedForm = LoadForm.of(saved);
+    model.asMap().remove(BindingResult.MODEL_KEY_PREFIX + "loadForm");
+    model.addAttribute("conflict", RecordDiff.between(yours, savedForm, java.util.Set.of()));
+    model.addAttribute("conflictPrefix", "load.");
+    model.addAttribute("yours", yours);
+    model.addAttribute("load", saved);
+    model.addAttribute("loadVersion", saved.getVersion());
+    model.addAttribute("circuitId", saved.getCircuit().getId());
+    model.addAttribute("loadForm", savedForm);
+    response.setStatus(HttpServletResponse.SC_CONFLICT);
+    return "board/load";
   }
 
   @PostMapping("/loads/{id}/delete")

@@ -6,10 +6,10 @@ import com.wayledger.engine.PhasePosition;
 import com.wayledger.engine.WayStatus;
 import com.wayledger.system.ChangeKind;
 import com.wayledger.system.NotFoundException;
+import com.wayledger.system.RowLocks;
 import com.wayledger.system.RuleViolation;
 import com.wayledger.system.ScheduleChanged;
 import com.wayledger.system.StaleEditException;
-import jakarta.persistence.EntityManager;
 import jakarta.validation.ConstraintViolation;
 import jakarta.validation.Validator;
 import java.util.Objects;
@@ -35,7 +35,7 @@ public class ScheduleService {
   private final CircuitRepository circuits;
   private final LoadItemRepository loads;
   private final JdbcClient jdbc;
-  private final EntityManager entityManager;
+  private final RowLocks locks;
   private final Validator validator;
   private final ApplicationEventPublisher events;
 
@@ -44,7 +44,7 @@ public class ScheduleService {
       CircuitRepository circuits,
       LoadItemRepository loads,
       JdbcClient jdbc,
-      EntityManager entityManager,
+      RowLocks locks,
       Validator validator,
       ApplicationEventPublisher events) {
     this.events = events;
@@ -52,7 +52,7 @@ public class ScheduleService {
     this.circuits = circuits;
     this.loads = loads;
     this.jdbc = jdbc;
-    this.entityManager = entityManager;
+    this.locks = locks;
     this.validator = validator;
   }
 
@@ -73,6 +73,12 @@ public class ScheduleService {
     return MissingInputs.of(circuit(circuitId));
   }
 
+  /** A view of the circuit made inside a transaction, so that its loads can be read. */
+  @Transactional(readOnly = true)
+  public <T> T readCircuit(long id, java.util.function.Function<Circuit, T> view) {
+    return view.apply(circuit(id));
+  }
+
   /** The circuit's load lines, in order, loaded for display outside the transaction. */
   @Transactional(readOnly = true)
   public java.util.List<LoadItem> loadsOf(long circuitId) {
@@ -91,8 +97,7 @@ public class ScheduleService {
 
   @Transactional
   public Circuit addCircuit(long boardId, CircuitForm form, String reason) {
-    Board board =
-        boards.findById(boardId).orElseThrow(() -> new NotFoundException("Board", boardId));
+    Board board = lockedBoard(boardId, false);
     checkCircuitRules(board, form, null);
     LoadForm firstLoad = form.hasFirstLoad() ? checkedFirstLoad(form) : null;
     Circuit circuit = new Circuit(board);
@@ -102,7 +107,6 @@ public class ScheduleService {
     }
     circuits.save(circuit);
     occupy(board, circuit);
-    board.markScheduleChanged();
     logged(circuit, ChangeKind.CIRCUIT_ADDED, "added", null, snapshot(circuit), reason);
     return circuit;
   }
@@ -114,9 +118,9 @@ public class ScheduleService {
 
   @Transactional
   public Circuit updateCircuit(long circuitId, CircuitForm form, String reason) {
-    Circuit circuit = circuit(circuitId);
+    Circuit circuit = lockedCircuit(circuitId);
     if (form.version() != null && !Objects.equals(form.version(), circuit.getVersion())) {
-      throw new StaleEditException("Circuit " + circuit.getDescription());
+      throw new StaleEditException("Circuit " + circuit.getDescription(), CircuitForm.of(circuit));
     }
     Board board = circuit.getBoard();
     checkCircuitRules(board, form, circuitId);
@@ -129,7 +133,6 @@ public class ScheduleService {
       circuit.addLoad(new LoadItem(checkedFirstLoad(form)));
     }
     occupy(board, circuit);
-    board.markScheduleChanged();
     logged(circuit, ChangeKind.CIRCUIT_EDITED, "changed", before, snapshot(circuit), reason);
     return circuit;
   }
@@ -141,17 +144,15 @@ public class ScheduleService {
   @Transactional
   public Circuit replaceDevice(
       long circuitId, long expectedVersion, com.wayledger.engine.DeviceSpec device) {
-    Circuit circuit = circuit(circuitId);
+    Circuit circuit = lockedCircuit(circuitId);
     if (circuit.getVersion() != expectedVersion) {
-      throw new StaleEditException("Circuit " + circuit.getDescription());
+      throw new StaleEditException("Circuit " + circuit.getDescription(), CircuitForm.of(circuit));
     }
     if (circuit.getStatus() == WayStatus.EMPTY) {
       throw new RuleViolation("deviceKind", "circuit.device.emptyPosition");
     }
     com.wayledger.engine.CircuitSpec before = snapshot(circuit);
     circuit.replaceDevice(DeviceDetails.fromSpec(device));
-    circuit.getBoard().markScheduleChanged();
-    entityManager.flush();
     logged(
         circuit,
         ChangeKind.CIRCUIT_EDITED,
@@ -170,22 +171,22 @@ public class ScheduleService {
    */
   @Transactional
   public void rearrange(
-      long boardId, long expectedBoardVersion, java.util.List<Placement> placements) {
-    rearrange(boardId, expectedBoardVersion, placements, null);
+      long boardId, String expectedScheduleToken, java.util.List<Placement> placements) {
+    rearrange(boardId, expectedScheduleToken, placements, null);
   }
 
   /**
-   * As {@link #rearrange(long, long, java.util.List)}, with the reason recorded in the change log.
+   * As {@link #rearrange(long, String, java.util.List)}, with the reason recorded in the change
+   * log.
    */
   @Transactional
   public void rearrange(
       long boardId,
-      long expectedBoardVersion,
+      String expectedScheduleToken,
       java.util.List<Placement> placements,
       String reason) {
-    Board board =
-        boards.findById(boardId).orElseThrow(() -> new NotFoundException("Board", boardId));
-    if (board.getVersion() != expectedBoardVersion) {
+    Board board = lockedBoard(boardId, true);
+    if (!scheduleToken(boardId).equals(expectedScheduleToken)) {
       throw new StaleEditException("Board " + board.getReference());
     }
     java.util.List<Circuit> moving = new java.util.ArrayList<>();
@@ -218,8 +219,6 @@ public class ScheduleService {
     for (Circuit circuit : moving) {
       occupy(board, circuit);
     }
-    board.markScheduleChanged();
-    entityManager.flush();
     java.util.List<com.wayledger.engine.CircuitSpec> after =
         moving.stream().map(this::snapshot).toList();
     events.publishEvent(
@@ -243,14 +242,13 @@ public class ScheduleService {
   /** Deletes a circuit with its loads; returns the id of the board it was on. */
   @Transactional
   public long deleteCircuit(long circuitId, String reason) {
-    Circuit circuit = circuit(circuitId);
+    Circuit circuit = lockedCircuit(circuitId);
     Board board = circuit.getBoard();
     logged(circuit, ChangeKind.CIRCUIT_REMOVED, "removed", snapshot(circuit), null, reason);
     jdbc.sql("UPDATE board SET fed_from_circuit_id = NULL WHERE fed_from_circuit_id = ?")
         .param(circuitId)
         .update();
     circuits.delete(circuit);
-    board.markScheduleChanged();
     return board.getId();
   }
 
@@ -261,15 +259,14 @@ public class ScheduleService {
 
   @Transactional
   public LoadItem addLoad(long circuitId, LoadForm form, String reason) {
-    Circuit circuit = circuit(circuitId);
+    Circuit circuit = lockedCircuit(circuitId);
     if (circuit.getStatus() != WayStatus.IN_USE) {
       throw new RuleViolation("description", "load.circuit.notInUse");
     }
     var before = snapshot(circuit);
     LoadItem load = new LoadItem(form);
     circuit.addLoad(load);
-    circuit.getBoard().markScheduleChanged();
-    entityManager.flush();
+    loads.save(load);
     logged(
         circuit,
         ChangeKind.LOAD_ADDED,
@@ -287,10 +284,21 @@ public class ScheduleService {
 
   @Transactional
   public LoadItem updateLoad(long loadId, LoadForm form, String reason) {
-    LoadItem load = load(loadId);
+    return updateLoad(loadId, null, form, reason);
+  }
+
+  /**
+   * Saves an edited load line; refused as stale when {@code expectedVersion} is given and the line
+   * was saved by someone else since (the exception carries the values saved meanwhile).
+   */
+  @Transactional
+  public LoadItem updateLoad(long loadId, Long expectedVersion, LoadForm form, String reason) {
+    LoadItem load = lockedLoad(loadId);
+    if (expectedVersion != null && expectedVersion != load.getVersion()) {
+      throw new StaleEditException("Load " + load.getDescription(), LoadForm.of(load));
+    }
     var before = snapshot(load.getCircuit());
     load.apply(form);
-    load.getCircuit().getBoard().markScheduleChanged();
     logged(
         load.getCircuit(),
         ChangeKind.LOAD_EDITED,
@@ -310,11 +318,10 @@ public class ScheduleService {
   /** Deletes a load; returns the id of the circuit it was on. */
   @Transactional
   public long deleteLoad(long loadId, String reason) {
-    LoadItem load = load(loadId);
+    LoadItem load = lockedLoad(loadId);
     Circuit circuit = load.getCircuit();
     var before = snapshot(circuit);
     circuit.getLoads().remove(load);
-    circuit.getBoard().markScheduleChanged();
     logged(
         circuit,
         ChangeKind.LOAD_REMOVED,
@@ -323,6 +330,79 @@ public class ScheduleService {
         snapshot(circuit),
         reason);
     return circuit.getId();
+  }
+
+  /**
+   * A token that changes whenever anything a balancing plan depends on changes (any circuit or load
+   * line of the board saved, added or removed): the plan shown is applied only while it still
+   * matches. Made from the records' own versions, so no board-wide version has to move on every
+   * circuit edit.
+   */
+  @Transactional(readOnly = true)
+  public String scheduleToken(long boardId) {
+    StringBuilder state = new StringBuilder();
+    jdbc.sql("SELECT id, version FROM circuit WHERE board_id = ? ORDER BY id")
+        .param(boardId)
+        .query(
+            (java.sql.ResultSet rs) -> {
+              state.append('c').append(rs.getLong(1)).append('.').append(rs.getLong(2));
+            });
+    jdbc.sql(
+            "SELECT l.id, l.version FROM load_item l JOIN circuit c ON c.id = l.circuit_id"
+                + " WHERE c.board_id = ? ORDER BY l.id")
+        .param(boardId)
+        .query(
+            (java.sql.ResultSet rs) -> {
+              state.append('l').append(rs.getLong(1)).append('.').append(rs.getLong(2));
+            });
+    try {
+      byte[] digest =
+          java.security.MessageDigest.getInstance("SHA-256")
+              .digest(state.toString().getBytes(java.nio.charset.StandardCharsets.UTF_8));
+      return java.util.HexFormat.of().formatHex(digest, 0, 12);
+    } catch (java.security.NoSuchAlgorithmException impossible) {
+      throw new IllegalStateException(impossible);
+    }
+  }
+
+  // --- row locks: parent shared, the record itself exclusive, always in this order ---
+
+  private Board lockedBoard(long boardId, boolean exclusive) {
+    boolean found = exclusive ? locks.exclusive("board", boardId) : locks.shared("board", boardId);
+    if (!found) {
+      throw new NotFoundException("Board", boardId);
+    }
+    return boards.findById(boardId).orElseThrow(() -> new NotFoundException("Board", boardId));
+  }
+
+  private Circuit lockedCircuit(long circuitId) {
+    Long boardId =
+        jdbc.sql("SELECT board_id FROM circuit WHERE id = ?")
+            .param(circuitId)
+            .query(Long.class)
+            .optional()
+            .orElseThrow(() -> new NotFoundException("Circuit", circuitId));
+    lockedBoard(boardId, false);
+    if (!locks.exclusive("circuit", circuitId)) {
+      throw new NotFoundException("Circuit", circuitId);
+    }
+    return circuit(circuitId);
+  }
+
+  private LoadItem lockedLoad(long loadId) {
+    Long boardId =
+        jdbc.sql(
+                "SELECT c.board_id FROM load_item l JOIN circuit c ON c.id = l.circuit_id"
+                    + " WHERE l.id = ?")
+            .param(loadId)
+            .query(Long.class)
+            .optional()
+            .orElseThrow(() -> new NotFoundException("Load", loadId));
+    lockedBoard(boardId, false);
+    if (!locks.exclusive("load_item", loadId)) {
+      throw new NotFoundException("Load", loadId);
+    }
+    return load(loadId);
   }
 
   // --- change log (loadlog): each change publishes one event, recorded in this transaction ---
@@ -420,7 +500,6 @@ public class ScheduleService {
    */
   private void occupy(Board board, Circuit circuit) {
     try {
-      entityManager.flush();
       jdbc.sql("DELETE FROM way_slot WHERE circuit_id = ?").param(circuit.getId()).update();
       for (Phase phase : circuit.getPosition().phases()) {
         jdbc.sql(

@@ -28,10 +28,8 @@ import java.util.ArrayList;
 import java.util.List;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
-import org.springframework.boot.ApplicationArguments;
-import org.springframework.boot.ApplicationRunner;
+import org.springframework.context.SmartLifecycle;
 import org.springframework.context.annotation.Profile;
-import org.springframework.core.annotation.Order;
 import org.springframework.stereotype.Component;
 import org.springframework.transaction.support.TransactionTemplate;
 
@@ -44,8 +42,7 @@ import org.springframework.transaction.support.TransactionTemplate;
  */
 @Component
 @Profile("demo")
-@Order(5)
-class DemoSite implements ApplicationRunner {
+class DemoSite implements SmartLifecycle {
 
   static final String SITE_NAME = "Tallow Lane Works";
   static final String DEMO_USER = "demo";
@@ -74,8 +71,34 @@ class DemoSite implements ApplicationRunner {
     this.transaction = transaction;
   }
 
+  private volatile boolean running;
+
+  /**
+   * Loads before the web server starts (the server's own phase is just below Integer.MAX_VALUE), so
+   * the first page served already finds the demo accounts and site: an early sign-in never fails.
+   */
   @Override
-  public void run(ApplicationArguments args) {
+  public int getPhase() {
+    return 0;
+  }
+
+  @Override
+  public void start() {
+    loadOnce();
+    running = true;
+  }
+
+  @Override
+  public void stop() {
+    running = false;
+  }
+
+  @Override
+  public boolean isRunning() {
+    return running;
+  }
+
+  void loadOnce() {
     if (!accounts.anyUser()) {
       accounts.create(new UserForm(DEMO_USER, "Demo editor", DEMO_PASSWORD, Role.ADMIN));
       accounts.create(new UserForm(VIEWER_USER, "Demo visitor", VIEWER_PASSWORD, Role.VIEWER));

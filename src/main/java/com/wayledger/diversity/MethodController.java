@@ -3,11 +3,15 @@ package com.wayledger.diversity;
 import com.wayledger.engine.demand.CategoryGroup;
 import com.wayledger.system.FormStatus;
 import com.wayledger.system.RuleViolation;
+import com.wayledger.system.StaleEditException;
 import jakarta.servlet.http.HttpServletResponse;
 import java.security.Principal;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
+import org.springframework.context.MessageSource;
+import org.springframework.orm.ObjectOptimisticLockingFailureException;
 import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
 import org.springframework.web.bind.annotation.GetMapping;
@@ -20,9 +24,11 @@ import org.springframework.web.bind.annotation.RequestParam;
 public class MethodController {
 
   private final MethodLibrary library;
+  private final MessageSource messages;
 
-  public MethodController(MethodLibrary library) {
+  public MethodController(MethodLibrary library, MessageSource messages) {
     this.library = library;
+    this.messages = messages;
   }
 
   /** One group of a method as the edit form shows it. */
@@ -72,7 +78,22 @@ public class MethodController {
       Principal user,
       Model model,
       HttpServletResponse response) {
-    Map<String, String> problems = library.update(key, version, name, submitted, user.getName());
+    Map<String, String> problems;
+    try {
+      problems = library.update(key, version, name, submitted, user.getName());
+    } catch (RuleViolation violation) {
+      problems = Map.of("name", messages.getMessage(violation.messageCode(), null, Locale.UK));
+    } catch (StaleEditException | ObjectOptimisticLockingFailureException stale) {
+      // The form comes back with the saved method's version and the user's typed values: saving
+      // again is a deliberate overwrite, and nothing typed is lost.
+      fill(
+          model,
+          library.entry(key),
+          submitted,
+          Map.of("name", messages.getMessage("method.stale", null, Locale.UK)));
+      response.setStatus(HttpServletResponse.SC_CONFLICT);
+      return "diversity/method";
+    }
     if (problems.isEmpty()) {
       return "redirect:/methods/" + key + "?saved";
     }

@@ -4,7 +4,9 @@ import com.wayledger.engine.demand.CategoryGroup;
 import com.wayledger.engine.demand.DiversityMethod;
 import com.wayledger.engine.demand.DiversityMethodCatalog;
 import com.wayledger.engine.demand.DiversityMethods;
+import com.wayledger.system.MethodsChanged;
 import com.wayledger.system.NotFoundException;
+import com.wayledger.system.RowLocks;
 import com.wayledger.system.RuleViolation;
 import com.wayledger.system.StaleEditException;
 import java.util.ArrayList;
@@ -13,6 +15,7 @@ import java.util.List;
 import java.util.Map;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
+import org.springframework.context.ApplicationEventPublisher;
 import org.springframework.stereotype.Service;
 import org.springframework.transaction.annotation.Transactional;
 
@@ -26,9 +29,14 @@ public class MethodLibrary {
   private static final String KEY_PATTERN = "[a-z0-9][a-z0-9-]{1,59}";
 
   private final StoredMethodRepository stored;
+  private final ApplicationEventPublisher events;
+  private final RowLocks locks;
 
-  public MethodLibrary(StoredMethodRepository stored) {
+  public MethodLibrary(
+      StoredMethodRepository stored, ApplicationEventPublisher events, RowLocks locks) {
+    this.locks = locks;
     this.stored = stored;
+    this.events = events;
   }
 
   /**
@@ -90,8 +98,16 @@ public class MethodLibrary {
   @Transactional
   public Map<String, String> update(
       String key, long version, String name, Map<String, String> submitted, String user) {
+    // Exclusive before reading: a second save from the same version waits, then sees the first
+    // one's version and becomes a conflict instead of an overwrite.
+    if (!locks.exclusive("diversity_method", key)) {
+      if (DiversityMethods.builtIn().find(key).isPresent()) {
+        throw new RuleViolation("key", "method.builtIn.readOnly");
+      }
+      throw new NotFoundException("Diversity method", key);
+    }
     StoredMethod row =
-        stored.findById(key).orElseThrow(() -> new RuleViolation("key", "method.builtIn.readOnly"));
+        stored.findById(key).orElseThrow(() -> new NotFoundException("Diversity method", key));
     if (row.getVersion() != version) {
       throw new StaleEditException("Diversity method " + key);
     }
@@ -116,6 +132,8 @@ public class MethodLibrary {
               edited.groups(),
               edited.needsDwellingParameters());
       row.update(renamed.name(), MethodJson.write(renamed), user);
+      // Any site's boards may use the method: their stored analyses are now stale.
+      events.publishEvent(new MethodsChanged(key));
     }
     return problems;
   }

@@ -1,11 +1,15 @@
 package com.wayledger.exchange;
 
+import com.wayledger.diagram.DiagramPicture;
+import com.wayledger.loadlog.ChangeLog;
 import jakarta.servlet.http.HttpServletResponse;
 import java.io.IOException;
 import java.io.OutputStreamWriter;
 import java.io.Writer;
 import java.nio.charset.StandardCharsets;
+import java.util.List;
 import java.util.Locale;
+import org.springframework.beans.factory.annotation.Value;
 import org.springframework.context.MessageSource;
 import org.springframework.http.ContentDisposition;
 import org.springframework.http.HttpHeaders;
@@ -13,6 +17,7 @@ import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
 import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.PathVariable;
+import org.springframework.web.servlet.support.ServletUriComponentsBuilder;
 
 /**
  * Schedules out: XLSX of a board or a whole site, CSV of a board, and the printable door chart. Any
@@ -25,10 +30,25 @@ public class ExportController {
 
   private final ExportReader reader;
   private final MessageSource messages;
+  private final ChangeLog changeLog;
+  private final DiagramPicture diagramPicture;
+  private final String publicBaseUrl;
 
-  public ExportController(ExportReader reader, MessageSource messages) {
+  private final java.util.List<WorkbookSheet> extraSheets;
+
+  public ExportController(
+      ExportReader reader,
+      MessageSource messages,
+      ChangeLog changeLog,
+      DiagramPicture diagramPicture,
+      java.util.List<WorkbookSheet> extraSheets,
+      @Value("${wayledger.public-base-url:}") String publicBaseUrl) {
     this.reader = reader;
     this.messages = messages;
+    this.changeLog = changeLog;
+    this.diagramPicture = diagramPicture;
+    this.extraSheets = extraSheets;
+    this.publicBaseUrl = publicBaseUrl == null ? "" : publicBaseUrl.strip();
   }
 
   @GetMapping("/boards/{boardId}/export.xlsx")
@@ -39,15 +59,18 @@ public class ExportController {
         response,
         XLSX,
         fileName(data.siteName() + "-" + data.boards().get(0).reference()) + ".xlsx");
-    new WorkbookWriter(caution()).write(data, false, response.getOutputStream());
+    new WorkbookWriter(caution()).write(data, false, extraSheets, response.getOutputStream());
   }
 
   @GetMapping("/sites/{siteId}/export.xlsx")
   public void siteWorkbook(@PathVariable long siteId, HttpServletResponse response)
       throws IOException {
     ExportData data = reader.site(siteId);
+    byte[] diagram = data.boards().isEmpty() ? null : diagramPicture.png(siteId);
     attachment(response, XLSX, fileName(data.siteName()) + ".xlsx");
-    new WorkbookWriter(caution()).write(data, true, response.getOutputStream());
+    new WorkbookWriter(caution())
+        .withDiagram(diagram)
+        .write(data, true, extraSheets, response.getOutputStream());
   }
 
   @GetMapping("/boards/{boardId}/export.csv")
@@ -66,10 +89,43 @@ public class ExportController {
   @GetMapping("/boards/{boardId}/door-chart")
   public String doorChart(@PathVariable long boardId, Model model) {
     ExportData data = reader.board(boardId);
+    BoardEntry board = data.boards().get(0);
     model.addAttribute("data", data);
-    model.addAttribute("board", data.boards().get(0));
-    model.addAttribute("rows", DoorChartRow.of(data.boards().get(0)));
+    model.addAttribute("board", board);
+    List<DoorChartRow> rows = DoorChartRow.of(board);
+    model.addAttribute("rows", rows);
+    model.addAttribute("halves", halves(rows));
+    model.addAttribute("free", FreePositions.of(board));
+    model.addAttribute(
+        "code",
+        DoorChartCode.of(baseUrl(), boardId, data.exportedOn(), changeLog.latestPosition(boardId)));
     return "exchange/door-chart";
+  }
+
+  /**
+   * The rows in one column, or in two side by side when there are more than {@link
+   * #ONE_COLUMN_ROWS}, so that a 72-position board fits one A4 page.
+   */
+  static List<List<DoorChartRow>> halves(List<DoorChartRow> rows) {
+    if (rows.size() <= ONE_COLUMN_ROWS) {
+      return List.of(rows);
+    }
+    int split = (rows.size() + 1) / 2;
+    return List.of(rows.subList(0, split), rows.subList(split, rows.size()));
+  }
+
+  /** Rows a door chart prints in one column before it splits into two. */
+  static final int ONE_COLUMN_ROWS = 24;
+
+  /**
+   * The address the door chart's code links to: the documented setting {@code
+   * wayledger.public-base-url} when set (the app behind a proxy), else the address this request
+   * came in on.
+   */
+  private String baseUrl() {
+    return publicBaseUrl.isEmpty()
+        ? ServletUriComponentsBuilder.fromCurrentContextPath().build().toUriString()
+        : publicBaseUrl;
   }
 
   private String caution() {

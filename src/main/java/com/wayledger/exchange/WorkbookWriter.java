@@ -64,6 +64,14 @@ public final class WorkbookWriter {
     this.caution = caution;
   }
 
+  private byte[] diagramPng;
+
+  /** Adds a sheet with the site's single-line diagram (a PNG); null for none. */
+  public WorkbookWriter withDiagram(byte[] png) {
+    this.diagramPng = png;
+    return this;
+  }
+
   /** Where a board sheet's totals are, so that other sheets can refer to them. */
   record TotalsCells(
       String sheetName,
@@ -82,6 +90,13 @@ public final class WorkbookWriter {
    * @param out where to write; not closed
    */
   public void write(ExportData data, boolean withSummary, OutputStream out) throws IOException {
+    write(data, withSummary, List.of(), out);
+  }
+
+  /** Writes the workbook with other features' sheets appended (see {@link WorkbookSheet}). */
+  public void write(
+      ExportData data, boolean withSummary, List<WorkbookSheet> extraSheets, OutputStream out)
+      throws IOException {
     SXSSFWorkbook workbook = new FastWorkbook(WINDOW_ROWS);
     try {
       WorkbookStyles styles = new WorkbookStyles(workbook);
@@ -102,11 +117,19 @@ public final class WorkbookWriter {
       if (summary != null) {
         writeSummary(summary, data, totals, styles);
       }
+      if (diagramPng != null) {
+        DiagramSheet.write(workbook, uniqueName(DiagramSheet.NAME, names), diagramPng, caution);
+      }
       List<FindingRow> findingRows = findingRows(data);
       if (!findingRows.isEmpty()) {
         writeFindings(workbook.createSheet(FINDINGS_SHEET), findingRows, data, styles);
       }
       writeMethods(workbook.createSheet(METHODS_SHEET), data, styles);
+      for (WorkbookSheet extra : extraSheets) {
+        if (extra.appliesTo(data)) {
+          extra.write(workbook.createSheet(uniqueName(extra.name(), names)), data, caution);
+        }
+      }
       workbook.setForceFormulaRecalculation(true);
       workbook.write(out);
     } finally {

@@ -62,6 +62,33 @@ public class ChangeLog {
         .list();
   }
 
+  /**
+   * The board's position in the log: the id of the newest entry about it (its own changes and its
+   * circuits' and loads'), or 0 when there is none. A printed door chart carries it, so a later
+   * reader can tell what changed since.
+   */
+  @Transactional(readOnly = true)
+  public long latestPosition(long boardId) {
+    Long newest =
+        jdbc.sql("SELECT MAX(id) FROM change_log WHERE board_id = ?")
+            .param(boardId)
+            .query(Long.class)
+            .optional()
+            .orElse(null);
+    return newest == null ? 0L : newest;
+  }
+
+  /** Entries about a board after a log position, oldest first, at most {@link #PAGE_LIMIT}. */
+  @Transactional(readOnly = true)
+  public List<ChangeLogEntry> boardHistorySince(long boardId, long position) {
+    return jdbc.sql(
+            "SELECT * FROM change_log WHERE board_id = ? AND id > ? ORDER BY id LIMIT "
+                + PAGE_LIMIT)
+        .params(boardId, position)
+        .query(ChangeLog::entry)
+        .list();
+  }
+
   /** One entry by its id. */
   @Transactional(readOnly = true)
   public java.util.Optional<ChangeLogEntry> find(long id) {
@@ -78,6 +105,67 @@ public class ChangeLog {
         .param(siteId)
         .query(String.class)
         .list();
+  }
+
+  /**
+   * Walks the site's chain in order and recomputes every hash: the first entry that is missing, out
+   * of place, pointing at the wrong predecessor or no longer matching its hash is reported.
+   */
+  @Transactional(readOnly = true)
+  public LogVerification verify(long siteId) {
+    long[] checked = {0};
+    String[] previousHash = {null};
+    long[] expectedSeq = {1};
+    LogVerification[] broken = {null};
+    jdbc.sql("SELECT * FROM change_log WHERE site_id = ? ORDER BY site_seq NULLS FIRST, id")
+        .param(siteId)
+        .query(
+            (ResultSet rs) -> {
+              if (broken[0] != null) {
+                return;
+              }
+              checked[0]++;
+              long id = rs.getLong("id");
+              Long seq = rs.getObject("site_seq", Long.class);
+              String hash = rs.getString("entry_hash");
+              LogVerification.Problem problem = null;
+              if (seq == null || hash == null) {
+                problem = LogVerification.Problem.UNCHAINED;
+              } else if (seq != expectedSeq[0]) {
+                problem = LogVerification.Problem.GAP;
+              } else if (!java.util.Objects.equals(
+                  previousHash[0], rs.getString("previous_hash"))) {
+                problem = LogVerification.Problem.LINK;
+              } else if (!hash.equals(fieldsOf(rs, seq).hash())) {
+                problem = LogVerification.Problem.ALTERED;
+              }
+              if (problem != null) {
+                broken[0] = new LogVerification(siteId, checked[0], false, id, seq, problem, null);
+                return;
+              }
+              previousHash[0] = hash;
+              expectedSeq[0]++;
+            });
+    return broken[0] != null
+        ? broken[0]
+        : new LogVerification(siteId, checked[0], true, null, null, null, previousHash[0]);
+  }
+
+  private static LogChain.Fields fieldsOf(ResultSet rs, long seq) throws SQLException {
+    return new LogChain.Fields(
+        seq,
+        rs.getLong("site_id"),
+        rs.getObject("board_id", Long.class),
+        rs.getObject("circuit_id", Long.class),
+        rs.getTimestamp("happened_at").toInstant(),
+        rs.getString("username"),
+        rs.getString("db_user"),
+        rs.getString("kind"),
+        rs.getString("summary"),
+        rs.getString("before_snapshot"),
+        rs.getString("after_snapshot"),
+        rs.getString("reason"),
+        rs.getString("previous_hash"));
   }
 
   private static ChangeLogEntry entry(ResultSet rs, int row) throws SQLException {

@@ -44,6 +44,15 @@ public class ChangeLogApiController {
     return log.ofSite(siteId, new LogFilter(boardId, username, from, to, kind));
   }
 
+  @GetMapping("/sites/{siteId}/log/verify")
+  @Operation(
+      summary =
+          "Check a site's change-log hash chain: intact, or the first entry where it breaks and why")
+  public LogVerification verify(@PathVariable long siteId) {
+    sites.get(siteId);
+    return log.verify(siteId);
+  }
+
   @GetMapping("/log/{entryId}")
   @Operation(summary = "One change-log entry")
   public ChangeLogEntry entry(@PathVariable long entryId) {

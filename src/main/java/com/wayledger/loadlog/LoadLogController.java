@@ -83,6 +83,13 @@ public class LoadLogController {
     return "loadlog/log";
   }
 
+  /** The log page with the result of checking the site's hash chain. */
+  @GetMapping("/sites/{id}/log/verify")
+  public String verify(@PathVariable long id, Model model) {
+    model.addAttribute("verification", log.verify(id));
+    return siteLog(id, null, null, null, null, null, model);
+  }
+
   /** The headroom table of the site page, fetched by the page after it loads. */
   @GetMapping("/sites/{id}/headroom")
   public String headroom(@PathVariable long id, Model model) {

@@ -15,6 +15,7 @@ import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.ModelAttribute;
 import org.springframework.web.bind.annotation.PathVariable;
 import org.springframework.web.bind.annotation.PostMapping;
+import org.springframework.web.bind.annotation.RequestParam;
 
 /** The site list and the site create/edit forms. */
 @Controller
@@ -41,8 +42,15 @@ public class SiteController {
   }
 
   @GetMapping({"/", "/sites"})
-  public String list(Model model) {
-    model.addAttribute("sites", sites.all());
+  public String list(
+      @RequestParam(name = "q", defaultValue = "") String text,
+      @RequestParam(name = "page", defaultValue = "0") int page,
+      Model model) {
+    String wanted = text.length() > 120 ? text.substring(0, 120) : text;
+    var found = sites.page(wanted, page);
+    model.addAttribute("sites", found.getContent());
+    model.addAttribute("found", found);
+    model.addAttribute("q", wanted.strip());
     return "site/list";
   }
 

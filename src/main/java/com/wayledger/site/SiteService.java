@@ -3,12 +3,15 @@ package com.wayledger.site;
 import com.wayledger.diversity.MethodLibrary;
 import com.wayledger.system.ChangeKind;
 import com.wayledger.system.NotFoundException;
+import com.wayledger.system.RowLocks;
 import com.wayledger.system.RuleViolation;
 import com.wayledger.system.ScheduleChanged;
 import com.wayledger.system.StaleEditException;
 import java.util.List;
 import java.util.Objects;
 import org.springframework.context.ApplicationEventPublisher;
+import org.springframework.data.domain.Page;
+import org.springframework.data.domain.PageRequest;
 import org.springframework.stereotype.Service;
 import org.springframework.transaction.annotation.Transactional;
 
@@ -23,17 +26,40 @@ public class SiteService {
   private final SiteRepository sites;
   private final MethodLibrary methods;
   private final ApplicationEventPublisher events;
+  private final RowLocks locks;
 
   public SiteService(
-      SiteRepository sites, MethodLibrary methods, ApplicationEventPublisher events) {
+      SiteRepository sites,
+      MethodLibrary methods,
+      ApplicationEventPublisher events,
+      RowLocks locks) {
     this.sites = sites;
     this.methods = methods;
     this.events = events;
+    this.locks = locks;
   }
 
   @Transactional(readOnly = true)
   public List<Site> all() {
     return sites.findAllByOrderByNameAsc();
+  }
+
+  /** Sites shown on one page of the site list. */
+  public static final int PAGE_SIZE = 50;
+
+  /**
+   * One page of the sites, by name; with a search text, only the sites whose name or address
+   * contains it, or that hold a board whose reference contains it (ignoring case).
+   */
+  @Transactional(readOnly = true)
+  public Page<Site> page(String text, int page) {
+    PageRequest request = PageRequest.of(Math.max(0, page), PAGE_SIZE);
+    String wanted = text == null ? "" : text.strip().toLowerCase(java.util.Locale.ROOT);
+    if (wanted.isEmpty()) {
+      return sites.pageByName(request);
+    }
+    String escaped = wanted.replace("\\", "\\\\").replace("%", "\\%").replace("_", "\\_");
+    return sites.search("%" + escaped + "%", request);
   }
 
   @Transactional(readOnly = true)
@@ -58,9 +84,14 @@ public class SiteService {
 
   @Transactional
   public Site update(long id, SiteForm form, String reason) {
+    // Exclusive: a board being added or edited meanwhile (it holds the site shared) finishes first,
+    // so a check of the site's boards made here sees it.
+    if (!locks.exclusive("site", id)) {
+      throw new NotFoundException("Site", id);
+    }
     Site site = get(id);
     if (form.version() != null && !Objects.equals(form.version(), site.getVersion())) {
-      throw new StaleEditException("Site " + site.getName());
+      throw new StaleEditException("Site " + site.getName(), SiteForm.of(site));
     }
     checkRules(form, id);
     SiteForm before = SiteForm.of(site);

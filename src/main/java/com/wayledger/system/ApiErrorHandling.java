@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.stream.Collectors;
 import org.springframework.dao.DataIntegrityViolationException;
+import org.springframework.dao.PessimisticLockingFailureException;
 import org.springframework.http.HttpStatus;
 import org.springframework.http.ProblemDetail;
 import org.springframework.http.converter.HttpMessageNotReadableException;
@@ -81,8 +82,22 @@ public class ApiErrorHandling {
 
   @ExceptionHandler({StaleEditException.class, ObjectOptimisticLockingFailureException.class})
   public ProblemDetail stale(Exception e) {
+    ProblemDetail problem =
+        problem(
+            HttpStatus.CONFLICT,
+            "Someone else changed this record; nothing of this change was stored. \"current\""
+                + " holds the values saved now, with their version.");
+    if (e instanceof StaleEditException stale && stale.current() != null) {
+      problem.setProperty("current", stale.current());
+    }
+    return problem;
+  }
+
+  @ExceptionHandler(PessimisticLockingFailureException.class)
+  public ProblemDetail busy(PessimisticLockingFailureException e) {
     return problem(
-        HttpStatus.CONFLICT, "Someone else changed this record; fetch it again and retry.");
+        HttpStatus.CONFLICT,
+        "The record is being changed by someone else right now; nothing was stored. Retry.");
   }
 
   @ExceptionHandler(DataIntegrityViolationException.class)

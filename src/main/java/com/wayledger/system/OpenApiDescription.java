@@ -21,13 +21,28 @@ class OpenApiDescription {
                 .version("1")
                 .description(
                     "Sites, boards, circuits and loads; demand after diversity; protection and cable findings;"
-                        + " phase balancing; change log. Every request is signed in with HTTP Basic; reading needs the"
-                        + " viewer role, changing needs editor. Caution: figures assist a competent person; local wiring"
+                        + " phase balancing; change log. Every request is signed in, preferably with a personal API token"
+                        + " (create one on the account page; header Authorization: Bearer <token>; a read token acts"
+                        + " as a viewer); HTTP Basic with the password also works but is slow, as it checks the password"
+                        + " on every request. Reading needs the viewer role, changing needs editor. Caution: figures assist a competent person; local wiring"
                         + " regulations and the current edition of the relevant standard govern; electrical work must be"
                         + " designed, done and certified by qualified people.")
                 .license(new License().name("Apache-2.0")))
         .schemaRequirement(
-            "basic", new SecurityScheme().type(SecurityScheme.Type.HTTP).scheme("basic"))
+            "token",
+            new SecurityScheme()
+                .type(SecurityScheme.Type.HTTP)
+                .scheme("bearer")
+                .description(
+                    "Personal API token from the account page, scope read or read-and-change."))
+        .schemaRequirement(
+            "basic",
+            new SecurityScheme()
+                .type(SecurityScheme.Type.HTTP)
+                .scheme("basic")
+                .description(
+                    "User name and password: the slow path (password hash on every call)."))
+        .addSecurityItem(new SecurityRequirement().addList("token"))
         .addSecurityItem(new SecurityRequirement().addList("basic"));
   }
 }

@@ -1,6 +1,7 @@
 package com.wayledger.system;
 
 import jakarta.servlet.http.HttpServletResponse;
+import org.springframework.dao.PessimisticLockingFailureException;
 import org.springframework.http.HttpStatus;
 import org.springframework.orm.ObjectOptimisticLockingFailureException;
 import org.springframework.ui.Model;
@@ -27,7 +28,11 @@ public class PageErrorHandling {
     return problem(HttpStatus.BAD_REQUEST, "error.badRequest", model, response);
   }
 
-  @ExceptionHandler({StaleEditException.class, ObjectOptimisticLockingFailureException.class})
+  @ExceptionHandler({
+    StaleEditException.class,
+    ObjectOptimisticLockingFailureException.class,
+    PessimisticLockingFailureException.class
+  })
   public String stale(Exception e, Model model, HttpServletResponse response) {
     return problem(HttpStatus.CONFLICT, "error.stale", model, response);
   }

@@ -40,7 +40,7 @@ class BalancingIntegrationTests {
     assertThat(plans.before().isUnbalancedBeyondLimit()).as("lopsided to begin with").isTrue();
     assertThat(plans.placements()).isNotEmpty();
 
-    schedule.rearrange(bakery.getId(), boards.get(bakery.getId()).getVersion(), plans.placements());
+    schedule.rearrange(bakery.getId(), schedule.scheduleToken(bakery.getId()), plans.placements());
 
     var after = analysis.ofBoard(bakery.getId()).boardDemand(bakery.getId());
     assertThat(after.unbalancePercent())
@@ -50,14 +50,14 @@ class BalancingIntegrationTests {
         .as("moving circuits does not change the demand")
         .isCloseTo(plans.before().demandWatts(), org.assertj.core.api.Assertions.within(1e-6));
 
-    schedule.rearrange(bakery.getId(), boards.get(bakery.getId()).getVersion(), plans.undo());
+    schedule.rearrange(bakery.getId(), schedule.scheduleToken(bakery.getId()), plans.undo());
     assertThat(positions(bakery.getId())).as("undo puts every circuit back").isEqualTo(before);
   }
 
   @Test
   void aPlanShownBeforeSomeoneElseChangedTheBoardIsRefused() {
     Board bakery = bakery();
-    long shownVersion = boards.get(bakery.getId()).getVersion();
+    String shownVersion = schedule.scheduleToken(bakery.getId());
     BalancePlans plans = balancing.plans(bakery.getId(), Basis.DEMAND, 2);
     schedule.rearrange(bakery.getId(), shownVersion, plans.placements());
     assertThatThrownBy(() -> schedule.rearrange(bakery.getId(), shownVersion, plans.undo()))
@@ -70,7 +70,7 @@ class BalancingIntegrationTests {
     BalancePlans plans = balancing.plans(bakery.getId(), Basis.DEMAND, 1);
     long entriesBefore = logEntries(bakery.getId());
     schedule.rearrange(
-        bakery.getId(), boards.get(bakery.getId()).getVersion(), plans.placements(), "WO-77");
+        bakery.getId(), schedule.scheduleToken(bakery.getId()), plans.placements(), "WO-77");
     assertThat(logEntries(bakery.getId()))
         .as("one log row for the whole plan")
         .isEqualTo(entriesBefore + 1);
@@ -87,10 +87,7 @@ class BalancingIntegrationTests {
     Board bakery = bakery();
     BalancePlans plans = balancing.plans(bakery.getId(), Basis.DEMAND, null);
     schedule.rearrange(
-        bakery.getId(),
-        boards.get(bakery.getId()).getVersion(),
-        plans.placements(),
-        "replay check");
+        bakery.getId(), schedule.scheduleToken(bakery.getId()), plans.placements(), "replay check");
     var points = history.points(bakery.getId());
     var last = points.get(points.size() - 1);
     var now = analysis.ofBoard(bakery.getId()).boardDemand(bakery.getId());

@@ -48,6 +48,7 @@ class BoardControllerIntegrationTests {
   @Autowired MockMvc mvc;
   @MockitoBean BoardService boards;
   @MockitoBean StoredMethodRepository storedMethods;
+  @MockitoBean com.wayledger.system.RowLocks rowLocks;
   @MockitoBean SiteService sites;
   @MockitoBean BoardRepository boardRepository;
   @MockitoBean CircuitRepository circuitRepository;

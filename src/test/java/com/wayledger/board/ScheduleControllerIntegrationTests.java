@@ -57,6 +57,7 @@ class ScheduleControllerIntegrationTests {
   @Autowired MockMvc mvc;
   @MockitoBean ScheduleService schedule;
   @MockitoBean StoredMethodRepository storedMethods;
+  @MockitoBean com.wayledger.system.RowLocks rowLocks;
   @MockitoBean BoardService boards;
   @MockitoBean SiteService sites;
   @MockitoBean BoardRepository boardRepository;

@@ -354,6 +354,10 @@ class ExchangeIntegrationTests {
         .andExpect(content().string(org.hamcrest.Matchers.containsString(site.getName())))
         .andExpect(
             content().string(org.hamcrest.Matchers.containsString("assist a competent person")))
-        .andExpect(content().string(org.hamcrest.Matchers.containsString("@page")));
+        .andExpect(content().string(org.hamcrest.Matchers.containsString("/css/door-chart.css")));
+    // the A4 print rule lives in the chart's style sheet, not in the page
+    mvc.perform(get("/css/door-chart.css").with(VIEWER))
+        .andExpect(status().isOk())
+        .andExpect(content().string(org.hamcrest.Matchers.containsString("size: A4 portrait")));
   }
 }

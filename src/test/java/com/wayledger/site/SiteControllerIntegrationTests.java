@@ -45,6 +45,7 @@ class SiteControllerIntegrationTests {
   @Autowired MockMvc mvc;
   @MockitoBean SiteService sites;
   @MockitoBean StoredMethodRepository storedMethods;
+  @MockitoBean com.wayledger.system.RowLocks rowLocks;
 
   static Site storedSite(long id, String name) {
     Site site = new Site(name);
@@ -92,7 +93,9 @@ class SiteControllerIntegrationTests {
 
   @Test
   void viewerSeesTheSiteList() throws Exception {
-    given(sites.all()).willReturn(List.of(storedSite(1, "Harbour Mill")));
+    given(sites.page("", 0))
+        .willReturn(
+            new org.springframework.data.domain.PageImpl<>(List.of(storedSite(1, "Harbour Mill"))));
 
     mvc.perform(get("/sites").with(viewer()))
         .andExpect(status().isOk())

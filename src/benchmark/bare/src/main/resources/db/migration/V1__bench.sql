@@ -1,0 +1,1 @@
+CREATE TABLE bench_row (id BIGINT PRIMARY KEY);

@@ -1,0 +1,74 @@
+package com.wayledger.account;
+
+import com.wayledger.system.FormRecovery;
+import com.wayledger.system.FormStatus;
+import com.wayledger.system.RuleViolation;
+import jakarta.servlet.http.HttpServletRequest;
+import jakarta.servlet.http.HttpServletResponse;
+import jakarta.validation.Valid;
+import java.security.Principal;
+import org.springframework.stereotype.Controller;
+import org.springframework.ui.Model;
+import org.springframework.validation.BindingResult;
+import org.springframework.web.bind.annotation.GetMapping;
+import org.springframework.web.bind.annotation.ModelAttribute;
+import org.springframework.web.bind.annotation.PathVariable;
+import org.springframework.web.bind.annotation.PostMapping;
+
+/**
+ * The signed-in user's own account page: personal API tokens, created (the secret shown once),
+ * listed with their scope and the day they were last used, and revoked.
+ */
+@Controller
+public class AccountController {
+
+  private static final String VIEW = "account/account";
+
+  private final ApiTokens tokens;
+
+  public AccountController(ApiTokens tokens) {
+    this.tokens = tokens;
+  }
+
+  @ModelAttribute("scopes")
+  TokenScope[] scopes() {
+    return TokenScope.values();
+  }
+
+  @GetMapping("/account")
+  public String account(Principal who, Model model) {
+    model.addAttribute("form", TokenForm.blank());
+    model.addAttribute("tokens", tokens.of(who.getName()));
+    return VIEW;
+  }
+
+  /** Creates a token and shows it on this response only: it is never shown again. */
+  @PostMapping("/account/tokens")
+  public String create(
+      Principal who,
+      @Valid @ModelAttribute("form") TokenForm form,
+      BindingResult errors,
+      HttpServletRequest request,
+      Model model,
+      HttpServletResponse response) {
+    form = FormRecovery.ensure(form, errors, model, "form", TokenForm.class, request);
+    if (!errors.hasErrors()) {
+      try {
+        model.addAttribute("created", tokens.create(who.getName(), form));
+        model.addAttribute("form", TokenForm.blank());
+        model.addAttribute("tokens", tokens.of(who.getName()));
+        return VIEW;
+      } catch (RuleViolation violation) {
+        FormStatus.reject(errors, violation);
+      }
+    }
+    model.addAttribute("tokens", tokens.of(who.getName()));
+    return FormStatus.invalid(response, VIEW);
+  }
+
+  @PostMapping("/account/tokens/{id}/revoke")
+  public String revoke(Principal who, @PathVariable long id) {
+    tokens.revoke(who.getName(), id);
+    return "redirect:/account?revoked";
+  }
+}
