@@ -183,8 +183,8 @@ public record BoardForm(
         null,
         null,
         null,
-        ConductorMaterial.COPPER,
-        Insulation.THERMOPLASTIC_70,
+        null, // no submain preset: a board fed from the origin has none, and a preset material
+        null, // alone made every check wait for the length of a submain that does not exist
         null,
         null,
         null,

@@ -131,6 +131,31 @@ public class BoardService {
     return saved;
   }
 
+  /**
+   * Replaces the board's defaults (cable conditions, start-up multiples) that its circuits inherit
+   * before the site's; recorded in the change log unless nothing changed.
+   */
+  @Transactional
+  public Board updateDefaults(long boardId, com.wayledger.site.DefaultsForm form, String reason) {
+    Board board = get(boardId);
+    var before =
+        com.wayledger.site.DefaultsForm.of(board.getDefaults(), board.getStartUpMultiples());
+    if (before.equals(form)) {
+      return board;
+    }
+    var header = ScheduleMapper.headerOf(board);
+    board.applyDefaults(form);
+    Board saved = boards.saveAndFlush(board);
+    logged(
+        saved,
+        ChangeKind.BOARD_EDITED,
+        "defaults changed",
+        header,
+        ScheduleMapper.headerOf(saved),
+        reason);
+    return saved;
+  }
+
   /** Deletes a board that feeds no other board; returns its site's id. */
   @Transactional
   public long delete(long boardId) {

@@ -59,9 +59,13 @@ public class CableDetails {
     this.thermalInsulationMillimetres = thermalInsulationMillimetres;
   }
 
-  /** Whether anything at all is recorded about this cable. */
+  /**
+   * Whether a cable is recorded at all: a cross-section or a length. A conductor material or
+   * insulation alone (a form's preset) is not a cable, so a board fed from the origin with nothing
+   * but those is fed from the origin, not through a submain of unknown length.
+   */
   public boolean isRecorded() {
-    return lineCsaSquareMillimetres != null || lengthMetres != null || material != null;
+    return lineCsaSquareMillimetres != null || lengthMetres != null;
   }
 
   /**

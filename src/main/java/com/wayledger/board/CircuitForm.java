@@ -57,7 +57,78 @@ public record CircuitForm(
     Long version,
     Boolean ringFinal,
     @Positive @DecimalMax("63000") Double deviceOverloadSettingAmps,
-    @Positive @DecimalMax("63000") Double deviceInstantaneousSettingAmps) {
+    @Positive @DecimalMax("63000") Double deviceInstantaneousSettingAmps,
+    @DecimalMin("1") @DecimalMax("50") Double loadStartUpMultiple) {
+
+  /** A row without a start-up multiple for its first load: the argument list from before. */
+  public CircuitForm(
+      Integer wayNumber,
+      PhasePosition position,
+      String description,
+      WayStatus status,
+      Boolean lockedForBalancing,
+      DeviceKind deviceKind,
+      TripCurve deviceCurve,
+      Double deviceRatingAmps,
+      Integer devicePoles,
+      Double deviceBreakingCapacityKiloAmps,
+      Double deviceResidualMilliAmps,
+      RcdType deviceRcdType,
+      Double cableLineCsa,
+      Double cableCpcCsa,
+      ConductorMaterial cableMaterial,
+      Insulation cableInsulation,
+      Double cableLengthMetres,
+      InstallationMethod cableInstallationMethod,
+      Double cableAmbientCelsius,
+      Integer cableGroupedCircuits,
+      Integer cableThermalInsulationMm,
+      Double measuredLoopImpedanceOhms,
+      String loadDescription,
+      LoadCategory loadCategory,
+      Integer loadQuantity,
+      Double loadRatingValue,
+      RatingUnit loadRatingUnit,
+      Double loadPowerFactor,
+      Long version,
+      Boolean ringFinal,
+      Double deviceOverloadSettingAmps,
+      Double deviceInstantaneousSettingAmps) {
+    this(
+        wayNumber,
+        position,
+        description,
+        status,
+        lockedForBalancing,
+        deviceKind,
+        deviceCurve,
+        deviceRatingAmps,
+        devicePoles,
+        deviceBreakingCapacityKiloAmps,
+        deviceResidualMilliAmps,
+        deviceRcdType,
+        cableLineCsa,
+        cableCpcCsa,
+        cableMaterial,
+        cableInsulation,
+        cableLengthMetres,
+        cableInstallationMethod,
+        cableAmbientCelsius,
+        cableGroupedCircuits,
+        cableThermalInsulationMm,
+        measuredLoopImpedanceOhms,
+        loadDescription,
+        loadCategory,
+        loadQuantity,
+        loadRatingValue,
+        loadRatingUnit,
+        loadPowerFactor,
+        version,
+        ringFinal,
+        deviceOverloadSettingAmps,
+        deviceInstantaneousSettingAmps,
+        null);
+  }
 
   /**
    * A radial circuit (not a ring final circuit): the argument list from before rings were recorded.
@@ -136,6 +207,47 @@ public record CircuitForm(
   /** The same row with moulded-case breaker settings Ir and Ii (A; null when not recorded). */
   public CircuitForm withMccbSettings(Double overloadSettingAmps, Double instantaneousSettingAmps) {
     return copy(cableThermalInsulationMm, ringFinal, overloadSettingAmps, instantaneousSettingAmps);
+  }
+
+  /**
+   * The same row with this conductor material and insulation (null: inherit the board's or site's
+   * default).
+   */
+  public CircuitForm withConductor(ConductorMaterial material, Insulation insulation) {
+    return new CircuitForm(
+        wayNumber,
+        position,
+        description,
+        status,
+        lockedForBalancing,
+        deviceKind,
+        deviceCurve,
+        deviceRatingAmps,
+        devicePoles,
+        deviceBreakingCapacityKiloAmps,
+        deviceResidualMilliAmps,
+        deviceRcdType,
+        cableLineCsa,
+        cableCpcCsa,
+        material,
+        insulation,
+        cableLengthMetres,
+        cableInstallationMethod,
+        cableAmbientCelsius,
+        cableGroupedCircuits,
+        cableThermalInsulationMm,
+        measuredLoopImpedanceOhms,
+        loadDescription,
+        loadCategory,
+        loadQuantity,
+        loadRatingValue,
+        loadRatingUnit,
+        loadPowerFactor,
+        version,
+        ringFinal,
+        deviceOverloadSettingAmps,
+        deviceInstantaneousSettingAmps,
+        loadStartUpMultiple);
   }
 
   /** The same row with this length of its cable surrounded by thermal insulation, mm. */
@@ -263,7 +375,8 @@ public record CircuitForm(
         version,
         ring,
         overloadSettingAmps,
-        instantaneousSettingAmps);
+        instantaneousSettingAmps,
+        loadStartUpMultiple);
   }
 
   /**
@@ -372,6 +485,39 @@ public record CircuitForm(
         cableThermalInsulationMm);
   }
 
+  /** Fields that say nothing about the stored row: the edit's version and the first load. */
+  private static final java.util.Set<String> NOT_THE_ROW =
+      java.util.Set.of(
+          "version",
+          "loadDescription",
+          "loadCategory",
+          "loadQuantity",
+          "loadRatingValue",
+          "loadRatingUnit",
+          "loadPowerFactor",
+          "loadStartUpMultiple");
+
+  /**
+   * Whether {@code other} would store the same row as this one (blank text and an unticked box
+   * count as nothing), so that a save which changes nothing records nothing.
+   */
+  boolean sameRowAs(CircuitForm other) {
+    return changedFields(other).isEmpty();
+  }
+
+  /**
+   * The row's fields that differ in {@code other}, blank text and unticked boxes counting as none.
+   */
+  java.util.List<com.wayledger.system.RecordDiff.FieldChange> changedFields(CircuitForm other) {
+    return com.wayledger.system.RecordDiff.between(other, this, NOT_THE_ROW).stream()
+        .filter(change -> !(isUnset(change.yours()) && isUnset(change.theirs())))
+        .toList();
+  }
+
+  private static boolean isUnset(Object value) {
+    return value == null || Boolean.FALSE.equals(value);
+  }
+
   /** Whether the user started typing a first load (any of its value fields filled). */
   boolean hasFirstLoad() {
     return (loadDescription != null && !loadDescription.isBlank()) || loadRatingValue != null;
@@ -386,7 +532,7 @@ public record CircuitForm(
         loadRatingValue,
         loadRatingUnit,
         loadPowerFactor,
-        null,
+        loadStartUpMultiple,
         null,
         false);
   }

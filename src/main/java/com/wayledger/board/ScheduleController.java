@@ -19,6 +19,7 @@ import org.springframework.web.bind.annotation.PathVariable;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestHeader;
 import org.springframework.web.bind.annotation.RequestParam;
+import org.springframework.web.servlet.mvc.support.RedirectAttributes;
 
 /**
  * Inline editing of a board's schedule. With htmx each request answers with the fragment to swap in
@@ -30,6 +31,7 @@ public class ScheduleController {
 
   private static final String HX = "HX-Request";
   private static final String SCHEDULE_FRAGMENT = "board/schedule :: scheduleTable";
+  private static final String SCHEDULE_UPDATE = "board/schedule :: scheduleUpdate";
   private static final String EDITOR_FRAGMENT = "board/schedule :: circuitEditor";
   private static final String EDITOR_PAGE = "board/circuit";
 
@@ -62,8 +64,12 @@ public class ScheduleController {
       @RequestParam PhasePosition position,
       @RequestHeader(value = HX, required = false) String htmx,
       Model model) {
-    model.addAttribute("board", boards.get(boardId));
-    model.addAttribute("form", CircuitForm.blankAt(way, position));
+    Board board = boards.get(boardId);
+    model.addAttribute("board", board);
+    model.addAttribute("form", blankFor(board, way, position));
+    if (htmx == null) {
+      ReturnTo.BOARD.standalone(model, null, boardId);
+    }
     return htmx != null ? EDITOR_FRAGMENT : EDITOR_PAGE;
   }
 
@@ -87,16 +93,29 @@ public class ScheduleController {
       }
     }
     model.addAttribute("board", boards.get(boardId));
+    if (htmx == null) {
+      ReturnTo.BOARD.standalone(model, null, boardId);
+    }
     return rejected(htmx, response);
   }
 
+  /**
+   * The editor: with htmx a row swapped into the schedule; without, a page of its own that returns
+   * to where it was opened from ({@code back=checks} for the circuit's checks page, else the
+   * board).
+   */
   @GetMapping("/circuits/{id}/edit")
   public String edit(
       @PathVariable long id,
       @RequestHeader(value = HX, required = false) String htmx,
+      @RequestParam(required = false) String back,
       Model model) {
+    back = back == null || back.isBlank() ? null : back;
     fillEditor(model, id, CircuitForm.of(schedule.circuit(id)));
-    return htmx != null ? EDITOR_FRAGMENT : EDITOR_PAGE;
+    if (htmx == null || back != null) {
+      standalone(model, id, back);
+    }
+    return htmx != null && back == null ? EDITOR_FRAGMENT : EDITOR_PAGE;
   }
 
   @PostMapping("/circuits/{id}")
@@ -107,21 +126,39 @@ public class ScheduleController {
       HttpServletRequest request,
       @RequestHeader(value = HX, required = false) String htmx,
       @RequestParam(required = false) String reason,
+      @RequestParam(required = false) String back,
       Model model,
+      RedirectAttributes redirect,
       HttpServletResponse response) {
+    back = back == null || back.isBlank() ? null : back;
     form = FormRecovery.ensure(form, errors, model, "form", CircuitForm.class, request);
     long boardId = schedule.circuit(id).getBoard().getId();
+    if (back != null) {
+      htmx = null;
+    }
     if (!errors.hasErrors()) {
       try {
+        boolean changed =
+            form.hasFirstLoad() || !CircuitForm.of(schedule.circuit(id)).sameRowAs(form);
         schedule.updateCircuit(id, form, reason);
+        if (back != null) {
+          redirect.addFlashAttribute("saved", changed ? "circuit.saved" : "circuit.unchanged");
+          return "redirect:" + ReturnTo.of(back).url(id, boardId);
+        }
         return savedSchedule(boardId, form.wayNumber(), htmx, model, response);
       } catch (RuleViolation violation) {
         FormStatus.reject(errors, violation);
       } catch (StaleEditException | ObjectOptimisticLockingFailureException stale) {
+        if (back != null) {
+          standalone(model, id, back);
+        }
         return conflict(id, form, htmx, model, response);
       }
     }
     fillEditor(model, id, null);
+    if (back != null) {
+      standalone(model, id, back);
+    }
     return rejected(htmx, response);
   }
 
@@ -143,15 +180,20 @@ public class ScheduleController {
       HttpServletRequest request,
       @RequestHeader(value = HX, required = false) String htmx,
       @RequestParam(required = false) String reason,
+      @RequestParam(required = false) String back,
       Model model,
       HttpServletResponse response) {
+    back = back == null || back.isBlank() ? null : back;
     loadForm = FormRecovery.ensure(loadForm, errors, model, "loadForm", LoadForm.class, request);
+    if (back != null || htmx == null) {
+      standalone(model, id, back);
+    }
     if (!errors.hasErrors()) {
       try {
         schedule.addLoad(id, loadForm, reason);
         fillEditor(model, id, CircuitForm.of(schedule.circuit(id)));
         model.addAttribute("loadForm", LoadForm.blank());
-        return htmx != null ? EDITOR_FRAGMENT : "redirect:/circuits/" + id + "/edit";
+        return htmx != null ? EDITOR_FRAGMENT : "redirect:" + editPage(id, back);
       } catch (RuleViolation violation) {
         FormStatus.reject(errors, violation);
       }
@@ -177,9 +219,11 @@ public class ScheduleController {
       BindingResult errors,
       HttpServletRequest request,
       @RequestParam(required = false) String reason,
+      @RequestParam(required = false) String back,
       @RequestParam(required = false) Long version,
       Model model,
       HttpServletResponse response) {
+    back = back == null || back.isBlank() ? null : back;
     loadForm = FormRecovery.ensure(loadForm, errors, model, "loadForm", LoadForm.class, request);
     LoadItem load = schedule.load(id);
     long circuitId = load.getCircuit().getId();
@@ -194,7 +238,7 @@ public class ScheduleController {
     } catch (StaleEditException | ObjectOptimisticLockingFailureException stale) {
       return loadConflict(id, loadForm, model, response);
     }
-    return "redirect:/circuits/" + circuitId + "/edit";
+    return "redirect:" + editPage(circuitId, back);
   }
 
   /** As {@link #conflict}, for a load line saved by someone else after its form was opened. */
@@ -218,12 +262,17 @@ public class ScheduleController {
       @PathVariable long id,
       @RequestHeader(value = HX, required = false) String htmx,
       @RequestParam(required = false) String reason,
+      @RequestParam(required = false) String back,
       Model model) {
+    back = back == null || back.isBlank() ? null : back;
     long circuitId = schedule.deleteLoad(id, reason);
     if (htmx == null) {
-      return "redirect:/circuits/" + circuitId + "/edit";
+      return "redirect:" + editPage(circuitId, back);
     }
     fillEditor(model, circuitId, CircuitForm.of(schedule.circuit(circuitId)));
+    if (back != null) {
+      standalone(model, circuitId, back);
+    }
     return EDITOR_FRAGMENT;
   }
 
@@ -244,8 +293,34 @@ public class ScheduleController {
     return htmx != null ? EDITOR_FRAGMENT : EDITOR_PAGE;
   }
 
+  /**
+   * A new row; where the board or site sets a conductor material or insulation, the row leaves them
+   * empty so that it inherits them (and follows the default when it changes).
+   */
+  private static CircuitForm blankFor(Board board, int way, PhasePosition position) {
+    CircuitForm blank = CircuitForm.blankAt(way, position);
+    var own = board.getDefaults();
+    var site = board.getSite().getDefaults();
+    boolean materialSet = own.getMaterial() != null || site.getMaterial() != null;
+    boolean insulationSet = own.getInsulation() != null || site.getInsulation() != null;
+    return blank.withConductor(
+        materialSet ? null : blank.cableMaterial(), insulationSet ? null : blank.cableInsulation());
+  }
+
+  private static String editPage(long circuitId, String back) {
+    return "/circuits/"
+        + circuitId
+        + "/edit"
+        + (ReturnTo.of(back) == ReturnTo.CHECKS ? "?back=checks" : "");
+  }
+
+  private void standalone(Model model, long circuitId, String back) {
+    ReturnTo.of(back).standalone(model, circuitId, schedule.circuit(circuitId).getBoard().getId());
+  }
+
   private void fillEditor(Model model, long circuitId, CircuitForm form) {
     Circuit circuit = schedule.circuit(circuitId);
+    model.addAttribute("missingFields", schedule.missingInputs(circuitId));
     model.addAttribute("circuit", circuit);
     model.addAttribute("circuitLoads", schedule.loadsOf(circuitId));
     model.addAttribute("board", boards.get(circuit.getBoard().getId()));
@@ -259,8 +334,9 @@ public class ScheduleController {
 
   /**
    * After a successful change: with htmx the whole schedule table replaces the editor row (the form
-   * aims its response at its own row, for messages; success re-aims it at the table); without, a
-   * redirect.
+   * aims its response at its own row, for messages; success re-aims it at the table), and the
+   * demand panel, the circuit count and the findings come along as out-of-band swaps so that no
+   * figure on the page is left stale; without htmx, a redirect.
    */
   private String savedSchedule(
       long boardId, Integer focusAfterWay, String htmx, Model model, HttpServletResponse response) {
@@ -272,7 +348,7 @@ public class ScheduleController {
       response.setHeader("HX-Reswap", "outerHTML");
     }
     schedulePage.fill(model, boardId, focusAfterWay);
-    return SCHEDULE_FRAGMENT;
+    return SCHEDULE_UPDATE;
   }
 
   private static String rejected(String htmx, HttpServletResponse response) {

@@ -113,7 +113,7 @@ public final class ScheduleMapper {
 
   /** A circuit as the engine sees it, kept as the change log's before/after snapshot. */
   public static CircuitSpec snapshotOf(Circuit circuit, Long feedsBoardId) {
-    return toSpec(circuit, feedsBoardId);
+    return toSpec(circuit, feedsBoardId, false);
   }
 
   /** A board without its circuits, kept as the change log's before/after snapshot. */
@@ -155,7 +155,7 @@ public final class ScheduleMapper {
   private static BoardSpec toSpec(Board board, Map<Long, Long> childByFeedingCircuit) {
     List<CircuitSpec> circuits =
         board.getCircuits().stream()
-            .map(circuit -> toSpec(circuit, childByFeedingCircuit.get(circuit.getId())))
+            .map(circuit -> toSpec(circuit, childByFeedingCircuit.get(circuit.getId()), true))
             .toList();
     return new BoardSpec(
         board.getId(),
@@ -183,8 +183,23 @@ public final class ScheduleMapper {
         : board.getIncomer().mccbSettings().longTimeSettingAmps();
   }
 
-  private static CircuitSpec toSpec(Circuit circuit, Long feedsBoardId) {
-    List<LoadSpec> loads = circuit.getLoads().stream().map(ScheduleMapper::toSpec).toList();
+  /**
+   * A circuit as the engine sees it. With {@code withDefaults} every input the circuit leaves empty
+   * comes from its board's or site's defaults ({@link Inheritance}); without, exactly what is
+   * stored (the change log's snapshots).
+   */
+  private static CircuitSpec toSpec(Circuit circuit, Long feedsBoardId, boolean withDefaults) {
+    Board board = circuit.getBoard();
+    List<LoadSpec> loads =
+        circuit.getLoads().stream()
+            .map(
+                load ->
+                    toSpec(
+                        load,
+                        withDefaults
+                            ? Inheritance.startUpMultiple(load, board)
+                            : load.getStartUpSurgeMultiple()))
+            .toList();
     int poles = circuit.getPosition().isSinglePole() ? 1 : 3;
     return new CircuitSpec(
         circuit.getId(),
@@ -194,14 +209,16 @@ public final class ScheduleMapper {
         circuit.getStatus(),
         circuit.isLockedForBalancing(),
         circuit.getDevice() == null ? null : circuit.getDevice().toSpec(poles),
-        circuit.getCable() == null ? null : circuit.getCable().toSpec(),
+        withDefaults
+            ? Inheritance.effectiveCable(circuit.getCable(), board)
+            : circuit.getCable() == null ? null : circuit.getCable().toSpec(),
         loads,
         feedsBoardId,
         circuit.getMeasuredLoopImpedanceOhms(),
         circuit.isRingFinal());
   }
 
-  private static LoadSpec toSpec(LoadItem load) {
+  private static LoadSpec toSpec(LoadItem load, Double startUpMultiple) {
     return new LoadSpec(
         load.getDescription(),
         load.getCategory(),
@@ -209,7 +226,7 @@ public final class ScheduleMapper {
         load.getRatingValue(),
         load.getRatingUnit(),
         load.getPowerFactor(),
-        load.getStartUpSurgeMultiple(),
+        startUpMultiple,
         load.getStartUpSurgeMillis(),
         load.isContinuous());
   }

@@ -54,6 +54,13 @@ class SchedulePage {
                 .findFirst()
                 .orElse(null));
     model.addAttribute("circuitCount", onBoard.size());
+    java.util.Map<Long, Inheritance.Values> inherited = new java.util.HashMap<>();
+    onBoard.forEach(
+        circuit -> inherited.put(circuit.getId(), new Inheritance.Values(Inheritance.of(circuit))));
+    model.addAttribute("inheritedByCircuit", inherited);
+    java.util.Map<Long, java.util.List<String>> missing = new java.util.HashMap<>();
+    onBoard.forEach(circuit -> missing.put(circuit.getId(), MissingInputs.of(circuit)));
+    model.addAttribute("missingByCircuit", missing);
     SiteAnalysis results = analysis.ofSite(board.getSite().getId());
     var demand = results.boardDemand(boardId);
     model.addAttribute("demand", demand);

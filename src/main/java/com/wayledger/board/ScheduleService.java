@@ -61,6 +61,18 @@ public class ScheduleService {
     return circuits.findById(id).orElseThrow(() -> new NotFoundException("Circuit", id));
   }
 
+  /** The values the circuit takes from its board's or site's defaults. */
+  @Transactional(readOnly = true)
+  public java.util.List<Inheritance.InheritedValue> inheritedBy(long circuitId) {
+    return Inheritance.of(circuit(circuitId));
+  }
+
+  /** Every form input the circuit's checks still lack (defaults counted), all at once. */
+  @Transactional(readOnly = true)
+  public java.util.List<String> missingInputs(long circuitId) {
+    return MissingInputs.of(circuit(circuitId));
+  }
+
   /** A view of the circuit made inside a transaction, so that its loads can be read. */
   @Transactional(readOnly = true)
   public <T> T readCircuit(long id, java.util.function.Function<Circuit, T> view) {
@@ -112,6 +124,9 @@ public class ScheduleService {
     }
     Board board = circuit.getBoard();
     checkCircuitRules(board, form, circuitId);
+    if (!form.hasFirstLoad() && CircuitForm.of(circuit).sameRowAs(form)) {
+      return circuit; // nothing changed: nothing stored, nothing in the change log
+    }
     var before = snapshot(circuit);
     circuit.apply(form);
     if (form.hasFirstLoad()) {

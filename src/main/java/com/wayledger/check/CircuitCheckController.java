@@ -54,6 +54,8 @@ public class CircuitCheckController {
     model.addAttribute("board", circuit.getBoard());
     model.addAttribute("site", circuit.getBoard().getSite());
     model.addAttribute("loads", loads);
+    model.addAttribute(
+        "inherited", new com.wayledger.board.Inheritance.Values(schedule.inheritedBy(id)));
     model.addAttribute("demand", demand);
     model.addAttribute("circuitFindings", findings);
     model.addAttribute("settings", results.findings().settings());

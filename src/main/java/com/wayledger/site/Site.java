@@ -42,6 +42,37 @@ public class Site {
   private String notes;
   private double loadingThresholdPercent = SiteForm.DEFAULT_LOADING_THRESHOLD_PERCENT;
 
+  /** Cable conditions this site's circuits inherit unless they record their own. */
+  @jakarta.persistence.Embedded private com.wayledger.site.CableDefaults defaults;
+
+  /** Start-up multiple per load category, for loads that record none. */
+  @jakarta.persistence.ElementCollection(fetch = jakarta.persistence.FetchType.EAGER)
+  @jakarta.persistence.CollectionTable(
+      name = "site_start_up_multiple",
+      joinColumns = @jakarta.persistence.JoinColumn(name = "site_id"))
+  @jakarta.persistence.MapKeyEnumerated(jakarta.persistence.EnumType.STRING)
+  @jakarta.persistence.MapKeyColumn(name = "category")
+  @jakarta.persistence.Column(name = "multiple")
+  private java.util.Map<com.wayledger.engine.LoadCategory, Double> startUpMultiples =
+      new java.util.EnumMap<>(com.wayledger.engine.LoadCategory.class);
+
+  /** The cable defaults set here (never null; empty when nothing is set). */
+  public com.wayledger.site.CableDefaults getDefaults() {
+    return defaults == null ? com.wayledger.site.CableDefaults.none() : defaults;
+  }
+
+  /** Start-up multiples set here, by load category. */
+  public java.util.Map<com.wayledger.engine.LoadCategory, Double> getStartUpMultiples() {
+    return java.util.Collections.unmodifiableMap(startUpMultiples);
+  }
+
+  /** Replaces the defaults set here. */
+  public void applyDefaults(com.wayledger.site.DefaultsForm form) {
+    defaults = form.cable();
+    startUpMultiples.clear();
+    startUpMultiples.putAll(form.startUpMultiples());
+  }
+
   @Version private long version;
 
   private Instant createdAt;

@@ -119,6 +119,24 @@ public class SiteService {
     return saved;
   }
 
+  /**
+   * Replaces the site's defaults (cable conditions, start-up multiples) that its circuits inherit;
+   * recorded in the change log unless nothing changed.
+   */
+  @Transactional
+  public Site updateDefaults(long id, DefaultsForm form, String reason) {
+    Site site = get(id);
+    DefaultsForm before = DefaultsForm.of(site.getDefaults(), site.getStartUpMultiples());
+    if (before.equals(form)) {
+      return site;
+    }
+    SiteForm header = SiteForm.of(site);
+    site.applyDefaults(form);
+    Site saved = sites.saveAndFlush(site);
+    logged(saved, ChangeKind.SITE_EDITED, "defaults changed", header, SiteForm.of(saved), reason);
+    return saved;
+  }
+
   private void logged(
       Site site, ChangeKind kind, String what, Object before, Object after, String reason) {
     events.publishEvent(

@@ -52,6 +52,7 @@ class ScheduleControllerIntegrationTests {
 
   private static final String EDITOR_FRAGMENT = "board/schedule :: circuitEditor";
   private static final String SCHEDULE_FRAGMENT = "board/schedule :: scheduleTable";
+  private static final String SCHEDULE_UPDATE = "board/schedule :: scheduleUpdate";
 
   @Autowired MockMvc mvc;
   @MockitoBean ScheduleService schedule;
@@ -141,7 +142,7 @@ class ScheduleControllerIntegrationTests {
                 .with(editor())
                 .with(csrf()))
         .andExpect(status().isOk())
-        .andExpect(view().name(SCHEDULE_FRAGMENT))
+        .andExpect(view().name(SCHEDULE_UPDATE))
         .andExpect(header().string("HX-Retarget", "#schedule"))
         .andExpect(header().string("HX-Reswap", "outerHTML"));
     verify(schedule)

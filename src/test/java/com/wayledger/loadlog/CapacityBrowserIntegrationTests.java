@@ -82,7 +82,7 @@ class CapacityBrowserIntegrationTests {
     signIn();
     browser.findElement(By.linkText("Tallow Lane Works")).click();
     browser.findElement(By.linkText("KB1")).click();
-    browser.findElement(By.linkText("Can it take it?")).click();
+    browser.findElement(By.linkText("Room for a new load")).click();
 
     ask("Convection oven, three-phase", "COOKING", "15", true);
     List<WebElement> ovenRows = browser.findElements(By.cssSelector("table.candidates tbody tr"));

@@ -1,0 +1,95 @@
+package com.wayledger.board;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import com.wayledger.support.Chromium;
+import java.io.IOException;
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
+import org.openqa.selenium.By;
+import org.openqa.selenium.WebDriver;
+import org.openqa.selenium.support.ui.ExpectedConditions;
+import org.openqa.selenium.support.ui.WebDriverWait;
+import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.boot.test.web.server.LocalServerPort;
+import org.springframework.test.context.ActiveProfiles;
+
+/**
+ * Every main page of the demo site on a 768 px tablet: the page's scroll width does not exceed the
+ * viewport (a table may scroll inside its own box; the page may not). The 390 px phone width is not
+ * met yet on every page (defaults, circuit editor and history were still too wide when last run),
+ * so it is not asserted here; see docs.
+ */
+@SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT)
+@ActiveProfiles({"test", "demo"})
+class NarrowScreensBrowserIntegrationTests {
+
+  @LocalServerPort int port;
+
+  @BeforeAll
+  static void chromiumIsInstalled() {
+    Chromium.requireInstalled();
+  }
+
+  @ParameterizedTest(name = "{0} px wide")
+  @ValueSource(ints = {768})
+  void noMainPageScrollsSideways(int width) throws IOException {
+    try (Chromium chromium = Chromium.atWidth(width, 900)) {
+      WebDriver browser = chromium.driver();
+      WebDriverWait wait = new WebDriverWait(browser, Duration.ofSeconds(20));
+      browser.get(url("/login"));
+      browser.findElement(By.id("username")).sendKeys("demo");
+      browser.findElement(By.id("password")).sendKeys("wayledger-demo");
+      browser.findElement(By.cssSelector("form button[type=submit]")).click();
+      wait.until(ExpectedConditions.urlContains("/sites"));
+      String site = browser.findElement(By.linkText("Tallow Lane Works")).getAttribute("href");
+      browser.get(site);
+      String board =
+          wait.until(ExpectedConditions.presenceOfElementLocated(By.linkText("KB1")))
+              .getAttribute("href");
+      browser.get(board);
+      String checks =
+          wait.until(
+                  ExpectedConditions.presenceOfElementLocated(
+                      By.cssSelector("#schedule td a[href*='/circuits/']")))
+              .getAttribute("href");
+
+      Map<String, String> pages = new LinkedHashMap<>();
+      pages.put("sites", url("/sites"));
+      pages.put("site", site);
+      pages.put("site findings", site + "/findings");
+      pages.put("site defaults", site + "/defaults");
+      pages.put("board and schedule", board);
+      pages.put("board defaults", board + "/defaults");
+      pages.put("circuit checks", checks);
+      pages.put("circuit editor", checks + "/edit?back=checks");
+      pages.put("balancing", board + "/balance");
+      pages.put("room for a new load", board + "/can-it-take-it");
+      pages.put("history", board + "/history");
+      pages.put("import", board + "/import");
+
+      List<String> tooWide = new ArrayList<>();
+      for (var page : pages.entrySet()) {
+        browser.get(page.getValue());
+        wait.until(ExpectedConditions.presenceOfElementLocated(By.tagName("main")));
+        long[] widths = chromium.scrollAndViewportWidth();
+        if (widths[0] > widths[1]) {
+          tooWide.add(page.getKey() + " " + widths[0] + " px > " + widths[1] + " px");
+        }
+      }
+      assertThat(tooWide)
+          .as("pages whose scroll width exceeds the " + width + " px viewport")
+          .isEmpty();
+    }
+  }
+
+  private String url(String path) {
+    return "http://localhost:" + port + path;
+  }
+}
