@@ -183,7 +183,8 @@ public class ScheduleController {
       @RequestParam(required = false) String back,
       Model model,
       HttpServletResponse response) {
-    back = back == null || back.isBlank() ? null : back;
+    back = loadEditorBack(back);
+    model.addAttribute("back", back);
     loadForm = FormRecovery.ensure(loadForm, errors, model, "loadForm", LoadForm.class, request);
     if (back != null || htmx == null) {
       standalone(model, id, back);
@@ -203,7 +204,9 @@ public class ScheduleController {
   }
 
   @GetMapping("/loads/{id}/edit")
-  public String editLoad(@PathVariable long id, Model model) {
+  public String editLoad(
+      @PathVariable long id, @RequestParam(required = false) String back, Model model) {
+    model.addAttribute("back", loadEditorBack(back));
     LoadItem load = schedule.load(id);
     model.addAttribute("load", load);
     model.addAttribute("loadVersion", load.getVersion());
@@ -223,7 +226,8 @@ public class ScheduleController {
       @RequestParam(required = false) Long version,
       Model model,
       HttpServletResponse response) {
-    back = back == null || back.isBlank() ? null : back;
+    back = loadEditorBack(back);
+    model.addAttribute("back", back);
     loadForm = FormRecovery.ensure(loadForm, errors, model, "loadForm", LoadForm.class, request);
     LoadItem load = schedule.load(id);
     long circuitId = load.getCircuit().getId();
@@ -239,6 +243,14 @@ public class ScheduleController {
       return loadConflict(id, loadForm, model, response);
     }
     return "redirect:" + editPage(circuitId, back);
+  }
+
+  /**
+   * The load editor's way back, passed on to the circuit editor: only the known value "checks" (the
+   * template reads it from the model, never from the request).
+   */
+  private static String loadEditorBack(String back) {
+    return ReturnTo.of(back) == ReturnTo.CHECKS ? "checks" : null;
   }
 
   /** As {@link #conflict}, for a load line saved by someone else after its form was opened. */

@@ -11,11 +11,12 @@ import org.springframework.web.servlet.resource.ResourceUrlProvider;
 import org.springframework.web.servlet.resource.VersionResourceResolver;
 
 /**
- * Serves the stylesheet, icon and htmx under URLs that change when their content does ({@code
- * /css/wayledger-<md5>.css}, {@code /webjars/htmx.org/<version>/...}), so browsers may keep them
- * for a year without asking again. Only these three locations are resource paths (the catch-all
+ * Serves the stylesheets, scripts, icon and htmx under URLs that change when their content does
+ * ({@code /css/wayledger-<md5>.css}, {@code /webjars/htmx.org/<version>/...}), so browsers may keep
+ * them for a year without asking again. Only these locations are resource paths (the catch-all
  * {@code /**} mapping is off), and templates take the asset URLs from {@link AssetUrls}: no filter
- * rewrites, or probes the jar for, the ordinary links of a page.
+ * rewrites, or probes the jar for, the ordinary links of a page. ({@code /js/**} holds the pages'
+ * own small scripts: the strict Content-Security-Policy allows no inline script.)
  */
 @Configuration
 class StaticAssets implements WebMvcConfigurer {
@@ -34,6 +35,12 @@ class StaticAssets implements WebMvcConfigurer {
     registry
         .addResourceHandler("/css/**")
         .addResourceLocations("classpath:/static/css/")
+        .setCacheControl(FOR_A_YEAR)
+        .resourceChain(true)
+        .addResolver(new VersionResourceResolver().addContentVersionStrategy("/**"));
+    registry
+        .addResourceHandler("/js/**")
+        .addResourceLocations("classpath:/static/js/")
         .setCacheControl(FOR_A_YEAR)
         .resourceChain(true)
         .addResolver(new VersionResourceResolver().addContentVersionStrategy("/**"));

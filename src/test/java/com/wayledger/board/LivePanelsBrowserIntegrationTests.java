@@ -95,8 +95,8 @@ class LivePanelsBrowserIntegrationTests {
           .isGreaterThan(0.0)
           .isLessThanOrEqualTo(10.05);
       assertThat(browser.findElement(By.id("findings")).getText())
-          .as("the findings list names the new way (socket outlets without RCD, a circuit check)")
-          .contains("Way " + way);
+          .as("the findings list names the new circuit by board, way, line and name")
+          .contains("way " + way + " " + line + " \u201c" + description + "\u201d");
 
       // the circuit's checks page, its editor, and back
       String checksUrl =
