@@ -22,7 +22,7 @@ public final class TextInput {
     MULTI_LINE
   }
 
-  /** A refused value: the message key and the character at fault as "U+XXXX". */
+  /** A refused value: the message key and the character at fault as "U+" and four hex digits (U+0000 for NUL). */
   public record Problem(String messageCode, String character) {}
 
   private TextInput() {}
