@@ -22,7 +22,10 @@ public final class TextInput {
     MULTI_LINE
   }
 
-  /** A refused value: the message key and the character at fault as "U+" and four hex digits (U+0000 for NUL). */
+  /**
+   * A refused value: the message key and the character at fault as "U+" and four hex digits (U+0000
+   * for NUL).
+   */
   public record Problem(String messageCode, String character) {}
 
   private TextInput() {}
