@@ -126,7 +126,11 @@ class DiagramIntegrationTests {
             .andReturn()
             .getResponse()
             .getContentAsString(StandardCharsets.UTF_8);
-    assertThat(page).contains("<svg").contains("/js/diagram.js").contains("Figures here assist");
+    // the pan and zoom script, under its content-hashed URL
+    assertThat(page)
+        .contains("<svg")
+        .containsPattern("/js/diagram-[0-9a-f]{32}\\.js")
+        .contains("Figures here assist");
     String svg = page.substring(page.indexOf("<svg"), page.indexOf("</svg>") + 6);
     assertThat(SvgDrawing.parse(svg).circuitLinks())
         .as("circuit links of the expanded board")
