@@ -62,6 +62,8 @@ class ScheduleControllerIntegrationTests {
   @MockitoBean SiteService sites;
   @MockitoBean BoardRepository boardRepository;
   @MockitoBean CircuitRepository circuitRepository;
+  @MockitoBean DwellingRepository dwellingRepository;
+  @MockitoBean MeasuredDemandRepository measuredDemandRepository;
 
   @BeforeEach
   void storedBoard() {
