@@ -494,6 +494,10 @@ public final class RowReader {
     if (t.matches(".*\\b(cooker|cooking|oven|ovens|hob|range)\\b.*")) {
       return LoadCategory.COOKING;
     }
+    if (t.matches(".*\\b(clothes dry[ei]r|tumble dry[ei]r|dry[ei]r)\\b.*")
+        && !t.matches(".*\\b(hand|hair) dry[ei]r\\b.*")) {
+      return LoadCategory.CLOTHES_DRYER;
+    }
     if (t.matches(".*\\b(shower|showers|instantaneous)\\b.*")) {
       return LoadCategory.WATER_HEATING_INSTANTANEOUS;
     }

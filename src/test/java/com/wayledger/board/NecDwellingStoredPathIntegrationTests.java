@@ -173,6 +173,48 @@ class NecDwellingStoredPathIntegrationTests {
   }
 
   @Test
+  void theWorkbookCarriesTheWorksheetLineByLineAndTheInputs() throws Exception {
+    long board = exampleD1a(site(), null);
+
+    byte[] xlsx =
+        mvc.perform(get("/boards/{id}/export.xlsx", board).with(user("vi").roles("VIEWER")))
+            .andExpect(status().isOk())
+            .andReturn()
+            .getResponse()
+            .getContentAsByteArray();
+
+    try (var workbook =
+        new org.apache.poi.xssf.usermodel.XSSFWorkbook(new java.io.ByteArrayInputStream(xlsx))) {
+      var sheet = workbook.getSheet("Dwelling load");
+      assertThat(sheet).as("the dwelling sheet").isNotNull();
+      assertThat(sheet.getRow(2).getCell(0).getStringCellValue()).startsWith("Caution");
+      java.util.Map<String, Double> results = new java.util.HashMap<>();
+      for (var row : sheet) {
+        if (row.getCell(2) != null
+            && row.getCell(6) != null
+            && row.getCell(6).getCellType() == org.apache.poi.ss.usermodel.CellType.NUMERIC) {
+          results.putIfAbsent(
+              row.getCell(1).getStringCellValue() + " | " + row.getCell(2).getStringCellValue(),
+              row.getCell(6).getNumericCellValue());
+        }
+      }
+      // Annex D D1(a): 18,600 VA; the 3,001–120,000 VA band gives 2,100 VA (flylib)
+      assertThat(results)
+          .containsEntry("Dwelling inputs | Floor area (ft²)", 1_500.0)
+          .anySatisfy(
+              (key, value) -> {
+                assertThat(key).startsWith("Standard method").endsWith("| Calculated load");
+                assertThat(value).isCloseTo(18_600.0, within(1e-6));
+              })
+          .anySatisfy(
+              (key, value) -> {
+                assertThat(key).contains("3,001 to 120,000 VA");
+                assertThat(value).isCloseTo(2_100.0, within(1e-6));
+              });
+    }
+  }
+
+  @Test
   void theNecDiversityMethodOfTheBoardReadsTheStoredInputs() throws Exception {
     // Before these inputs were stored, the general-lighting group was always "not assessed, taken
     // at 100 %". Annex D D1(a): the same 18,600 VA through the board's diversity method (flylib)
