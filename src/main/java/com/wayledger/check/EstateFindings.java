@@ -8,16 +8,23 @@ import com.wayledger.engine.protection.result.Finding;
 import com.wayledger.engine.protection.result.Verdict;
 import com.wayledger.site.Site;
 import com.wayledger.site.SiteService;
+import com.wayledger.system.SiteGenerations;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
 import org.springframework.stereotype.Service;
 
 /**
  * The findings of every site in one list, filtered by grade and by site name, a page at a time.
- * Each site's findings come from its kept analysis ({@link AnalysisService#ofSite}), computed once
- * per change of that site: reading this list again after no change runs no engine.
+ * Each site's findings come from its analysis ({@link AnalysisService#ofSite}, computed once per
+ * change of that site), and the lines made from it are kept here with the site's data generation:
+ * the analysis service keeps only the most recently read sites, and an estate of hundreds of sites
+ * would otherwise push every site out and recompute it on every view. Reading this list again after
+ * no change runs no engine; a change to one site recomputes that site only. The lines kept are the
+ * problems and the not-assessed checks (never the passes), a few hundred bytes each.
  */
 @Service
 public class EstateFindings {
@@ -31,10 +38,17 @@ public class EstateFindings {
 
   private final SiteService sites;
   private final AnalysisService analysis;
+  private final SiteGenerations generations;
 
-  public EstateFindings(SiteService sites, AnalysisService analysis) {
+  /** Each site's lines (every grade but pass) with the data generation they were made at. */
+  private record Kept(long generation, List<Line> lines) {}
+
+  private final Map<Long, Kept> kept = new ConcurrentHashMap<>();
+
+  public EstateFindings(SiteService sites, AnalysisService analysis, SiteGenerations generations) {
     this.sites = sites;
     this.analysis = analysis;
+    this.generations = generations;
   }
 
   /**
@@ -100,6 +114,9 @@ public class EstateFindings {
   public Page page(Verdict grade, String siteText, int page, int size) {
     int pageSize = Math.max(1, Math.min(size, 200));
     String wanted = siteText == null ? "" : siteText.strip().toLowerCase(Locale.ROOT);
+    // Generations are read before any analysis, so a line kept is never older than its generation.
+    Map<Long, Long> current = generations.everySite();
+    kept.keySet().retainAll(current.keySet());
     List<Line> all = new ArrayList<>();
     int sitesRead = 0;
     for (Site site : sites.all()) {
@@ -107,7 +124,11 @@ public class EstateFindings {
         continue;
       }
       sitesRead++;
-      collect(site, analysis.ofSite(site.getId()), grade, all);
+      for (Line line : linesOf(site, current.get(site.getId()))) {
+        if (shown(line.grade(), grade)) {
+          all.add(line);
+        }
+      }
     }
     all.sort(
         Comparator.comparing(Line::grade)
@@ -123,9 +144,23 @@ public class EstateFindings {
     return new Page(List.copyOf(all.subList(from, to)), number, pageSize, all.size(), sitesRead);
   }
 
-  private static void collect(Site site, SiteAnalysis results, Verdict grade, List<Line> out) {
+  /** The site's lines at its current generation: kept, or made once from its analysis. */
+  private List<Line> linesOf(Site site, Long generation) {
+    Kept k = kept.get(site.getId());
+    if (k != null && generation != null && k.generation() == generation) {
+      return k.lines();
+    }
+    List<Line> lines = new ArrayList<>();
+    collect(site, analysis.ofSite(site.getId()), lines);
+    if (generation != null) {
+      kept.put(site.getId(), new Kept(generation, List.copyOf(lines)));
+    }
+    return lines;
+  }
+
+  private static void collect(Site site, SiteAnalysis results, List<Line> out) {
     for (Finding f : results.findings().siteFindings()) {
-      if (shown(f, grade)) {
+      if (f.verdict() != Verdict.PASS) {
         out.add(
             new Line(
                 site.getId(),
@@ -145,13 +180,13 @@ public class EstateFindings {
     }
     for (BoardFindings board : results.findings().boards()) {
       for (Finding f : board.findings()) {
-        if (shown(f, grade)) {
+        if (f.verdict() != Verdict.PASS) {
           out.add(line(site, board, null, f));
         }
       }
       for (CircuitFindings circuit : board.circuits()) {
         for (Finding f : circuit.findings()) {
-          if (shown(f, grade)) {
+          if (f.verdict() != Verdict.PASS) {
             out.add(line(site, board, circuit, f));
           }
         }
@@ -176,7 +211,7 @@ public class EstateFindings {
         f.remedy());
   }
 
-  private static boolean shown(Finding finding, Verdict grade) {
-    return grade == null ? finding.verdict().isProblem() : finding.verdict() == grade;
+  private static boolean shown(Verdict verdict, Verdict grade) {
+    return grade == null ? verdict.isProblem() : verdict == grade;
   }
 }

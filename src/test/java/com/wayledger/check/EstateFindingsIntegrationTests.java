@@ -22,6 +22,7 @@ import org.springframework.boot.test.context.SpringBootTest;
 import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
 import org.springframework.test.annotation.DirtiesContext;
 import org.springframework.test.context.ActiveProfiles;
+import org.springframework.test.context.TestPropertySource;
 import org.springframework.test.web.servlet.MockMvc;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.json.JsonMapper;
@@ -34,6 +35,8 @@ import tools.jackson.databind.json.JsonMapper;
 @SpringBootTest
 @AutoConfigureMockMvc
 @ActiveProfiles({"test", "demo"})
+// The analysis service keeps one site only: the estate list must still not recompute on a re-read.
+@TestPropertySource(properties = "wayledger.analysis.kept-sites=1")
 @DirtiesContext
 class EstateFindingsIntegrationTests {
 
@@ -142,6 +145,7 @@ class EstateFindingsIntegrationTests {
   void aSecondReadAfterNoChangeRunsTheEngineZeroTimes() throws Exception {
     mvc.perform(get("/findings").with(viewer())).andExpect(status().isOk());
     long afterFirstRead = analysis.siteAnalysisRuns();
+    assertThat(sites.all()).as("more sites than the analysis service keeps").hasSizeGreaterThan(1);
 
     mvc.perform(get("/findings").with(viewer())).andExpect(status().isOk());
     mvc.perform(get("/findings").param("grade", "DANGER").param("page", "1").with(viewer()))
