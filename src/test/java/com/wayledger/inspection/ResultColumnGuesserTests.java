@@ -118,4 +118,15 @@ class ResultColumnGuesserTests {
     assertThat(ResultImportService.delayed("")).isFalse();
     assertThat(ResultImportService.delayed("maybe")).isNull();
   }
+
+  @ParameterizedTest(name = "line \"{0}\" is {1}")
+  @CsvSource({"L1,L1", "l2,L2", "3,L3", "3P,THREE_POLE", "L1-L3,THREE_POLE", "TP,THREE_POLE"})
+  void lineWordsFindThePosition(String text, com.wayledger.engine.PhasePosition expected) {
+    assertThat(ResultImportService.line(text)).isEqualTo(expected);
+  }
+
+  @Test
+  void anUnknownLineIsNotGuessed() {
+    assertThat(ResultImportService.line("L4")).isNull();
+  }
 }
