@@ -119,19 +119,7 @@ public class AnalysisService {
     List<Board> onSite = boards.findBySite(siteId);
     onSite.forEach(board -> board.getCircuits().forEach(circuit -> circuit.getLoads().size()));
     SiteSpec spec = ScheduleMapper.toSpec(site, onSite);
-    Map<Long, com.wayledger.engine.dwelling.DwellingInputs> inputs = new HashMap<>();
-    dwellings
-        .findBySite(siteId)
-        .forEach(record -> inputs.put(record.getBoardId(), record.inputs()));
-    Map<Long, List<com.wayledger.engine.dwelling.MeasuredMaximumDemand>> records = new HashMap<>();
-    measured
-        .findBySiteIdOrderByPeriodEndDescIdDesc(siteId)
-        .forEach(
-            record ->
-                records
-                    .computeIfAbsent(record.getBoardId(), k -> new java.util.ArrayList<>())
-                    .add(record.toEngine()));
-    return analyse(spec, methods(), ScheduleMapper.mccbSettingsOf(onSite), inputs, records);
+    return analyse(spec, ScheduleMapper.mccbSettingsOf(onSite));
   }
 
   /**
@@ -171,7 +159,7 @@ public class AnalysisService {
    * behind it, pass their settings with {@link #analyse(SiteSpec, RecordedMccbSettings)}.
    */
   public SiteAnalysis analyse(SiteSpec spec) {
-    return analyse(spec, methods(), RecordedMccbSettings.NONE);
+    return analyse(spec, RecordedMccbSettings.NONE);
   }
 
   /**
@@ -179,7 +167,21 @@ public class AnalysisService {
    * ScheduleMapper.mccbSettingsOf).
    */
   public SiteAnalysis analyse(SiteSpec spec, RecordedMccbSettings recordedMccbSettings) {
-    return analyse(spec, methods(), recordedMccbSettings);
+    // the stored site's dwelling inputs and recorded demands go with every analysis of it (a
+    // balancing plan, an export), so that each reads the same NEC figures as the board page
+    Map<Long, com.wayledger.engine.dwelling.DwellingInputs> inputs = new HashMap<>();
+    dwellings
+        .findBySite(spec.id())
+        .forEach(record -> inputs.put(record.getBoardId(), record.inputs()));
+    Map<Long, List<com.wayledger.engine.dwelling.MeasuredMaximumDemand>> records = new HashMap<>();
+    measured
+        .findBySiteIdOrderByPeriodEndDescIdDesc(spec.id())
+        .forEach(
+            record ->
+                records
+                    .computeIfAbsent(record.getBoardId(), k -> new java.util.ArrayList<>())
+                    .add(record.toEngine()));
+    return analyse(spec, methods(), recordedMccbSettings, inputs, records);
   }
 
   /** Both engines on an engine input with no MCCB settings recorded. */

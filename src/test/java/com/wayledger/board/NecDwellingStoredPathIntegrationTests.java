@@ -223,6 +223,10 @@ class NecDwellingStoredPathIntegrationTests {
     var demand = analysis.ofBoard(board).boardDemand(board);
     assertThat(demand.notAssessed()).isEmpty();
     assertThat(demand.demandVoltAmperes()).isCloseTo(18_600.0, within(1e-6));
+    // one figure: a re-analysis of the stored spec (as balancing plans and exports do) reads the
+    // same stored inputs
+    var again = analysis.analyse(analysis.ofBoard(board).spec()).boardDemand(board);
+    assertThat(again.demandVoltAmperes()).isCloseTo(18_600.0, within(1e-6));
   }
 
   @Test
