@@ -31,6 +31,20 @@ public class DwellingService {
       boolean optionalMethod,
       String addition) {
 
+    String text() {
+      return (floorAreaSquareFeet == null
+              ? "floor area not recorded"
+              : Math.round(floorAreaSquareFeet) + " ft²")
+          + ", small-appliance circuits "
+          + (smallApplianceCircuits == null ? "not recorded" : smallApplianceCircuits)
+          + ", laundry circuits "
+          + (laundryCircuits == null ? "not recorded" : laundryCircuits)
+          + ", optional method "
+          + (optionalMethod ? "yes" : "no")
+          + ", addition "
+          + addition;
+    }
+
     static DwellingSnapshot of(DwellingRecord record) {
       return record == null
           ? null
@@ -103,9 +117,11 @@ public class DwellingService {
               "Board “"
                   + board.getReference()
                   + "”: dwelling data "
-                  + (before == null ? "added" : "changed"),
-              before,
-              after,
+                  + (before == null ? "added: " : "changed from " + before.text() + " to ")
+                  + after.text(),
+              // no snapshots: the log's board snapshots are board headers (history replays them)
+              null,
+              null,
               form.reason()));
     }
     return saved;
@@ -127,8 +143,12 @@ public class DwellingService {
                       boardId,
                       null,
                       ChangeKind.BOARD_EDITED,
-                      "Board “" + board.getReference() + "”: dwelling data removed",
-                      before,
+                      "Board “"
+                          + board.getReference()
+                          + "”: dwelling data removed (was "
+                          + before.text()
+                          + ")",
+                      null,
                       null,
                       reason));
             });
@@ -168,7 +188,7 @@ public class DwellingService {
                 + " to "
                 + saved.getPeriodEnd(),
             null,
-            form,
+            null,
             form.note()));
     return saved;
   }

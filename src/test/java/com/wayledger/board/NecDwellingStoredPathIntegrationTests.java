@@ -364,6 +364,12 @@ class NecDwellingStoredPathIntegrationTests {
                 .query(Long.class)
                 .single())
         .isEqualTo(1L);
+    // the board's history replays its log; dwelling and demand entries carry no board snapshot
+    dwelling(board, "1500", "FT2", 2, 1, false);
+    mvc.perform(get("/boards/{id}/history", board).with(user("vi").roles("VIEWER")))
+        .andExpect(status().isOk())
+        .andExpect(content().string(Matchers.containsString("maximum demand recorded")))
+        .andExpect(content().string(Matchers.containsString("dwelling data added: 1500 ft²")));
   }
 
   @Test
