@@ -207,7 +207,7 @@ public class AnalysisService {
               board.boardId(),
               currents,
               board.unbalancePercent(),
-              board.lines() == 3 ? board.neutralCurrentAmps() : null));
+              board.lines() >= 2 ? board.neutralCurrentAmps() : null));
     }
     return loadings;
   }

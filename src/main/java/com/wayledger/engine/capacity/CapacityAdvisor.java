@@ -686,7 +686,7 @@ public final class CapacityAdvisor {
                 board.boardId(),
                 currents,
                 board.unbalancePercent(),
-                board.lines() == 3 ? board.neutralCurrentAmps() : null));
+                board.lines() >= 2 ? board.neutralCurrentAmps() : null));
       }
       return new Analysis(demand, ProtectionEngine.check(site, circuits, boards, mccb, settings));
     }
