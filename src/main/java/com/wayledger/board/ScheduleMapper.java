@@ -93,8 +93,7 @@ public final class ScheduleMapper {
                                 })
                             .toList()))
             .toList();
-    return new SiteSpec(
-        site.id(), site.name(), site.supply(), site.defaultDiversityMethodKey(), boards);
+    return site.withBoards(boards);
   }
 
   public static SupplySpec supplyOf(Site site) {

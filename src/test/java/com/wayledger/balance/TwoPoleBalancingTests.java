@@ -70,8 +70,7 @@ class TwoPoleBalancingTests {
     BoardDemand demand =
         DemandEngine.evaluateBoard(board, supply, DiversityMethods.builtIn(), null);
 
-    BalanceProblem problem =
-        BalanceService.problemOf(board, demand, BalancePlans.Basis.CONNECTED);
+    BalanceProblem problem = BalanceService.problemOf(board, demand, BalancePlans.Basis.CONNECTED);
 
     // 4160 W / (√3·120 V) = 20.0 A on B and C (hand-worked, P / V_LL at unity power factor)
     double lineAmps = 4160.0 / (Math.sqrt(3.0) * 120.0);
