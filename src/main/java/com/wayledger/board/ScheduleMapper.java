@@ -33,7 +33,12 @@ public final class ScheduleMapper {
     List<BoardSpec> boardSpecs =
         boards.stream().map(board -> toSpec(board, childByFeedingCircuit)).toList();
     return new SiteSpec(
-        site.getId(), site.getName(), supplyOf(site), site.getDefaultDiversityMethod(), boardSpecs);
+        site.getId(),
+        site.getName(),
+        supplyOf(site),
+        site.getDefaultDiversityMethod(),
+        boardSpecs,
+        site.getRuleSet());
   }
 
   /**
@@ -104,7 +109,8 @@ public final class ScheduleMapper {
         site.getFrequencyHertz(),
         site.getExternalLoopImpedanceOhms(),
         site.getProspectiveFaultCurrentKiloAmps(),
-        site.getSupplyFuseRatingAmps());
+        site.getSupplyFuseRatingAmps(),
+        site.getSupplySystem());
   }
 
   // --- change log (loadlog) support: snapshots are engine records, so a replay maps nothing twice

@@ -61,6 +61,7 @@ public final class CsvWriter {
     }
     printer.println();
     printer.printRecord("Caution: " + caution);
+    printer.printRecord("Rule set: " + data.ruleSetTitle());
     printer.flush();
   }
 
