@@ -205,7 +205,7 @@ public final class ScheduleMapper {
                             ? Inheritance.startUpMultiple(load, board)
                             : load.getStartUpSurgeMultiple()))
             .toList();
-    int poles = circuit.getPosition().isSinglePole() ? 1 : 3;
+    int poles = circuit.getPosition().poles();
     return new CircuitSpec(
         circuit.getId(),
         circuit.getWayNumber(),

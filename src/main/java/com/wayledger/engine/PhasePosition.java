@@ -73,6 +73,46 @@ public enum PhasePosition {
     return isSinglePole() ? 1 : isLineToLine() ? 2 : 3;
   }
 
+  /** "L1", "L1–L3" for three poles, "L1–L2" for two. */
+  public String label() {
+    return switch (this) {
+      case L1, L2, L3 -> name();
+      case THREE_POLE -> "L1–L3";
+      case L1_L2 -> "L1–L2";
+      case L2_L3 -> "L2–L3";
+      case L3_L1 -> "L3–L1";
+    };
+  }
+
+  /**
+   * The two-pole position starting at a line, the lines in their fixed order: L1 → L1–L2, L2 →
+   * L2–L3, L3 → L3–L1.
+   */
+  public static PhasePosition twoPoleFrom(Phase first) {
+    return switch (first) {
+      case L1 -> L1_L2;
+      case L2 -> L2_L3;
+      case L3 -> L3_L1;
+    };
+  }
+
+  /**
+   * The positions a board with this many lines can hold: one line L1 only; a split-phase board L1
+   * (A), L2 (B) and the two-pole L1–L2; a three-line board every single-pole and the three-pole
+   * position, with the two-pole ones when {@code twoPole}.
+   */
+  public static List<PhasePosition> onBoardWith(int lines, boolean twoPole) {
+    if (lines <= 1) {
+      return List.of(L1);
+    }
+    if (lines == 2) {
+      return List.of(L1, L2, L1_L2);
+    }
+    return twoPole
+        ? List.of(L1, L2, L3, L1_L2, L2_L3, L3_L1, THREE_POLE)
+        : LINE_TO_NEUTRAL_OR_THREE_POLE;
+  }
+
   /** The single-pole position on the given line. */
   public static PhasePosition on(Phase phase) {
     return valueOf(phase.name());

@@ -215,4 +215,122 @@ class RuleSetIntegrationTests {
         .as("the result page names the rule set beside the caution")
         .contains("Checked against NEC (NFPA 70); supply 120/240 V single-phase three-wire.");
   }
+
+  private long splitPhaseBoard(long siteId) throws Exception {
+    mvc.perform(
+            post("/sites/{id}/boards", siteId)
+                .with(user("ed").roles("EDITOR"))
+                .with(csrf())
+                .param("reference", "P-2")
+                .param("phases", "1")
+                .param("wayCount", "42")
+                .param("unbalanceLimitPercent", "10")
+                .param("coincidenceFactor", "1"))
+        .andExpect(status().is3xxRedirection());
+    return jdbc.sql("SELECT id FROM board WHERE site_id = ?")
+        .param(siteId)
+        .query(Long.class)
+        .single();
+  }
+
+  private org.springframework.test.web.servlet.ResultActions addCircuit(
+      long boardId, int way, String position, double watts) throws Exception {
+    return mvc.perform(
+        post("/boards/{id}/circuits", boardId)
+            .with(user("ed").roles("EDITOR"))
+            .with(csrf())
+            .param("wayNumber", String.valueOf(way))
+            .param("position", position)
+            .param("description", "Load " + way)
+            .param("status", "IN_USE")
+            .param("deviceKind", "MCB")
+            .param("deviceRatingAmps", "30")
+            .param("loadDescription", "Heater")
+            .param("loadCategory", "OTHER")
+            .param("loadQuantity", "1")
+            .param("loadRatingValue", String.valueOf(watts))
+            .param("loadRatingUnit", "W")
+            .param("loadPowerFactor", "1"));
+  }
+
+  @Test
+  void aTwoPoleCircuitIsStoredOnBothLinesAndPutsNothingOnTheNeutral() throws Exception {
+    long siteId = createNecSite("SPLIT_PHASE_120_240");
+    long boardId = splitPhaseBoard(siteId);
+    // 2400 W at 120 V on A (20 A); a 4800 W water heater at 240 V on A–B (20 A on each line)
+    addCircuit(boardId, 1, "L1", 2400).andExpect(status().is3xxRedirection());
+    addCircuit(boardId, 2, "L1_L2", 4800).andExpect(status().is3xxRedirection());
+
+    assertThat(
+            jdbc.sql(
+                    "SELECT phase FROM way_slot WHERE board_id = ? AND way_number = 2 ORDER BY phase")
+                .param(boardId)
+                .query(String.class)
+                .list())
+        .as("the two-pole circuit holds both lines of way 2")
+        .containsExactly("L1", "L2");
+    var demand = analysis.ofSite(siteId).boardDemand(boardId);
+    assertThat(demand.lines()).as("a 120/240 V board has lines A and B").isEqualTo(2);
+    assertThat(demand.phases().get(0).currentAmps())
+        .as("line A: 20 A + 20 A")
+        .isCloseTo(40.0, org.assertj.core.api.Assertions.within(1e-6));
+    assertThat(demand.phases().get(1).currentAmps())
+        .as("line B: 20 A")
+        .isCloseTo(20.0, org.assertj.core.api.Assertions.within(1e-6));
+    assertThat(demand.neutralCurrentAmps())
+        .as("only the 120 V load returns on the neutral")
+        .isCloseTo(20.0, org.assertj.core.api.Assertions.within(1e-6));
+    String schedule =
+        mvc.perform(get("/boards/{id}/schedule", boardId).with(user("ed").roles("EDITOR")))
+            .andExpect(status().isOk())
+            .andReturn()
+            .getResponse()
+            .getContentAsString();
+    assertThat(schedule).as("line B rows are on the schedule").contains("pos-2-L2");
+  }
+
+  @Test
+  void aTwoPolePositionIsRefusedOnAnIecBoard() throws Exception {
+    Site site =
+        sites.create(
+            new SiteForm(
+                "Iec " + UUID.randomUUID(),
+                null,
+                com.wayledger.engine.EarthingSystem.TN_C_S,
+                230.0,
+                3,
+                50.0,
+                0.35,
+                6.0,
+                100.0,
+                null,
+                null,
+                null,
+                null));
+    mvc.perform(
+            post("/sites/{id}/boards", site.getId())
+                .with(user("ed").roles("EDITOR"))
+                .with(csrf())
+                .param("reference", "DB-1")
+                .param("phases", "3")
+                .param("wayCount", "12")
+                .param("unbalanceLimitPercent", "10")
+                .param("coincidenceFactor", "1"))
+        .andExpect(status().is3xxRedirection());
+    long boardId =
+        jdbc.sql("SELECT id FROM board WHERE site_id = ?")
+            .param(site.getId())
+            .query(Long.class)
+            .single();
+
+    addCircuit(boardId, 1, "L1_L2", 4800).andExpect(status().is4xxClientError());
+
+    assertThat(
+            jdbc.sql("SELECT COUNT(*) FROM circuit WHERE board_id = ?")
+                .param(boardId)
+                .query(Long.class)
+                .single())
+        .as("nothing stored")
+        .isZero();
+  }
 }
