@@ -105,13 +105,14 @@ final class HistoryReplay {
       points.add(
           new HistoryPoint(
               entry.id(),
-              entry.happenedAt(),
+              entry.effectiveAt(),
               entry.username(),
               entry.kind(),
               entry.summary(),
               entry.reason(),
               currents,
-              removed));
+              removed,
+              entry.isBackDated()));
     }
     return points;
   }
