@@ -26,6 +26,23 @@ class PostgresBackDatedLogIntegrationTests extends BackDatedLogChecks {
     registry.add("spring.datasource.password", database::password);
   }
 
+  @org.junit.jupiter.api.Test
+  void databaseRefusesAnEffectiveDayAfterTheDayOfRecordingWhateverTheClientSends() {
+    long siteId = sites.create(LogFixtures.site()).getId();
+    org.assertj.core.api.Assertions.assertThatThrownBy(
+            () ->
+                jdbc.sql(
+                        "INSERT INTO change_log (site_id, username, kind, summary, effective_on)"
+                            + " VALUES (?, 'someone', 'SITE_EDITED', 'forward-dated', ?)")
+                    .params(
+                        siteId,
+                        java.sql.Date.valueOf(LocalDate.now(java.time.ZoneOffset.UTC).plusDays(5)))
+                    .update())
+        .isInstanceOf(org.springframework.dao.DataAccessException.class)
+        .rootCause()
+        .hasMessageContaining("after the day of recording");
+  }
+
   @Override
   void rewriteEffectiveDay(long siteId, LocalDate day) {
     // as the owner, with the append-only guard lifted for this one statement (as an attacker with
