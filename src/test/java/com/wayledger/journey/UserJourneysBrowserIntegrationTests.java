@@ -123,7 +123,8 @@ class UserJourneysBrowserIntegrationTests {
       assertThat(findings.path("circuits").size()).as("circuits checked by the API").isEqualTo(24);
       assertThat(notAssessed).as("checks the API could not assess").isEmpty();
       assertThat(browser.findElement(By.id("findings")).getText().toLowerCase(Locale.ROOT))
-          .as("the page's findings list nothing not assessed (a finding reads \"not assessed — …\")")
+          .as(
+              "the page's findings list nothing not assessed (a finding reads \"not assessed — …\")")
           .doesNotContain("not assessed —");
     }
   }
