@@ -71,8 +71,13 @@ final class BoardFigures {
             carriedConnectedVarsByLine[i] += childConnectedVars / 3.0;
           }
         } else if (circuit.position() != null) {
-          carriedConnectedWattsByLine[circuit.position().ordinal()] += childConnectedWatts;
-          carriedConnectedVarsByLine[circuit.position().ordinal()] += childConnectedVars;
+          com.wayledger.engine.LinePhasors.add(
+              com.wayledger.engine.LinePhasors.geometryOf(demand.lines()),
+              circuit.position(),
+              childConnectedWatts,
+              childConnectedVars,
+              carriedConnectedWattsByLine,
+              carriedConnectedVarsByLine);
         }
       }
       double ownConnectedWatts = circuit.connectedWatts() - childConnectedWatts;
@@ -111,8 +116,13 @@ final class BoardFigures {
         carriedVars[i] += child.demandVars() * k / 3.0;
       }
     } else {
-      carriedWatts[position.ordinal()] += child.demandWatts() * k;
-      carriedVars[position.ordinal()] += child.demandVars() * k;
+      com.wayledger.engine.LinePhasors.add(
+          com.wayledger.engine.LinePhasors.geometryOf(demand.lines()),
+          position,
+          child.demandWatts() * k,
+          child.demandVars() * k,
+          carriedWatts,
+          carriedVars);
     }
   }
 
