@@ -213,4 +213,26 @@ public class Circuit {
   public List<LoadItem> getLoads() {
     return loads;
   }
+
+  /**
+   * The circuit's edition as an export carries it: its own version and a digest of its load lines'
+   * ids and versions (load lines carry their own versions, so an edit of a load does not move the
+   * circuit's). A schedule brought back from a spreadsheet is refused for a circuit whose edition
+   * is no longer the one written in the file, so an edit made since the export is never
+   * overwritten.
+   */
+  public String recordVersion() {
+    StringBuilder lines = new StringBuilder();
+    for (LoadItem load : loads) {
+      lines.append(load.getId()).append('.').append(load.getVersion()).append(';');
+    }
+    try {
+      byte[] digest =
+          java.security.MessageDigest.getInstance("SHA-256")
+              .digest(lines.toString().getBytes(java.nio.charset.StandardCharsets.UTF_8));
+      return version + "-" + java.util.HexFormat.of().formatHex(digest, 0, 3);
+    } catch (java.security.NoSuchAlgorithmException impossible) {
+      throw new IllegalStateException(impossible);
+    }
+  }
 }

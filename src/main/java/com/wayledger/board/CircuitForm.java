@@ -508,7 +508,8 @@ public record CircuitForm(
   /**
    * The row's fields that differ in {@code other}, blank text and unticked boxes counting as none.
    */
-  java.util.List<com.wayledger.system.RecordDiff.FieldChange> changedFields(CircuitForm other) {
+  public java.util.List<com.wayledger.system.RecordDiff.FieldChange> changedFields(
+      CircuitForm other) {
     return com.wayledger.system.RecordDiff.between(other, this, NOT_THE_ROW).stream()
         .filter(change -> !(isUnset(change.yours()) && isUnset(change.theirs())))
         .toList();

@@ -54,7 +54,11 @@ public final class CsvWriter {
             entry.loads().isEmpty() ? Collections.singletonList(null) : entry.loads();
         boolean first = true;
         for (LoadForm load : loads) {
-          printer.printRecord(row(entry.circuit(), load, f, first));
+          List<String> cells = row(entry.circuit(), load, f, first);
+          cells.set(CIRCUIT_KEY.ordinal(), num(entry.circuitId()));
+          cells.set(
+              RECORD_VERSION.ordinal(), entry.recordVersion() == null ? "" : entry.recordVersion());
+          printer.printRecord(cells);
           first = false;
         }
       }

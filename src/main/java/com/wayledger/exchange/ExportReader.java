@@ -79,7 +79,8 @@ public class ExportReader {
                     new CircuitEntry(
                         circuit.getId(),
                         CircuitForm.of(circuit),
-                        circuit.getLoads().stream().map(LoadForm::of).toList()))
+                        circuit.getLoads().stream().map(LoadForm::of).toList(),
+                        circuit.recordVersion()))
             .toList();
     return new BoardEntry(
         board.getId(),

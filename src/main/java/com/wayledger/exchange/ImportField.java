@@ -146,6 +146,8 @@ public enum ImportField {
       List.of("surge", "surge x", "inrush", "starting multiple", "start multiple")),
   SURGE_MILLIS(ScheduleColumn.SURGE_MILLIS, List.of("surge ms", "inrush ms", "start ms", "ms")),
   CONTINUOUS(ScheduleColumn.CONTINUOUS, List.of("continuous", "cont")),
+  CIRCUIT_KEY(ScheduleColumn.CIRCUIT_KEY, List.of("circuit key", "key")),
+  RECORD_VERSION(ScheduleColumn.RECORD_VERSION, List.of("record version", "version")),
   DEVICE_SUMMARY(
       null,
       List.of(

@@ -189,7 +189,11 @@ public final class RowReader {
         }
       }
       if (planned == null) {
+        Integer keyCell = cells.whole(CIRCUIT_KEY, problems);
+        Long key = keyCell == null ? null : keyCell.longValue();
         planned = new Planned(circuit, row.number(), problems.isEmpty());
+        planned.key = key;
+        planned.version = cells.blank(RECORD_VERSION) ? null : cells.text(RECORD_VERSION);
         if (circuit.wayNumber() != null && circuit.position() != null) {
           byKey.putIfAbsent(circuit.wayNumber() + ":" + circuit.position(), planned);
           // a position claimed by a row with problems is still claimed: two rows for one position
@@ -212,7 +216,11 @@ public final class RowReader {
       if (planned.valid) {
         circuits.add(
             new ImportPlan.PlannedCircuit(
-                planned.circuit, List.copyOf(planned.loads), List.copyOf(planned.rows)));
+                planned.circuit,
+                List.copyOf(planned.loads),
+                List.copyOf(planned.rows),
+                planned.key,
+                planned.version));
       }
     }
     return new ImportPlan(rows, circuits);
@@ -229,6 +237,8 @@ public final class RowReader {
     final boolean valid;
     final List<LoadForm> loads = new ArrayList<>();
     final List<Integer> rows = new ArrayList<>();
+    Long key;
+    String version;
 
     Planned(CircuitForm circuit, int firstRow, boolean valid) {
       this.circuit = circuit;

@@ -317,6 +317,7 @@ public final class WorkbookWriter {
       for (LoadForm load : loads) {
         Row row = sheet.createRow(rowIndex);
         writeCircuitCells(row, entry.circuit(), styles, widths);
+        writeRecordCells(row, entry, styles, widths);
         if (load != null) {
           writeLoadCells(row, load, styles, widths);
         }
@@ -402,6 +403,17 @@ public final class WorkbookWriter {
     number(row, GROUPED.ordinal(), c.cableGroupedCircuits(), s.integer, w);
     number(row, THERMAL_INSULATION_MM.ordinal(), c.cableThermalInsulationMm(), s.integer, w);
     number(row, MEASURED_ZS.ordinal(), c.measuredLoopImpedanceOhms(), s.ohms, w);
+  }
+
+  /**
+   * The circuit's key and edition on each of its rows: an import into the same board matches rows
+   * to circuits by them and refuses to overwrite a circuit changed since the export.
+   */
+  private static void writeRecordCells(Row row, CircuitEntry entry, WorkbookStyles s, Widths w) {
+    number(row, CIRCUIT_KEY.ordinal(), entry.circuitId(), s.integer, w);
+    if (entry.recordVersion() != null) {
+      text(row, RECORD_VERSION.ordinal(), entry.recordVersion(), s.text, w);
+    }
   }
 
   private static void writeLoadCells(Row row, LoadForm l, WorkbookStyles s, Widths w) {
