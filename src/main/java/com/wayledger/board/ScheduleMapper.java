@@ -89,7 +89,8 @@ public final class ScheduleMapper {
                                           circuit.loads(),
                                           circuit.feedsBoardId(),
                                           circuit.measuredLoopImpedanceOhms(),
-                                          circuit.ringFinal());
+                                          circuit.ringFinal(),
+                                          circuit.location());
                                 })
                             .toList()))
             .toList();
@@ -215,7 +216,8 @@ public final class ScheduleMapper {
         loads,
         feedsBoardId,
         circuit.getMeasuredLoopImpedanceOhms(),
-        circuit.isRingFinal());
+        circuit.isRingFinal(),
+        circuit.getLocation());
   }
 
   private static LoadSpec toSpec(LoadItem load, Double startUpMultiple) {

@@ -429,6 +429,7 @@ public final class WorkbookWriter {
     number(row, GROUPED.ordinal(), c.cableGroupedCircuits(), s.integer, w);
     number(row, THERMAL_INSULATION_MM.ordinal(), c.cableThermalInsulationMm(), s.integer, w);
     number(row, MEASURED_ZS.ordinal(), c.measuredLoopImpedanceOhms(), s.ohms, w);
+    text(row, LOCATION.ordinal(), name(c.location()), s.text, w);
   }
 
   private static void writeLoadCells(Row row, LoadForm l, WorkbookStyles s, Widths w) {
