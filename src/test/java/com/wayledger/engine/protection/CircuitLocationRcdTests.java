@@ -168,4 +168,20 @@ class CircuitLocationRcdTests {
     assertThat(p.checks()).noneMatch(f -> f.check() == CheckKind.SOCKET_RCD);
     assertThat(p.reasons()).anyMatch(r -> r.contains("location is not recorded"));
   }
+
+  @Test
+  void outdoorCarChargerKeepsTheCarChargingClause() {
+    CircuitSpec charger =
+        circuit(
+                1,
+                mcb(TripCurve.B, 40),
+                twinAndEarth(6.0, 2.5, 10.0),
+                List.of(Fixtures.amps(LoadCategory.EV_CHARGING, 32)))
+            .at(CircuitLocation.OUTDOORS);
+
+    Finding f = residual(charger).orElseThrow();
+
+    assertThat(f.verdict()).isEqualTo(Verdict.WARNING);
+    assertThat(f.reference()).contains("722");
+  }
 }

@@ -117,12 +117,17 @@ public final class ResidualCurrentRules {
   }
 
   /**
-   * The rule a final circuit falls under: its location's (which covers any rating) before its
-   * loads'; null when neither asks for 30 mA protection.
+   * The rule a final circuit falls under: a load rule covering any rating (car charging, the more
+   * specific clause), else its location's (which covers any rating), else its loads' (sockets up to
+   * 32 A); null when none asks for 30 mA protection.
    */
   public static Rule forCircuit(List<LoadSpec> loads, CircuitLocation location) {
+    Rule byLoads = forLoads(loads);
+    if (byLoads != null && byLoads.maxRatedAmps() == null) {
+      return byLoads;
+    }
     Rule byLocation = of(location);
-    return byLocation != null ? byLocation : forLoads(loads);
+    return byLocation != null ? byLocation : byLoads;
   }
 
   /**
