@@ -97,7 +97,8 @@ class ProposalApiIntegrationTests {
             .param(yard)
             .query(Long.class)
             .single();
-    String path = "$.circuits[?(@.circuitId == " + yard + ")].findings[?(@.check == 'SOCKET_RCD')]";
+    String path =
+        "$.result.circuits[?(@.circuitId == " + yard + ")].findings[?(@.check == 'SOCKET_RCD')]";
     mvc.perform(get("/api/boards/{id}/findings", board).with(viewer()))
         .andExpect(status().isOk())
         .andExpect(
