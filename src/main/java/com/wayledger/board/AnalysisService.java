@@ -11,10 +11,10 @@ import com.wayledger.engine.demand.PhaseDemand;
 import com.wayledger.engine.demand.SiteDemand;
 import com.wayledger.engine.protection.BoardLoading;
 import com.wayledger.engine.protection.CircuitLoading;
-import com.wayledger.engine.protection.ProtectionEngine;
 import com.wayledger.engine.protection.ProtectionSettings;
 import com.wayledger.engine.protection.RecordedMccbSettings;
 import com.wayledger.engine.protection.SiteFindings;
+import com.wayledger.engine.rules.RuleSets;
 import com.wayledger.site.Site;
 import com.wayledger.site.SiteService;
 import com.wayledger.system.SiteGenerations;
@@ -174,12 +174,13 @@ public class AnalysisService {
       SiteSpec spec, DiversityMethodCatalog methods, RecordedMccbSettings recordedMccbSettings) {
     SiteDemand demand = DemandEngine.evaluate(spec, methods);
     SiteFindings findings =
-        ProtectionEngine.check(
-            spec,
-            circuitLoadings(demand),
-            boardLoadings(demand),
-            recordedMccbSettings,
-            ProtectionSettings.DEFAULTS);
+        RuleSets.of(spec.ruleSetKey())
+            .check(
+                spec,
+                circuitLoadings(demand),
+                boardLoadings(demand),
+                recordedMccbSettings,
+                ProtectionSettings.DEFAULTS);
     return new SiteAnalysis(spec, demand, findings);
   }
 
@@ -207,7 +208,7 @@ public class AnalysisService {
               board.boardId(),
               currents,
               board.unbalancePercent(),
-              board.lines() == 3 ? board.neutralCurrentAmps() : null));
+              board.lines() >= 2 ? board.neutralCurrentAmps() : null));
     }
     return loadings;
   }

@@ -202,7 +202,7 @@ public class BoardService {
     List<String> ways =
         circuits.findByBoard(board.getId()).stream()
             .filter(circuit -> circuit.getPosition() != PhasePosition.L1)
-            .map(circuit -> circuit.getWayNumber() + " " + circuit.getPosition().name())
+            .map(circuit -> circuit.getWayNumber() + " " + circuit.getPosition().label())
             .distinct()
             .toList();
     if (!ways.isEmpty()) {

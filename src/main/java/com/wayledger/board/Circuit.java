@@ -39,8 +39,12 @@ public class Circuit {
 
   private int wayNumber;
 
+  /** The position, or for a two-pole circuit the first of its two lines (see lineToLine). */
   @Enumerated(EnumType.STRING)
   private PhasePosition position;
+
+  /** Whether the circuit is two-pole, line to line, from {@link #position} to the next line. */
+  private boolean lineToLine;
 
   private String description;
 
@@ -118,7 +122,7 @@ public class Circuit {
   /** Copies the circuit's own fields (not its loads) from a validated form. */
   void apply(CircuitForm form) {
     wayNumber = form.wayNumber();
-    position = form.position();
+    place(form.position());
     description = form.description().strip();
     status = form.status();
     lockedForBalancing = Boolean.TRUE.equals(form.lockedForBalancing());
@@ -131,7 +135,13 @@ public class Circuit {
 
   void moveTo(int newWayNumber, PhasePosition newPosition) {
     wayNumber = newWayNumber;
-    position = newPosition;
+    place(newPosition);
+  }
+
+  /** Stores a two-pole position as its first line with the line-to-line mark (migration V13). */
+  private void place(PhasePosition newPosition) {
+    lineToLine = newPosition != null && newPosition.isLineToLine();
+    position = lineToLine ? PhasePosition.on(newPosition.fromLine()) : newPosition;
   }
 
   void replaceDevice(DeviceDetails newDevice) {
@@ -148,10 +158,10 @@ public class Circuit {
    * board.
    */
   public String positionLabel() {
-    if (!board.isThreePhase()) {
+    if (board.lineCount() == 1) {
       return Integer.toString(wayNumber);
     }
-    return wayNumber + " " + (position == PhasePosition.THREE_POLE ? "L1–L3" : position.name());
+    return wayNumber + " " + getPosition().label();
   }
 
   public Long getId() {
@@ -167,7 +177,9 @@ public class Circuit {
   }
 
   public PhasePosition getPosition() {
-    return position;
+    return lineToLine && position != null && position.isSinglePole()
+        ? PhasePosition.twoPoleFrom(com.wayledger.engine.Phase.valueOf(position.name()))
+        : position;
   }
 
   public String getDescription() {

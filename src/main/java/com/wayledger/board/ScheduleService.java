@@ -447,8 +447,12 @@ public class ScheduleService {
     if (form.wayNumber() > board.getWayCount()) {
       throw new RuleViolation("wayNumber", "circuit.way.beyondBoard", board.getWayCount());
     }
-    if (!board.isThreePhase() && form.position() != PhasePosition.L1) {
-      throw new RuleViolation("position", "circuit.position.singlePhaseBoard");
+    if (!board.getPositions().contains(form.position())) {
+      throw new RuleViolation(
+          "position",
+          board.lineCount() == 1
+              ? "circuit.position.singlePhaseBoard"
+              : "circuit.position.notOnThisBoard");
     }
     if (form.status() != WayStatus.EMPTY && form.deviceKind() == null) {
       throw new RuleViolation("deviceKind", "circuit.device.required");
@@ -519,7 +523,7 @@ public class ScheduleService {
           "wayNumber",
           "circuit.position.occupied",
           circuit.getWayNumber(),
-          circuit.getPosition().name());
+          circuit.getPosition().label());
     }
   }
 }

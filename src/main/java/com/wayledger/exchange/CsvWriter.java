@@ -60,7 +60,8 @@ public final class CsvWriter {
       }
     }
     printer.println();
-    printer.printRecord("Caution: " + caution);
+    // the caution stays the last line (the importer stops at the blank line before it)
+    printer.printRecord("Caution: " + caution + " Checked against " + data.ruleSetTitle() + ".");
     printer.flush();
   }
 

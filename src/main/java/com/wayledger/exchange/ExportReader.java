@@ -67,7 +67,8 @@ public class ExportReader {
         entries,
         analysis.demand(),
         analysis.findings(),
-        LocalDate.now(clock));
+        LocalDate.now(clock),
+        com.wayledger.engine.rules.RuleSets.of(site.getRuleSet()).title());
   }
 
   static BoardEntry entry(Board board, int depth) {

@@ -284,6 +284,8 @@ public final class WorkbookWriter {
     text(facts, 7, data.exportedOn().toString(), styles.text, null);
     text(facts, 8, "Diversity", styles.label, null);
     text(facts, 9, demand == null ? "not assessed" : demand.methodName(), styles.text, null);
+    text(facts, 13, "Rule set", styles.label, null);
+    text(facts, 14, data.ruleSetTitle(), styles.text, null);
     text(facts, 11, "Fed from", styles.label, null);
     text(
         facts,
@@ -841,6 +843,8 @@ public final class WorkbookWriter {
     text(facts, 1, data.earthing(), s.text, null);
     text(facts, 2, "Exported", s.label, null);
     text(facts, 3, data.exportedOn().toString(), s.text, null);
+    text(facts, 4, "Rule set", s.label, null);
+    text(facts, 5, data.ruleSetTitle(), s.text, null);
     text(sheet.createRow(2), 0, "Caution: " + caution, s.caution, null);
     String[] heads = {
       "Board",

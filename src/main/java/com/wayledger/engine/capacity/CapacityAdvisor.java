@@ -21,7 +21,6 @@ import com.wayledger.engine.protection.CircuitFindings;
 import com.wayledger.engine.protection.CircuitLoading;
 import com.wayledger.engine.protection.DeviceProposal;
 import com.wayledger.engine.protection.DeviceProposer;
-import com.wayledger.engine.protection.ProtectionEngine;
 import com.wayledger.engine.protection.ProtectionSettings;
 import com.wayledger.engine.protection.RecordedMccbSettings;
 import com.wayledger.engine.protection.SiteFindings;
@@ -257,8 +256,7 @@ public final class CapacityAdvisor {
     BoardSpec changed = board.withCircuits(circuits);
     List<BoardSpec> boards =
         site.boards().stream().map(b -> b.id() == board.id() ? changed : b).toList();
-    return new SiteSpec(
-        site.id(), site.name(), site.supply(), site.defaultDiversityMethodKey(), boards);
+    return site.withBoards(boards);
   }
 
   private static CircuitSpec placedOn(
@@ -704,9 +702,12 @@ public final class CapacityAdvisor {
                 board.boardId(),
                 currents,
                 board.unbalancePercent(),
-                board.lines() == 3 ? board.neutralCurrentAmps() : null));
+                board.lines() >= 2 ? board.neutralCurrentAmps() : null));
       }
-      return new Analysis(demand, ProtectionEngine.check(site, circuits, boards, mccb, settings));
+      return new Analysis(
+          demand,
+          com.wayledger.engine.rules.RuleSets.of(site.ruleSetKey())
+              .check(site, circuits, boards, mccb, settings));
     }
   }
 }
