@@ -1,5 +1,6 @@
 package com.wayledger.board;
 
+import com.wayledger.engine.CircuitLocation;
 import com.wayledger.engine.PhasePosition;
 import com.wayledger.engine.WayStatus;
 import jakarta.persistence.AttributeOverride;
@@ -53,6 +54,9 @@ public class Circuit {
   private boolean lockedForBalancing;
 
   private boolean ringFinal;
+
+  @Enumerated(EnumType.STRING)
+  private CircuitLocation location;
 
   @Embedded
   @AttributeOverrides({
@@ -123,6 +127,7 @@ public class Circuit {
     status = form.status();
     lockedForBalancing = Boolean.TRUE.equals(form.lockedForBalancing());
     ringFinal = Boolean.TRUE.equals(form.ringFinal());
+    location = form.location();
     device = status == WayStatus.EMPTY ? null : form.deviceDetails();
     cable = status == WayStatus.IN_USE ? form.cableDetails() : null;
     measuredLoopImpedanceOhms = form.measuredLoopImpedanceOhms();
@@ -192,6 +197,11 @@ public class Circuit {
   /** Whether the cable is a ring final circuit: it leaves the board and returns to it. */
   public boolean isRingFinal() {
     return ringFinal;
+  }
+
+  /** Where the circuit's equipment is, for the residual-current rules; null when not recorded. */
+  public CircuitLocation getLocation() {
+    return location;
   }
 
   public DeviceDetails getDevice() {

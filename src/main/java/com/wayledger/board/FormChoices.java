@@ -35,6 +35,7 @@ final class FormChoices {
     addDeviceAndCable(model);
     model.addAttribute("positions", PhasePosition.LINE_TO_NEUTRAL_OR_THREE_POLE);
     model.addAttribute("statuses", WayStatus.values());
+    model.addAttribute("locations", com.wayledger.engine.CircuitLocation.values());
     model.addAttribute("categories", LoadCategory.values());
     model.addAttribute("ratingUnits", RatingUnit.values());
   }

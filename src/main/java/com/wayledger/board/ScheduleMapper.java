@@ -94,7 +94,8 @@ public final class ScheduleMapper {
                                           circuit.loads(),
                                           circuit.feedsBoardId(),
                                           circuit.measuredLoopImpedanceOhms(),
-                                          circuit.ringFinal());
+                                          circuit.ringFinal(),
+                                          circuit.location());
                                 })
                             .toList()))
             .toList();
@@ -220,7 +221,8 @@ public final class ScheduleMapper {
         loads,
         feedsBoardId,
         circuit.getMeasuredLoopImpedanceOhms(),
-        circuit.isRingFinal());
+        circuit.isRingFinal(),
+        circuit.getLocation());
   }
 
   private static LoadSpec toSpec(LoadItem load, Double startUpMultiple) {

@@ -10,6 +10,7 @@ import com.wayledger.board.Circuit;
 import com.wayledger.board.CircuitForm;
 import com.wayledger.board.LoadForm;
 import com.wayledger.board.ScheduleService;
+import com.wayledger.engine.CircuitLocation;
 import com.wayledger.engine.ConductorMaterial;
 import com.wayledger.engine.DeviceKind;
 import com.wayledger.engine.EarthingSystem;
@@ -1074,6 +1075,18 @@ class DemoSite implements SmartLifecycle {
         methodKey);
   }
 
+  /** Where the demo's circuits are, from their invented descriptions: the yard is outdoors. */
+  static CircuitLocation locationOf(String description) {
+    String words = description.toLowerCase(java.util.Locale.ROOT);
+    if (words.contains("yard")) {
+      return CircuitLocation.OUTDOORS;
+    }
+    if (words.contains("shower") || words.contains("bathroom")) {
+      return CircuitLocation.BATH_OR_SHOWER;
+    }
+    return CircuitLocation.INDOORS;
+  }
+
   private static CircuitForm way(
       int way,
       PhasePosition position,
@@ -1183,7 +1196,10 @@ class DemoSite implements SmartLifecycle {
   }
 
   private Circuit add(Board board, CircuitForm circuit, LoadForm... loads) {
-    Circuit saved = schedule.addCircuit(board.getId(), circuit);
+    Circuit saved =
+        schedule.addCircuit(
+            board.getId(),
+            circuit.location() != null ? circuit : circuit.at(locationOf(circuit.description())));
     List<LoadForm> lines = new ArrayList<>(List.of(loads));
     for (LoadForm load : lines) {
       schedule.addLoad(saved.getId(), load);

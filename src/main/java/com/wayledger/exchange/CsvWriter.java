@@ -97,6 +97,7 @@ public final class CsvWriter {
     cells[GROUPED.ordinal()] = num(c.cableGroupedCircuits());
     cells[THERMAL_INSULATION_MM.ordinal()] = num(c.cableThermalInsulationMm());
     cells[MEASURED_ZS.ordinal()] = num(c.measuredLoopImpedanceOhms());
+    cells[LOCATION.ordinal()] = name(c.location());
     if (l != null) {
       cells[LOAD.ordinal()] = CellText.forCsv(l.description());
       cells[CATEGORY.ordinal()] = name(l.category());

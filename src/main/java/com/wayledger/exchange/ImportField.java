@@ -129,6 +129,9 @@ public enum ImportField {
   MEASURED_ZS(
       ScheduleColumn.MEASURED_ZS,
       List.of("measured zs", "zs", "zs ohm", "loop impedance", "measured loop")),
+  LOCATION(
+      ScheduleColumn.LOCATION,
+      List.of("location", "circuit location", "where", "room", "special location")),
   LOAD(
       ScheduleColumn.LOAD,
       List.of("load", "load description", "equipment", "item", "appliance", "connected item")),

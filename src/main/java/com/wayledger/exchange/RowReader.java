@@ -4,6 +4,7 @@ import static com.wayledger.exchange.ImportField.*;
 
 import com.wayledger.board.CircuitForm;
 import com.wayledger.board.LoadForm;
+import com.wayledger.engine.CircuitLocation;
 import com.wayledger.engine.ConductorMaterial;
 import com.wayledger.engine.DeviceKind;
 import com.wayledger.engine.InstallationMethod;
@@ -397,7 +398,9 @@ public final class RowReader {
             null,
             ring,
             overload,
-            instantaneous);
+            instantaneous,
+            null,
+            cells.choice(LOCATION, CircuitLocation.class, problems));
     for (ConstraintViolation<CircuitForm> violation : validator.validate(form)) {
       ImportField field =
           CIRCUIT_PROPERTIES.getOrDefault(violation.getPropertyPath().toString(), CIRCUIT);

@@ -30,6 +30,7 @@ public enum ScheduleColumn {
   GROUPED("Grouped", true),
   THERMAL_INSULATION_MM("In insulation mm", true),
   MEASURED_ZS("Measured Zs Ω", true),
+  LOCATION("Location", true),
   LOAD("Load", true),
   CATEGORY("Category", true),
   QUANTITY("Qty", true),

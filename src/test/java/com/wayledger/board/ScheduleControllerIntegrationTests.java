@@ -179,6 +179,32 @@ class ScheduleControllerIntegrationTests {
   }
 
   @Test
+  void locationChoiceReachesTheFormAndBlankMeansNotRecorded() throws Exception {
+    given(schedule.addCircuit(eq(BOARD_ID), any(), any())).willReturn(circuit(board()));
+
+    mvc.perform(
+            postForm("/boards/5/circuits", circuitFields(), "location", "BATH_OR_SHOWER")
+                .with(editor())
+                .with(csrf()))
+        .andExpect(status().is3xxRedirection());
+    verify(schedule)
+        .addCircuit(
+            eq(BOARD_ID),
+            org.mockito.ArgumentMatchers.argThat(
+                f -> f.location() == com.wayledger.engine.CircuitLocation.BATH_OR_SHOWER),
+            any());
+
+    mvc.perform(
+            postForm("/boards/5/circuits", circuitFields(), "location", "")
+                .with(editor())
+                .with(csrf()))
+        .andExpect(status().is3xxRedirection());
+    verify(schedule)
+        .addCircuit(
+            eq(BOARD_ID), org.mockito.ArgumentMatchers.argThat(f -> f.location() == null), any());
+  }
+
+  @Test
   void withoutHtmxASavedCircuitRedirectsToTheBoard() throws Exception {
     given(schedule.addCircuit(eq(BOARD_ID), any(), any())).willReturn(circuit(board()));
 

@@ -249,7 +249,9 @@ public final class CapacityAdvisor {
               null,
               List.of(load.toLoadSpec()),
               null,
-              null));
+              null,
+              false,
+              load.location()));
     }
     BoardSpec changed = board.withCircuits(circuits);
     List<BoardSpec> boards =
@@ -275,7 +277,8 @@ public final class CapacityAdvisor {
               loads,
               null,
               circuit.measuredLoopImpedanceOhms(),
-              circuit.ringFinal());
+              circuit.ringFinal(),
+              circuit.location());
       case SPARE_WAY ->
           new CircuitSpec(
               circuit.id(),
@@ -289,7 +292,8 @@ public final class CapacityAdvisor {
               List.of(load.toLoadSpec()),
               null,
               circuit.measuredLoopImpedanceOhms(),
-              circuit.ringFinal());
+              circuit.ringFinal(),
+              load.location());
       case EMPTY_POSITION ->
           new CircuitSpec(
               circuit.id(),
@@ -302,7 +306,9 @@ public final class CapacityAdvisor {
               null,
               List.of(load.toLoadSpec()),
               null,
-              null);
+              null,
+              false,
+              load.location());
     };
   }
 
@@ -432,7 +438,12 @@ public final class CapacityAdvisor {
       for (TripCurve curve : TripCurve.values()) {
         if (surgeAmps < curve.lowestInstantMultiple() * rating) {
           // a category that needs 30 mA additional protection gets it in the device itself
-          ResidualCurrentRules.Rule rcd = ResidualCurrentRules.of(load.category());
+          // where it goes cannot be told: 30 mA on the safe side, named in the proposal
+          ResidualCurrentRules.Rule rcd =
+              ResidualCurrentRules.needsLocation(
+                      List.of(load.toLoadSpec()), load.location(), rating)
+                  ? ResidualCurrentRules.LOCATION_NOT_RECORDED
+                  : ResidualCurrentRules.forCircuit(List.of(load.toLoadSpec()), load.location());
           boolean rcbo = rcd != null && rcd.covers(rating);
           DeviceSpec device =
               rcbo
@@ -448,7 +459,14 @@ public final class CapacityAdvisor {
           return withDevice(
               candidate,
               device,
-              (rcbo ? "RCBO 30 mA type A (" + rcd.reference() + ") type " : "MCB type ")
+              (rcbo
+                      ? "RCBO 30 mA type A ("
+                          + (rcd == ResidualCurrentRules.LOCATION_NOT_RECORDED
+                              ? rcd.words() + ", "
+                              : "")
+                          + rcd.reference()
+                          + ") type "
+                      : "MCB type ")
                   + curve
                   + " "
                   + fixed(rating)

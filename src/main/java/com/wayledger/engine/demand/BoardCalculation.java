@@ -420,6 +420,18 @@ final class BoardCalculation {
     Double incomerRating = board.incomerTripRatingAmps();
     Phase[] phases = Phase.values();
     List<PhaseDemand> phaseResults = new ArrayList<>(boardLines);
+    double[] connectedLineWatts = new double[3];
+    double[] connectedLineVars = new double[3];
+    for (CircuitDemand circuit : circuitResults) {
+      if (!circuit.isAssessed() || circuit.position() == null) {
+        continue;
+      }
+      int share = circuit.position() == PhasePosition.THREE_POLE ? 3 : 1;
+      for (Phase line : circuit.position().phases()) {
+        connectedLineWatts[line.ordinal()] += circuit.connectedWatts() / share;
+        connectedLineVars[line.ordinal()] += circuit.connectedVars() / share;
+      }
+    }
     double[] currents = new double[3];
     double highest = 0.0;
     double totalWatts = 0.0;
@@ -431,6 +443,10 @@ final class BoardCalculation {
       totalVars += phaseVars[k];
       Double headroomAmps = incomerRating == null ? null : incomerRating - currents[k];
       Double headroomKilowatts = headroomAmps == null ? null : headroomAmps * u0 / 1000.0;
+      Double loadingPercent =
+          incomerRating == null || !(incomerRating > 0)
+              ? null
+              : 100.0 * currents[k] / incomerRating;
       phaseResults.add(
           new PhaseDemand(
               phases[k],
@@ -438,7 +454,9 @@ final class BoardCalculation {
               phaseVars[k],
               currents[k],
               headroomAmps,
-              headroomKilowatts));
+              headroomKilowatts,
+              loadingPercent,
+              Math.hypot(connectedLineWatts[k], connectedLineVars[k]) / u0));
     }
     SupplySystem system =
         context.supply() == null ? SupplySystem.IEC_WYE : context.supply().system();
