@@ -29,6 +29,7 @@ final class ScheduleMatcher {
       Map.ofEntries(
           Map.entry("wayNumber", ImportField.WAY),
           Map.entry("position", ImportField.LINE),
+          Map.entry("location", ImportField.LOCATION),
           Map.entry("description", ImportField.CIRCUIT),
           Map.entry("status", ImportField.STATE),
           Map.entry("lockedForBalancing", ImportField.KEEP_LINE),
