@@ -5,6 +5,7 @@ import com.wayledger.engine.PhasePosition;
 import com.wayledger.site.Site;
 import com.wayledger.site.SiteService;
 import com.wayledger.system.ChangeKind;
+import com.wayledger.system.EnumWords;
 import com.wayledger.system.NotFoundException;
 import com.wayledger.system.RowLocks;
 import com.wayledger.system.RuleViolation;
@@ -57,6 +58,29 @@ public class BoardService {
   @Transactional(readOnly = true)
   public List<Board> onSite(long siteId) {
     return boards.findBySite(siteId);
+  }
+
+  /**
+   * Every circuit on the site's boards that could feed another board, by board and way, for the
+   * board form's "fed from way" choice.
+   */
+  @Transactional(readOnly = true)
+  public List<FeedOption> feedOptions(long siteId) {
+    List<FeedOption> options = new java.util.ArrayList<>();
+    for (Board board : boards.findBySite(siteId)) {
+      for (Circuit circuit : circuits.findByBoard(board.getId())) {
+        options.add(
+            new FeedOption(
+                board.getId(),
+                board.getReference(),
+                circuit.getId(),
+                circuit.getWayNumber(),
+                circuit.getPosition(),
+                circuit.getDescription() == null ? "" : circuit.getDescription(),
+                circuit.getStatus()));
+      }
+    }
+    return options;
   }
 
   /** The site's boards in tree order (each parent before its children), with their depth. */
@@ -202,7 +226,11 @@ public class BoardService {
     List<String> ways =
         circuits.findByBoard(board.getId()).stream()
             .filter(circuit -> circuit.getPosition() != PhasePosition.L1)
-            .map(circuit -> circuit.getWayNumber() + " " + circuit.getPosition().name())
+            .map(
+                circuit ->
+                    circuit.getWayNumber()
+                        + " "
+                        + EnumWords.standard().shortOf(circuit.getPosition()))
             .distinct()
             .toList();
     if (!ways.isEmpty()) {

@@ -5,6 +5,7 @@ import com.wayledger.engine.Phase;
 import com.wayledger.engine.PhasePosition;
 import com.wayledger.engine.WayStatus;
 import com.wayledger.system.ChangeKind;
+import com.wayledger.system.EnumWords;
 import com.wayledger.system.NotFoundException;
 import com.wayledger.system.RowLocks;
 import com.wayledger.system.RuleViolation;
@@ -519,7 +520,7 @@ public class ScheduleService {
           "wayNumber",
           "circuit.position.occupied",
           circuit.getWayNumber(),
-          circuit.getPosition().name());
+          EnumWords.standard().shortOf(circuit.getPosition()));
     }
   }
 }

@@ -141,6 +141,6 @@ public final class CsvWriter {
   }
 
   private static String name(Enum<?> value) {
-    return value == null ? "" : value.name();
+    return value == null ? "" : Codes.word(value);
   }
 }
