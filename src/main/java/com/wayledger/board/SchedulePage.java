@@ -70,6 +70,10 @@ class SchedulePage {
     model.addAttribute("problems", results.problems(boardId));
     model.addAttribute("problemCounts", results.problemCounts(boardId));
     model.addAttribute("boardFindings", results.boardFindings(boardId).orElse(null));
+    model.addAttribute(
+        "findingGroups",
+        FindingGroups.of(
+            results.boardFindings(boardId).orElse(null), FindingGroups.notPassed(null)));
     model.addAttribute("findingSettings", results.findings().settings());
     if (demand != null) {
       model.addAttribute(
