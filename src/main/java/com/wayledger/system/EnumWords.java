@@ -60,6 +60,14 @@ public final class EnumWords {
     return word != null ? word : of(constant);
   }
 
+  /**
+   * A message without arguments, read outside a request (a change-log line, a spreadsheet cell);
+   * null when the bundles lack it.
+   */
+  public String text(String key) {
+    return words.get(key);
+  }
+
   /** Whether the bundles hold words for this constant. */
   public boolean has(Enum<?> constant) {
     return words.containsKey(key(constant));
@@ -129,9 +137,7 @@ public final class EnumWords {
         Properties properties = new Properties();
         properties.load(new InputStreamReader(in, StandardCharsets.UTF_8));
         for (String name : properties.stringPropertyNames()) {
-          if (name.startsWith("enum.")) {
-            words.put(name, properties.getProperty(name));
-          }
+          words.putIfAbsent(name, properties.getProperty(name));
         }
       } catch (IOException e) {
         throw new UncheckedIOException("cannot read the message bundle " + bundle, e);
