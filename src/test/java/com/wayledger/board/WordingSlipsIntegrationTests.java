@@ -57,7 +57,10 @@ class WordingSlipsIntegrationTests {
     // slip: "Searched 215 arrangements"
     String page = page(get("/boards/{id}/balance", board("KB1")).with(viewer()));
     assertThat(page).doesNotContain("arrangements compared").doesNotContain("Searched");
-    assertThat(page).doesNotContain(" moves)").as("no plural after one");
+    assertThat(page).as("no plural after one").doesNotContainPattern("\\b1 moves");
+    assertThat(page.split("<title", -1))
+        .as("one title: the chart's label is not pulled into the page head")
+        .hasSize(2);
   }
 
   @Test
@@ -119,6 +122,25 @@ class WordingSlipsIntegrationTests {
     String sitePage = page(get("/sites/{id}", site()).with(viewer()));
     assertThat(sitePage).doesNotContain("little headroom");
     assertThat(msg("tree.headroom.low")).isEqualTo("◆ near its limit");
+  }
+
+  @Test
+  void aSubBoardNamesTheBoardAndWayThatFeedItNeverAnId() throws Exception {
+    // slips: "fed from board #1", a board form asking for "Circuit id on the parent board"
+    var sub =
+        jdbc.sql(
+                "SELECT b.id, p.reference, c.way_number FROM board b JOIN board p ON p.id ="
+                    + " b.parent_board_id JOIN circuit c ON c.id = b.fed_from_circuit_id ORDER BY b.id")
+            .query((rs, n) -> new Object[] {rs.getLong(1), rs.getString(2), rs.getInt(3)})
+            .list()
+            .get(0);
+    String page = page(get("/boards/{id}", sub[0]).with(viewer()));
+    assertThat(page).contains(sub[1] + ", way " + sub[2]).doesNotContain("board #");
+    String form = page(get("/boards/{id}/edit", sub[0]).with(editor()));
+    assertThat(form).doesNotContain("Circuit id");
+    assertThat(form)
+        .as("the feeding way is picked by its board and way")
+        .containsPattern("<option[^>]*selected[^>]*>" + sub[1] + " way " + sub[2] + " ");
   }
 
   @Test
