@@ -100,7 +100,9 @@ public class SecurityConfig {
                         "/loads/*/edit",
                         "/boards/*/import",
                         "/boards/*/import/**",
-                        "/boards/*/inspections/new")
+                        "/boards/*/inspections/new",
+                        "/boards/*/inspections/import",
+                        "/boards/*/inspections/import/**")
                     .hasRole("EDITOR")
                     .anyRequest()
                     .hasRole("VIEWER"))

@@ -49,6 +49,15 @@ public class SiteGenerations {
         .orElseThrow(() -> new NotFoundException("Site", siteId));
   }
 
+  /** Every site's current generation, by site id, in one query. */
+  public java.util.Map<Long, Long> everySite() {
+    java.util.Map<Long, Long> generations = new java.util.HashMap<>();
+    jdbc.sql("SELECT id, data_generation FROM site")
+        .query((rs, n) -> generations.put(rs.getLong(1), rs.getLong(2)))
+        .list();
+    return generations;
+  }
+
   /** A site and its current generation. */
   public record Stamp(long siteId, long generation) {}
 

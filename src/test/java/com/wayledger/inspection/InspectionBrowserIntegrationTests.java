@@ -220,6 +220,149 @@ class InspectionBrowserIntegrationTests {
     }
   }
 
+  /**
+   * A block copied from a spreadsheet (tab between cells, a line per row) pasted into the first
+   * cell of two rows fills both rows cell by cell; grading and recording then keep and grade what
+   * was pasted. The paste is dispatched as a ClipboardEvent carrying the text, because headless
+   * Chromium has no system clipboard to paste from; the page's own handler does the rest.
+   */
+  @Test
+  void aBlockPastedFromASpreadsheetFillsTwoRowsAndIsGradedWhenRecorded() throws Exception {
+    signIn("demo", "wayledger-demo");
+    browser.findElement(By.linkText("Tallow Lane Works")).click();
+    wait.until(ExpectedConditions.elementToBeClickable(By.linkText("FLAT-2"))).click();
+    wait.until(ExpectedConditions.elementToBeClickable(By.linkText("Inspections"))).click();
+    wait.until(ExpectedConditions.elementToBeClickable(By.id("new-inspection"))).click();
+    WebElement grid = wait.until(ExpectedConditions.presenceOfElementLocated(By.id("results")));
+
+    // two neighbouring rows with the same cells, as a spreadsheet's columns would line up
+    List<WebElement> rows = grid.findElements(By.cssSelector("tbody tr"));
+    int start = -1;
+    for (int i = 0; i + 1 < rows.size() && start < 0; i++) {
+      if (columnsOf(rows.get(i)).equals(columnsOf(rows.get(i + 1)))) {
+        start = i;
+      }
+    }
+    assertThat(start).as("FLAT-2 has two neighbouring rows with the same cells").isNotNegative();
+    List<String> columns = columnsOf(rows.get(start));
+    assertThat(columns).contains("irLe", "irNe", "zs");
+    String firstWay = rows.get(start).findElement(By.cssSelector(".way-label")).getText();
+    String secondWay = rows.get(start + 1).findElement(By.cssSelector(".way-label")).getText();
+
+    Map<String, String> firstRow = new HashMap<>(PASTED);
+    firstRow.put("irNe", "0,5"); // below the 1 MΩ minimum at 500 V: must fail
+    Map<String, String> secondRow = new HashMap<>(PASTED);
+    secondRow.put("zs", "0.55");
+    String block =
+        line(columns, firstRow) + "\r\n" + line(columns, secondRow) + "\r\n"; // as Excel copies
+    WebElement target = rows.get(start).findElement(By.cssSelector("[data-col]"));
+    ((org.openqa.selenium.JavascriptExecutor) browser)
+        .executeScript(
+            "var data = new DataTransfer(); data.setData('text/plain', arguments[1]);"
+                + "arguments[0].focus();"
+                + "arguments[0].dispatchEvent(new ClipboardEvent('paste',"
+                + " {clipboardData: data, bubbles: true, cancelable: true}));",
+            target,
+            block);
+
+    for (String column : columns) {
+      if (!column.equals("rcdDelayed")) {
+        assertThat(cellValue(rows.get(start), column))
+            .as("pasted %s of way %s", column, firstWay)
+            .isEqualTo(shownAs(column, firstRow.get(column)));
+        assertThat(cellValue(rows.get(start + 1), column))
+            .as("pasted %s of way %s", column, secondWay)
+            .isEqualTo(shownAs(column, secondRow.get(column)));
+      }
+    }
+    if (start + 2 < rows.size()) {
+      for (WebElement cell : rows.get(start + 2).findElements(By.cssSelector("input[type=text]"))) {
+        assertThat(cell.getAttribute("value")).as("the row below the block stays blank").isEmpty();
+      }
+    }
+
+    browser.findElement(By.id("grade")).click();
+    wait.until(ExpectedConditions.presenceOfElementLocated(By.id("derived-outcome")));
+    WebElement first = browser.findElement(By.cssSelector("tr[data-row='" + start + "']"));
+    assertThat(cellValue(first, "irNe")).isEqualTo("0,5");
+    // IEC 60364-6 Table 6A / BS 7671 Table 64: at least 1 MΩ at 500 V DC for circuits up to 500 V
+    assertThat(cellClass(first, "irNe")).as("0.5 MΩ N–E graded").contains("fail");
+    assertThat(cellClass(first, "irLe")).as("200 MΩ L–E graded").contains("pass");
+    assertThat(cellValue(first, "zs")).isEqualTo("0.62");
+
+    WebElement confirm = browser.findElement(By.id("confirmedOutcome"));
+    confirm.sendKeys(Keys.SPACE);
+    browser.findElement(By.id("record")).sendKeys(Keys.ENTER);
+    wait.until(ExpectedConditions.elementToBeClickable(By.id("pdf")));
+
+    List<String> recordedFirst = reportRow(firstWay);
+    List<String> recordedSecond = reportRow(secondWay);
+    int irNe = InspectionController.COLUMNS.indexOf("irNe");
+    int irLe = InspectionController.COLUMNS.indexOf("irLe");
+    int zs = InspectionController.COLUMNS.indexOf("zs");
+    assertThat(recordedFirst.get(irNe)).as("stored N–E of way %s", firstWay).isEqualTo("0.5 ✗");
+    assertThat(recordedFirst.get(irLe)).as("stored L–E of way %s", firstWay).isEqualTo("200 ✓");
+    assertThat(recordedSecond.get(irNe)).as("stored N–E of way %s", secondWay).isEqualTo("180 ✓");
+    assertThat(recordedSecond.get(zs)).as("stored Zs of way %s", secondWay).startsWith("0.55");
+  }
+
+  /** What is pasted per column (the polarity and test-button cells take a tick). */
+  private static final Map<String, String> PASTED =
+      Map.ofEntries(
+          Map.entry("r1r2", "0.31"),
+          Map.entry("r2", "0.19"),
+          Map.entry("ringR1", "0.47"),
+          Map.entry("ringRn", "0.48"),
+          Map.entry("ringR2", "0.78"),
+          Map.entry("irLl", ">299"),
+          Map.entry("irLe", "200"),
+          Map.entry("irNe", "180"),
+          Map.entry("polarity", "✓"),
+          Map.entry("zs", "0.62"),
+          Map.entry("rcd1", "24"),
+          Map.entry("rcd5", "11"),
+          Map.entry("rcdButton", "✓"),
+          Map.entry("rcdDelayed", ""));
+
+  private static List<String> columnsOf(WebElement row) {
+    return row.findElements(By.cssSelector("[data-col]")).stream()
+        .map(c -> c.getAttribute("data-col"))
+        .toList();
+  }
+
+  private static String line(List<String> columns, Map<String, String> values) {
+    return String.join("\t", columns.stream().map(c -> values.getOrDefault(c, "")).toList());
+  }
+
+  /** A tick pasted into a select becomes its "ok" option. */
+  private static String shownAs(String column, String pasted) {
+    return column.equals("polarity") || column.equals("rcdButton")
+        ? (pasted.isEmpty() ? "" : "ok")
+        : pasted;
+  }
+
+  private static String cellValue(WebElement row, String column) {
+    return row.findElement(By.cssSelector("[data-col='" + column + "']")).getAttribute("value");
+  }
+
+  private static String cellClass(WebElement row, String column) {
+    return row.findElement(By.xpath(".//td[.//*[@data-col='" + column + "']]"))
+        .getAttribute("class");
+  }
+
+  /** The value cells of a way's row in the recorded report's schedule of test results. */
+  private List<String> reportRow(String way) {
+    WebElement row =
+        browser.findElement(
+            By.xpath(
+                "//h2[normalize-space()='Schedule of test results']/following-sibling::table[1]"
+                    + "//tr[td[1][normalize-space()='"
+                    + way
+                    + "']]"));
+    List<WebElement> cells = row.findElements(By.tagName("td"));
+    return cells.subList(1, cells.size()).stream().map(c -> c.getText().strip()).toList();
+  }
+
   private Path waitForDownload() throws Exception {
     long deadline = System.nanoTime() + PATIENCE.toNanos();
     while (System.nanoTime() < deadline) {
