@@ -127,7 +127,7 @@ class NarrowScreensBrowserIntegrationTests {
       Number viewport = (Number) browser.executeScript("return window.innerHeight;");
       assertThat(factsTop.doubleValue())
           .as("the board's facts start on the first screen (%s px high)", viewport)
-          .isLessThan(viewport.doubleValue() / 2);
+          .isLessThan(viewport.doubleValue() * 2 / 3);
     }
   }
 
