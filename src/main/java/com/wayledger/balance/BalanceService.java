@@ -142,6 +142,17 @@ public class BalanceService {
       }
       CircuitDemand result = byCircuit.get(circuit.id());
       Double amps = result == null || !result.isAssessed() ? null : amps(result, basis, u0);
+      if (circuit.position().isLineToLine()) {
+        // a two-pole, line-to-line circuit occupies its pair of lines and never moves: its line
+        // current |S|/U_LL (U_LL = 2·U0 split-phase, √3·U0 wye) is fixed load on both
+        if (amps != null) {
+          double lineToLine = demand != null && demand.lines() == 2 ? 2.0 : Math.sqrt(3.0);
+          for (Phase phase : circuit.position().phases()) {
+            fixed.merge(phase, amps / lineToLine, Double::sum);
+          }
+        }
+        continue;
+      }
       if (circuit.position() == PhasePosition.THREE_POLE) {
         if (amps != null) {
           for (Phase phase : Phase.values()) {

@@ -11,10 +11,10 @@ import com.wayledger.engine.demand.PhaseDemand;
 import com.wayledger.engine.demand.SiteDemand;
 import com.wayledger.engine.protection.BoardLoading;
 import com.wayledger.engine.protection.CircuitLoading;
-import com.wayledger.engine.protection.ProtectionEngine;
 import com.wayledger.engine.protection.ProtectionSettings;
 import com.wayledger.engine.protection.RecordedMccbSettings;
 import com.wayledger.engine.protection.SiteFindings;
+import com.wayledger.engine.rules.RuleSets;
 import com.wayledger.site.Site;
 import com.wayledger.site.SiteService;
 import com.wayledger.system.SiteGenerations;
@@ -42,6 +42,8 @@ public class AnalysisService {
 
   private final SiteService sites;
   private final BoardRepository boards;
+  private final DwellingRepository dwellings;
+  private final MeasuredDemandRepository measured;
   private final MethodLibrary methodLibrary;
   private final SiteGenerations generations;
   private final AnalysisCache kept;
@@ -51,12 +53,16 @@ public class AnalysisService {
   public AnalysisService(
       SiteService sites,
       BoardRepository boards,
+      DwellingRepository dwellings,
+      MeasuredDemandRepository measured,
       MethodLibrary methodLibrary,
       ObjectProvider<SiteGenerations> generations,
       ObjectProvider<PlatformTransactionManager> transactions,
       @Value("${wayledger.analysis.kept-sites:64}") int keptSites) {
     this.sites = sites;
     this.boards = boards;
+    this.dwellings = dwellings;
+    this.measured = measured;
     this.methodLibrary = methodLibrary;
     // Without a database (web slice tests) nothing is kept: every read computes.
     this.generations = generations.getIfAvailable();
@@ -112,8 +118,8 @@ public class AnalysisService {
     Site site = sites.get(siteId);
     List<Board> onSite = boards.findBySite(siteId);
     onSite.forEach(board -> board.getCircuits().forEach(circuit -> circuit.getLoads().size()));
-    return analyse(
-        ScheduleMapper.toSpec(site, onSite), methods(), ScheduleMapper.mccbSettingsOf(onSite));
+    SiteSpec spec = ScheduleMapper.toSpec(site, onSite);
+    return analyse(spec, ScheduleMapper.mccbSettingsOf(onSite));
   }
 
   /**
@@ -153,7 +159,7 @@ public class AnalysisService {
    * behind it, pass their settings with {@link #analyse(SiteSpec, RecordedMccbSettings)}.
    */
   public SiteAnalysis analyse(SiteSpec spec) {
-    return analyse(spec, methods(), RecordedMccbSettings.NONE);
+    return analyse(spec, RecordedMccbSettings.NONE);
   }
 
   /**
@@ -161,7 +167,21 @@ public class AnalysisService {
    * ScheduleMapper.mccbSettingsOf).
    */
   public SiteAnalysis analyse(SiteSpec spec, RecordedMccbSettings recordedMccbSettings) {
-    return analyse(spec, methods(), recordedMccbSettings);
+    // the stored site's dwelling inputs and recorded demands go with every analysis of it (a
+    // balancing plan, an export), so that each reads the same NEC figures as the board page
+    Map<Long, com.wayledger.engine.dwelling.DwellingInputs> inputs = new HashMap<>();
+    dwellings
+        .findBySite(spec.id())
+        .forEach(record -> inputs.put(record.getBoardId(), record.inputs()));
+    Map<Long, List<com.wayledger.engine.dwelling.MeasuredMaximumDemand>> records = new HashMap<>();
+    measured
+        .findBySiteIdOrderByPeriodEndDescIdDesc(spec.id())
+        .forEach(
+            record ->
+                records
+                    .computeIfAbsent(record.getBoardId(), k -> new java.util.ArrayList<>())
+                    .add(record.toEngine()));
+    return analyse(spec, methods(), recordedMccbSettings, inputs, records);
   }
 
   /** Both engines on an engine input with no MCCB settings recorded. */
@@ -172,15 +192,44 @@ public class AnalysisService {
   /** Both engines on an engine input; the demand engine's currents feed the protection checks. */
   public static SiteAnalysis analyse(
       SiteSpec spec, DiversityMethodCatalog methods, RecordedMccbSettings recordedMccbSettings) {
-    SiteDemand demand = DemandEngine.evaluate(spec, methods);
+    return analyse(spec, methods, recordedMccbSettings, Map.of(), Map.of());
+  }
+
+  /**
+   * Both engines on an engine input, with the NEC dwelling inputs of its dwelling boards (read by
+   * the NEC diversity methods and the Article 220 worksheets) and the maximum demands recorded for
+   * its boards (NEC 220.87).
+   */
+  public static SiteAnalysis analyse(
+      SiteSpec spec,
+      DiversityMethodCatalog methods,
+      RecordedMccbSettings recordedMccbSettings,
+      Map<Long, com.wayledger.engine.dwelling.DwellingInputs> dwellingInputs,
+      Map<Long, List<com.wayledger.engine.dwelling.MeasuredMaximumDemand>> measuredDemands) {
+    Map<Long, com.wayledger.engine.demand.DwellingParameters> parameters = new HashMap<>();
+    dwellingInputs.forEach(
+        (boardId, in) ->
+            parameters.put(
+                boardId,
+                new com.wayledger.engine.demand.DwellingParameters(
+                    in.floorAreaSquareFeet(), in.smallApplianceCircuits(), in.laundryCircuits())));
+    SiteDemand demand =
+        DemandEngine.evaluate(
+            spec, methods, com.wayledger.engine.demand.DemandSettings.DEFAULTS, parameters);
     SiteFindings findings =
-        ProtectionEngine.check(
-            spec,
-            circuitLoadings(demand),
-            boardLoadings(demand),
-            recordedMccbSettings,
-            ProtectionSettings.DEFAULTS);
-    return new SiteAnalysis(spec, demand, findings);
+        RuleSets.of(spec.ruleSetKey())
+            .check(
+                spec,
+                circuitLoadings(demand),
+                boardLoadings(demand),
+                recordedMccbSettings,
+                ProtectionSettings.DEFAULTS);
+    Map<Long, List<com.wayledger.engine.dwelling.Worksheet>> worksheets =
+        dwellingInputs.isEmpty() && measuredDemands.isEmpty()
+            ? Map.of()
+            : com.wayledger.engine.dwelling.DwellingSite.worksheets(
+                spec, dwellingInputs, measuredDemands);
+    return new SiteAnalysis(spec, demand, findings, worksheets);
   }
 
   private static Map<Long, CircuitLoading> circuitLoadings(SiteDemand demand) {
@@ -207,7 +256,7 @@ public class AnalysisService {
               board.boardId(),
               currents,
               board.unbalancePercent(),
-              board.lines() == 3 ? board.neutralCurrentAmps() : null));
+              board.lines() >= 2 ? board.neutralCurrentAmps() : null));
     }
     return loadings;
   }

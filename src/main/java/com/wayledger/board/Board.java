@@ -179,6 +179,20 @@ public class Board {
     measuredFaultCurrentKiloAmps = form.measuredFaultCurrentKiloAmps();
   }
 
+  /**
+   * Number of lines of this board on its site's supply: 2 on a split-phase (120/240 V) site, else 1
+   * or 3 as its phases.
+   */
+  public int lineCount() {
+    return site.getSupplySystem().lineCount(phases);
+  }
+
+  /** The positions a circuit on this board may take (two-pole ones on NEC sites only). */
+  public java.util.List<com.wayledger.engine.PhasePosition> getPositions() {
+    return com.wayledger.engine.PhasePosition.onBoardWith(
+        lineCount(), !com.wayledger.engine.SiteSpec.DEFAULT_RULE_SET_KEY.equals(site.getRuleSet()));
+  }
+
   public boolean isThreePhase() {
     return phases == 3;
   }

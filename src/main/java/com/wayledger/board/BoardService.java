@@ -5,7 +5,6 @@ import com.wayledger.engine.PhasePosition;
 import com.wayledger.site.Site;
 import com.wayledger.site.SiteService;
 import com.wayledger.system.ChangeKind;
-import com.wayledger.system.EnumWords;
 import com.wayledger.system.NotFoundException;
 import com.wayledger.system.RowLocks;
 import com.wayledger.system.RuleViolation;
@@ -251,11 +250,7 @@ public class BoardService {
     List<String> ways =
         circuits.findByBoard(board.getId()).stream()
             .filter(circuit -> circuit.getPosition() != PhasePosition.L1)
-            .map(
-                circuit ->
-                    circuit.getWayNumber()
-                        + " "
-                        + EnumWords.standard().shortOf(circuit.getPosition()))
+            .map(circuit -> circuit.getWayNumber() + " " + circuit.getPosition().label())
             .distinct()
             .toList();
     if (!ways.isEmpty()) {

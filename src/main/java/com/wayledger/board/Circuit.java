@@ -1,5 +1,6 @@
 package com.wayledger.board;
 
+import com.wayledger.engine.CircuitLocation;
 import com.wayledger.engine.PhasePosition;
 import com.wayledger.engine.WayStatus;
 import jakarta.persistence.AttributeOverride;
@@ -38,8 +39,12 @@ public class Circuit {
 
   private int wayNumber;
 
+  /** The position, or for a two-pole circuit the first of its two lines (see lineToLine). */
   @Enumerated(EnumType.STRING)
   private PhasePosition position;
+
+  /** Whether the circuit is two-pole, line to line, from {@link #position} to the next line. */
+  private boolean lineToLine;
 
   private String description;
 
@@ -49,6 +54,9 @@ public class Circuit {
   private boolean lockedForBalancing;
 
   private boolean ringFinal;
+
+  @Enumerated(EnumType.STRING)
+  private CircuitLocation location;
 
   @Embedded
   @AttributeOverrides({
@@ -114,11 +122,12 @@ public class Circuit {
   /** Copies the circuit's own fields (not its loads) from a validated form. */
   void apply(CircuitForm form) {
     wayNumber = form.wayNumber();
-    position = form.position();
+    place(form.position());
     description = form.description().strip();
     status = form.status();
     lockedForBalancing = Boolean.TRUE.equals(form.lockedForBalancing());
     ringFinal = Boolean.TRUE.equals(form.ringFinal());
+    location = form.location();
     device = status == WayStatus.EMPTY ? null : form.deviceDetails();
     cable = status == WayStatus.IN_USE ? form.cableDetails() : null;
     measuredLoopImpedanceOhms = form.measuredLoopImpedanceOhms();
@@ -126,7 +135,13 @@ public class Circuit {
 
   void moveTo(int newWayNumber, PhasePosition newPosition) {
     wayNumber = newWayNumber;
-    position = newPosition;
+    place(newPosition);
+  }
+
+  /** Stores a two-pole position as its first line with the line-to-line mark (migration V13). */
+  private void place(PhasePosition newPosition) {
+    lineToLine = newPosition != null && newPosition.isLineToLine();
+    position = lineToLine ? PhasePosition.on(newPosition.fromLine()) : newPosition;
   }
 
   void replaceDevice(DeviceDetails newDevice) {
@@ -143,10 +158,10 @@ public class Circuit {
    * board.
    */
   public String positionLabel() {
-    if (!board.isThreePhase()) {
+    if (board.lineCount() == 1) {
       return Integer.toString(wayNumber);
     }
-    return wayNumber + " " + (position == PhasePosition.THREE_POLE ? "L1–L3" : position.name());
+    return wayNumber + " " + getPosition().label();
   }
 
   public Long getId() {
@@ -162,7 +177,9 @@ public class Circuit {
   }
 
   public PhasePosition getPosition() {
-    return position;
+    return lineToLine && position != null && position.isSinglePole()
+        ? PhasePosition.twoPoleFrom(com.wayledger.engine.Phase.valueOf(position.name()))
+        : position;
   }
 
   public String getDescription() {
@@ -180,6 +197,11 @@ public class Circuit {
   /** Whether the cable is a ring final circuit: it leaves the board and returns to it. */
   public boolean isRingFinal() {
     return ringFinal;
+  }
+
+  /** Where the circuit's equipment is, for the residual-current rules; null when not recorded. */
+  public CircuitLocation getLocation() {
+    return location;
   }
 
   public DeviceDetails getDevice() {
@@ -200,5 +222,27 @@ public class Circuit {
 
   public List<LoadItem> getLoads() {
     return loads;
+  }
+
+  /**
+   * The circuit's edition as an export carries it: its own version and a digest of its load lines'
+   * ids and versions (load lines carry their own versions, so an edit of a load does not move the
+   * circuit's). A schedule brought back from a spreadsheet is refused for a circuit whose edition
+   * is no longer the one written in the file, so an edit made since the export is never
+   * overwritten.
+   */
+  public String recordVersion() {
+    StringBuilder lines = new StringBuilder();
+    for (LoadItem load : loads) {
+      lines.append(load.getId()).append('.').append(load.getVersion()).append(';');
+    }
+    try {
+      byte[] digest =
+          java.security.MessageDigest.getInstance("SHA-256")
+              .digest(lines.toString().getBytes(java.nio.charset.StandardCharsets.UTF_8));
+      return version + "-" + java.util.HexFormat.of().formatHex(digest, 0, 3);
+    } catch (java.security.NoSuchAlgorithmException impossible) {
+      throw new IllegalStateException(impossible);
+    }
   }
 }

@@ -1,5 +1,6 @@
 package com.wayledger.board;
 
+import com.wayledger.engine.CircuitLocation;
 import com.wayledger.engine.ConductorMaterial;
 import com.wayledger.engine.DeviceKind;
 import com.wayledger.engine.InstallationMethod;
@@ -58,7 +59,119 @@ public record CircuitForm(
     Boolean ringFinal,
     @Positive @DecimalMax("63000") Double deviceOverloadSettingAmps,
     @Positive @DecimalMax("63000") Double deviceInstantaneousSettingAmps,
-    @DecimalMin("1") @DecimalMax("50") Double loadStartUpMultiple) {
+    @DecimalMin("1") @DecimalMax("50") Double loadStartUpMultiple,
+    CircuitLocation location) {
+
+  /** A row whose location is not recorded: the argument list from before locations. */
+  public CircuitForm(
+      Integer wayNumber,
+      PhasePosition position,
+      String description,
+      WayStatus status,
+      Boolean lockedForBalancing,
+      DeviceKind deviceKind,
+      TripCurve deviceCurve,
+      Double deviceRatingAmps,
+      Integer devicePoles,
+      Double deviceBreakingCapacityKiloAmps,
+      Double deviceResidualMilliAmps,
+      RcdType deviceRcdType,
+      Double cableLineCsa,
+      Double cableCpcCsa,
+      ConductorMaterial cableMaterial,
+      Insulation cableInsulation,
+      Double cableLengthMetres,
+      InstallationMethod cableInstallationMethod,
+      Double cableAmbientCelsius,
+      Integer cableGroupedCircuits,
+      Integer cableThermalInsulationMm,
+      Double measuredLoopImpedanceOhms,
+      String loadDescription,
+      LoadCategory loadCategory,
+      Integer loadQuantity,
+      Double loadRatingValue,
+      RatingUnit loadRatingUnit,
+      Double loadPowerFactor,
+      Long version,
+      Boolean ringFinal,
+      Double deviceOverloadSettingAmps,
+      Double deviceInstantaneousSettingAmps,
+      Double loadStartUpMultiple) {
+    this(
+        wayNumber,
+        position,
+        description,
+        status,
+        lockedForBalancing,
+        deviceKind,
+        deviceCurve,
+        deviceRatingAmps,
+        devicePoles,
+        deviceBreakingCapacityKiloAmps,
+        deviceResidualMilliAmps,
+        deviceRcdType,
+        cableLineCsa,
+        cableCpcCsa,
+        cableMaterial,
+        cableInsulation,
+        cableLengthMetres,
+        cableInstallationMethod,
+        cableAmbientCelsius,
+        cableGroupedCircuits,
+        cableThermalInsulationMm,
+        measuredLoopImpedanceOhms,
+        loadDescription,
+        loadCategory,
+        loadQuantity,
+        loadRatingValue,
+        loadRatingUnit,
+        loadPowerFactor,
+        version,
+        ringFinal,
+        deviceOverloadSettingAmps,
+        deviceInstantaneousSettingAmps,
+        loadStartUpMultiple,
+        null);
+  }
+
+  /** The same row at a location (null: not recorded). */
+  public CircuitForm at(CircuitLocation where) {
+    return new CircuitForm(
+        wayNumber,
+        position,
+        description,
+        status,
+        lockedForBalancing,
+        deviceKind,
+        deviceCurve,
+        deviceRatingAmps,
+        devicePoles,
+        deviceBreakingCapacityKiloAmps,
+        deviceResidualMilliAmps,
+        deviceRcdType,
+        cableLineCsa,
+        cableCpcCsa,
+        cableMaterial,
+        cableInsulation,
+        cableLengthMetres,
+        cableInstallationMethod,
+        cableAmbientCelsius,
+        cableGroupedCircuits,
+        cableThermalInsulationMm,
+        measuredLoopImpedanceOhms,
+        loadDescription,
+        loadCategory,
+        loadQuantity,
+        loadRatingValue,
+        loadRatingUnit,
+        loadPowerFactor,
+        version,
+        ringFinal,
+        deviceOverloadSettingAmps,
+        deviceInstantaneousSettingAmps,
+        loadStartUpMultiple,
+        where);
+  }
 
   /** A row without a start-up multiple for its first load: the argument list from before. */
   public CircuitForm(
@@ -334,7 +447,9 @@ public record CircuitForm(
         version,
         ringFinal,
         overloadSettingAmps,
-        instantaneousSettingAmps);
+        instantaneousSettingAmps,
+        null,
+        location);
   }
 
   /** The one place the withers copy the whole row, with the fields they may change. */
@@ -376,7 +491,8 @@ public record CircuitForm(
         ring,
         overloadSettingAmps,
         instantaneousSettingAmps,
-        loadStartUpMultiple);
+        loadStartUpMultiple,
+        location);
   }
 
   /**
@@ -453,7 +569,9 @@ public record CircuitForm(
         circuit.getVersion(),
         circuit.isRingFinal(),
         hasDevice ? device.getOverloadSettingAmps() : null,
-        hasDevice ? device.getInstantaneousSettingAmps() : null);
+        hasDevice ? device.getInstantaneousSettingAmps() : null,
+        null,
+        circuit.getLocation());
   }
 
   DeviceDetails deviceDetails() {
@@ -508,7 +626,8 @@ public record CircuitForm(
   /**
    * The row's fields that differ in {@code other}, blank text and unticked boxes counting as none.
    */
-  java.util.List<com.wayledger.system.RecordDiff.FieldChange> changedFields(CircuitForm other) {
+  public java.util.List<com.wayledger.system.RecordDiff.FieldChange> changedFields(
+      CircuitForm other) {
     return com.wayledger.system.RecordDiff.between(other, this, NOT_THE_ROW).stream()
         .filter(change -> !(isUnset(change.yours()) && isUnset(change.theirs())))
         .toList();

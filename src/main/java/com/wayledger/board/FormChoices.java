@@ -33,8 +33,9 @@ final class FormChoices {
   /** Everything the circuit editor offers: positions, states, devices, cables and loads. */
   static void addCircuit(Model model) {
     addDeviceAndCable(model);
-    model.addAttribute("positions", PhasePosition.values());
+    model.addAttribute("positions", PhasePosition.LINE_TO_NEUTRAL_OR_THREE_POLE);
     model.addAttribute("statuses", WayStatus.values());
+    model.addAttribute("locations", com.wayledger.engine.CircuitLocation.values());
     model.addAttribute("categories", LoadCategory.values());
     model.addAttribute("ratingUnits", RatingUnit.values());
   }

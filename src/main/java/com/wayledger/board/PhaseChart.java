@@ -1,7 +1,6 @@
 package com.wayledger.board;
 
 import com.wayledger.engine.Phase;
-import com.wayledger.engine.PhasePosition;
 import com.wayledger.engine.demand.BoardDemand;
 import com.wayledger.engine.demand.CircuitDemand;
 import com.wayledger.engine.demand.PhaseDemand;
@@ -57,10 +56,18 @@ public record PhaseChart(
       if (!circuit.isAssessed() || circuit.position() == null) {
         continue;
       }
-      int lines = circuit.position() == PhasePosition.THREE_POLE ? 3 : 1;
+      double[] watts = new double[3];
+      double[] vars = new double[3];
+      com.wayledger.engine.LinePhasors.add(
+          com.wayledger.engine.LinePhasors.geometryOf(demand.lines()),
+          circuit.position(),
+          circuit.connectedWatts(),
+          circuit.connectedVars(),
+          watts,
+          vars);
       for (Phase phase : circuit.position().phases()) {
-        power.get(phase)[0] += circuit.connectedWatts() / lines;
-        power.get(phase)[1] += circuit.connectedVars() / lines;
+        power.get(phase)[0] += watts[phase.ordinal()];
+        power.get(phase)[1] += vars[phase.ordinal()];
       }
     }
     Map<Phase, Double> amps = new EnumMap<>(Phase.class);
@@ -71,7 +78,7 @@ public record PhaseChart(
 
   static PhaseChart of(BoardDemand demand, Double incomerRatingAmps) {
     Map<Phase, Double> connected = connectedAmps(demand);
-    List<Phase> lines = demand.lines() == 3 ? List.of(Phase.values()) : List.of(Phase.L1);
+    List<Phase> lines = List.of(Phase.values()).subList(0, Math.max(1, demand.lines()));
     double largest = incomerRatingAmps == null ? 0.0 : incomerRatingAmps;
     for (Phase phase : lines) {
       largest = Math.max(largest, Math.max(connected.get(phase), demandOf(demand, phase)));

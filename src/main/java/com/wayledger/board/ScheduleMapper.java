@@ -33,7 +33,12 @@ public final class ScheduleMapper {
     List<BoardSpec> boardSpecs =
         boards.stream().map(board -> toSpec(board, childByFeedingCircuit)).toList();
     return new SiteSpec(
-        site.getId(), site.getName(), supplyOf(site), site.getDefaultDiversityMethod(), boardSpecs);
+        site.getId(),
+        site.getName(),
+        supplyOf(site),
+        site.getDefaultDiversityMethod(),
+        boardSpecs,
+        site.getRuleSet());
   }
 
   /**
@@ -89,12 +94,12 @@ public final class ScheduleMapper {
                                           circuit.loads(),
                                           circuit.feedsBoardId(),
                                           circuit.measuredLoopImpedanceOhms(),
-                                          circuit.ringFinal());
+                                          circuit.ringFinal(),
+                                          circuit.location());
                                 })
                             .toList()))
             .toList();
-    return new SiteSpec(
-        site.id(), site.name(), site.supply(), site.defaultDiversityMethodKey(), boards);
+    return site.withBoards(boards);
   }
 
   public static SupplySpec supplyOf(Site site) {
@@ -105,7 +110,8 @@ public final class ScheduleMapper {
         site.getFrequencyHertz(),
         site.getExternalLoopImpedanceOhms(),
         site.getProspectiveFaultCurrentKiloAmps(),
-        site.getSupplyFuseRatingAmps());
+        site.getSupplyFuseRatingAmps(),
+        site.getSupplySystem());
   }
 
   // --- change log (loadlog) support: snapshots are engine records, so a replay maps nothing twice
@@ -200,7 +206,7 @@ public final class ScheduleMapper {
                             ? Inheritance.startUpMultiple(load, board)
                             : load.getStartUpSurgeMultiple()))
             .toList();
-    int poles = circuit.getPosition().isSinglePole() ? 1 : 3;
+    int poles = circuit.getPosition().poles();
     return new CircuitSpec(
         circuit.getId(),
         circuit.getWayNumber(),
@@ -215,7 +221,8 @@ public final class ScheduleMapper {
         loads,
         feedsBoardId,
         circuit.getMeasuredLoopImpedanceOhms(),
-        circuit.isRingFinal());
+        circuit.isRingFinal(),
+        circuit.getLocation());
   }
 
   private static LoadSpec toSpec(LoadItem load, Double startUpMultiple) {

@@ -89,6 +89,16 @@ class SchedulePage {
         FindingGroups.of(
             results.boardFindings(boardId).orElse(null), FindingGroups.notPassed(null)));
     model.addAttribute("findingSettings", results.findings().settings());
+    model.addAttribute("worksheets", results.dwellingWorksheets(boardId));
+    results.spec().boards().stream()
+        .filter(spec -> spec.id() == boardId)
+        .findFirst()
+        .ifPresent(
+            spec ->
+                model.addAttribute(
+                    "dividingVolts",
+                    com.wayledger.engine.dwelling.DwellingSite.dividingVolts(
+                        spec, results.spec().supply().nominalVoltageToEarthVolts())));
     if (demand != null) {
       model.addAttribute(
           "phaseChart",

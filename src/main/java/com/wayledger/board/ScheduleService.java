@@ -5,7 +5,6 @@ import com.wayledger.engine.Phase;
 import com.wayledger.engine.PhasePosition;
 import com.wayledger.engine.WayStatus;
 import com.wayledger.system.ChangeKind;
-import com.wayledger.system.EnumWords;
 import com.wayledger.system.NotFoundException;
 import com.wayledger.system.RowLocks;
 import com.wayledger.system.RuleViolation;
@@ -241,6 +240,128 @@ public class ScheduleService {
             reason));
   }
 
+  /**
+   * Applies edits to many circuits of one board as one change (a schedule brought back from a
+   * spreadsheet): circuits added, changed (their own fields and their load lines, line by line) and
+   * removed, all of them or none, recorded as one change-log entry of kind {@link
+   * ChangeKind#IMPORT} whose snapshots list the circuits before (changed and removed) and after
+   * (added and changed). Refused as stale when a circuit's edition is no longer the one the edit
+   * was made from, and by the usual schedule rules (one circuit per position, ways within the
+   * board, a device wherever the position is not empty).
+   *
+   * @return the number of circuits added, changed and removed
+   */
+  @Transactional
+  public int[] applyEdits(
+      long boardId, java.util.List<CircuitEdit> edits, String summary, String reason) {
+    Board board = lockedBoard(boardId, true);
+    java.util.List<Circuit> changed = new java.util.ArrayList<>();
+    java.util.List<CircuitEdit> changes = new java.util.ArrayList<>();
+    java.util.List<Circuit> removed = new java.util.ArrayList<>();
+    for (CircuitEdit edit : edits) {
+      if (edit.isAdded()) {
+        continue;
+      }
+      Circuit circuit = circuit(edit.circuitId());
+      if (!circuit.getBoard().getId().equals(boardId)) {
+        throw new NotFoundException("Circuit", edit.circuitId());
+      }
+      if (edit.expectedVersion() != null
+          && !edit.expectedVersion().equals(circuit.recordVersion())) {
+        throw new StaleEditException(
+            "Circuit " + circuit.getDescription(), CircuitForm.of(circuit));
+      }
+      if (edit.isRemoved()) {
+        removed.add(circuit);
+      } else {
+        changed.add(circuit);
+        changes.add(edit);
+      }
+    }
+    java.util.List<com.wayledger.engine.CircuitSpec> before = new java.util.ArrayList<>();
+    changed.forEach(circuit -> before.add(snapshot(circuit)));
+    removed.forEach(circuit -> before.add(snapshot(circuit)));
+    // free every position that moves or goes before taking any, so that two circuits may swap
+    for (Circuit circuit : changed) {
+      jdbc.sql("DELETE FROM way_slot WHERE circuit_id = ?").param(circuit.getId()).update();
+    }
+    for (Circuit circuit : removed) {
+      jdbc.sql("DELETE FROM way_slot WHERE circuit_id = ?").param(circuit.getId()).update();
+      jdbc.sql("UPDATE board SET fed_from_circuit_id = NULL WHERE fed_from_circuit_id = ?")
+          .param(circuit.getId())
+          .update();
+      board.getCircuits().remove(circuit);
+      circuits.delete(circuit);
+    }
+    java.util.List<Circuit> touched = new java.util.ArrayList<>();
+    for (int i = 0; i < changed.size(); i++) {
+      Circuit circuit = changed.get(i);
+      CircuitEdit edit = changes.get(i);
+      checkCircuitRules(board, edit.circuit(), circuit.getId());
+      checkLoads(edit);
+      circuit.apply(edit.circuit());
+      replaceLoads(circuit, edit.loads());
+      occupy(board, circuit);
+      touched.add(circuit);
+    }
+    int added = 0;
+    for (CircuitEdit edit : edits) {
+      if (!edit.isAdded()) {
+        continue;
+      }
+      checkCircuitRules(board, edit.circuit(), null);
+      checkLoads(edit);
+      Circuit circuit = new Circuit(board);
+      circuit.apply(edit.circuit());
+      edit.loads().forEach(load -> circuit.addLoad(new LoadItem(load)));
+      circuits.save(circuit);
+      occupy(board, circuit);
+      touched.add(circuit);
+      added++;
+    }
+    java.util.List<com.wayledger.engine.CircuitSpec> after =
+        touched.stream().map(this::snapshot).toList();
+    events.publishEvent(
+        new ScheduleChanged(
+            board.getSite().getId(),
+            board.getId(),
+            null,
+            ChangeKind.IMPORT,
+            summary,
+            before,
+            after,
+            reason));
+    return new int[] {added, changed.size(), removed.size()};
+  }
+
+  private void checkLoads(CircuitEdit edit) {
+    if (!edit.loads().isEmpty() && edit.circuit().status() != WayStatus.IN_USE) {
+      throw new RuleViolation("loads", "load.circuit.notInUse");
+    }
+    for (LoadForm load : edit.loads()) {
+      Set<ConstraintViolation<LoadForm>> problems = validator.validate(load);
+      if (!problems.isEmpty()) {
+        throw new RuleViolation("loads", "load.invalid", problems.iterator().next().getMessage());
+      }
+    }
+  }
+
+  /** The circuit's load lines made equal to {@code wanted}, line by line, keeping their ids. */
+  private void replaceLoads(Circuit circuit, java.util.List<LoadForm> wanted) {
+    java.util.List<LoadItem> stored = new java.util.ArrayList<>(circuit.getLoads());
+    for (int i = 0; i < Math.max(stored.size(), wanted.size()); i++) {
+      if (i >= wanted.size()) {
+        circuit.getLoads().remove(stored.get(i));
+      } else if (i >= stored.size()) {
+        LoadItem load = new LoadItem(wanted.get(i));
+        circuit.addLoad(load);
+        loads.save(load);
+      } else if (!LoadForm.of(stored.get(i)).equals(wanted.get(i))) {
+        stored.get(i).apply(wanted.get(i));
+      }
+    }
+  }
+
   /** Deletes a circuit with its loads; returns the id of the board it was on. */
   @Transactional
   public long deleteCircuit(long circuitId) {
@@ -465,8 +586,12 @@ public class ScheduleService {
     if (form.wayNumber() > board.getWayCount()) {
       throw new RuleViolation("wayNumber", "circuit.way.beyondBoard", board.getWayCount());
     }
-    if (!board.isThreePhase() && form.position() != PhasePosition.L1) {
-      throw new RuleViolation("position", "circuit.position.singlePhaseBoard");
+    if (!board.getPositions().contains(form.position())) {
+      throw new RuleViolation(
+          "position",
+          board.lineCount() == 1
+              ? "circuit.position.singlePhaseBoard"
+              : "circuit.position.notOnThisBoard");
     }
     if (form.status() != WayStatus.EMPTY && form.deviceKind() == null) {
       throw new RuleViolation("deviceKind", "circuit.device.required");
@@ -537,7 +662,7 @@ public class ScheduleService {
           "wayNumber",
           "circuit.position.occupied",
           circuit.getWayNumber(),
-          EnumWords.standard().shortOf(circuit.getPosition()));
+          circuit.getPosition().label());
     }
   }
 }

@@ -21,7 +21,28 @@ import java.util.Optional;
  * input it was computed from, the demand on every circuit, phase and board, and the protection
  * findings.
  */
-public record SiteAnalysis(SiteSpec spec, SiteDemand demand, SiteFindings findings) {
+public record SiteAnalysis(
+    SiteSpec spec,
+    SiteDemand demand,
+    SiteFindings findings,
+    Map<Long, List<com.wayledger.engine.dwelling.Worksheet>> dwellingWorksheets) {
+
+  public SiteAnalysis {
+    dwellingWorksheets = Map.copyOf(dwellingWorksheets);
+  }
+
+  /** An analysis with no NEC dwelling worksheets (no dwelling inputs or recorded demands). */
+  public SiteAnalysis(SiteSpec spec, SiteDemand demand, SiteFindings findings) {
+    this(spec, demand, findings, Map.of());
+  }
+
+  /**
+   * The NEC Article 220 worksheets of a board (standard method, neutral, optional, addition,
+   * recorded maximum demand), in that order; empty when the board has none.
+   */
+  public List<com.wayledger.engine.dwelling.Worksheet> dwellingWorksheets(long boardId) {
+    return dwellingWorksheets.getOrDefault(boardId, List.of());
+  }
 
   public BoardDemand boardDemand(long boardId) {
     return demand.board(boardId);

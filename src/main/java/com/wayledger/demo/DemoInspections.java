@@ -14,6 +14,7 @@ import com.wayledger.inspection.InspectionSheet;
 import com.wayledger.inspection.SheetRow;
 import com.wayledger.site.Site;
 import com.wayledger.site.SiteService;
+import com.wayledger.system.EffectiveDate;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -39,6 +40,10 @@ class DemoInspections implements ApplicationRunner {
   static final String BOARD = "FLAT-1";
   static final String EARLIER = "2022-05-12";
   static final String LATER = "2025-06-03";
+
+  /** The day the dishwasher went onto the kitchen radial, between the two inspections. */
+  static final java.time.LocalDate DISHWASHER_ADDED = java.time.LocalDate.of(2024, 1, 22);
+
   static final String INSPECTOR = "Morven Tallis (invented)";
 
   private static final Logger LOG = LoggerFactory.getLogger(DemoInspections.class);
@@ -110,19 +115,22 @@ class DemoInspections implements ApplicationRunner {
         .findFirst()
         .ifPresent(
             kitchen ->
-                schedule.addLoad(
-                    kitchen.circuitId(),
-                    new LoadForm(
-                        "Dishwasher",
-                        LoadCategory.FIXED_APPLIANCE,
-                        1,
-                        1800.0,
-                        RatingUnit.W,
-                        0.95,
-                        null,
-                        null,
-                        false),
-                    "Tenant's dishwasher plugged into the kitchen radial (invented)"));
+                EffectiveDate.during(
+                    DISHWASHER_ADDED,
+                    () ->
+                        schedule.addLoad(
+                            kitchen.circuitId(),
+                            new LoadForm(
+                                "Dishwasher",
+                                LoadCategory.FIXED_APPLIANCE,
+                                1,
+                                1800.0,
+                                RatingUnit.W,
+                                0.95,
+                                null,
+                                null,
+                                false),
+                            "Tenant's dishwasher plugged into the kitchen radial (invented)")));
 
     record(
         boardId,

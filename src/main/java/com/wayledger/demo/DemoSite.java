@@ -10,6 +10,7 @@ import com.wayledger.board.Circuit;
 import com.wayledger.board.CircuitForm;
 import com.wayledger.board.LoadForm;
 import com.wayledger.board.ScheduleService;
+import com.wayledger.engine.CircuitLocation;
 import com.wayledger.engine.ConductorMaterial;
 import com.wayledger.engine.DeviceKind;
 import com.wayledger.engine.EarthingSystem;
@@ -24,6 +25,8 @@ import com.wayledger.engine.WayStatus;
 import com.wayledger.site.Site;
 import com.wayledger.site.SiteForm;
 import com.wayledger.site.SiteService;
+import com.wayledger.system.EffectiveDate;
+import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
 import org.slf4j.Logger;
@@ -52,6 +55,15 @@ class DemoSite implements SmartLifecycle {
   static final String VIEWER_PASSWORD = "wayledger-visit";
 
   private static final Logger LOG = LoggerFactory.getLogger(DemoSite.class);
+
+  /** The day the installation was completed (invented): the site's first log entries. */
+  static final LocalDate INSTALLED = LocalDate.of(2019, 5, 14);
+
+  /** Later additions (invented days), back-dated in the log to the day each was fitted. */
+  static final LocalDate BAKERY_EXTENDED = LocalDate.of(2021, 3, 9);
+
+  static final LocalDate SHOP_REFITTED = LocalDate.of(2023, 6, 20);
+  static final LocalDate YARD_AND_FRYER = LocalDate.of(2025, 2, 11);
 
   private final SiteService sites;
   private final BoardService boards;
@@ -114,7 +126,12 @@ class DemoSite implements SmartLifecycle {
     if (sites.all().stream().anyMatch(site -> site.getName().equals(SITE_NAME))) {
       return;
     }
-    transaction.executeWithoutResult(status -> load());
+    EffectiveDate.set(INSTALLED);
+    try {
+      transaction.executeWithoutResult(status -> load());
+    } finally {
+      EffectiveDate.set(null);
+    }
     LOG.info("Loaded the demo site '{}'.", SITE_NAME);
   }
 
@@ -353,6 +370,8 @@ class DemoSite implements SmartLifecycle {
                 1.0,
                 null));
     landlordCircuits(landlord);
+
+    laterYears(bakery, landlord);
   }
 
   private void bakeryCircuits(Board kb) {
@@ -598,6 +617,15 @@ class DemoSite implements SmartLifecycle {
             3000,
             RatingUnit.W,
             1.0));
+  }
+
+  /**
+   * Circuits fitted in the years after the installation, each logged as having taken effect on the
+   * day it was fitted (a back-dated entry beside the day it was recorded), so that the board
+   * history and demand over time tell the site's story.
+   */
+  private void laterYears(Board kb, Board landlord) {
+    EffectiveDate.set(BAKERY_EXTENDED);
     add(
         kb,
         way(
@@ -643,6 +671,7 @@ class DemoSite implements SmartLifecycle {
             16.0,
             InstallationMethod.C),
         load("Office sockets", LoadCategory.IT_SMALL_POWER, 1, 800, RatingUnit.W, 0.95));
+    EffectiveDate.set(SHOP_REFITTED);
     add(
         kb,
         way(
@@ -689,6 +718,38 @@ class DemoSite implements SmartLifecycle {
             InstallationMethod.C),
         load("Illuminated sign", LoadCategory.LIGHTING, 1, 120, RatingUnit.W, 0.9));
     add(
+        landlord,
+        way(
+            3,
+            PhasePosition.L1,
+            "Yard EV charger",
+            DeviceKind.RCBO,
+            TripCurve.B,
+            40.0,
+            6.0,
+            6.0,
+            6.0,
+            30.0,
+            InstallationMethod.C),
+        load("7 kW car charger", LoadCategory.EV_CHARGING, 1, 32, RatingUnit.A, 0.99));
+    // Cleaner's socket on a plain MCB: no 30 mA protection on the schedule.
+    add(
+        landlord,
+        way(
+            4,
+            PhasePosition.L1,
+            "Cleaner's socket, stair cupboard",
+            DeviceKind.MCB,
+            TripCurve.B,
+            20.0,
+            6.0,
+            2.5,
+            1.5,
+            12.0,
+            InstallationMethod.C),
+        load("Cleaner's socket", LoadCategory.SOCKET_OUTLETS, 1, 1000, RatingUnit.W, 1.0));
+    EffectiveDate.set(YARD_AND_FRYER);
+    add(
         kb,
         way(
             11,
@@ -705,6 +766,37 @@ class DemoSite implements SmartLifecycle {
         load("Doughnut fryer", LoadCategory.COOKING, 1, 6000, RatingUnit.W, 1.0));
     add(kb, spare(11, PhasePosition.L2, "Spare", DeviceKind.MCB, TripCurve.B, 20.0));
     add(kb, spare(12, PhasePosition.L1, "Spare", DeviceKind.MCB, TripCurve.B, 16.0));
+    add(
+        landlord,
+        way(
+            5,
+            PhasePosition.L1,
+            "Door entry system",
+            DeviceKind.MCB,
+            TripCurve.B,
+            6.0,
+            6.0,
+            1.5,
+            1.0,
+            10.0,
+            InstallationMethod.C),
+        load("Door entry power supply", LoadCategory.IT_SMALL_POWER, 1, 60, RatingUnit.W, 0.9));
+    add(
+        landlord,
+        way(
+            6,
+            PhasePosition.L1,
+            "Yard floodlights",
+            DeviceKind.RCBO,
+            TripCurve.B,
+            10.0,
+            6.0,
+            1.5,
+            1.5,
+            26.0,
+            InstallationMethod.C),
+        load("LED floodlights", LoadCategory.LIGHTING, 4, 50, RatingUnit.W, 0.9));
+    add(landlord, spare(7, PhasePosition.L1, "Spare", DeviceKind.MCB, TripCurve.B, 16.0));
   }
 
   private void flatCircuits(Board flat, int number) {
@@ -895,68 +987,6 @@ class DemoSite implements SmartLifecycle {
             38.0,
             InstallationMethod.C),
         load("Emergency luminaires", LoadCategory.LIGHTING, 6, 8, RatingUnit.W, 0.9));
-    add(
-        landlord,
-        way(
-            3,
-            PhasePosition.L1,
-            "Yard EV charger",
-            DeviceKind.RCBO,
-            TripCurve.B,
-            40.0,
-            6.0,
-            6.0,
-            6.0,
-            30.0,
-            InstallationMethod.C),
-        load("7 kW car charger", LoadCategory.EV_CHARGING, 1, 32, RatingUnit.A, 0.99));
-    // Cleaner's socket on a plain MCB: no 30 mA protection on the schedule.
-    add(
-        landlord,
-        way(
-            4,
-            PhasePosition.L1,
-            "Cleaner's socket, stair cupboard",
-            DeviceKind.MCB,
-            TripCurve.B,
-            20.0,
-            6.0,
-            2.5,
-            1.5,
-            12.0,
-            InstallationMethod.C),
-        load("Cleaner's socket", LoadCategory.SOCKET_OUTLETS, 1, 1000, RatingUnit.W, 1.0));
-    add(
-        landlord,
-        way(
-            5,
-            PhasePosition.L1,
-            "Door entry system",
-            DeviceKind.MCB,
-            TripCurve.B,
-            6.0,
-            6.0,
-            1.5,
-            1.0,
-            10.0,
-            InstallationMethod.C),
-        load("Door entry power supply", LoadCategory.IT_SMALL_POWER, 1, 60, RatingUnit.W, 0.9));
-    add(
-        landlord,
-        way(
-            6,
-            PhasePosition.L1,
-            "Yard floodlights",
-            DeviceKind.RCBO,
-            TripCurve.B,
-            10.0,
-            6.0,
-            1.5,
-            1.5,
-            26.0,
-            InstallationMethod.C),
-        load("LED floodlights", LoadCategory.LIGHTING, 4, 50, RatingUnit.W, 0.9));
-    add(landlord, spare(7, PhasePosition.L1, "Spare", DeviceKind.MCB, TripCurve.B, 16.0));
   }
 
   private static BoardForm board(
@@ -1043,6 +1073,18 @@ class DemoSite implements SmartLifecycle {
         InstallationMethod.C,
         coincidence,
         methodKey);
+  }
+
+  /** Where the demo's circuits are, from their invented descriptions: the yard is outdoors. */
+  static CircuitLocation locationOf(String description) {
+    String words = description.toLowerCase(java.util.Locale.ROOT);
+    if (words.contains("yard")) {
+      return CircuitLocation.OUTDOORS;
+    }
+    if (words.contains("shower") || words.contains("bathroom")) {
+      return CircuitLocation.BATH_OR_SHOWER;
+    }
+    return CircuitLocation.INDOORS;
   }
 
   private static CircuitForm way(
@@ -1154,7 +1196,10 @@ class DemoSite implements SmartLifecycle {
   }
 
   private Circuit add(Board board, CircuitForm circuit, LoadForm... loads) {
-    Circuit saved = schedule.addCircuit(board.getId(), circuit);
+    Circuit saved =
+        schedule.addCircuit(
+            board.getId(),
+            circuit.location() != null ? circuit : circuit.at(locationOf(circuit.description())));
     List<LoadForm> lines = new ArrayList<>(List.of(loads));
     for (LoadForm load : lines) {
       schedule.addLoad(saved.getId(), load);

@@ -18,6 +18,7 @@ import java.util.List;
  * @param measuredLoopImpedanceOhms Zs measured at the circuit's far end; null when not measured
  * @param ringFinal whether the cable is a ring final circuit (leaves the board and returns to it);
  *     its recorded length is then the whole ring's length
+ * @param location where its equipment is, for the residual-current rules; null when not recorded
  */
 public record CircuitSpec(
     long id,
@@ -31,10 +32,59 @@ public record CircuitSpec(
     List<LoadSpec> loads,
     Long feedsBoardId,
     Double measuredLoopImpedanceOhms,
-    boolean ringFinal) {
+    boolean ringFinal,
+    CircuitLocation location) {
 
   public CircuitSpec {
     loads = List.copyOf(loads);
+  }
+
+  /** A circuit whose location is not recorded: the argument list from before locations. */
+  public CircuitSpec(
+      long id,
+      int wayNumber,
+      PhasePosition position,
+      String description,
+      WayStatus status,
+      boolean lockedForBalancing,
+      DeviceSpec device,
+      CableSpec cable,
+      List<LoadSpec> loads,
+      Long feedsBoardId,
+      Double measuredLoopImpedanceOhms,
+      boolean ringFinal) {
+    this(
+        id,
+        wayNumber,
+        position,
+        description,
+        status,
+        lockedForBalancing,
+        device,
+        cable,
+        loads,
+        feedsBoardId,
+        measuredLoopImpedanceOhms,
+        ringFinal,
+        null);
+  }
+
+  /** The same circuit at another location (null: not recorded). */
+  public CircuitSpec at(CircuitLocation where) {
+    return new CircuitSpec(
+        id,
+        wayNumber,
+        position,
+        description,
+        status,
+        lockedForBalancing,
+        device,
+        cable,
+        loads,
+        feedsBoardId,
+        measuredLoopImpedanceOhms,
+        ringFinal,
+        where);
   }
 
   /**

@@ -13,5 +13,7 @@ public enum LoadCategory {
   EV_CHARGING,
   IT_SMALL_POWER,
   FIXED_APPLIANCE,
+  /** A household clothes dryer (NEC 220.54); elsewhere treated like a fixed appliance. */
+  CLOTHES_DRYER,
   OTHER
 }

@@ -1,10 +1,7 @@
 package com.wayledger.exchange;
 
-import com.wayledger.engine.Phase;
-import com.wayledger.engine.PhasePosition;
 import com.wayledger.engine.demand.BoardDemand;
 import com.wayledger.engine.demand.CircuitDemand;
-import com.wayledger.engine.demand.PhaseDemand;
 import com.wayledger.engine.demand.SiteDemand;
 import com.wayledger.engine.protection.BoardFindings;
 import com.wayledger.engine.protection.CircuitFindings;
@@ -15,13 +12,18 @@ import java.util.Map;
 
 /**
  * The engine's figures for one board, rearranged for a sheet whose totals are live formulas: for
- * each circuit the factors that turn its own connected load into its demand, and for the board what
- * the sheet's rows cannot hold (sub-boards' demand carried by feeding ways, an allowance carried by
- * no way).
+ * each circuit the factors that turn its own connected load into its demand and the sub-board whose
+ * load its way carries, and for the board what the sheet's rows cannot hold (an allowance carried
+ * by no way).
  */
 final class BoardFigures {
 
-  /** Figures of one circuit; factors are 1 where there is no connected load to scale. */
+  /**
+   * Figures of one circuit; factors are 1 where there is no connected load to scale.
+   *
+   * @param carriedBoard the sub-board whose demand the engine carries on this way (times its
+   *     coincidence factor); null when the way carries none
+   */
   record CircuitFigures(
       double diversityActive,
       double diversityReactive,
@@ -31,16 +33,11 @@ final class BoardFigures {
       double designCurrentAmps,
       boolean feedsSubBoard,
       int problemFindings,
-      boolean assessed) {}
+      boolean assessed,
+      BoardDemand carriedBoard) {}
 
   private final BoardDemand demand;
   private final Map<Long, CircuitFigures> byCircuit = new HashMap<>();
-  private final double[] carriedWatts = new double[3];
-  private final double[] carriedVars = new double[3];
-  private final double[] carriedConnectedWattsByLine = new double[3];
-  private final double[] carriedConnectedVarsByLine = new double[3];
-  private double carriedConnectedWatts;
-  private double carriedConnectedVars;
 
   BoardFigures(BoardEntry board, SiteDemand site, SiteFindings findings) {
     this.demand = site.board(board.id());
@@ -55,32 +52,20 @@ final class BoardFigures {
       double childVars = 0;
       double childConnectedWatts = 0;
       double childConnectedVars = 0;
-      // the engine carries a sub-board's demand on the way it chose; that way then shows it
-      boolean carried = child != null && circuit.subBoardDemandVoltAmperes() > 0;
+      // the engine carries a sub-board's load on one way only (a second way feeding the same
+      // board carries nothing); that way's connected load then includes the sub-board's
+      boolean carried = child != null && circuit.isAssessed() && carries(circuit, child);
       if (carried) {
         double k = child.coincidenceFactor();
         childWatts = child.demandWatts() * k;
         childVars = child.demandVars() * k;
         childConnectedWatts = child.connectedWatts();
         childConnectedVars = child.connectedVars();
-        carryToPhases(circuit.position(), child, k);
-        // connected load shares the way's lines as the board page shares it: evenly on three poles
-        if (circuit.position() == PhasePosition.THREE_POLE) {
-          for (int i = 0; i < 3; i++) {
-            carriedConnectedWattsByLine[i] += childConnectedWatts / 3.0;
-            carriedConnectedVarsByLine[i] += childConnectedVars / 3.0;
-          }
-        } else if (circuit.position() != null) {
-          carriedConnectedWattsByLine[circuit.position().ordinal()] += childConnectedWatts;
-          carriedConnectedVarsByLine[circuit.position().ordinal()] += childConnectedVars;
-        }
       }
       double ownConnectedWatts = circuit.connectedWatts() - childConnectedWatts;
       double ownConnectedVars = circuit.connectedVars() - childConnectedVars;
       double ownDemandWatts = circuit.demandWatts() - childWatts;
       double ownDemandVars = circuit.demandVars() - childVars;
-      carriedConnectedWatts += childConnectedWatts;
-      carriedConnectedVars += childConnectedVars;
       byCircuit.put(
           circuit.circuitId(),
           new CircuitFigures(
@@ -92,28 +77,19 @@ final class BoardFigures {
               circuit.designCurrentAmps(),
               child != null,
               problems.getOrDefault(circuit.circuitId(), 0),
-              circuit.isAssessed()));
+              circuit.isAssessed(),
+              carried ? child : null));
     }
   }
 
-  private void carryToPhases(PhasePosition position, BoardDemand child, double k) {
-    if (position == null) {
-      return;
+  /** Whether the engine counted the sub-board on this way (its demand or its connected load). */
+  private static boolean carries(CircuitDemand circuit, BoardDemand child) {
+    if (circuit.subBoardDemandVoltAmperes() > 0) {
+      return true;
     }
-    if (position == PhasePosition.THREE_POLE && child.phases().size() == 3) {
-      for (PhaseDemand phase : child.phases()) {
-        carriedWatts[phase.phase().ordinal()] += phase.demandWatts() * k;
-        carriedVars[phase.phase().ordinal()] += phase.demandVars() * k;
-      }
-    } else if (position == PhasePosition.THREE_POLE) {
-      for (int i = 0; i < 3; i++) {
-        carriedWatts[i] += child.demandWatts() * k / 3.0;
-        carriedVars[i] += child.demandVars() * k / 3.0;
-      }
-    } else {
-      carriedWatts[position.ordinal()] += child.demandWatts() * k;
-      carriedVars[position.ordinal()] += child.demandVars() * k;
-    }
+    double childConnected = Math.hypot(child.connectedWatts(), child.connectedVars());
+    return childConnected > 0
+        && Math.hypot(circuit.connectedWatts(), circuit.connectedVars()) >= childConnected - 1e-6;
   }
 
   private static double ratio(double demand, double connected) {
@@ -145,32 +121,6 @@ final class BoardFigures {
 
   CircuitFigures circuit(Long circuitId) {
     return circuitId == null ? null : byCircuit.get(circuitId);
-  }
-
-  /** Sub-boards' demand carried on the phase, after their coincidence factors, W. */
-  double carriedWatts(Phase phase) {
-    return carriedWatts[phase.ordinal()];
-  }
-
-  double carriedVars(Phase phase) {
-    return carriedVars[phase.ordinal()];
-  }
-
-  /** Sub-boards' connected load on the line, as the board page shares it, W. */
-  double carriedConnectedWatts(Phase phase) {
-    return carriedConnectedWattsByLine[phase.ordinal()];
-  }
-
-  double carriedConnectedVars(Phase phase) {
-    return carriedConnectedVarsByLine[phase.ordinal()];
-  }
-
-  double carriedConnectedWatts() {
-    return carriedConnectedWatts;
-  }
-
-  double carriedConnectedVars() {
-    return carriedConnectedVars;
   }
 
   /** Demand carried by no way (an NEC dwelling allowance), per line, W at unity power factor. */

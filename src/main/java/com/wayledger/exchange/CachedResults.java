@@ -72,6 +72,26 @@ final class CachedResults {
       double diversityReactive,
       Phase phase,
       boolean threePole) {
+    add(
+        row.kilowatts(),
+        row.kilovars(),
+        row.kilowatts() * diversityActive,
+        row.kilovars() * diversityReactive,
+        phase,
+        threePole);
+  }
+
+  /**
+   * Adds connected and demand power to the per-line sums as the sheet's line totals count a row (a
+   * three-pole row a third on each line).
+   */
+  void add(
+      double connectedKilowatts,
+      double connectedKilovars,
+      double demandKilowatts,
+      double demandKilovars,
+      Phase phase,
+      boolean threePole) {
     for (Phase line : Phase.values()) {
       double share;
       if (!threePhaseBoard) {
@@ -82,10 +102,10 @@ final class CachedResults {
         share = line == phase ? 1.0 : 0.0;
       }
       int i = line.ordinal();
-      connectedKw[i] += share * row.kilowatts();
-      connectedKvar[i] += share * row.kilovars();
-      demandKw[i] += share * row.kilowatts() * diversityActive;
-      demandKvar[i] += share * row.kilovars() * diversityReactive;
+      connectedKw[i] += share * connectedKilowatts;
+      connectedKvar[i] += share * connectedKilovars;
+      demandKw[i] += share * demandKilowatts;
+      demandKvar[i] += share * demandKilovars;
     }
   }
 

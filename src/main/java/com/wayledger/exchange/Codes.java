@@ -14,6 +14,9 @@ final class Codes {
   private Codes() {}
 
   static String line(PhasePosition position) {
+    if (position.isLineToLine()) {
+      return position.fromLine().name() + "-" + position.toLine().name();
+    }
     return position == PhasePosition.THREE_POLE ? ScheduleColumn.THREE_POLE_CODE : position.name();
   }
 
@@ -38,6 +41,9 @@ final class Codes {
           "RYB",
           "RST" ->
           PhasePosition.THREE_POLE;
+      case "L1L2", "AB" -> PhasePosition.L1_L2;
+      case "L2L3", "BC" -> PhasePosition.L2_L3;
+      case "L3L1", "CA" -> PhasePosition.L3_L1;
       default -> EnumWords.standard().parse(PhasePosition.class, text);
     };
   }

@@ -54,13 +54,18 @@ public final class CsvWriter {
             entry.loads().isEmpty() ? Collections.singletonList(null) : entry.loads();
         boolean first = true;
         for (LoadForm load : loads) {
-          printer.printRecord(row(entry.circuit(), load, f, first));
+          List<String> cells = row(entry.circuit(), load, f, first);
+          cells.set(CIRCUIT_KEY.ordinal(), num(entry.circuitId()));
+          cells.set(
+              RECORD_VERSION.ordinal(), entry.recordVersion() == null ? "" : entry.recordVersion());
+          printer.printRecord(cells);
           first = false;
         }
       }
     }
     printer.println();
-    printer.printRecord("Caution: " + caution);
+    // the caution stays the last line (the importer stops at the blank line before it)
+    printer.printRecord("Caution: " + caution + " Checked against " + data.ruleSetTitle() + ".");
     printer.flush();
   }
 
@@ -92,6 +97,7 @@ public final class CsvWriter {
     cells[GROUPED.ordinal()] = num(c.cableGroupedCircuits());
     cells[THERMAL_INSULATION_MM.ordinal()] = num(c.cableThermalInsulationMm());
     cells[MEASURED_ZS.ordinal()] = num(c.measuredLoopImpedanceOhms());
+    cells[LOCATION.ordinal()] = name(c.location());
     if (l != null) {
       cells[LOAD.ordinal()] = CellText.forCsv(l.description());
       cells[CATEGORY.ordinal()] = name(l.category());

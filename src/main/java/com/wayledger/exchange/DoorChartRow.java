@@ -2,7 +2,6 @@ package com.wayledger.exchange;
 
 import com.wayledger.board.CircuitForm;
 import com.wayledger.board.LoadForm;
-import com.wayledger.engine.PhasePosition;
 import com.wayledger.engine.WayStatus;
 import java.util.ArrayList;
 import java.util.List;
@@ -25,10 +24,7 @@ public record DoorChartRow(
     List<DoorChartRow> rows = new ArrayList<>();
     for (CircuitEntry entry : board.circuits()) {
       CircuitForm c = entry.circuit();
-      String line =
-          board.isThreePhase()
-              ? (c.position() == PhasePosition.THREE_POLE ? "L1–L3" : c.position().name())
-              : "";
+      String line = board.isThreePhase() ? c.position().label() : "";
       String description =
           switch (c.status()) {
             case IN_USE -> c.description();

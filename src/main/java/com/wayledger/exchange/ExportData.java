@@ -24,9 +24,25 @@ public record ExportData(
     List<BoardEntry> boards,
     SiteDemand demand,
     SiteFindings findings,
-    LocalDate exportedOn) {
+    LocalDate exportedOn,
+    String ruleSetTitle) {
 
   public ExportData {
     boards = List.copyOf(boards);
+    if (ruleSetTitle == null) {
+      ruleSetTitle = com.wayledger.engine.rules.RuleSets.IEC.title();
+    }
+  }
+
+  /** Export data of an IEC site (the argument list from before rule sets). */
+  public ExportData(
+      long siteId,
+      String siteName,
+      String earthing,
+      List<BoardEntry> boards,
+      SiteDemand demand,
+      SiteFindings findings,
+      LocalDate exportedOn) {
+    this(siteId, siteName, earthing, boards, demand, findings, exportedOn, null);
   }
 }

@@ -68,7 +68,8 @@ public class ExportReader {
         entries,
         analysis.demand(),
         analysis.findings(),
-        LocalDate.now(clock));
+        LocalDate.now(clock),
+        com.wayledger.engine.rules.RuleSets.of(site.getRuleSet()).title());
   }
 
   static BoardEntry entry(Board board, int depth) {
@@ -79,7 +80,8 @@ public class ExportReader {
                     new CircuitEntry(
                         circuit.getId(),
                         CircuitForm.of(circuit),
-                        circuit.getLoads().stream().map(LoadForm::of).toList()))
+                        circuit.getLoads().stream().map(LoadForm::of).toList(),
+                        circuit.recordVersion()))
             .toList();
     return new BoardEntry(
         board.getId(),

@@ -5,6 +5,7 @@ import com.wayledger.board.BoardService;
 import com.wayledger.system.FormStatus;
 import com.wayledger.system.NotFoundException;
 import com.wayledger.system.RuleViolation;
+import com.wayledger.system.StaleEditException;
 import jakarta.servlet.http.HttpServletRequest;
 import jakarta.servlet.http.HttpServletResponse;
 import java.io.IOException;
@@ -142,12 +143,16 @@ public class ImportController {
 
   @GetMapping("/boards/{boardId}/import/{token}/preview")
   public String preview(
-      @PathVariable long boardId, @PathVariable String token, Principal principal, Model model) {
+      @PathVariable long boardId,
+      @PathVariable String token,
+      @RequestParam(name = "remove", defaultValue = "false") boolean removeMissing,
+      Principal principal,
+      Model model) {
     UploadStore.Upload upload = upload(token, boardId, principal);
     if (upload.mapping().isEmpty()) {
       return "redirect:/boards/" + boardId + "/import/" + token + "/mapping";
     }
-    fillPreview(boardId, upload, model);
+    fillPreview(boardId, upload, removeMissing, model);
     return "exchange/preview";
   }
 
@@ -156,13 +161,15 @@ public class ImportController {
       @PathVariable long boardId,
       @PathVariable String token,
       @RequestParam(name = "mode", defaultValue = "all") String mode,
+      @RequestParam(name = "remove", defaultValue = "false") boolean removeMissing,
+      @RequestParam(name = "reason", required = false) String reason,
       Principal principal,
       HttpServletRequest request,
       HttpServletResponse response,
       Model model,
       RedirectAttributes redirect) {
     UploadStore.Upload upload = upload(token, boardId, principal);
-    ImportPlan plan = fillPreview(boardId, upload, model);
+    ImportPlan plan = fillPreview(boardId, upload, removeMissing, model);
     boolean validOnly = "valid".equals(mode);
     if (!plan.isAllValid() && !validOnly) {
       response.setStatus(FormStatus.UNPROCESSABLE);
@@ -170,16 +177,32 @@ public class ImportController {
           "refusal", new ImportRefused("import.refused.hasErrors", plan.invalidRows()));
       return "exchange/preview";
     }
-    if (plan.circuits().isEmpty()) {
+    if (!plan.isAllValid() && removeMissing) {
+      // a row left out for its problems would otherwise read as a circuit missing from the file
       response.setStatus(FormStatus.UNPROCESSABLE);
-      model.addAttribute("refusal", new ImportRefused("import.refused.nothingValid"));
+      model.addAttribute("refusal", new ImportRefused("import.refused.removeNeedsAllValid"));
       return "exchange/preview";
     }
+    if (plan.hasConflicts()) {
+      response.setStatus(HttpStatus.CONFLICT.value());
+      model.addAttribute(
+          "refusal",
+          new ImportRefused("import.refused.conflicts", plan.count(ImportOutcome.Kind.CONFLICT)));
+      return "exchange/preview";
+    }
+    if (plan.changesNothing()) {
+      return "exchange/preview"; // says so; nothing stored, nothing logged
+    }
     try {
-      int[] stored = imports.store(boardId, plan.circuits());
+      int[] stored = imports.store(boardId, plan, upload.fileName(), reason);
       uploads.remove(upload);
       redirect.addFlashAttribute("imported", stored);
       return redirect(request, response, "/boards/" + boardId);
+    } catch (StaleEditException stale) {
+      response.setStatus(HttpStatus.CONFLICT.value());
+      fillPreview(boardId, upload, removeMissing, model);
+      model.addAttribute("refusal", new ImportRefused("import.refused.changedMeanwhile"));
+      return "exchange/preview";
     } catch (RuleViolation violation) {
       response.setStatus(HttpStatus.CONFLICT.value());
       model.addAttribute("refusal", new ImportRefused("import.refused.changedMeanwhile"));
@@ -207,18 +230,23 @@ public class ImportController {
     return "exchange/upload";
   }
 
-  private ImportPlan fillPreview(long boardId, UploadStore.Upload upload, Model model) {
+  private ImportPlan fillPreview(
+      long boardId, UploadStore.Upload upload, boolean removeMissing, Model model) {
     SheetTable table = uploads.table(upload, upload.sheetIndex());
     List<ImportField> mapping = upload.mapping();
     if (mapping.size() != table.headers().size()) {
       mapping = ColumnGuesser.guess(table);
     }
-    ImportPlan plan = imports.plan(boardId, table, mapping);
+    ImportPlan plan = imports.plan(boardId, table, mapping, removeMissing);
     model.addAttribute("board", boards.get(boardId));
     model.addAttribute("upload", upload);
     model.addAttribute("table", table);
     model.addAttribute("plan", plan);
     model.addAttribute("ownExport", table.isOwnExport());
+    model.addAttribute("removeMissing", removeMissing);
+    model.addAttribute(
+        "nothingToChange",
+        plan.isAllValid() && !plan.outcomes().isEmpty() && plan.changesNothing());
     return plan;
   }
 

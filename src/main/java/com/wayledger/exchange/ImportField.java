@@ -129,6 +129,9 @@ public enum ImportField {
   MEASURED_ZS(
       ScheduleColumn.MEASURED_ZS,
       List.of("measured zs", "zs", "zs ohm", "loop impedance", "measured loop")),
+  LOCATION(
+      ScheduleColumn.LOCATION,
+      List.of("location", "circuit location", "where", "room", "special location")),
   LOAD(
       ScheduleColumn.LOAD,
       List.of("load", "load description", "equipment", "item", "appliance", "connected item")),
@@ -146,6 +149,8 @@ public enum ImportField {
       List.of("surge", "surge x", "inrush", "starting multiple", "start multiple")),
   SURGE_MILLIS(ScheduleColumn.SURGE_MILLIS, List.of("surge ms", "inrush ms", "start ms", "ms")),
   CONTINUOUS(ScheduleColumn.CONTINUOUS, List.of("continuous", "cont")),
+  CIRCUIT_KEY(ScheduleColumn.CIRCUIT_KEY, List.of("circuit key", "key")),
+  RECORD_VERSION(ScheduleColumn.RECORD_VERSION, List.of("record version", "version")),
   DEVICE_SUMMARY(
       null,
       List.of(

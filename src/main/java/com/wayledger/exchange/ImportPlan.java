@@ -9,12 +9,39 @@ import java.util.List;
  *
  * @param rows every row of the sheet as it will be stored, with its problems
  * @param circuits the circuits built from rows without problems, each with its loads
+ * @param outcomes what the import does to each circuit of the board (added, changed, unchanged,
+ *     conflict, removed, kept); empty until matched against the board
  */
-public record ImportPlan(List<PreviewRow> rows, List<PlannedCircuit> circuits) {
+public record ImportPlan(
+    List<PreviewRow> rows, List<PlannedCircuit> circuits, List<ImportOutcome> outcomes) {
 
   public ImportPlan {
     rows = List.copyOf(rows);
     circuits = List.copyOf(circuits);
+    outcomes = List.copyOf(outcomes);
+  }
+
+  public ImportPlan(List<PreviewRow> rows, List<PlannedCircuit> circuits) {
+    this(rows, circuits, List.of());
+  }
+
+  /** How many circuits the import would treat this way. */
+  public long count(ImportOutcome.Kind kind) {
+    return outcomes.stream().filter(o -> o.kind() == kind).count();
+  }
+
+  public boolean hasConflicts() {
+    return count(ImportOutcome.Kind.CONFLICT) > 0;
+  }
+
+  /** The edits applying stores: added, changed and removed circuits, in that order of the list. */
+  public List<com.wayledger.board.CircuitEdit> edits() {
+    return outcomes.stream().filter(ImportOutcome::isStored).map(ImportOutcome::edit).toList();
+  }
+
+  /** Whether the file's circuits and the board's are the same already: applying stores nothing. */
+  public boolean changesNothing() {
+    return edits().isEmpty();
   }
 
   /** A problem with one cell: the column's field and a message code with its arguments. */
@@ -42,9 +69,24 @@ public record ImportPlan(List<PreviewRow> rows, List<PlannedCircuit> circuits) {
     }
   }
 
-  /** A circuit to add, with its loads and the rows it came from. */
+  /**
+   * A circuit read from the file, with its loads and the rows it came from.
+   *
+   * @param key the stored circuit the rows were exported from (the export's circuit key column);
+   *     null when the file has none
+   * @param recordVersion that circuit's edition when exported; null when the file has none
+   */
   public record PlannedCircuit(
-      CircuitForm circuit, List<LoadForm> loads, List<Integer> rowNumbers) {}
+      CircuitForm circuit,
+      List<LoadForm> loads,
+      List<Integer> rowNumbers,
+      Long key,
+      String recordVersion) {
+
+    public PlannedCircuit(CircuitForm circuit, List<LoadForm> loads, List<Integer> rowNumbers) {
+      this(circuit, loads, rowNumbers, null, null);
+    }
+  }
 
   public long validRows() {
     return rows.stream().filter(PreviewRow::isValid).count();

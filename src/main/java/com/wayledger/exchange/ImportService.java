@@ -2,18 +2,20 @@ package com.wayledger.exchange;
 
 import com.wayledger.board.Board;
 import com.wayledger.board.BoardService;
-import com.wayledger.board.Circuit;
-import com.wayledger.board.LoadForm;
 import com.wayledger.board.ScheduleService;
-import com.wayledger.engine.Phase;
-import jakarta.validation.Validator;
-import java.util.HashSet;
+import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Set;
 import org.springframework.stereotype.Service;
 import org.springframework.transaction.annotation.Transactional;
 
-/** Plans an import against a board and stores it through the schedule service, all or nothing. */
+/**
+ * Plans an import against a board (matching the file's circuits to the board's own, so that an
+ * edited export can come back) and stores it through the schedule service, all or nothing, as one
+ * change-log entry.
+ */
 @Service
 public class ImportService {
 
@@ -21,44 +23,99 @@ public class ImportService {
   private final ScheduleService schedule;
   private final RowReader rows;
 
-  public ImportService(BoardService boards, ScheduleService schedule, Validator validator) {
+  public ImportService(
+      BoardService boards, ScheduleService schedule, jakarta.validation.Validator validator) {
     this.boards = boards;
     this.schedule = schedule;
     this.rows = new RowReader(validator);
   }
 
-  /** Every row of the table checked against the board as it is now. */
+  /** Every row of the table checked, and matched against the board as it is now. */
   @Transactional(readOnly = true)
   public ImportPlan plan(long boardId, SheetTable table, List<ImportField> mapping) {
-    Board board = boards.get(boardId);
-    Set<String> occupied = new HashSet<>();
-    for (Circuit circuit : board.getCircuits()) {
-      for (Phase phase : circuit.getPosition().phases()) {
-        occupied.add(RowReader.BoardContext.slot(circuit.getWayNumber(), phase));
-      }
-    }
-    return rows.read(
-        table,
-        mapping,
-        new RowReader.BoardContext(board.getPhases(), board.getWayCount(), occupied));
+    return plan(boardId, table, mapping, false);
   }
 
   /**
-   * Stores the planned circuits and their loads in one transaction: if the schedule service refuses
-   * any of them (someone filled a position meanwhile), nothing is stored.
+   * Every row of the table checked, and matched against the board as it is now.
    *
-   * @return the number of circuits and loads stored
+   * @param removeMissing whether the board's circuits that the file leaves out are removed (else
+   *     they are kept, and a row for a position one of them holds is a problem)
    */
-  @Transactional
-  public int[] store(long boardId, List<ImportPlan.PlannedCircuit> circuits) {
-    int loads = 0;
-    for (ImportPlan.PlannedCircuit planned : circuits) {
-      Circuit circuit = schedule.addCircuit(boardId, planned.circuit());
-      for (LoadForm load : planned.loads()) {
-        schedule.addLoad(circuit.getId(), load);
-        loads++;
+  @Transactional(readOnly = true)
+  public ImportPlan plan(
+      long boardId, SheetTable table, List<ImportField> mapping, boolean removeMissing) {
+    Board board = boards.get(boardId);
+    ImportPlan read =
+        rows.read(
+            table,
+            mapping,
+            new RowReader.BoardContext(board.getPhases(), board.getWayCount(), Set.of()));
+    List<CircuitEntry> stored = ExportReader.entry(board, 0).circuits();
+    ScheduleMatcher.Result matched = ScheduleMatcher.match(read.circuits(), stored, removeMissing);
+    Map<Integer, ImportPlan.Problem> taken = new HashMap<>();
+    matched
+        .blocked()
+        .forEach(
+            (circuit, where) -> {
+              String holder =
+                  stored.stream()
+                      .filter(
+                          s ->
+                              s.circuit().wayNumber() == where.wayNumber()
+                                  && s.circuit().position().phases().contains(where.phase()))
+                      .map(s -> s.circuit().description())
+                      .findFirst()
+                      .orElse("");
+              for (int row : circuit.rowNumbers()) {
+                taken.put(
+                    row,
+                    new ImportPlan.Problem(
+                        ImportField.LINE,
+                        "import.cell.takenKept",
+                        new Object[] {where.wayNumber(), where.phase().name(), holder}));
+              }
+            });
+    List<ImportPlan.PreviewRow> previewRows = new ArrayList<>();
+    for (ImportPlan.PreviewRow row : read.rows()) {
+      ImportPlan.Problem problem = taken.get(row.number());
+      if (problem == null) {
+        previewRows.add(row);
+      } else {
+        List<ImportPlan.Problem> problems = new ArrayList<>(row.problems());
+        problems.add(problem);
+        previewRows.add(
+            new ImportPlan.PreviewRow(
+                row.number(), row.circuit(), row.load(), problems, row.notes()));
       }
     }
-    return new int[] {circuits.size(), loads};
+    List<ImportPlan.PlannedCircuit> circuits =
+        read.circuits().stream().filter(c -> !matched.blocked().containsKey(c)).toList();
+    return new ImportPlan(previewRows, circuits, matched.outcomes());
+  }
+
+  /**
+   * Stores what the plan adds, changes and removes in one transaction and one change-log entry with
+   * the reason: if the schedule service refuses any of it (a position filled meanwhile, a circuit
+   * changed since the preview), nothing is stored.
+   *
+   * @return the number of circuits added, changed and removed
+   */
+  @Transactional
+  public int[] store(long boardId, ImportPlan plan, String fileName, String reason) {
+    int added = (int) plan.count(ImportOutcome.Kind.ADDED);
+    int changed = (int) plan.count(ImportOutcome.Kind.CHANGED);
+    int removed = (int) plan.count(ImportOutcome.Kind.REMOVED);
+    String summary =
+        "Imported from “"
+            + (fileName == null || fileName.isBlank() ? "a spreadsheet" : fileName)
+            + "”: "
+            + added
+            + " added, "
+            + changed
+            + " changed, "
+            + removed
+            + " removed";
+    return schedule.applyEdits(boardId, plan.edits(), summary, reason);
   }
 }

@@ -4,6 +4,7 @@ import static com.wayledger.exchange.ImportField.*;
 
 import com.wayledger.board.CircuitForm;
 import com.wayledger.board.LoadForm;
+import com.wayledger.engine.CircuitLocation;
 import com.wayledger.engine.ConductorMaterial;
 import com.wayledger.engine.DeviceKind;
 import com.wayledger.engine.InstallationMethod;
@@ -190,7 +191,11 @@ public final class RowReader {
         }
       }
       if (planned == null) {
+        Integer keyCell = cells.whole(CIRCUIT_KEY, problems);
+        Long key = keyCell == null ? null : keyCell.longValue();
         planned = new Planned(circuit, row.number(), problems.isEmpty());
+        planned.key = key;
+        planned.version = cells.blank(RECORD_VERSION) ? null : cells.text(RECORD_VERSION);
         if (circuit.wayNumber() != null && circuit.position() != null) {
           byKey.putIfAbsent(circuit.wayNumber() + ":" + circuit.position(), planned);
           // a position claimed by a row with problems is still claimed: two rows for one position
@@ -213,7 +218,11 @@ public final class RowReader {
       if (planned.valid) {
         circuits.add(
             new ImportPlan.PlannedCircuit(
-                planned.circuit, List.copyOf(planned.loads), List.copyOf(planned.rows)));
+                planned.circuit,
+                List.copyOf(planned.loads),
+                List.copyOf(planned.rows),
+                planned.key,
+                planned.version));
       }
     }
     return new ImportPlan(rows, circuits);
@@ -230,6 +239,8 @@ public final class RowReader {
     final boolean valid;
     final List<LoadForm> loads = new ArrayList<>();
     final List<Integer> rows = new ArrayList<>();
+    Long key;
+    String version;
 
     Planned(CircuitForm circuit, int firstRow, boolean valid) {
       this.circuit = circuit;
@@ -388,7 +399,9 @@ public final class RowReader {
             null,
             ring,
             overload,
-            instantaneous);
+            instantaneous,
+            null,
+            cells.choice(LOCATION, CircuitLocation.class, problems));
     for (ConstraintViolation<CircuitForm> violation : validator.validate(form)) {
       ImportField field =
           CIRCUIT_PROPERTIES.getOrDefault(violation.getPropertyPath().toString(), CIRCUIT);
@@ -494,6 +507,10 @@ public final class RowReader {
     }
     if (t.matches(".*\\b(cooker|cooking|oven|ovens|hob|range)\\b.*")) {
       return LoadCategory.COOKING;
+    }
+    if (t.matches(".*\\b(clothes dry[ei]r|tumble dry[ei]r|dry[ei]r)\\b.*")
+        && !t.matches(".*\\b(hand|hair) dry[ei]r\\b.*")) {
+      return LoadCategory.CLOTHES_DRYER;
     }
     if (t.matches(".*\\b(shower|showers|instantaneous)\\b.*")) {
       return LoadCategory.WATER_HEATING_INSTANTANEOUS;

@@ -30,6 +30,7 @@ public enum ScheduleColumn {
   GROUPED("Grouped", true),
   THERMAL_INSULATION_MM("In insulation mm", true),
   MEASURED_ZS("Measured Zs Ω", true),
+  LOCATION("Location", true),
   LOAD("Load", true),
   CATEGORY("Category", true),
   QUANTITY("Qty", true),
@@ -47,7 +48,17 @@ public enum ScheduleColumn {
   DEMAND_KW("Demand kW", false),
   DEMAND_KVAR("Demand kvar", false),
   IB_DESIGN("Ib design A", false),
-  FINDINGS("Findings", false);
+  FINDINGS("Findings", false),
+  /**
+   * The stored circuit a row was exported from (its id): an import into the same board matches the
+   * row to that circuit even when its way or line was edited.
+   */
+  CIRCUIT_KEY("Circuit key", true),
+  /**
+   * The circuit's edition when exported ({@code Circuit.recordVersion()}): an import refuses to
+   * overwrite a circuit changed since.
+   */
+  RECORD_VERSION("Record version", true);
 
   /** How a three-pole position is written in the Line column. */
   public static final String THREE_POLE_CODE = "3P";

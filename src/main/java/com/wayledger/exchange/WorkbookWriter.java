@@ -108,11 +108,17 @@ public final class WorkbookWriter {
                   METHODS_SHEET.toLowerCase(Locale.ROOT)));
       SXSSFSheet summary = withSummary ? workbook.createSheet(SUMMARY_SHEET) : null;
       Map<Long, TotalsCells> totals = new HashMap<>();
+      // every board sheet's name and totals rows first, so a feeder row can refer to its
+      // sub-board's sheet before that sheet is written
+      Map<Long, SubBoardCells.TotalsLayout> layouts = new HashMap<>();
       for (BoardEntry board : data.boards()) {
         String name = uniqueName("Board " + board.reference(), names);
-        SXSSFSheet sheet = workbook.createSheet(name);
+        layouts.put(board.id(), SubBoardCells.TotalsLayout.of(name, board));
+      }
+      for (BoardEntry board : data.boards()) {
+        SXSSFSheet sheet = workbook.createSheet(layouts.get(board.id()).sheetName());
         BoardFigures figures = new BoardFigures(board, data.demand(), data.findings());
-        totals.put(board.id(), writeBoard(sheet, board, figures, data, styles));
+        totals.put(board.id(), writeBoard(sheet, board, figures, data, styles, layouts));
       }
       if (summary != null) {
         writeSummary(summary, data, totals, styles);
@@ -254,7 +260,8 @@ public final class WorkbookWriter {
       BoardEntry board,
       BoardFigures figures,
       ExportData data,
-      WorkbookStyles styles) {
+      WorkbookStyles styles,
+      Map<Long, SubBoardCells.TotalsLayout> layouts) {
     Widths widths = new Widths(ScheduleColumn.values().length);
     BoardDemand demand = figures.demand();
     double u0 = demand != null ? demand.nominalVoltageVolts() : data.demand().nominalVoltageVolts();
@@ -277,6 +284,8 @@ public final class WorkbookWriter {
     text(facts, 7, data.exportedOn().toString(), styles.text, null);
     text(facts, 8, "Diversity", styles.label, null);
     text(facts, 9, demand == null ? "not assessed" : demand.methodName(), styles.text, null);
+    text(facts, 13, "Rule set", styles.label, null);
+    text(facts, 14, data.ruleSetTitle(), styles.text, null);
     text(facts, 11, "Fed from", styles.label, null);
     text(
         facts,
@@ -296,6 +305,7 @@ public final class WorkbookWriter {
     int lastData = firstData + Math.max(1, countRows(board)) - 1;
     String u0Cell = "$B$2";
     CachedResults cache = new CachedResults(u0, board.isThreePhase());
+    List<SubBoardCells> carried = new ArrayList<>();
     for (CircuitEntry entry : board.circuits()) {
       BoardFigures.CircuitFigures circuitFigures = figures.circuit(entry.circuitId());
       List<LoadForm> loads =
@@ -303,8 +313,15 @@ public final class WorkbookWriter {
       boolean threePole =
           entry.circuit().position() == com.wayledger.engine.PhasePosition.THREE_POLE;
       Phase phase = threePole ? Phase.L1 : entry.circuit().position().phases().iterator().next();
-      double circuitKw = 0;
-      double circuitKvar = 0;
+      SubBoardCells subBoard =
+          circuitFigures == null || circuitFigures.carriedBoard() == null
+              ? null
+              : new SubBoardCells(
+                  circuitFigures.carriedBoard(),
+                  layouts.get(circuitFigures.carriedBoard().boardId()),
+                  threePole);
+      double circuitKw = subBoard == null ? 0 : subBoard.connectedKilowattsValue();
+      double circuitKvar = subBoard == null ? 0 : subBoard.connectedKilovarsValue();
       for (LoadForm load : loads) {
         CachedResults.RowPower power = cache.rowPower(load, threePole);
         circuitKw += power.kilowatts();
@@ -315,16 +332,20 @@ public final class WorkbookWriter {
       for (LoadForm load : loads) {
         Row row = sheet.createRow(rowIndex);
         writeCircuitCells(row, entry.circuit(), styles, widths);
+        writeRecordCells(row, entry, styles, widths);
         if (load != null) {
           writeLoadCells(row, load, styles, widths);
         }
         CachedResults.RowPower power = cache.rowPower(load, threePole);
+        SubBoardCells onRow = first ? subBoard : null;
         double[] diversity =
             writeComputedCells(
                 row,
                 rowIndex + 1,
                 first,
                 circuitFigures,
+                onRow,
+                entry.loads().isEmpty(),
                 u0Cell,
                 firstData + 1,
                 lastData + 1,
@@ -333,6 +354,16 @@ public final class WorkbookWriter {
                 styles,
                 widths);
         cache.add(power, diversity[0], diversity[1], phase, threePole);
+        if (onRow != null) {
+          cache.add(
+              onRow.connectedKilowattsValue(),
+              onRow.connectedKilovarsValue(),
+              onRow.demandKilowattsValue(),
+              onRow.demandKilovarsValue(),
+              phase,
+              threePole);
+          carried.add(onRow);
+        }
         first = false;
         rowIndex++;
       }
@@ -347,6 +378,7 @@ public final class WorkbookWriter {
             sheet,
             board,
             figures,
+            carried,
             rowIndex + 1,
             firstData + 1,
             lastData + 1,
@@ -400,6 +432,18 @@ public final class WorkbookWriter {
     number(row, GROUPED.ordinal(), c.cableGroupedCircuits(), s.integer, w);
     number(row, THERMAL_INSULATION_MM.ordinal(), c.cableThermalInsulationMm(), s.integer, w);
     number(row, MEASURED_ZS.ordinal(), c.measuredLoopImpedanceOhms(), s.ohms, w);
+    text(row, LOCATION.ordinal(), name(c.location()), s.text, w);
+  }
+
+  /**
+   * The circuit's key and edition on each of its rows: an import into the same board matches rows
+   * to circuits by them and refuses to overwrite a circuit changed since the export.
+   */
+  private static void writeRecordCells(Row row, CircuitEntry entry, WorkbookStyles s, Widths w) {
+    number(row, CIRCUIT_KEY.ordinal(), entry.circuitId(), s.integer, w);
+    if (entry.recordVersion() != null) {
+      text(row, RECORD_VERSION.ordinal(), entry.recordVersion(), s.text, w);
+    }
   }
 
   private static void writeLoadCells(Row row, LoadForm l, WorkbookStyles s, Widths w) {
@@ -420,6 +464,8 @@ public final class WorkbookWriter {
       int r,
       boolean firstOfCircuit,
       BoardFigures.CircuitFigures figures,
+      SubBoardCells subBoard,
+      boolean noLoadsOfItsOwn,
       String u0,
       int from,
       int to,
@@ -453,8 +499,9 @@ public final class WorkbookWriter {
             + perLine
             + "*"
             + pf
-            + "))/1000)",
-        power.kilowatts(),
+            + "))/1000)"
+            + (subBoard == null ? "" : "+" + subBoard.connectedKilowatts()),
+        power.kilowatts() + (subBoard == null ? 0 : subBoard.connectedKilowattsValue()),
         s.kilowatts,
         w);
     formula(
@@ -476,8 +523,9 @@ public final class WorkbookWriter {
             + perLine
             + "))*SQRT(1-"
             + pf
-            + "^2)/1000)",
-        power.kilovars(),
+            + "^2)/1000)"
+            + (subBoard == null ? "" : "+" + subBoard.connectedKilovars()),
+        power.kilovars() + (subBoard == null ? 0 : subBoard.connectedKilovarsValue()),
         s.kilowatts,
         w);
     double diversityP =
@@ -486,62 +534,101 @@ public final class WorkbookWriter {
         figures == null ? 1.0 : figures.assessed() ? figures.diversityReactive() : 0.0;
     number(row, DIVERSITY_P.ordinal(), diversityP, s.factor, w);
     number(row, DIVERSITY_Q.ordinal(), diversityQ, s.factor, w);
-    formula(
-        row,
-        DEMAND_KW.ordinal(),
-        ref(CONNECTED_KW, r) + "*" + ref(DIVERSITY_P, r),
-        power.kilowatts() * diversityP,
-        s.kilowatts,
-        w);
-    formula(
-        row,
-        DEMAND_KVAR.ordinal(),
-        ref(CONNECTED_KVAR, r) + "*" + ref(DIVERSITY_Q, r),
-        power.kilovars() * diversityQ,
-        s.kilowatts,
-        w);
+    if (subBoard == null) {
+      formula(
+          row,
+          DEMAND_KW.ordinal(),
+          ref(CONNECTED_KW, r) + "*" + ref(DIVERSITY_P, r),
+          power.kilowatts() * diversityP,
+          s.kilowatts,
+          w);
+      formula(
+          row,
+          DEMAND_KVAR.ordinal(),
+          ref(CONNECTED_KVAR, r) + "*" + ref(DIVERSITY_Q, r),
+          power.kilovars() * diversityQ,
+          s.kilowatts,
+          w);
+    } else {
+      // the way's own loads after its factors, plus the sub-board's demand times its coincidence
+      formula(
+          row,
+          DEMAND_KW.ordinal(),
+          "("
+              + ref(CONNECTED_KW, r)
+              + "-"
+              + subBoard.connectedKilowatts()
+              + ")*"
+              + ref(DIVERSITY_P, r)
+              + "+"
+              + subBoard.demandKilowatts(),
+          power.kilowatts() * diversityP + subBoard.demandKilowattsValue(),
+          s.kilowatts,
+          w);
+      formula(
+          row,
+          DEMAND_KVAR.ordinal(),
+          "("
+              + ref(CONNECTED_KVAR, r)
+              + "-"
+              + subBoard.connectedKilovars()
+              + ")*"
+              + ref(DIVERSITY_Q, r)
+              + "+"
+              + subBoard.demandKilovars(),
+          power.kilovars() * diversityQ + subBoard.demandKilovarsValue(),
+          s.kilowatts,
+          w);
+    }
     double[] diversity = {diversityP, diversityQ};
     if (!firstOfCircuit) {
       return diversity;
     }
-    if (figures != null && figures.feedsSubBoard()) {
-      number(row, IB_CONNECTED.ordinal(), figures.connectedCurrentAmps(), s.amps, w);
-    } else {
-      String way = ref(WAY, r);
-      String p =
-          "SUMIFS("
-              + range(CONNECTED_KW, from, to)
-              + ","
-              + range(WAY, from, to)
-              + ","
-              + way
-              + ","
-              + range(LINE, from, to)
-              + ","
-              + line
-              + ")";
-      String q =
-          "SUMIFS("
-              + range(CONNECTED_KVAR, from, to)
-              + ","
-              + range(WAY, from, to)
-              + ","
-              + way
-              + ","
-              + range(LINE, from, to)
-              + ","
-              + line
-              + ")";
+    String way = ref(WAY, r);
+    String p =
+        "SUMIFS("
+            + range(CONNECTED_KW, from, to)
+            + ","
+            + range(WAY, from, to)
+            + ","
+            + way
+            + ","
+            + range(LINE, from, to)
+            + ","
+            + line
+            + ")";
+    String q =
+        "SUMIFS("
+            + range(CONNECTED_KVAR, from, to)
+            + ","
+            + range(WAY, from, to)
+            + ","
+            + way
+            + ","
+            + range(LINE, from, to)
+            + ","
+            + line
+            + ")";
+    formula(
+        row,
+        IB_CONNECTED.ordinal(),
+        "SQRT(" + p + "^2+" + q + "^2)*1000/(" + perLine + ")",
+        circuitAmps,
+        s.amps,
+        w);
+    if (figures != null && subBoard != null && noLoadsOfItsOwn) {
+      // a feeder's Ib is the sub-board's heaviest line after coincidence: live from its sheet
       formula(
           row,
-          IB_CONNECTED.ordinal(),
-          "SQRT(" + p + "^2+" + q + "^2)*1000/(" + perLine + ")",
-          circuitAmps,
+          IB_DESIGN.ordinal(),
+          subBoard.designCurrentAmps(perLine),
+          figures.designCurrentAmps(),
           s.amps,
           w);
+    } else if (figures != null) {
+      number(row, IB_DESIGN.ordinal(), figures.designCurrentAmps(), s.amps, w);
     }
     if (figures != null) {
-      number(row, IB_DESIGN.ordinal(), figures.designCurrentAmps(), s.amps, w);
       number(row, FINDINGS.ordinal(), figures.problemFindings(), s.integer, w);
     }
     return diversity;
@@ -551,6 +638,7 @@ public final class WorkbookWriter {
       SXSSFSheet sheet,
       BoardEntry board,
       BoardFigures figures,
+      List<SubBoardCells> carried,
       int startRow,
       int from,
       int to,
@@ -565,11 +653,12 @@ public final class WorkbookWriter {
       "Demand kW",
       "Demand kvar",
       "Demand A",
-      "Sub-boards kW (at export)",
-      "Sub-boards kvar (at export)",
+      "Sub-board line share kW",
+      "Sub-board line share kvar",
       "Allowance kW (at export)",
-      "Sub-boards connected kW (at export)",
-      "Sub-boards connected kvar (at export)"
+      "Incomer trips at A (at export)",
+      "Headroom A",
+      "Loading %"
     };
     Row head = sheet.createRow(startRow);
     for (int i = 0; i < heads.length; i++) {
@@ -587,30 +676,32 @@ public final class WorkbookWriter {
     for (Phase phase : lines) {
       Row row = sheet.createRow(r - 1);
       text(row, 0, board.isThreePhase() ? phase.name() : "L–N", s.label, null);
-      // sub-boards' connected load on this line, so the line reads as the board page does
-      double carriedKw = figures.carriedConnectedWatts(phase) / 1000.0;
-      double carriedKvar = figures.carriedConnectedVars(phase) / 1000.0;
-      double connectedKw = cache.connectedKilowatts(phase) + carriedKw;
-      double connectedKvar = cache.connectedKilovars(phase) + carriedKvar;
+      // feeder rows carry their sub-boards' load (a three-pole way a third on each line); a
+      // three-line sub-board on a three-pole way carries its lines as they are, hence the shares
+      double connectedKw = cache.connectedKilowatts(phase);
+      double connectedKvar = cache.connectedKilovars(phase);
+      StringBuilder shareKw = new StringBuilder();
+      StringBuilder shareKvar = new StringBuilder();
+      double shareKwValue = 0;
+      double shareKvarValue = 0;
+      for (SubBoardCells sub : carried) {
+        if (sub.carriesLinesAsTheyAre()) {
+          shareKw.append(shareKw.isEmpty() ? "" : "+").append(sub.lineShareKilowatts(phase));
+          shareKvar.append(shareKvar.isEmpty() ? "" : "+").append(sub.lineShareKilovars(phase));
+          shareKwValue += sub.lineShareKilowattsValue(phase);
+          shareKvarValue += sub.lineShareKilovarsValue(phase);
+        }
+      }
       double demandKw =
-          cache.demandKilowatts(phase)
-              + figures.carriedWatts(phase) / 1000.0
-              + figures.allowanceWattsPerLine() / 1000.0;
-      double demandKvar = cache.demandKilovars(phase) + figures.carriedVars(phase) / 1000.0;
+          cache.demandKilowatts(phase) + shareKwValue + figures.allowanceWattsPerLine() / 1000.0;
+      double demandKvar = cache.demandKilovars(phase) + shareKvarValue;
       double demandAmps = cache.amps(demandKw, demandKvar);
-      number(row, 10, carriedKw, s.kilowatts, null);
-      number(row, 11, carriedKvar, s.kilowatts, null);
       formula(
-          row,
-          1,
-          phaseSum(CONNECTED_KW, phase, board, from, to) + "+K" + r,
-          connectedKw,
-          s.kilowatts,
-          null);
+          row, 1, phaseSum(CONNECTED_KW, phase, board, from, to), connectedKw, s.kilowatts, null);
       formula(
           row,
           2,
-          phaseSum(CONNECTED_KVAR, phase, board, from, to) + "+L" + r,
+          phaseSum(CONNECTED_KVAR, phase, board, from, to),
           connectedKvar,
           s.kilowatts,
           null);
@@ -621,8 +712,13 @@ public final class WorkbookWriter {
           cache.amps(connectedKw, connectedKvar),
           s.amps,
           null);
-      number(row, 7, figures.carriedWatts(phase) / 1000.0, s.kilowatts, null);
-      number(row, 8, figures.carriedVars(phase) / 1000.0, s.kilowatts, null);
+      if (shareKw.isEmpty()) {
+        number(row, 7, 0.0, s.kilowatts, null);
+        number(row, 8, 0.0, s.kilowatts, null);
+      } else {
+        formula(row, 7, shareKw.toString(), shareKwValue, s.kilowatts, null);
+        formula(row, 8, shareKvar.toString(), shareKvarValue, s.kilowatts, null);
+      }
       number(row, 9, figures.allowanceWattsPerLine() / 1000.0, s.kilowatts, null);
       formula(
           row,
@@ -639,6 +735,15 @@ public final class WorkbookWriter {
           s.kilowatts,
           null);
       formula(row, 6, "SQRT(E" + r + "^2+F" + r + "^2)*1000/$B$2", demandAmps, s.amps, null);
+      // headroom and loading against the rating that trips the incomer (Ir, or In), as the page
+      Double trips = tripRatingAmps(figures.demand());
+      if (trips == null) {
+        text(row, 10, "not assessed — missing incomer rating", s.text, null);
+      } else {
+        number(row, 10, trips, s.amps, null);
+        formula(row, 11, "K" + r + "-G" + r, trips - demandAmps, s.amps, null);
+        formula(row, 12, "100*G" + r + "/K" + r, 100 * demandAmps / trips, s.percent, null);
+      }
       sumConnectedKw += connectedKw;
       sumConnectedKvar += connectedKvar;
       sumDemandKw += demandKw;
@@ -648,11 +753,6 @@ public final class WorkbookWriter {
       r++;
     }
     int last = r - 1;
-    Row carried = sheet.createRow(r - 1);
-    text(carried, 0, "Sub-boards connected (at export, in the lines above)", s.label, null);
-    number(carried, 1, figures.carriedConnectedWatts() / 1000.0, s.kilowatts, null);
-    number(carried, 2, figures.carriedConnectedVars() / 1000.0, s.kilowatts, null);
-    int carriedRow = r++;
     Row total = sheet.createRow(r - 1);
     text(total, 0, "Board", s.totalLabel, null);
     double totalConnectedKw = sumConnectedKw;
@@ -715,6 +815,15 @@ public final class WorkbookWriter {
         highestAmps);
   }
 
+  /** The incomer rating that trips (Ir for a moulded-case breaker, In otherwise); null if none. */
+  private static Double tripRatingAmps(BoardDemand demand) {
+    if (demand == null || demand.incomer() == null) {
+      return null;
+    }
+    Double rating = demand.incomer().ratingAmps();
+    return rating != null && rating > 0 ? rating : null;
+  }
+
   private static String phaseSum(
       ScheduleColumn column, Phase phase, BoardEntry board, int from, int to) {
     if (!board.isThreePhase()) {
@@ -746,6 +855,8 @@ public final class WorkbookWriter {
     text(facts, 1, data.earthing(), s.text, null);
     text(facts, 2, "Exported", s.label, null);
     text(facts, 3, data.exportedOn().toString(), s.text, null);
+    text(facts, 4, "Rule set", s.label, null);
+    text(facts, 5, data.ruleSetTitle(), s.text, null);
     text(sheet.createRow(2), 0, "Caution: " + caution, s.caution, null);
     String[] heads = {
       "Board",

@@ -46,6 +46,7 @@ public class CapacityController {
   @ModelAttribute
   void choices(Model model) {
     model.addAttribute("categories", LoadCategory.values());
+    model.addAttribute("locations", com.wayledger.engine.CircuitLocation.values());
     model.addAttribute("ratingUnits", List.of(RatingUnit.W, RatingUnit.A));
     model.addAttribute("allLines", Phase.values());
   }

@@ -1,5 +1,6 @@
 package com.wayledger.loadlog;
 
+import com.wayledger.engine.CircuitLocation;
 import com.wayledger.engine.LoadCategory;
 import com.wayledger.engine.RatingUnit;
 import com.wayledger.engine.capacity.NewLoad;
@@ -25,7 +26,28 @@ public record CapacityForm(
     @NotNull RatingUnit ratingUnit,
     @NotNull @DecimalMin(value = "0", inclusive = false) @DecimalMax("1") Double powerFactor,
     Boolean threePhase,
-    @DecimalMin("1") @DecimalMax("50") Double startUpSurgeMultiple) {
+    @DecimalMin("1") @DecimalMax("50") Double startUpSurgeMultiple,
+    CircuitLocation location) {
+
+  /** A load whose location is not given: the argument list from before locations. */
+  public CapacityForm(
+      String description,
+      LoadCategory category,
+      Double ratingValue,
+      RatingUnit ratingUnit,
+      Double powerFactor,
+      Boolean threePhase,
+      Double startUpSurgeMultiple) {
+    this(
+        description,
+        category,
+        ratingValue,
+        ratingUnit,
+        powerFactor,
+        threePhase,
+        startUpSurgeMultiple,
+        null);
+  }
 
   public static CapacityForm blank() {
     return new CapacityForm("", LoadCategory.FIXED_APPLIANCE, null, RatingUnit.W, 1.0, false, null);
@@ -39,6 +61,7 @@ public record CapacityForm(
         ratingUnit == RatingUnit.VA ? RatingUnit.W : ratingUnit,
         powerFactor,
         Boolean.TRUE.equals(threePhase),
-        startUpSurgeMultiple);
+        startUpSurgeMultiple,
+        location);
   }
 }

@@ -74,13 +74,16 @@ public class CapacityService {
       Circuit existing = schedule.circuit(candidate.circuitId());
       CircuitForm now = CircuitForm.of(existing);
       DeviceSpec device = candidate.kind() == CandidateKind.SPARE_WAY ? null : candidate.device();
-      schedule.updateCircuit(existing.getId(), now.inUseAs(load.description(), device), reason);
+      schedule.updateCircuit(
+          existing.getId(), now.inUseAs(load.description(), device).at(load.location()), reason);
       circuitId = existing.getId();
     } else {
       CircuitForm blank = CircuitForm.blankAt(candidate.wayNumber(), candidate.position());
       Circuit added =
           schedule.addCircuit(
-              boardId, blank.inUseAs(load.description(), candidate.device()), reason);
+              boardId,
+              blank.inUseAs(load.description(), candidate.device()).at(load.location()),
+              reason);
       circuitId = added.getId();
     }
     schedule.addLoad(circuitId, loadForm, reason);

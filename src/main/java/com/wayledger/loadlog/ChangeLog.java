@@ -165,7 +165,8 @@ public class ChangeLog {
         rs.getString("before_snapshot"),
         rs.getString("after_snapshot"),
         rs.getString("reason"),
-        rs.getString("previous_hash"));
+        rs.getString("previous_hash"),
+        effectiveOn(rs));
   }
 
   private static ChangeLogEntry entry(ResultSet rs, int row) throws SQLException {
@@ -180,6 +181,12 @@ public class ChangeLog {
         rs.getString("summary"),
         rs.getString("before_snapshot"),
         rs.getString("after_snapshot"),
-        rs.getString("reason"));
+        rs.getString("reason"),
+        effectiveOn(rs));
+  }
+
+  private static java.time.LocalDate effectiveOn(ResultSet rs) throws SQLException {
+    java.sql.Date day = rs.getDate("effective_on");
+    return day == null ? null : day.toLocalDate();
   }
 }

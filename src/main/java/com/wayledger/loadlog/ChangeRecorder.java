@@ -59,6 +59,12 @@ class ChangeRecorder {
     String before = change.before() == null ? null : json.writeValueAsString(change.before());
     String after = change.after() == null ? null : json.writeValueAsString(change.after());
     String reason = reason(change.reason());
+    java.time.LocalDate effectiveOn = com.wayledger.system.EffectiveDate.current();
+    if (effectiveOn != null
+        && effectiveOn.isAfter(java.time.LocalDate.now(java.time.ZoneOffset.UTC))) {
+      throw new IllegalArgumentException(
+          "effective day " + effectiveOn + " is after the day of recording");
+    }
     if (stampedByDatabase) {
       jdbc.sql("SELECT set_config('wayledger.username', ?, true)")
           .param(user)
@@ -66,7 +72,8 @@ class ChangeRecorder {
           .single();
       jdbc.sql(
               "INSERT INTO change_log (site_id, board_id, circuit_id, username, kind, summary,"
-                  + " before_snapshot, after_snapshot, reason) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?)")
+                  + " before_snapshot, after_snapshot, reason, effective_on)"
+                  + " VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?)")
           .params(
               change.siteId(),
               change.boardId(),
@@ -76,13 +83,14 @@ class ChangeRecorder {
               summary,
               before,
               after,
-              reason)
+              reason,
+              effectiveOn == null ? null : java.sql.Date.valueOf(effectiveOn))
           .update();
       return;
     }
     ReentrantLock releaseAfterInsert = holdSiteUntilCommit(change.siteId());
     try {
-      insertChained(change, user, summary, before, after, reason);
+      insertChained(change, user, summary, before, after, reason, effectiveOn);
     } finally {
       if (releaseAfterInsert != null) {
         releaseAfterInsert.unlock();
@@ -96,7 +104,8 @@ class ChangeRecorder {
       String summary,
       String before,
       String after,
-      String reason) {
+      String reason,
+      java.time.LocalDate effectiveOn) {
     record Last(long seq, String hash) {}
     Last last =
         jdbc.sql(
@@ -120,11 +129,12 @@ class ChangeRecorder {
             before,
             after,
             reason,
-            last.hash());
+            last.hash(),
+            effectiveOn);
     jdbc.sql(
             "INSERT INTO change_log (site_id, board_id, circuit_id, happened_at, username, db_user,"
                 + " kind, summary, before_snapshot, after_snapshot, reason, site_seq, previous_hash,"
-                + " entry_hash) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)")
+                + " entry_hash, effective_on) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)")
         .params(
             fields.siteId(),
             fields.boardId(),
@@ -139,7 +149,8 @@ class ChangeRecorder {
             fields.reason(),
             fields.siteSeq(),
             fields.previousHash(),
-            fields.hash())
+            fields.hash(),
+            effectiveOn == null ? null : java.sql.Date.valueOf(effectiveOn))
         .update();
   }
 

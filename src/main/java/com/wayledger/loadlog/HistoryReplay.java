@@ -47,11 +47,14 @@ final class HistoryReplay {
     Set<Long> seen = new HashSet<>();
     boolean boardSeen = false;
     for (ChangeLogEntry entry : entries) {
-      if (entry.kind() == ChangeKind.BALANCING_APPLIED) {
+      if (isManyCircuits(entry)) {
         for (CircuitSpec moved : Snapshots.circuits(entry.before())) {
           if (seen.add(moved.id())) {
             circuits.put(moved.id(), moved);
           }
+        }
+        for (CircuitSpec added : Snapshots.circuits(entry.after())) {
+          seen.add(added.id());
         }
       } else if (entry.circuitId() == null) {
         if (!boardSeen && entry.kind() != ChangeKind.BOARD_ADDED && entry.before() != null) {
@@ -70,8 +73,16 @@ final class HistoryReplay {
     List<HistoryPoint> points = new ArrayList<>();
     for (ChangeLogEntry entry : entries) {
       boolean removed = false;
-      if (entry.kind() == ChangeKind.BALANCING_APPLIED) {
-        Snapshots.circuits(entry.after()).forEach(moved -> circuits.put(moved.id(), moved));
+      if (isManyCircuits(entry)) {
+        List<CircuitSpec> after = Snapshots.circuits(entry.after());
+        Set<Long> kept = new HashSet<>();
+        after.forEach(circuit -> kept.add(circuit.id()));
+        for (CircuitSpec gone : Snapshots.circuits(entry.before())) {
+          if (!kept.contains(gone.id())) {
+            circuits.remove(gone.id()); // removed by an import
+          }
+        }
+        after.forEach(circuit -> circuits.put(circuit.id(), circuit));
       } else if (entry.circuitId() == null) {
         if (entry.after() != null) {
           header = Snapshots.board(entry.after());
@@ -94,15 +105,24 @@ final class HistoryReplay {
       points.add(
           new HistoryPoint(
               entry.id(),
-              entry.happenedAt(),
+              entry.effectiveAt(),
               entry.username(),
               entry.kind(),
               entry.summary(),
               entry.reason(),
               currents,
-              removed));
+              removed,
+              entry.isBackDated()));
     }
     return points;
+  }
+
+  /**
+   * An entry about many circuits at once (a balancing plan, an import): its snapshots list the
+   * circuits before (changed and removed) and after (added and changed).
+   */
+  private static boolean isManyCircuits(ChangeLogEntry entry) {
+    return entry.kind() == ChangeKind.BALANCING_APPLIED || entry.kind() == ChangeKind.IMPORT;
   }
 
   static Map<Phase, Double> currents(

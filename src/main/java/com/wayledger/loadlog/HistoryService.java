@@ -27,8 +27,15 @@ public class HistoryService {
   public List<HistoryPoint> points(long boardId) {
     Board board = boards.get(boardId);
     var site = board.getSite();
+    // in the order the changes took effect: a back-dated entry takes its place in the story
+    List<com.wayledger.loadlog.ChangeLogEntry> entries =
+        log.boardHistory(boardId).stream()
+            .sorted(
+                java.util.Comparator.comparing(ChangeLogEntry::effectiveAt)
+                    .thenComparingLong(ChangeLogEntry::id))
+            .toList();
     return HistoryReplay.replay(
-        log.boardHistory(boardId),
+        entries,
         ScheduleMapper.headerOf(board),
         ScheduleMapper.supplyOf(site),
         analysis.methods(),

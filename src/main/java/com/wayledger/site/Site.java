@@ -40,6 +40,14 @@ public class Site {
   private Double supplyFuseRatingAmps;
   private String defaultDiversityMethod;
   private String notes;
+
+  /** Key of the rule set the site is checked against (engine.rules.RuleSets); fixed at creation. */
+  private String ruleSet = com.wayledger.engine.SiteSpec.DEFAULT_RULE_SET_KEY;
+
+  @Enumerated(EnumType.STRING)
+  private com.wayledger.engine.SupplySystem supplySystem =
+      com.wayledger.engine.SupplySystem.IEC_WYE;
+
   private double loadingThresholdPercent = SiteForm.DEFAULT_LOADING_THRESHOLD_PERCENT;
 
   /** Cable conditions this site's circuits inherit unless they record their own. */
@@ -95,6 +103,14 @@ public class Site {
 
   /** Copies every editable field from a validated form. */
   void apply(SiteForm form) {
+    if (id == null && form.ruleSet() != null) {
+      // chosen when the site is created and kept: every record and finding of the site is read in
+      // one rule set's terms
+      ruleSet = form.ruleSet();
+    }
+    if (form.supplySystem() != null) {
+      supplySystem = form.supplySystem();
+    }
     name = form.name().strip();
     address = blankToNull(form.address());
     earthingSystem = form.earthingSystem();
@@ -157,6 +173,15 @@ public class Site {
 
   public String getDefaultDiversityMethod() {
     return defaultDiversityMethod;
+  }
+
+  /** Key of the site's rule set ("IEC", "NEC"). */
+  public String getRuleSet() {
+    return ruleSet;
+  }
+
+  public com.wayledger.engine.SupplySystem getSupplySystem() {
+    return supplySystem;
   }
 
   public String getNotes() {

@@ -41,7 +41,9 @@ public class SiteApiController {
       Double supplyFuseRatingAmps,
       String defaultDiversityMethod,
       String notes,
-      long version) {
+      long version,
+      String ruleSet,
+      com.wayledger.engine.SupplySystem supplySystem) {
 
     static SiteView of(Site site) {
       return new SiteView(
@@ -57,7 +59,9 @@ public class SiteApiController {
           site.getSupplyFuseRatingAmps(),
           site.getDefaultDiversityMethod(),
           site.getNotes(),
-          site.getVersion());
+          site.getVersion(),
+          site.getRuleSet(),
+          site.getSupplySystem());
     }
   }
 

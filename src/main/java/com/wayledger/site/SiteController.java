@@ -36,6 +36,18 @@ public class SiteController {
     return methods.entries();
   }
 
+  @ModelAttribute("ruleSets")
+  java.util.List<String> ruleSets() {
+    return com.wayledger.engine.rules.RuleSets.all().stream()
+        .map(com.wayledger.engine.rules.RuleSet::key)
+        .toList();
+  }
+
+  @ModelAttribute("supplySystems")
+  com.wayledger.engine.SupplySystem[] supplySystems() {
+    return com.wayledger.engine.SupplySystem.values();
+  }
+
   @ModelAttribute("earthingSystems")
   EarthingSystem[] earthingSystems() {
     return EarthingSystem.values();

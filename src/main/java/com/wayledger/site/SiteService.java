@@ -73,6 +73,7 @@ public class SiteService {
 
   @Transactional
   public Site create(SiteForm form) {
+    form = form.normalised();
     checkRules(form, null);
     Site site = new Site(form.name());
     site.apply(form);
@@ -97,6 +98,29 @@ public class SiteService {
     if (form.version() != null && !Objects.equals(form.version(), site.getVersion())) {
       throw new StaleEditException("Site " + site.getName(), SiteForm.of(site));
     }
+    if (form.ruleSet() != null
+        && !form.ruleSet().isBlank()
+        && !form.ruleSet().strip().equals(site.getRuleSet())) {
+      throw new RuleViolation("ruleSet", "site.ruleSet.fixed");
+    }
+    form =
+        new SiteForm(
+                form.name(),
+                form.address(),
+                form.earthingSystem(),
+                form.nominalVoltageVolts(),
+                form.phases(),
+                form.frequencyHertz(),
+                form.externalLoopImpedanceOhms(),
+                form.prospectiveFaultCurrentKiloAmps(),
+                form.supplyFuseRatingAmps(),
+                form.defaultDiversityMethod(),
+                form.notes(),
+                form.version(),
+                form.loadingThresholdPercent(),
+                site.getRuleSet(),
+                form.supplySystem() == null ? site.getSupplySystem() : form.supplySystem())
+            .normalised();
     checkRules(form, id);
     if (form.phases() == 1 && site.getPhases() != 1) {
       // Consistency across the site: a single-phase supply cannot feed three-phase boards. The
@@ -152,6 +176,14 @@ public class SiteService {
   }
 
   private void checkRules(SiteForm form, Long id) {
+    java.util.Optional<com.wayledger.engine.rules.RuleSet> ruleSet =
+        com.wayledger.engine.rules.RuleSets.find(form.ruleSetOrDefault());
+    if (ruleSet.isEmpty()) {
+      throw new RuleViolation("ruleSet", "site.ruleSet.unknown");
+    }
+    if (!ruleSet.get().supplySystems().contains(form.supplySystem())) {
+      throw new RuleViolation("supplySystem", "site.supplySystem.notOfRuleSet");
+    }
     if (form.phases() != 1 && form.phases() != 3) {
       throw new RuleViolation("phases", "site.phases.invalid");
     }

@@ -52,6 +52,8 @@ class BoardControllerIntegrationTests {
   @MockitoBean SiteService sites;
   @MockitoBean BoardRepository boardRepository;
   @MockitoBean CircuitRepository circuitRepository;
+  @MockitoBean DwellingRepository dwellingRepository;
+  @MockitoBean MeasuredDemandRepository measuredDemandRepository;
 
   @BeforeEach
   void storedBoard() {

@@ -62,6 +62,8 @@ class ScheduleControllerIntegrationTests {
   @MockitoBean SiteService sites;
   @MockitoBean BoardRepository boardRepository;
   @MockitoBean CircuitRepository circuitRepository;
+  @MockitoBean DwellingRepository dwellingRepository;
+  @MockitoBean MeasuredDemandRepository measuredDemandRepository;
 
   @BeforeEach
   void storedBoard() {
@@ -174,6 +176,32 @@ class ScheduleControllerIntegrationTests {
             eq(BOARD_ID),
             org.mockito.ArgumentMatchers.argThat(f -> !Boolean.TRUE.equals(f.ringFinal())),
             any());
+  }
+
+  @Test
+  void locationChoiceReachesTheFormAndBlankMeansNotRecorded() throws Exception {
+    given(schedule.addCircuit(eq(BOARD_ID), any(), any())).willReturn(circuit(board()));
+
+    mvc.perform(
+            postForm("/boards/5/circuits", circuitFields(), "location", "BATH_OR_SHOWER")
+                .with(editor())
+                .with(csrf()))
+        .andExpect(status().is3xxRedirection());
+    verify(schedule)
+        .addCircuit(
+            eq(BOARD_ID),
+            org.mockito.ArgumentMatchers.argThat(
+                f -> f.location() == com.wayledger.engine.CircuitLocation.BATH_OR_SHOWER),
+            any());
+
+    mvc.perform(
+            postForm("/boards/5/circuits", circuitFields(), "location", "")
+                .with(editor())
+                .with(csrf()))
+        .andExpect(status().is3xxRedirection());
+    verify(schedule)
+        .addCircuit(
+            eq(BOARD_ID), org.mockito.ArgumentMatchers.argThat(f -> f.location() == null), any());
   }
 
   @Test

@@ -165,6 +165,29 @@ abstract class ScheduleStoreContract {
   }
 
   @Test
+  void circuitLocationIsStoredReadBackChangedAndCleared() {
+    Circuit saved =
+        schedule.addCircuit(
+            board.getId(),
+            circuit(6, PhasePosition.L3, "Shower room lights")
+                .at(com.wayledger.engine.CircuitLocation.BATH_OR_SHOWER));
+    String stored =
+        jdbc.sql("SELECT location FROM circuit WHERE id = ?")
+            .param(saved.getId())
+            .query(String.class)
+            .single();
+    assertThat(stored).as("location column").isEqualTo("BATH_OR_SHOWER");
+    CircuitForm read = CircuitForm.of(schedule.circuit(saved.getId()));
+    assertThat(read.location()).isEqualTo(com.wayledger.engine.CircuitLocation.BATH_OR_SHOWER);
+
+    schedule.updateCircuit(saved.getId(), read.at(com.wayledger.engine.CircuitLocation.OUTDOORS));
+    assertThat(schedule.circuit(saved.getId()).getLocation())
+        .isEqualTo(com.wayledger.engine.CircuitLocation.OUTDOORS);
+    schedule.updateCircuit(saved.getId(), CircuitForm.of(schedule.circuit(saved.getId())).at(null));
+    assertThat(schedule.circuit(saved.getId()).getLocation()).as("cleared: not recorded").isNull();
+  }
+
+  @Test
   void secondCircuitOnAnOccupiedPositionIsRefused() {
     schedule.addCircuit(board.getId(), circuit(3, PhasePosition.L1, "First"));
     assertThatThrownBy(

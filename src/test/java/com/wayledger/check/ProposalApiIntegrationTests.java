@@ -84,4 +84,52 @@ class ProposalApiIntegrationTests {
                 .with(viewer()))
         .andExpect(status().isForbidden());
   }
+
+  @Test
+  void circuitLocationIsReadAndChangedOverTheApiAndDecidesTheResidualCurrentFinding()
+      throws Exception {
+    long yard = circuit("Yard floodlights");
+    mvc.perform(get("/api/circuits/{id}", yard).with(viewer()))
+        .andExpect(status().isOk())
+        .andExpect(jsonPath("$.fields.location").value("OUTDOORS"));
+    long board =
+        jdbc.sql("SELECT board_id FROM circuit WHERE id = ?")
+            .param(yard)
+            .query(Long.class)
+            .single();
+    String path =
+        "$.result.circuits[?(@.circuitId == " + yard + ")].findings[?(@.check == 'SOCKET_RCD')]";
+    mvc.perform(get("/api/boards/{id}/findings", board).with(viewer()))
+        .andExpect(status().isOk())
+        .andExpect(
+            jsonPath(
+                path + ".reference", org.hamcrest.Matchers.hasItem(containsString("411.3.3"))));
+
+    String body =
+        mvc.perform(get("/api/circuits/{id}", yard).with(viewer()))
+            .andReturn()
+            .getResponse()
+            .getContentAsString();
+    String fields =
+        new tools.jackson.databind.ObjectMapper()
+            .readTree(body)
+            .get("fields")
+            .toString()
+            .replace("\"location\":\"OUTDOORS\"", "\"location\":null");
+    mvc.perform(
+            org.springframework.test.web.servlet.request.MockMvcRequestBuilders.put(
+                    "/api/circuits/{id}", yard)
+                .contentType(org.springframework.http.MediaType.APPLICATION_JSON)
+                .content(fields)
+                .with(editor()))
+        .andExpect(status().isOk())
+        .andExpect(jsonPath("$.fields.location").doesNotExist());
+    mvc.perform(get("/api/boards/{id}/findings", board).with(viewer()))
+        .andExpect(status().isOk())
+        .andExpect(jsonPath(path + ".verdict", org.hamcrest.Matchers.hasItem("NOT_ASSESSED")))
+        .andExpect(
+            jsonPath(
+                path + ".summary",
+                org.hamcrest.Matchers.hasItem(containsString("location not recorded"))));
+  }
 }

@@ -100,6 +100,68 @@ class ImportReadingTests {
   }
 
   @Test
+  void circuitLocationSurvivesTheWorkbookRoundTrip() throws IOException {
+    List<BoardEntry> shop = ExchangeFixtures.shop();
+    BoardEntry main = shop.get(0);
+    List<CircuitEntry> located = new ArrayList<>();
+    for (CircuitEntry e : main.circuits()) {
+      com.wayledger.engine.CircuitLocation where =
+          e.circuit().description().equals("Shop lights")
+              ? com.wayledger.engine.CircuitLocation.OUTDOORS
+              : e.circuit().description().equals("Cooker")
+                  ? com.wayledger.engine.CircuitLocation.INDOORS
+                  : null;
+      located.add(new CircuitEntry(e.circuitId(), e.circuit().at(where), e.loads()));
+    }
+    BoardEntry changed =
+        new BoardEntry(
+            main.id(),
+            main.reference(),
+            main.location(),
+            main.phases(),
+            main.wayCount(),
+            main.parentReference(),
+            main.incomerLabel(),
+            main.depth(),
+            located);
+    ExportData data =
+        ExchangeFixtures.export(
+            List.of(changed, shop.get(1)),
+            com.wayledger.engine.demand.DiversityMethods.UK_SMALL_SHOP);
+
+    ImportPlan plan = plan(xlsx(data), "shop.xlsx", 3, 12);
+
+    assertThat(plan.rows()).as("rows").allMatch(ImportPlan.PreviewRow::isValid);
+    assertThat(imported(plan)).isEqualTo(expected(changed));
+  }
+
+  @Test
+  void circuitLocationIsReadInWordsOrCodesAndAnUnknownOneIsRefusedOnItsRow() {
+    String csv =
+        """
+        Way,Line,Circuit,Device,Curve,In A,Location,Load,Category,Rating,Unit,PF
+        1,L1,Yard lights,MCB,B,6,OUTDOORS,Lamps,LIGHTING,100,W,0.9
+        2,L2,Bath fan,MCB,B,6,Bath or shower,Fan,OTHER,30,W,0.9
+        3,L3,Store lights,MCB,B,6,,Lamps,LIGHTING,100,W,0.9
+        4,L1,Odd lights,MCB,B,6,cellar,Lamps,LIGHTING,100,W,0.9
+        """;
+    ImportPlan plan = plan(csv.getBytes(StandardCharsets.UTF_8), "where.csv", 3, 12);
+
+    assertThat(plan.circuits())
+        .extracting(c -> c.circuit().description(), c -> c.circuit().location())
+        .containsExactly(
+            org.assertj.core.groups.Tuple.tuple(
+                "Yard lights", com.wayledger.engine.CircuitLocation.OUTDOORS),
+            org.assertj.core.groups.Tuple.tuple(
+                "Bath fan", com.wayledger.engine.CircuitLocation.BATH_OR_SHOWER),
+            org.assertj.core.groups.Tuple.tuple("Store lights", null));
+    assertThat(problem(plan, 5))
+        .as("unknown location")
+        .extracting(ImportPlan.Problem::field, ImportPlan.Problem::code)
+        .containsExactly(ImportField.LOCATION, "import.cell.unknownChoice");
+  }
+
+  @Test
   void ourCsvEndsWithTheCautionAfterABlankLine() throws IOException {
     String[] lines =
         new String(csv(ExchangeFixtures.shopExport()), StandardCharsets.UTF_8).split("\r?\n");

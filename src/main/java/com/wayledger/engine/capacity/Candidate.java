@@ -33,10 +33,6 @@ public record Candidate(
 
   /** "KB1 way 11 L2", or "KB1 way 4 L1–L3". */
   public String label() {
-    return boardReference
-        + " way "
-        + wayNumber
-        + " "
-        + (position == PhasePosition.THREE_POLE ? "L1–L3" : position.name());
+    return boardReference + " way " + wayNumber + " " + position.label();
   }
 }

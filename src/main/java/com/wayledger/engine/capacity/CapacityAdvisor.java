@@ -21,7 +21,6 @@ import com.wayledger.engine.protection.CircuitFindings;
 import com.wayledger.engine.protection.CircuitLoading;
 import com.wayledger.engine.protection.DeviceProposal;
 import com.wayledger.engine.protection.DeviceProposer;
-import com.wayledger.engine.protection.ProtectionEngine;
 import com.wayledger.engine.protection.ProtectionSettings;
 import com.wayledger.engine.protection.RecordedMccbSettings;
 import com.wayledger.engine.protection.SiteFindings;
@@ -250,13 +249,14 @@ public final class CapacityAdvisor {
               null,
               List.of(load.toLoadSpec()),
               null,
-              null));
+              null,
+              false,
+              load.location()));
     }
     BoardSpec changed = board.withCircuits(circuits);
     List<BoardSpec> boards =
         site.boards().stream().map(b -> b.id() == board.id() ? changed : b).toList();
-    return new SiteSpec(
-        site.id(), site.name(), site.supply(), site.defaultDiversityMethodKey(), boards);
+    return site.withBoards(boards);
   }
 
   private static CircuitSpec placedOn(
@@ -277,7 +277,8 @@ public final class CapacityAdvisor {
               loads,
               null,
               circuit.measuredLoopImpedanceOhms(),
-              circuit.ringFinal());
+              circuit.ringFinal(),
+              circuit.location());
       case SPARE_WAY ->
           new CircuitSpec(
               circuit.id(),
@@ -291,7 +292,8 @@ public final class CapacityAdvisor {
               List.of(load.toLoadSpec()),
               null,
               circuit.measuredLoopImpedanceOhms(),
-              circuit.ringFinal());
+              circuit.ringFinal(),
+              load.location());
       case EMPTY_POSITION ->
           new CircuitSpec(
               circuit.id(),
@@ -304,7 +306,9 @@ public final class CapacityAdvisor {
               null,
               List.of(load.toLoadSpec()),
               null,
-              null);
+              null,
+              false,
+              load.location());
     };
   }
 
@@ -434,7 +438,12 @@ public final class CapacityAdvisor {
       for (TripCurve curve : TripCurve.values()) {
         if (surgeAmps < curve.lowestInstantMultiple() * rating) {
           // a category that needs 30 mA additional protection gets it in the device itself
-          ResidualCurrentRules.Rule rcd = ResidualCurrentRules.of(load.category());
+          // where it goes cannot be told: 30 mA on the safe side, named in the proposal
+          ResidualCurrentRules.Rule rcd =
+              ResidualCurrentRules.needsLocation(
+                      List.of(load.toLoadSpec()), load.location(), rating)
+                  ? ResidualCurrentRules.LOCATION_NOT_RECORDED
+                  : ResidualCurrentRules.forCircuit(List.of(load.toLoadSpec()), load.location());
           boolean rcbo = rcd != null && rcd.covers(rating);
           DeviceSpec device =
               rcbo
@@ -450,7 +459,14 @@ public final class CapacityAdvisor {
           return withDevice(
               candidate,
               device,
-              (rcbo ? "RCBO 30 mA type A (" + rcd.reference() + ") type " : "MCB type ")
+              (rcbo
+                      ? "RCBO 30 mA type A ("
+                          + (rcd == ResidualCurrentRules.LOCATION_NOT_RECORDED
+                              ? rcd.words() + ", "
+                              : "")
+                          + rcd.reference()
+                          + ") type "
+                      : "MCB type ")
                   + curve
                   + " "
                   + fixed(rating)
@@ -686,9 +702,12 @@ public final class CapacityAdvisor {
                 board.boardId(),
                 currents,
                 board.unbalancePercent(),
-                board.lines() == 3 ? board.neutralCurrentAmps() : null));
+                board.lines() >= 2 ? board.neutralCurrentAmps() : null));
       }
-      return new Analysis(demand, ProtectionEngine.check(site, circuits, boards, mccb, settings));
+      return new Analysis(
+          demand,
+          com.wayledger.engine.rules.RuleSets.of(site.ruleSetKey())
+              .check(site, circuits, boards, mccb, settings));
     }
   }
 }

@@ -1,5 +1,6 @@
 package com.wayledger.engine.capacity;
 
+import com.wayledger.engine.CircuitLocation;
 import com.wayledger.engine.LoadCategory;
 import com.wayledger.engine.LoadSpec;
 import com.wayledger.engine.RatingUnit;
@@ -16,6 +17,8 @@ import com.wayledger.engine.RatingUnit;
  * @param threePhase whether it needs a three-pole way
  * @param startUpSurgeMultiple peak start-up current as a multiple of running current; null when
  *     none
+ * @param location where it will be, for the residual-current rules; null when not given (a proposal
+ *     then includes 30 mA protection, the safe side)
  */
 public record NewLoad(
     String description,
@@ -24,7 +27,28 @@ public record NewLoad(
     RatingUnit ratingUnit,
     double powerFactor,
     boolean threePhase,
-    Double startUpSurgeMultiple) {
+    Double startUpSurgeMultiple,
+    CircuitLocation location) {
+
+  /** A load whose location is not given: the argument list from before locations. */
+  public NewLoad(
+      String description,
+      LoadCategory category,
+      double ratingValue,
+      RatingUnit ratingUnit,
+      double powerFactor,
+      boolean threePhase,
+      Double startUpSurgeMultiple) {
+    this(
+        description,
+        category,
+        ratingValue,
+        ratingUnit,
+        powerFactor,
+        threePhase,
+        startUpSurgeMultiple,
+        null);
+  }
 
   /**
    * Assumed duration of a start-up surge when only its multiple is given, ms (a typical motor

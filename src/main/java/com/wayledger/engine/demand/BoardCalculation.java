@@ -2,11 +2,13 @@ package com.wayledger.engine.demand;
 
 import com.wayledger.engine.BoardSpec;
 import com.wayledger.engine.CircuitSpec;
+import com.wayledger.engine.LinePhasors;
 import com.wayledger.engine.LoadCategory;
 import com.wayledger.engine.LoadSpec;
 import com.wayledger.engine.Phase;
 import com.wayledger.engine.PhasePosition;
 import com.wayledger.engine.SupplySpec;
+import com.wayledger.engine.SupplySystem;
 import com.wayledger.engine.WayStatus;
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -40,7 +42,9 @@ final class BoardCalculation {
   static BoardDemand evaluate(BoardSpec board, Context context) {
     double u0 = context.nominalVoltageVolts();
     DiversityMethod method = context.method();
-    int boardLines = board.isThreePhase() ? 3 : 1;
+    SupplySystem system =
+        context.supply() == null ? SupplySystem.IEC_WYE : context.supply().system();
+    int boardLines = system.lineCount(board.phases());
     List<String> notAssessed = new ArrayList<>();
     List<String> notes = new ArrayList<>(context.notes());
 
@@ -66,12 +70,19 @@ final class BoardCalculation {
         reason[c] = "not assessed — missing position (L1, L2, L3 or three-pole)";
       } else if (boardLines == 1 && circuit.position() == PhasePosition.THREE_POLE) {
         reason[c] = "not assessed — three-pole position on a single-phase board";
+      } else if (boardLines == 1 && circuit.position().isLineToLine()) {
+        reason[c] = "not assessed — two-pole position on a single-phase two-wire board";
+      } else if (boardLines == 2 && !fitsSplitPhase(circuit.position())) {
+        reason[c] =
+            "not assessed — position "
+                + circuit.position()
+                + " on a split-phase board (lines A and B only)";
       }
       position[c] = reason[c] == null ? effectivePosition(circuit.position(), boardLines) : null;
-      boolean threePole = position[c] == PhasePosition.THREE_POLE;
+      double perAmp = LinePhasors.voltAmperesPerAmp(system, position[c], u0);
       if (reason[c] == null) {
         for (LoadSpec load : circuit.loads()) {
-          ConnectedLoad connected = ConnectedLoad.of(load, u0, threePole);
+          ConnectedLoad connected = ConnectedLoad.ofPerAmp(load, perAmp);
           if (!connected.isAssessed()) {
             reason[c] =
                 "not assessed — load \""
@@ -88,7 +99,7 @@ final class BoardCalculation {
         continue;
       }
       for (LoadSpec load : circuit.loads()) {
-        ConnectedLoad connected = ConnectedLoad.of(load, u0, threePole);
+        ConnectedLoad connected = ConnectedLoad.ofPerAmp(load, perAmp);
         lines.add(
             c, load.category(), load.quantity(), connected.activeWatts(), connected.reactiveVars());
       }
@@ -149,7 +160,7 @@ final class BoardCalculation {
         if (count == 0) {
           continue;
         }
-        double voltAmperesPerAmp = u0 * (position[c] == PhasePosition.THREE_POLE ? 3 : 1);
+        double voltAmperesPerAmp = LinePhasors.voltAmperesPerAmp(system, position[c], u0);
         double connected = sumApparent(lines, members, count);
         double demand =
             GroupDemandCalculator.apply(group.rule(), lines, members, count, voltAmperesPerAmp);
@@ -288,10 +299,10 @@ final class BoardCalculation {
         demandWatts += lines.activeWatts[i] * factor;
         demandVars += lines.reactiveVars[i] * factor;
       }
-      addToPhases(phaseWatts, phaseVars, position[c], demandWatts, demandVars);
+      LinePhasors.add(system, position[c], demandWatts, demandVars, phaseWatts, phaseVars);
       double subBoardApparent = 0.0;
       BoardDemand child = subBoard[c];
-      double perLineVolts = u0 * (threePole ? 3 : 1);
+      double perLineVolts = LinePhasors.voltAmperesPerAmp(system, position[c], u0);
       // a three-pole feeder's Ib is its heaviest line, not the average of the three
       Double heaviestLineAmps = null;
       if (child != null && threePole && child.phases().size() == 3) {
@@ -321,7 +332,7 @@ final class BoardCalculation {
             phaseVars[phase.phase().ordinal()] += phase.demandVars() * k;
           }
         } else {
-          addToPhases(phaseWatts, phaseVars, position[c], childWatts, childVars);
+          LinePhasors.add(system, position[c], childWatts, childVars, phaseWatts, phaseVars);
         }
       }
       connectedWatts += ownWatts;
@@ -409,6 +420,18 @@ final class BoardCalculation {
     Double incomerRating = board.incomerTripRatingAmps();
     Phase[] phases = Phase.values();
     List<PhaseDemand> phaseResults = new ArrayList<>(boardLines);
+    double[] connectedLineWatts = new double[3];
+    double[] connectedLineVars = new double[3];
+    for (CircuitDemand circuit : circuitResults) {
+      if (!circuit.isAssessed() || circuit.position() == null) {
+        continue;
+      }
+      int share = circuit.position() == PhasePosition.THREE_POLE ? 3 : 1;
+      for (Phase line : circuit.position().phases()) {
+        connectedLineWatts[line.ordinal()] += circuit.connectedWatts() / share;
+        connectedLineVars[line.ordinal()] += circuit.connectedVars() / share;
+      }
+    }
     double[] currents = new double[3];
     double highest = 0.0;
     double totalWatts = 0.0;
@@ -420,6 +443,10 @@ final class BoardCalculation {
       totalVars += phaseVars[k];
       Double headroomAmps = incomerRating == null ? null : incomerRating - currents[k];
       Double headroomKilowatts = headroomAmps == null ? null : headroomAmps * u0 / 1000.0;
+      Double loadingPercent =
+          incomerRating == null || !(incomerRating > 0)
+              ? null
+              : 100.0 * currents[k] / incomerRating;
       phaseResults.add(
           new PhaseDemand(
               phases[k],
@@ -427,14 +454,22 @@ final class BoardCalculation {
               phaseVars[k],
               currents[k],
               headroomAmps,
-              headroomKilowatts));
+              headroomKilowatts,
+              loadingPercent,
+              Math.hypot(connectedLineWatts[k], connectedLineVars[k]) / u0));
     }
+    SupplySystem system =
+        context.supply() == null ? SupplySystem.IEC_WYE : context.supply().system();
     double neutral =
-        boardLines == 3 ? PhaseCurrents.neutralCurrentAmps(phaseWatts, phaseVars, u0) : currents[0];
-    Double unbalance =
-        boardLines == 3
-            ? PhaseCurrents.unbalancePercent(currents[0], currents[1], currents[2])
-            : null;
+        boardLines >= 2
+            ? LinePhasors.neutralCurrentAmps(system, boardLines, phaseWatts, phaseVars, u0)
+            : currents[0];
+    Double unbalance = null;
+    if (boardLines == 3) {
+      unbalance = PhaseCurrents.unbalancePercent(currents[0], currents[1], currents[2]);
+    } else if (boardLines == 2) {
+      unbalance = PhaseCurrents.unbalancePercent(currents[0], currents[1]);
+    }
     double limit =
         board.unbalanceLimitPercent() > 0
             ? board.unbalanceLimitPercent()
@@ -503,21 +538,11 @@ final class BoardCalculation {
     return boardLines == 1 && position.isSinglePole() ? PhasePosition.L1 : position;
   }
 
-  private static void addToPhases(
-      double[] watts, double[] vars, PhasePosition position, double p, double q) {
-    if (position == null) {
-      return;
-    }
-    if (position == PhasePosition.THREE_POLE) {
-      for (int k = 0; k < 3; k++) {
-        watts[k] += p / 3.0;
-        vars[k] += q / 3.0;
-      }
-    } else {
-      int k = position.ordinal();
-      watts[k] += p;
-      vars[k] += q;
-    }
+  /** Positions a split-phase board can hold: A, B, or the two-pole A–B. */
+  private static boolean fitsSplitPhase(PhasePosition position) {
+    return position == PhasePosition.L1
+        || position == PhasePosition.L2
+        || position == PhasePosition.L1_L2;
   }
 
   /** Replaces a cooker circuit's socket-outlet loads by the allowance, never more than they are. */

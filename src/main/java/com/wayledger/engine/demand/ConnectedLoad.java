@@ -37,6 +37,14 @@ public record ConnectedLoad(double activeWatts, double reactiveVars, String miss
    * @param threePhase whether the load is fed by a three-pole circuit
    */
   public static ConnectedLoad of(LoadSpec load, double nominalVoltageVolts, boolean threePhase) {
+    return ofPerAmp(load, nominalVoltageVolts * (threePhase ? 3.0 : 1.0));
+  }
+
+  /**
+   * P and Q of a load line whose rating in A is converted with {@code voltAmperesPerAmp} (U0 line
+   * to neutral, the line-to-line voltage for a two-pole load, 3·U0 for a three-phase one).
+   */
+  public static ConnectedLoad ofPerAmp(LoadSpec load, double voltAmperesPerAmp) {
     if (load.category() == null) {
       return notAssessed("load category");
     }
@@ -58,7 +66,7 @@ public record ConnectedLoad(double activeWatts, double reactiveVars, String miss
         switch (load.ratingUnit()) {
           case W -> rating / powerFactor;
           case VA -> rating;
-          case A -> rating * nominalVoltageVolts * (threePhase ? 3.0 : 1.0);
+          case A -> rating * voltAmperesPerAmp;
         };
     apparent *= load.quantity();
     double active = apparent * powerFactor;

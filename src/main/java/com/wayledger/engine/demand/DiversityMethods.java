@@ -1,6 +1,7 @@
 package com.wayledger.engine.demand;
 
 import static com.wayledger.engine.LoadCategory.AIR_CONDITIONING;
+import static com.wayledger.engine.LoadCategory.CLOTHES_DRYER;
 import static com.wayledger.engine.LoadCategory.COOKING;
 import static com.wayledger.engine.LoadCategory.EV_CHARGING;
 import static com.wayledger.engine.LoadCategory.FIXED_APPLIANCE;
@@ -21,6 +22,7 @@ import com.wayledger.engine.demand.DiversityRule.Flat;
 import com.wayledger.engine.demand.DiversityRule.LargestFirst;
 import com.wayledger.engine.demand.DiversityRule.LargestMotorPlus;
 import com.wayledger.engine.demand.DiversityRule.NecCookingTable;
+import com.wayledger.engine.demand.DiversityRule.NecDryerTable;
 import com.wayledger.engine.demand.DiversityRule.NonCoincident;
 import com.wayledger.engine.demand.DiversityRule.RankBy;
 import com.wayledger.engine.demand.DiversityRule.Tier;
@@ -79,7 +81,13 @@ public final class DiversityMethods {
             new CategoryGroup(
                 "Heating and power",
                 Set.of(
-                    SPACE_HEATING, AIR_CONDITIONING, FIXED_APPLIANCE, IT_SMALL_POWER, MOTOR, OTHER),
+                    SPACE_HEATING,
+                    AIR_CONDITIONING,
+                    FIXED_APPLIANCE,
+                    CLOTHES_DRYER,
+                    IT_SMALL_POWER,
+                    MOTOR,
+                    OTHER),
                 new FirstAmps(10.0, 0.5, 0.0),
                 ACROSS_CIRCUITS),
             new CategoryGroup(
@@ -112,7 +120,13 @@ public final class DiversityMethods {
             new CategoryGroup("Lighting", Set.of(LIGHTING), new Flat(0.9), ACROSS_CIRCUITS),
             new CategoryGroup(
                 "Heating and power",
-                Set.of(SPACE_HEATING, AIR_CONDITIONING, FIXED_APPLIANCE, IT_SMALL_POWER, OTHER),
+                Set.of(
+                    SPACE_HEATING,
+                    AIR_CONDITIONING,
+                    FIXED_APPLIANCE,
+                    CLOTHES_DRYER,
+                    IT_SMALL_POWER,
+                    OTHER),
                 new LargestFirst(1.0, 0.75, 0.75, RankBy.APPLIANCE),
                 ACROSS_CIRCUITS),
             new CategoryGroup(
@@ -150,7 +164,13 @@ public final class DiversityMethods {
             new CategoryGroup("Lighting", Set.of(LIGHTING), new Flat(0.75), ACROSS_CIRCUITS),
             new CategoryGroup(
                 "Heating and power",
-                Set.of(SPACE_HEATING, AIR_CONDITIONING, FIXED_APPLIANCE, IT_SMALL_POWER, OTHER),
+                Set.of(
+                    SPACE_HEATING,
+                    AIR_CONDITIONING,
+                    FIXED_APPLIANCE,
+                    CLOTHES_DRYER,
+                    IT_SMALL_POWER,
+                    OTHER),
                 new LargestFirst(1.0, 0.8, 0.6, RankBy.APPLIANCE),
                 ACROSS_CIRCUITS),
             new CategoryGroup(
@@ -183,7 +203,7 @@ public final class DiversityMethods {
     return new DiversityMethod(
         NEC_STANDARD_DWELLING,
         "NEC 220 standard method, dwelling",
-        "NFPA 70 (NEC) Article 220 Part III: 220.12, 220.52, Table 220.42, 220.53, 220.55, 220.50, 220.60",
+        "NFPA 70 (NEC) Article 220 Part III: 220.12, 220.52, Table 220.42, 220.53, 220.54, 220.55, 220.50, 220.60",
         List.of(
             new CategoryGroup(
                 "General lighting, small-appliance and laundry circuits",
@@ -197,6 +217,11 @@ public final class DiversityMethods {
                 "Household cooking appliances",
                 Set.of(COOKING),
                 new NecCookingTable(),
+                ACROSS_CIRCUITS),
+            new CategoryGroup(
+                "Household clothes dryers",
+                Set.of(CLOTHES_DRYER),
+                new NecDryerTable(),
                 ACROSS_CIRCUITS),
             new CategoryGroup(
                 "Fastened-in-place appliances",
@@ -229,6 +254,7 @@ public final class DiversityMethods {
                     WATER_HEATING_INSTANTANEOUS,
                     WATER_HEATING_STORAGE,
                     FIXED_APPLIANCE,
+                    CLOTHES_DRYER,
                     IT_SMALL_POWER,
                     MOTOR,
                     EV_CHARGING,

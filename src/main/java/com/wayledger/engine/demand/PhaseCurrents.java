@@ -49,4 +49,15 @@ public final class PhaseCurrents {
             Math.max(Math.abs(currentL2Amps - mean), Math.abs(currentL3Amps - mean)));
     return 100.0 * deviation / mean;
   }
+
+  /**
+   * Unbalance of a two-line (split-phase) board, %: the same definition over two lines, the largest
+   * deviation from the mean divided by the mean, which is |IA − IB|/(IA + IB); 0 when both are 0.
+   * The NEMA MG-1 definition is written for three phases; its use on two lines is our own
+   * extension.
+   */
+  public static double unbalancePercent(double currentAAmps, double currentBAmps) {
+    double sum = currentAAmps + currentBAmps;
+    return sum <= 0.0 ? 0.0 : 100.0 * Math.abs(currentAAmps - currentBAmps) / sum;
+  }
 }

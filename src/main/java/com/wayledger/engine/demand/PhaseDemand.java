@@ -13,6 +13,10 @@ import com.wayledger.engine.Phase;
  *     the incomer rating is not known
  * @param headroomKilowatts the headroom as active power at unity power factor, U0·headroom/1000,
  *     kW; null when the incomer rating is not known
+ * @param loadingPercent the current over the rating that trips the incomer (Ir for a moulded-case
+ *     breaker with its setting recorded, In otherwise), %; null when that rating is not known
+ * @param connectedCurrentAmps connected load on the line before diversity, |S|/U0 of the circuits'
+ *     connected power (a three-pole way a third on each line, a feeder with its sub-board's), A
  */
 public record PhaseDemand(
     Phase phase,
@@ -20,7 +24,9 @@ public record PhaseDemand(
     double demandVars,
     double currentAmps,
     Double headroomAmps,
-    Double headroomKilowatts) {
+    Double headroomKilowatts,
+    Double loadingPercent,
+    double connectedCurrentAmps) {
 
   /** |S|, VA. */
   public double demandVoltAmperes() {

@@ -143,8 +143,19 @@ final class CircuitChecks {
       findings.add(SurgeCheck.assess(surge.getAsDouble(), overcurrent.value()));
     }
 
-    ResidualCurrentRules.Rule rcdRule = ResidualCurrentRules.forLoads(circuit.loads());
-    if (rcdRule != null) {
+    // a submain is judged by the rules for its sub-board's circuits, not by a location of its own
+    boolean feedsFinalEquipment = circuit.feedsBoardId() == null;
+    ResidualCurrentRules.Rule rcdRule =
+        feedsFinalEquipment
+            ? ResidualCurrentRules.forCircuit(circuit.loads(), circuit.location())
+            : ResidualCurrentRules.forLoads(circuit.loads());
+    if (feedsFinalEquipment
+        && ResidualCurrentRules.needsLocation(
+            circuit.loads(),
+            circuit.location(),
+            device == null ? null : device.ratedCurrentAmps())) {
+      findings.add(SocketRcdCheck.locationNotRecorded());
+    } else if (rcdRule != null) {
       findings.add(
           socketRcd(rcdRule, device, ownResidual, board.upstreamResidualMilliAmps(), settings));
     }

@@ -80,7 +80,7 @@ public record CircuitFindings(
     if (position == null) {
       return "";
     }
-    return position == com.wayledger.engine.PhasePosition.THREE_POLE ? "L1–L3" : position.name();
+    return position.label();
   }
 
   /** Where the findings are, in words: "DB2 way 9 L2 “Kitchen sockets”". */

@@ -110,7 +110,14 @@ public final class DeviceProposer {
     }
     double u0 = site.supply().nominalVoltageToEarthVolts();
     OptionalDouble surge = StartUpSurge.peakAmps(circuit.loads(), u0, threePole);
-    ResidualCurrentRules.Rule rcdRule = ResidualCurrentRules.forLoads(circuit.loads());
+    boolean finalCircuit = circuit.feedsBoardId() == null;
+    ResidualCurrentRules.Rule rcdRule =
+        !finalCircuit
+            ? ResidualCurrentRules.forLoads(circuit.loads())
+            : ResidualCurrentRules.needsLocation(circuit.loads(), circuit.location(), null)
+                // where it is cannot be told: 30 mA on the safe side, named in the check
+                ? ResidualCurrentRules.LOCATION_NOT_RECORDED
+                : ResidualCurrentRules.forCircuit(circuit.loads(), circuit.location());
     // never below the breaking capacity fitted, unless a measured fault level proves a lower one
     double fittedIcn =
         circuit.device() != null
@@ -121,7 +128,6 @@ public final class DeviceProposer {
     Double upstreamResidual = level.upstreamResidualMilliAmps();
     boolean upstream30 =
         upstreamResidual != null && upstreamResidual <= settings.socketRcdMaxResidualMilliAmps();
-    boolean finalCircuit = circuit.feedsBoardId() == null;
     int poles = threePole ? 3 : 1;
     double iz = rating.value().capacityAmps();
     double ib = designCurrentAmps;
@@ -214,7 +220,15 @@ public final class DeviceProposer {
                 : SurgeCheck.noSurgeRecorded());
         checks.add(loop);
         checks.add(breaking);
-        if (rcdRule != null) {
+        if (rcdRule == ResidualCurrentRules.LOCATION_NOT_RECORDED) {
+          // not a pass: the check stays not assessed until the location is recorded
+          reasons.add(
+              "30 mA RCBO proposed because the "
+                  + rcdRule.words()
+                  + "; outdoor, bathroom, pool and sauna circuits need it ("
+                  + rcdRule.reference()
+                  + ")");
+        } else if (rcdRule != null) {
           checks.add(
               SocketRcdCheck.assess(
                   rcdRule,

@@ -329,4 +329,58 @@ class CapacityAdvisorTests {
     assertThat(freeL2.candidate().device().kind()).isEqualTo(DeviceKind.RCBO);
     assertThat(freeL2.candidate().device().residualCurrentMilliAmps()).isEqualTo(30.0);
   }
+
+  private static CandidateOutcome newCircuitFor(NewLoad load) {
+    return ask(smallBoard(), load).outcomes().stream()
+        .filter(o -> o.candidate().kind() == CandidateKind.EMPTY_POSITION)
+        .findFirst()
+        .orElseThrow();
+  }
+
+  @Test
+  void newCircuitForAnOutdoorFloodlightGetsAThirtyMilliAmpRcbo() {
+    // BS 7671 411.3.3 (b), from memory: equipment used outdoors; 30 mA on every outdoor circuit
+    NewLoad flood =
+        new NewLoad(
+            "Floodlight",
+            LoadCategory.LIGHTING,
+            0.4,
+            RatingUnit.W,
+            1.0,
+            false,
+            null,
+            com.wayledger.engine.CircuitLocation.OUTDOORS);
+
+    DeviceSpec device = newCircuitFor(flood).candidate().device();
+
+    assertThat(device.kind()).isEqualTo(DeviceKind.RCBO);
+    assertThat(device.residualCurrentMilliAmps()).isEqualTo(30.0);
+  }
+
+  @Test
+  void newCircuitForAnIndoorFryerGetsAPlainMcb() {
+    NewLoad fryer =
+        new NewLoad(
+            "Fryer",
+            LoadCategory.FIXED_APPLIANCE,
+            2.3,
+            RatingUnit.W,
+            1.0,
+            false,
+            null,
+            com.wayledger.engine.CircuitLocation.INDOORS);
+
+    assertThat(newCircuitFor(fryer).candidate().device().kind()).isEqualTo(DeviceKind.MCB);
+  }
+
+  @Test
+  void newCircuitWhoseLocationIsNotGivenGetsThirtyMilliAmpsOnTheSafeSideAndSaysSo() {
+    NewLoad fryer =
+        new NewLoad("Fryer", LoadCategory.FIXED_APPLIANCE, 2.3, RatingUnit.W, 1.0, false, null);
+
+    CandidateOutcome outcome = newCircuitFor(fryer);
+
+    assertThat(outcome.candidate().device().kind()).isEqualTo(DeviceKind.RCBO);
+    assertThat(outcome.candidate().deviceNote()).contains("location is not recorded");
+  }
 }

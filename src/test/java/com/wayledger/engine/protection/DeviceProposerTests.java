@@ -7,6 +7,7 @@ import static com.wayledger.engine.protection.Fixtures.oneCircuitSite;
 import static com.wayledger.engine.protection.Fixtures.twinAndEarth;
 import static org.assertj.core.api.Assertions.assertThat;
 
+import com.wayledger.engine.CircuitLocation;
 import com.wayledger.engine.CircuitSpec;
 import com.wayledger.engine.DeviceKind;
 import com.wayledger.engine.LoadCategory;
@@ -30,7 +31,9 @@ class DeviceProposerTests {
   private static final double MOTOR_IB = 10.0;
 
   private static CircuitSpec motorCircuit(double line, double cpc, TripCurve curve, double in) {
-    return circuit(1, mcb(curve, in), twinAndEarth(line, cpc, 25.0), List.of(motor(MOTOR_IB, 8.0)));
+    // indoors, in no special location: the residual-current rules ask nothing of it
+    return circuit(1, mcb(curve, in), twinAndEarth(line, cpc, 25.0), List.of(motor(MOTOR_IB, 8.0)))
+        .at(CircuitLocation.INDOORS);
   }
 
   private static Finding check(CircuitSpec c, CheckKind kind) {

@@ -111,6 +111,26 @@ public final class SocketRcdCheck {
             + " mA residual-current device on the schedule (an RCD outside the schedule cannot be seen)",
         List.of(new Quantity("In", ratedAmps, "A")),
         rule.reference(),
-        "fit a 30 mA RCBO (type A or as the charger maker requires) on the way");
+        rule.remedy());
+  }
+
+  /** The location rules (outdoors, bathrooms…) that the check could not apply. */
+  public static final String LOCATION_REFERENCE =
+      "BS 7671 411.3.3, 701.411.3.3, 703.411.3.3, section 702 (from memory)";
+
+  /**
+   * A final circuit whose location is not recorded and whose loads do not already ask for 30 mA
+   * protection: whether outdoors, a bathroom or another special location demands it cannot be told,
+   * so the check is not assessed (never passed), whatever device is fitted.
+   */
+  public static Finding locationNotRecorded() {
+    return new Finding(
+        CheckKind.SOCKET_RCD,
+        Verdict.NOT_ASSESSED,
+        "not assessed — location not recorded (outdoor, bathroom, pool and sauna circuits need 30 mA"
+            + " residual-current protection)",
+        List.of(),
+        LOCATION_REFERENCE,
+        "record where the circuit's equipment is");
   }
 }

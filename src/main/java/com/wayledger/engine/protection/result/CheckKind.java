@@ -16,7 +16,13 @@ public enum CheckKind {
   BUSBAR_OVERLOAD("Busbar not overloaded"),
   SUPPLY_FUSE_OVERLOAD("Supply fuse not overloaded"),
   PHASE_UNBALANCE("Phase unbalance within the board's limit"),
-  SELECTIVITY("Selectivity between the incomer and outgoing devices");
+  SELECTIVITY("Selectivity between the incomer and outgoing devices"),
+  POLE_COUNT("Breaker has as many poles as its position takes"),
+  STANDARD_RATING("Breaker or fuse at a standard ampere rating"),
+  SMALL_CONDUCTOR("Small conductor within its overcurrent limit"),
+  CONDUCTOR_AMPACITY("Conductor protected at its ampacity"),
+  TERMINATION_TEMPERATURE("Conductor ampacity within the termination temperature"),
+  CONTINUOUS_LOAD("Continuous load at 125 % within the breaker and conductor");
 
   private final String title;
 

@@ -1,0 +1,156 @@
+package com.wayledger.engine.dwelling;
+
+import com.wayledger.engine.BoardSpec;
+import com.wayledger.engine.CircuitSpec;
+import com.wayledger.engine.LoadSpec;
+import com.wayledger.engine.RatingUnit;
+import com.wayledger.engine.SiteSpec;
+import com.wayledger.engine.demand.ConnectedLoad;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Finds the dwelling units of a site and works their Article 220 worksheets, board by board:
+ *
+ * <ul>
+ *   <li>a board with dwelling inputs is one dwelling unit; its loads are its own and those of the
+ *       boards below it that are not dwelling units themselves;
+ *   <li>a board without dwelling inputs that has dwelling boards below it (a house or meter-bank
+ *       panelboard) works the standard method over all of them, with its own loads as house loads;
+ *   <li>any board with recorded maximum demands works 220.87.
+ * </ul>
+ */
+public final class DwellingSite {
+
+  /** Line-to-neutral voltages up to this are taken as a North American system (120 V). */
+  static final double NORTH_AMERICAN_U0_LIMIT_VOLTS = 150.0;
+
+  private DwellingSite() {}
+
+  /**
+   * @param site the site as the engine sees it
+   * @param inputs dwelling inputs by board id (boards without an entry are not dwelling units)
+   * @param records recorded maximum demands by board id
+   * @return worksheets by board id; boards with none are left out
+   */
+  public static Map<Long, List<Worksheet>> worksheets(
+      SiteSpec site,
+      Map<Long, DwellingInputs> inputs,
+      Map<Long, List<MeasuredMaximumDemand>> records) {
+    Map<Long, BoardSpec> byId = new LinkedHashMap<>();
+    Map<Long, List<BoardSpec>> children = new HashMap<>();
+    for (BoardSpec board : site.boards()) {
+      byId.put(board.id(), board);
+    }
+    for (BoardSpec board : site.boards()) {
+      if (board.parentBoardId() != null && byId.containsKey(board.parentBoardId())) {
+        children.computeIfAbsent(board.parentBoardId(), k -> new ArrayList<>()).add(board);
+      }
+    }
+    double u0 = site.supply().nominalVoltageToEarthVolts();
+    Map<Long, List<Worksheet>> out = new LinkedHashMap<>();
+    for (BoardSpec board : site.boards()) {
+      List<DwellingUnit> units = new ArrayList<>();
+      List<ApplianceLoad> houseLoads = new ArrayList<>();
+      if (inputs.containsKey(board.id())) {
+        units.add(unitOf(board, inputs.get(board.id()), children, inputs, u0));
+      } else {
+        collectUnits(board, children, inputs, u0, units, 0);
+        if (!units.isEmpty()) {
+          houseLoads.addAll(loadsOf(board, u0));
+        }
+      }
+      List<MeasuredMaximumDemand> recorded = records.getOrDefault(board.id(), List.of());
+      if (units.isEmpty() && recorded.isEmpty()) {
+        continue;
+      }
+      double volts = dividingVolts(board, u0);
+      Double rating = board.incomerTripRatingAmps();
+      out.put(
+          board.id(),
+          NecDwellingCalculator.worksheets(
+              units, houseLoads, recorded, rating == null ? null : rating * volts, volts));
+    }
+    return out;
+  }
+
+  /**
+   * The voltage that turns a board's VA into line amperes: 240 V for a 120/240 V single-phase
+   * three-wire board (2 × U0), √3 × UL = 3 × U0 for a three-phase board; U0 for a single-phase
+   * board of a system above 150 V to earth.
+   */
+  public static double dividingVolts(BoardSpec board, double u0) {
+    if (board.isThreePhase()) {
+      return 3.0 * u0;
+    }
+    return u0 <= NORTH_AMERICAN_U0_LIMIT_VOLTS ? 2.0 * u0 : u0;
+  }
+
+  private static void collectUnits(
+      BoardSpec board,
+      Map<Long, List<BoardSpec>> children,
+      Map<Long, DwellingInputs> inputs,
+      double u0,
+      List<DwellingUnit> units,
+      int depth) {
+    if (depth > 64) {
+      return; // a cycle; the demand engine reports it
+    }
+    for (BoardSpec child : children.getOrDefault(board.id(), List.of())) {
+      if (inputs.containsKey(child.id())) {
+        units.add(unitOf(child, inputs.get(child.id()), children, inputs, u0));
+      } else {
+        collectUnits(child, children, inputs, u0, units, depth + 1);
+      }
+    }
+  }
+
+  private static DwellingUnit unitOf(
+      BoardSpec board,
+      DwellingInputs unitInputs,
+      Map<Long, List<BoardSpec>> children,
+      Map<Long, DwellingInputs> inputs,
+      double u0) {
+    List<ApplianceLoad> loads = new ArrayList<>(loadsOf(board, u0));
+    List<BoardSpec> below = new ArrayList<>(children.getOrDefault(board.id(), List.of()));
+    for (int i = 0; i < below.size() && i < 10_000; i++) {
+      BoardSpec child = below.get(i);
+      if (!inputs.containsKey(child.id())) {
+        loads.addAll(loadsOf(child, u0));
+        below.addAll(children.getOrDefault(child.id(), List.of()));
+      }
+    }
+    return new DwellingUnit(board.id(), board.reference(), unitInputs, loads);
+  }
+
+  /** The board's own load lines in VA (circuits feeding another board carry none). */
+  static List<ApplianceLoad> loadsOf(BoardSpec board, double u0) {
+    List<ApplianceLoad> loads = new ArrayList<>();
+    double lineVolts = u0 <= NORTH_AMERICAN_U0_LIMIT_VOLTS ? 2.0 * u0 : u0;
+    for (CircuitSpec circuit : board.circuits()) {
+      boolean threePole = circuit.position() != null && !circuit.position().isSinglePole();
+      for (LoadSpec load : circuit.loads()) {
+        ConnectedLoad connected = ConnectedLoad.of(load, u0, threePole);
+        if (!connected.isAssessed() || load.quantity() < 1) {
+          continue;
+        }
+        double each = connected.apparentVoltAmperes() / load.quantity();
+        String name =
+            load.description() == null || load.description().isBlank()
+                ? circuit.description()
+                : load.description();
+        if (load.ratingUnit() == RatingUnit.A && !threePole) {
+          // the connection is not recorded: an amperes rating is taken line to line (240 V), which
+          // overstates a 120 V load — the safe side
+          each = load.ratingValue() * lineVolts;
+          name += " (rated in A, taken at " + Lines.figure(lineVolts) + " V)";
+        }
+        loads.add(new ApplianceLoad(name, load.category(), load.quantity(), each, false));
+      }
+    }
+    return loads;
+  }
+}
