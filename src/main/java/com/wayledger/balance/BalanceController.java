@@ -59,6 +59,7 @@ public class BalanceController {
       @RequestParam(required = false, defaultValue = "") String undo,
       @RequestParam String version,
       @RequestParam(required = false, defaultValue = "") String reason,
+      @RequestParam(required = false, defaultValue = "false") boolean undoing,
       RedirectAttributes redirect) {
     List<Placement> parsed = parse(placements);
     if (parsed == null || parsed.isEmpty()) {
@@ -67,8 +68,13 @@ public class BalanceController {
     }
     try {
       schedule.rearrange(id, version, parsed, reason.isBlank() ? null : reason.strip());
-      redirect.addFlashAttribute("applied", parsed.size());
-      redirect.addFlashAttribute("undoTokens", undo);
+      if (undoing) {
+        // the moves were put back: say so, and offer no undo of the undo
+        redirect.addFlashAttribute("undone", parsed.size());
+      } else {
+        redirect.addFlashAttribute("applied", parsed.size());
+        redirect.addFlashAttribute("undoTokens", undo);
+      }
     } catch (RuleViolation violation) {
       redirect.addFlashAttribute("problem", violation.messageCode());
     } catch (StaleEditException stale) {

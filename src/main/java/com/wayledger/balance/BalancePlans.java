@@ -14,7 +14,8 @@ import java.util.List;
  * @param optimal the proved-optimal (or best within budget) arrangement
  * @param fewestMoves the k-moves table for the existing arrangement
  * @param chosenMoves the moves of the plan being previewed
- * @param chosenLabel which plan is previewed ("optimal" or "k moves")
+ * @param chosenLabel which plan is previewed, as the end of a message key: "optimal",
+ *     "optimalMoves" (the fewest moves that reach it) or "moves" (a chosen number of moves)
  * @param before the board's demand as it stands
  * @param after the board's demand with the chosen plan applied (computed, not stored)
  * @param placements the chosen plan as placements to apply

@@ -62,7 +62,7 @@ public class BalanceService {
     BalanceResult optimal = balancer.optimise(problem);
     FewestMovesResult fewest = balancer.fewestMoves(problem);
     List<CircuitMove> chosen = optimal.moves() == null ? List.of() : optimal.moves();
-    String label = "optimal";
+    String label = "optimal"; // a message key suffix: balance.after.<label>
     Integer chosenStep = null;
     if (movesChoice == null
         && fewest.optimumReached()
@@ -72,14 +72,14 @@ public class BalanceService {
       // moves more circuits for the same largest line current
       MovesStep last = fewest.steps().get(fewest.steps().size() - 1);
       chosen = last.plan();
-      label = "optimal, " + last.moves() + " moves";
+      label = "optimalMoves";
       chosenStep = last.moves();
     }
     if (movesChoice != null && fewest.steps() != null) {
       for (MovesStep step : fewest.steps()) {
         if (step.moves() == movesChoice) {
           chosen = step.plan();
-          label = movesChoice + " moves";
+          label = "moves";
           chosenStep = movesChoice;
         }
       }

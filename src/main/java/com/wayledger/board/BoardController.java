@@ -65,6 +65,7 @@ public class BoardController {
     Site site = sites.get(siteId);
     model.addAttribute("site", site);
     model.addAttribute("parents", boards.onSite(siteId));
+    model.addAttribute("feeds", boards.feedOptions(siteId));
     model.addAttribute("form", BoardForm.blank(site.getPhases()));
     return FORM_VIEW;
   }
@@ -81,6 +82,7 @@ public class BoardController {
     form = FormRecovery.ensure(form, errors, model, "form", BoardForm.class, request);
     model.addAttribute("site", sites.get(siteId));
     model.addAttribute("parents", boards.onSite(siteId));
+    model.addAttribute("feeds", boards.feedOptions(siteId));
     if (errors.hasErrors()) {
       return FormStatus.invalid(response, FORM_VIEW);
     }
@@ -104,6 +106,7 @@ public class BoardController {
     model.addAttribute("board", board);
     model.addAttribute("site", board.getSite());
     model.addAttribute("parents", parentsFor(board));
+    model.addAttribute("feeds", feedsFor(board));
     model.addAttribute("form", BoardForm.of(board));
     return FORM_VIEW;
   }
@@ -122,6 +125,7 @@ public class BoardController {
     model.addAttribute("board", board);
     model.addAttribute("site", board.getSite());
     model.addAttribute("parents", parentsFor(board));
+    model.addAttribute("feeds", feedsFor(board));
     if (errors.hasErrors()) {
       return FormStatus.invalid(response, FORM_VIEW);
     }
@@ -145,6 +149,12 @@ public class BoardController {
       redirect.addFlashAttribute("problem", violation.messageCode());
       return "redirect:/boards/" + id;
     }
+  }
+
+  private java.util.List<FeedOption> feedsFor(Board board) {
+    return boards.feedOptions(board.getSite().getId()).stream()
+        .filter(option -> option.boardId() != board.getId())
+        .toList();
   }
 
   private java.util.List<Board> parentsFor(Board board) {

@@ -59,6 +59,29 @@ public class BoardService {
     return boards.findBySite(siteId);
   }
 
+  /**
+   * Every circuit on the site's boards that could feed another board, by board and way, for the
+   * board form's "fed from way" choice.
+   */
+  @Transactional(readOnly = true)
+  public List<FeedOption> feedOptions(long siteId) {
+    List<FeedOption> options = new java.util.ArrayList<>();
+    for (Board board : boards.findBySite(siteId)) {
+      for (Circuit circuit : circuits.findByBoard(board.getId())) {
+        options.add(
+            new FeedOption(
+                board.getId(),
+                board.getReference(),
+                circuit.getId(),
+                circuit.getWayNumber(),
+                circuit.getPosition(),
+                circuit.getDescription() == null ? "" : circuit.getDescription(),
+                circuit.getStatus()));
+      }
+    }
+    return options;
+  }
+
   /** The site's boards in tree order (each parent before its children), with their depth. */
   @Transactional(readOnly = true)
   public List<BoardTreeNode> tree(long siteId) {
@@ -124,10 +147,35 @@ public class BoardService {
     }
     Board parent = checkRules(board.getSite(), form, board);
     var before = ScheduleMapper.headerOf(board);
+    BoardForm beforeForm = BoardForm.of(board);
+    String parentBefore = board.getParent() == null ? null : board.getParent().getReference();
     board.apply(form, parent);
     Board saved = boards.saveAndFlush(board);
+    // ids mean nothing to a reader: the parent is named, the feeding way left to the detail view
+    String fields =
+        com.wayledger.system.RecordDiff.describe(
+            com.wayledger.system.RecordDiff.between(
+                beforeForm,
+                BoardForm.of(saved),
+                java.util.Set.of("version", "parentBoardId", "fedFromCircuitId")),
+            "board",
+            6);
+    String parentAfter = saved.getParent() == null ? null : saved.getParent().getReference();
+    if (!java.util.Objects.equals(parentBefore, parentAfter)) {
+      fields =
+          (fields.isEmpty() ? "" : fields + "; ")
+              + "fed from "
+              + (parentBefore == null ? "the origin" : parentBefore)
+              + " → "
+              + (parentAfter == null ? "the origin" : parentAfter);
+    }
     logged(
-        saved, ChangeKind.BOARD_EDITED, "changed", before, ScheduleMapper.headerOf(saved), reason);
+        saved,
+        ChangeKind.BOARD_EDITED,
+        fields.isEmpty() ? "changed" : "changed " + fields,
+        before,
+        ScheduleMapper.headerOf(saved),
+        reason);
     return saved;
   }
 

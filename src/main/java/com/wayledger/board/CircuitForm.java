@@ -655,4 +655,22 @@ public record CircuitForm(
         null,
         false);
   }
+
+  /** The device as the trade writes it ("MCB B6", "Fuse 32 A"); empty when none is recorded. */
+  public String deviceLabel() {
+    return DeviceDetails.describe(
+        deviceKind, deviceCurve, deviceRatingAmps, deviceResidualMilliAmps);
+  }
+
+  /** The cable as short text ("2.5 mm² 18 m"); empty when none is recorded. */
+  public String cableLabel() {
+    StringBuilder text = new StringBuilder();
+    if (cableLineCsa != null) {
+      text.append(Numbers.plain(cableLineCsa)).append(" mm²");
+    }
+    if (cableLengthMetres != null) {
+      text.append(' ').append(Numbers.plain(cableLengthMetres)).append(" m");
+    }
+    return text.toString().strip();
+  }
 }

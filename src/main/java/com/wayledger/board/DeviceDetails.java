@@ -5,6 +5,7 @@ import com.wayledger.engine.DeviceSpec;
 import com.wayledger.engine.RcdType;
 import com.wayledger.engine.TripCurve;
 import com.wayledger.engine.protection.device.MccbSettings;
+import com.wayledger.system.EnumWords;
 import jakarta.persistence.Column;
 import jakarta.persistence.Embeddable;
 import jakarta.persistence.EnumType;
@@ -136,21 +137,15 @@ public class DeviceDetails {
     return new MccbSettings(overloadSettingAmps, instantaneousSettingAmps);
   }
 
-  /** Short text such as "MCB C32 6 kA", "RCBO B16 30 mA" or "MCCB 125 A (Ir 100 A, Ii 800 A)". */
+  /**
+   * Short text as the trade writes it: "MCB C32", "RCBO B16 30 mA", "Fuse 32 A" or "MCCB 125 A (Ir
+   * 100 A, Ii 800 A)".
+   */
   public String label() {
     if (kind == null) {
       return "";
     }
-    StringBuilder text = new StringBuilder(kind.name()).append(' ');
-    if (curve != null) {
-      text.append(curve.name());
-    }
-    if (ratingAmps != null) {
-      text.append(Numbers.plain(ratingAmps)).append(curve == null ? " A" : "");
-    }
-    if (residualMilliAmps != null) {
-      text.append(' ').append(Numbers.plain(residualMilliAmps)).append(" mA");
-    }
+    StringBuilder text = new StringBuilder(describe(kind, curve, ratingAmps, residualMilliAmps));
     if (overloadSettingAmps != null || instantaneousSettingAmps != null) {
       text.append(" (");
       if (overloadSettingAmps != null) {
@@ -163,6 +158,28 @@ public class DeviceDetails {
             .append(" A");
       }
       text.append(')');
+    }
+    return text.toString().strip();
+  }
+
+  /**
+   * A device as the trade writes it: the kind's words, then the curve letter joined to the rating
+   * ("B6") or the rating in amps ("32 A"), then the residual rating ("30 mA"). Empty for no kind.
+   */
+  public static String describe(
+      DeviceKind kind, TripCurve curve, Double ratingAmps, Double residualMilliAmps) {
+    if (kind == null) {
+      return "";
+    }
+    StringBuilder text = new StringBuilder(EnumWords.standard().shortOf(kind)).append(' ');
+    if (curve != null) {
+      text.append(curve.name());
+    }
+    if (ratingAmps != null) {
+      text.append(Numbers.plain(ratingAmps)).append(curve == null ? " A" : "");
+    }
+    if (residualMilliAmps != null) {
+      text.append(' ').append(Numbers.plain(residualMilliAmps)).append(" mA");
     }
     return text.toString().strip();
   }

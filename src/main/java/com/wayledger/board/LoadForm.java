@@ -42,4 +42,17 @@ public record LoadForm(
         load.getStartUpSurgeMillis(),
         load.isContinuous());
   }
+
+  /** The rating as written on a schedule: "2 × 100 W", "16 A"; empty when none. */
+  public String ratingLabel() {
+    if (ratingValue == null) {
+      return "";
+    }
+    String count = quantity != null && quantity > 1 ? quantity + " × " : "";
+    return count
+        + Numbers.plain(ratingValue)
+        + (ratingUnit == null
+            ? ""
+            : " " + com.wayledger.system.EnumWords.standard().of(ratingUnit));
+  }
 }

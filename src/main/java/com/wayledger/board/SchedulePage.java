@@ -42,6 +42,20 @@ class SchedulePage {
     if (board.getParent() != null) {
       board.getParent().getReference();
     }
+    // "MDB, way 3 L1 “Kitchen DB”": the board and its way by name, never an id
+    model.addAttribute(
+        "feedingWay",
+        board.getFedFromCircuitId() == null
+            ? null
+            : circuits
+                .findById(board.getFedFromCircuitId())
+                .map(
+                    way ->
+                        way.positionLabel()
+                            + (way.getDescription() == null || way.getDescription().isBlank()
+                                ? ""
+                                : " “" + way.getDescription() + "”"))
+                .orElse(null));
     var rows = ScheduleRows.of(board, onBoard);
     model.addAttribute("rows", rows);
     model.addAttribute(
@@ -70,6 +84,10 @@ class SchedulePage {
     model.addAttribute("problems", results.problems(boardId));
     model.addAttribute("problemCounts", results.problemCounts(boardId));
     model.addAttribute("boardFindings", results.boardFindings(boardId).orElse(null));
+    model.addAttribute(
+        "findingGroups",
+        FindingGroups.of(
+            results.boardFindings(boardId).orElse(null), FindingGroups.notPassed(null)));
     model.addAttribute("findingSettings", results.findings().settings());
     model.addAttribute("worksheets", results.dwellingWorksheets(boardId));
     results.spec().boards().stream()

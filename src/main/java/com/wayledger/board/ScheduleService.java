@@ -128,12 +128,19 @@ public class ScheduleService {
       return circuit; // nothing changed: nothing stored, nothing in the change log
     }
     var before = snapshot(circuit);
+    CircuitForm beforeForm = CircuitForm.of(circuit);
     circuit.apply(form);
     if (form.hasFirstLoad()) {
       circuit.addLoad(new LoadItem(checkedFirstLoad(form)));
     }
     occupy(board, circuit);
-    logged(circuit, ChangeKind.CIRCUIT_EDITED, "changed", before, snapshot(circuit), reason);
+    logged(
+        circuit,
+        ChangeKind.CIRCUIT_EDITED,
+        changedWhat(beforeForm, CircuitForm.of(circuit), form.hasFirstLoad()),
+        before,
+        snapshot(circuit),
+        reason);
     return circuit;
   }
 
@@ -546,6 +553,16 @@ public class ScheduleService {
                 .optional()
                 .orElse(null);
     return ScheduleMapper.snapshotOf(circuit, feeds);
+  }
+
+  /** "changed In (A) 16 → 20; Device MCB → RCBO", so a log line says what changed. */
+  static String changedWhat(CircuitForm before, CircuitForm after, boolean loadAdded) {
+    String fields =
+        com.wayledger.system.RecordDiff.describe(after.changedFields(before), "circuit", 6);
+    if (fields.isEmpty()) {
+      return loadAdded ? "load added" : "changed";
+    }
+    return "changed " + fields + (loadAdded ? "; load added" : "");
   }
 
   private void logged(

@@ -33,7 +33,26 @@ public record TimeCurrentChart(
   static final double MAX_SECONDS = 10_000;
 
   /** A vertical line at a current, labelled. */
-  public record Marker(String kind, String label, double amps, double x) {}
+  public record Marker(String kind, String label, double amps, double x) {
+
+    /**
+     * "Ib 0.5 A", "Ib 16.0 A", "fault 1200 A": amps to one decimal below 100 A so that a small
+     * current never reads as "0 A".
+     */
+    public String text() {
+      return label
+          + " "
+          + (amps < 100
+              ? String.format(java.util.Locale.ROOT, "%.1f", amps)
+              : String.format(java.util.Locale.ROOT, "%.0f", amps))
+          + " A";
+    }
+
+    /** Whether the label sits left of its line, so it is not cut off at the chart's right edge. */
+    public boolean labelOnLeft() {
+      return x > RIGHT - 90;
+    }
+  }
 
   public record Tick(String label, double position) {}
 

@@ -2,6 +2,7 @@ package com.wayledger.exchange;
 
 import com.wayledger.engine.PhasePosition;
 import com.wayledger.engine.WayStatus;
+import com.wayledger.system.EnumWords;
 import java.util.Locale;
 
 /**
@@ -43,7 +44,7 @@ final class Codes {
       case "L1L2", "AB" -> PhasePosition.L1_L2;
       case "L2L3", "BC" -> PhasePosition.L2_L3;
       case "L3L1", "CA" -> PhasePosition.L3_L1;
-      default -> null;
+      default -> EnumWords.standard().parse(PhasePosition.class, text);
     };
   }
 
@@ -61,7 +62,7 @@ final class Codes {
       case "INUSE", "USED", "LIVE", "ACTIVE", "ON" -> WayStatus.IN_USE;
       case "SPARE", "SPAREDEVICE" -> WayStatus.SPARE_DEVICE;
       case "EMPTY", "SPACE", "EMPTYSPACE", "BLANK", "NONE" -> WayStatus.EMPTY;
-      default -> null;
+      default -> EnumWords.standard().parse(WayStatus.class, text);
     };
   }
 
@@ -88,18 +89,17 @@ final class Codes {
     };
   }
 
-  /** An enum constant by name, ignoring case, spaces, hyphens and underscores; null when none. */
+  /**
+   * An enum constant by its words ("Thermoplastic 70 °C") or its code ("THERMOPLASTIC_70"),
+   * ignoring case, spaces and punctuation; null when none.
+   */
   static <E extends Enum<E>> E parseEnum(Class<E> type, String text) {
-    String t = squash(text);
-    if (t.isEmpty()) {
-      return null;
-    }
-    for (E constant : type.getEnumConstants()) {
-      if (squash(constant.name()).equals(t)) {
-        return constant;
-      }
-    }
-    return null;
+    return EnumWords.standard().parse(type, text);
+  }
+
+  /** How a closed vocabulary's value is written in a cell: its words, never its code. */
+  static String word(Enum<?> value) {
+    return EnumWords.standard().shortOf(value);
   }
 
   /**

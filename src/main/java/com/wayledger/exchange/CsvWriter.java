@@ -147,6 +147,6 @@ public final class CsvWriter {
   }
 
   private static String name(Enum<?> value) {
-    return value == null ? "" : value.name();
+    return value == null ? "" : Codes.word(value);
   }
 }

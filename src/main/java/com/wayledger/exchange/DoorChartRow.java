@@ -33,7 +33,7 @@ public record DoorChartRow(
           };
       StringBuilder device = new StringBuilder();
       if (c.status() != WayStatus.EMPTY && c.deviceKind() != null) {
-        device.append(c.deviceKind().name()).append(' ');
+        device.append(Codes.word(c.deviceKind())).append(' ');
         if (c.deviceCurve() != null) {
           device.append(c.deviceCurve().name());
         }

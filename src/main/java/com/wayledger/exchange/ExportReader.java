@@ -11,6 +11,7 @@ import com.wayledger.board.ScheduleMapper;
 import com.wayledger.board.SiteAnalysis;
 import com.wayledger.site.Site;
 import com.wayledger.site.SiteService;
+import com.wayledger.system.EnumWords;
 import java.time.Clock;
 import java.time.LocalDate;
 import java.util.List;
@@ -63,7 +64,7 @@ public class ExportReader {
     return new ExportData(
         site.getId(),
         site.getName(),
-        site.getEarthingSystem() == null ? "" : site.getEarthingSystem().name(),
+        site.getEarthingSystem() == null ? "" : EnumWords.standard().of(site.getEarthingSystem()),
         entries,
         analysis.demand(),
         analysis.findings(),

@@ -16,6 +16,7 @@ import com.wayledger.engine.RatingUnit;
 import com.wayledger.engine.RcdType;
 import com.wayledger.engine.TripCurve;
 import com.wayledger.engine.WayStatus;
+import com.wayledger.system.EnumWords;
 import jakarta.validation.ConstraintViolation;
 import jakarta.validation.Validator;
 import java.util.ArrayList;
@@ -331,7 +332,7 @@ public final class RowReader {
     if (kind != null && !kind.hasCurve() && curve != null && cells.blank(DEVICE_SUMMARY)) {
       problems.add(
           new ImportPlan.Problem(
-              CURVE, "import.cell.curveNotForDevice", new Object[] {kind.name()}));
+              CURVE, "import.cell.curveNotForDevice", new Object[] {Codes.word(kind)}));
     }
     if (status != null
         && status != WayStatus.EMPTY
@@ -640,14 +641,7 @@ public final class RowReader {
     }
 
     private static String choices(Class<? extends Enum<?>> type) {
-      StringBuilder text = new StringBuilder();
-      for (Enum<?> constant : type.getEnumConstants()) {
-        if (!text.isEmpty()) {
-          text.append(", ");
-        }
-        text.append(constant.name());
-      }
-      return text.toString();
+      return EnumWords.standard().choices(type);
     }
   }
 

@@ -1053,8 +1053,8 @@ public final class WorkbookWriter {
       if (item.way() != null) {
         number(row, 1, item.way(), s.integer, w);
       }
-      text(row, 2, finding.check().name(), s.text, w);
-      text(row, 3, finding.verdict().name(), s.text, w);
+      text(row, 2, finding.check().title(), s.text, w);
+      text(row, 3, Codes.word(finding.verdict()), s.text, w);
       text(row, 4, finding.summary(), s.text, w);
       String figures =
           item.ways() != null
@@ -1137,7 +1137,7 @@ public final class WorkbookWriter {
         });
     if (data.findings() != null) {
       ProtectionSettings p = data.findings().settings();
-      lines.add(new String[] {"Supply ownership", p.supplyOwnership().name()});
+      lines.add(new String[] {"Supply ownership", Codes.word(p.supplyOwnership())});
       lines.add(
           new String[] {"Voltage drop limit, lighting %", plain(p.lightingDropLimitPercent())});
       lines.add(new String[] {"Voltage drop limit, other %", plain(p.otherDropLimitPercent())});
@@ -1222,7 +1222,7 @@ public final class WorkbookWriter {
   }
 
   private static String name(Enum<?> value) {
-    return value == null ? null : value.name();
+    return Codes.word(value);
   }
 
   /** Text always goes in as a string cell, never as a formula, whatever it starts with. */

@@ -113,12 +113,20 @@ public class CapacityController {
       @RequestParam(required = false) String reason,
       HttpServletRequest request,
       Model model,
-      HttpServletResponse response) {
+      HttpServletResponse response,
+      org.springframework.web.servlet.mvc.support.RedirectAttributes redirect) {
     Board board = boards.get(id);
     form = FormRecovery.ensure(form, errors, model, "form", CapacityForm.class, request);
     if (!errors.hasErrors()) {
       try {
-        capacity.add(id, form, choice, reason);
+        var circuit = capacity.add(id, form, choice, reason);
+        // the history page confirms what was added where
+        redirect.addFlashAttribute(
+            "loadAdded",
+            java.util.List.of(
+                form.description() == null ? "" : form.description(),
+                circuit.positionLabel(),
+                circuit.getDescription() == null ? "" : circuit.getDescription()));
         return "redirect:/boards/" + id + "/history";
       } catch (RuleViolation violation) {
         model.addAttribute("addProblem", violation.messageCode());

@@ -90,13 +90,20 @@ public class LoadLogController {
     return siteLog(id, null, null, null, null, null, model);
   }
 
-  /** The headroom table of the site page, fetched by the page after it loads. */
+  /**
+   * The headroom table: the bare table when the site page fetches it after it loads, a whole page
+   * (layout, caution and all) when the address is opened directly or from the link without script.
+   */
   @GetMapping("/sites/{id}/headroom")
-  public String headroom(@PathVariable long id, Model model) {
+  public String headroom(
+      @PathVariable long id,
+      @org.springframework.web.bind.annotation.RequestHeader(value = "HX-Request", required = false)
+          String htmx,
+      Model model) {
     Site site = sites.get(id);
     model.addAttribute("site", site);
     model.addAttribute("headroom", headroomOf(site));
-    return "loadlog/headroom :: table";
+    return "true".equals(htmx) ? "loadlog/headroom :: table" : "loadlog/headroom-page";
   }
 
   List<Headroom> headroomOf(Site site) {

@@ -1,9 +1,12 @@
 package com.wayledger.system;
 
 import java.net.URI;
+import java.util.Arrays;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.stream.Collectors;
+import org.springframework.context.MessageSource;
 import org.springframework.dao.DataIntegrityViolationException;
 import org.springframework.dao.PessimisticLockingFailureException;
 import org.springframework.http.HttpStatus;
@@ -15,6 +18,7 @@ import org.springframework.web.bind.annotation.ExceptionHandler;
 import org.springframework.web.bind.annotation.RestControllerAdvice;
 import org.springframework.web.method.annotation.MethodArgumentTypeMismatchException;
 import tools.jackson.core.JacksonException;
+import tools.jackson.databind.exc.MismatchedInputException;
 
 /**
  * Errors of the JSON API as RFC 9457 problem details: the status, a sentence, and for bad input a
@@ -22,6 +26,17 @@ import tools.jackson.core.JacksonException;
  */
 @RestControllerAdvice(annotations = org.springframework.web.bind.annotation.RestController.class)
 public class ApiErrorHandling {
+
+  private final MessageSource messages;
+
+  public ApiErrorHandling(MessageSource messages) {
+    this.messages = messages;
+  }
+
+  /** A message code in words, as the pages show it; the code itself when the bundles lack it. */
+  private String words(String code, Object... arguments) {
+    return messages.getMessage(code, arguments, code, Locale.UK);
+  }
 
   @ExceptionHandler(MethodArgumentNotValidException.class)
   public ProblemDetail invalid(MethodArgumentNotValidException e) {
@@ -44,7 +59,16 @@ public class ApiErrorHandling {
   public ProblemDetail rule(RuleViolation e) {
     ProblemDetail problem =
         problem(HttpStatus.UNPROCESSABLE_CONTENT, "A value breaks a rule of the schedule.");
-    problem.setProperty("fields", List.of(Map.of("field", e.field(), "message", e.messageCode())));
+    problem.setProperty(
+        "fields",
+        List.of(
+            Map.of(
+                "field",
+                e.field(),
+                "message",
+                words(e.messageCode(), e.arguments()),
+                "code",
+                e.messageCode())));
     return problem;
   }
 
@@ -58,7 +82,9 @@ public class ApiErrorHandling {
                 "field",
                 e.field(),
                 "message",
-                e.messageCode() + (e.character().isEmpty() ? "" : " " + e.character()))));
+                words(e.messageCode()) + (e.character().isEmpty() ? "" : " " + e.character()),
+                "code",
+                e.messageCode())));
     return problem;
   }
 
@@ -78,10 +104,28 @@ public class ApiErrorHandling {
                           ? step.getPropertyName()
                           : "[" + step.getIndex() + "]")
               .collect(Collectors.joining("."));
-      problem.setProperty(
-          "fields", List.of(Map.of("field", field, "message", "not a valid value here")));
+      problem.setProperty("fields", List.of(Map.of("field", field, "message", notValid(jackson))));
     }
     return problem;
+  }
+
+  /**
+   * For a value outside a closed vocabulary, the accepted codes each with its words ("COPPER
+   * (Copper)"), so a client learns what to send and what it means.
+   */
+  private static String notValid(JacksonException jackson) {
+    if (jackson instanceof MismatchedInputException mismatch
+        && mismatch.getTargetType() != null
+        && mismatch.getTargetType().isEnum()) {
+      EnumWords words = EnumWords.standard();
+      String accepted =
+          Arrays.stream(mismatch.getTargetType().getEnumConstants())
+              .map(constant -> (Enum<?>) constant)
+              .map(constant -> constant.name() + " (" + words.of(constant) + ")")
+              .collect(Collectors.joining(", "));
+      return "not a valid value here; one of " + accepted;
+    }
+    return "not a valid value here";
   }
 
   @ExceptionHandler(MethodArgumentTypeMismatchException.class)

@@ -44,4 +44,48 @@ public final class RecordDiff {
   private static Object blankToNull(Object value) {
     return value instanceof String text && text.isBlank() ? null : value;
   }
+
+  /**
+   * The changes in words for a change-log line: "In (A) 16 → 20; Device MCB → RCBO", each field by
+   * its form label ({@code <labelPrefix>.<field>} in the bundles), at most {@code limit} fields and
+   * then how many more.
+   */
+  public static String describe(List<FieldChange> changes, String labelPrefix, int limit) {
+    EnumWords words = EnumWords.standard();
+    StringBuilder text = new StringBuilder();
+    int shown = 0;
+    for (FieldChange change : changes) {
+      if (shown == limit) {
+        text.append("; and ").append(changes.size() - limit).append(" more");
+        break;
+      }
+      if (!text.isEmpty()) {
+        text.append("; ");
+      }
+      String label = words.text(labelPrefix + "." + change.field());
+      text.append(label != null ? label : change.field())
+          .append(' ')
+          .append(value(change.yours()))
+          .append(" → ")
+          .append(value(change.theirs()));
+      shown++;
+    }
+    return text.toString();
+  }
+
+  private static String value(Object value) {
+    if (value == null || (value instanceof String t && t.isBlank())) {
+      return "—";
+    }
+    if (value instanceof Enum<?> constant) {
+      return EnumWords.standard().shortOf(constant);
+    }
+    if (value instanceof Boolean flag) {
+      return flag ? "yes" : "no";
+    }
+    if (value instanceof Double number) {
+      return java.math.BigDecimal.valueOf(number).stripTrailingZeros().toPlainString();
+    }
+    return value instanceof String t ? "“" + t + "”" : String.valueOf(value);
+  }
 }

@@ -35,6 +35,7 @@ class CheckPagesIntegrationTests {
 
   @Autowired MockMvc mvc;
   @Autowired JdbcClient jdbc;
+  @Autowired com.wayledger.board.AnalysisService analysis;
 
   @Test
   @Order(1) // before the proposal is fitted by the next test
@@ -126,6 +127,57 @@ class CheckPagesIntegrationTests {
         .doesNotContain("class=\"badge v-WARNING\"")
         .doesNotContain("class=\"badge v-ADVICE\"");
     assertThat(page).contains("cable not protected");
+  }
+
+  @Test
+  void aBoardWithTheSameRemarkOnManyWaysShowsOneRowListingThem() throws Exception {
+    long site = jdbc.sql("SELECT id FROM site").query(Long.class).list().get(0);
+    var results = analysis.ofSite(site);
+    // the demo board with the most findings of one check and grade on different ways
+    long boardId = 0;
+    String check = null;
+    int ways = 0;
+    for (long id : jdbc.sql("SELECT id FROM board").query(Long.class).list()) {
+      var board = results.boardFindings(id).orElse(null);
+      if (board == null) {
+        continue;
+      }
+      java.util.Map<String, Integer> counts = new java.util.HashMap<>();
+      board
+          .circuits()
+          .forEach(
+              c ->
+                  c.findings().stream()
+                      .filter(f -> f.verdict().isProblem())
+                      .forEach(f -> counts.merge(f.check() + "|" + f.verdict(), 1, Integer::sum)));
+      for (var e : counts.entrySet()) {
+        if (e.getValue() > ways) {
+          ways = e.getValue();
+          check = e.getKey();
+          boardId = id;
+        }
+      }
+    }
+    assertThat(ways).as("the demo has a remark repeated on several ways").isGreaterThan(2);
+    String page =
+        mvc.perform(get("/boards/{id}", boardId).with(viewer()))
+            .andExpect(status().isOk())
+            .andReturn()
+            .getResponse()
+            .getContentAsString();
+    String verdict = check.substring(check.indexOf('|') + 1);
+    int rows = page.split("class=\"finding v-" + verdict + " grouped\"", -1).length - 1;
+    int list = Math.max(0, page.indexOf("id=\"findings\""));
+    assertThat(rows)
+        .as(
+            "grouped %s rows on board %d in %s",
+            check, boardId, page.substring(list, Math.min(page.length(), list + 3000)))
+        .isGreaterThanOrEqualTo(1);
+    assertThat(page).contains(ways + " ways: ");
+    int singles = page.split("class=\"badge v-" + verdict + "\"", -1).length - 1;
+    assertThat(singles)
+        .as("fewer %s rows than findings (%d on one check alone)", verdict, ways)
+        .isLessThan(results.problems(boardId).size());
   }
 
   private long circuit(String description) {

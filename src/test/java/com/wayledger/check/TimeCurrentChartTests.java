@@ -48,4 +48,25 @@ class TimeCurrentChartTests {
     assertThat(chart.bandPath()).isEmpty();
     assertThat(chart.markers()).hasSize(1);
   }
+
+  @org.junit.jupiter.api.Test
+  void aSmallDesignCurrentReadsWithItsDecimalNotAsZeroAmps() {
+    // wording slip: "Ib 0 A" on the chart for a circuit carrying 0.47 A
+    TimeCurrentChart.Marker marker = new TimeCurrentChart.Marker("design", "Ib", 0.47, 100);
+    org.assertj.core.api.Assertions.assertThat(marker.text()).isEqualTo("Ib 0.5 A");
+    org.assertj.core.api.Assertions.assertThat(
+            new TimeCurrentChart.Marker("fault", "fault", 1234.0, 100).text())
+        .isEqualTo("fault 1234 A");
+  }
+
+  @org.junit.jupiter.api.Test
+  void aMarkerNearTheRightEdgeIsLabelledOnItsLeftSoTheLabelIsNotCutOff() {
+    org.assertj.core.api.Assertions.assertThat(
+            new TimeCurrentChart.Marker("fault", "fault", 5000, TimeCurrentChart.RIGHT - 10)
+                .labelOnLeft())
+        .isTrue();
+    org.assertj.core.api.Assertions.assertThat(
+            new TimeCurrentChart.Marker("design", "Ib", 5, 120).labelOnLeft())
+        .isFalse();
+  }
 }

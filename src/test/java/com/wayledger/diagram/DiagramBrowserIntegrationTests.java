@@ -134,6 +134,7 @@ class DiagramBrowserIntegrationTests {
     link.click();
     wait(d -> d.getCurrentUrl().endsWith("/boards/" + kb1.getId()));
 
+    browser.findElement(By.cssSelector("details.more-menu > summary")).click();
     browser.findElement(By.linkText("Door chart")).click();
     wait(d -> !d.findElements(By.id("door-code")).isEmpty());
     String codeLink = browser.findElement(By.id("door-code")).getAttribute("data-link");

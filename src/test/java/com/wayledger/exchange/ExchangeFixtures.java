@@ -372,7 +372,7 @@ public final class ExchangeFixtures {
     return new ExportData(
         9L,
         "Tallow test shop",
-        "TN_C_S",
+        com.wayledger.system.EnumWords.standard().of(com.wayledger.engine.EarthingSystem.TN_C_S),
         boards,
         analysis.demand(),
         analysis.findings(),

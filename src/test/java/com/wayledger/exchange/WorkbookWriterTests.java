@@ -299,8 +299,10 @@ class WorkbookWriterTests {
         if (row.getRowNum() <= WorkbookWriter.HEADER_ROW) {
           continue;
         }
-        String verdict = row.getCell(3).getStringCellValue();
-        if (verdict.equals(Verdict.NOT_ASSESSED.name())) {
+        Verdict verdict =
+            com.wayledger.system.EnumWords.standard()
+                .parse(Verdict.class, row.getCell(3).getStringCellValue());
+        if (verdict == Verdict.NOT_ASSESSED) {
           String before =
               notAssessedRows
                   .computeIfAbsent(row.getCell(0).getStringCellValue(), b -> new HashMap<>())
@@ -310,7 +312,7 @@ class WorkbookWriterTests {
                           + row.getCell(4).getStringCellValue(),
                       row.getCell(5) == null ? "" : row.getCell(5).getStringCellValue());
           assertThat(before).as("one row per board and reason").isNull();
-        } else if (Verdict.valueOf(verdict).isProblem()) {
+        } else if (verdict.isProblem()) {
           problemRows++;
           if (row.getCell(1) != null) {
             assertThat(row.getCell(9))
@@ -333,7 +335,7 @@ class WorkbookWriterTests {
                     assertThat(
                             notAssessedRows
                                 .get(board)
-                                .get(finding.check().name() + " | " + finding.summary()))
+                                .get(finding.check().title() + " | " + finding.summary()))
                         .as("%s %s: how many circuits and which ways", board, finding.check())
                         .isEqualTo(circuits == 1 ? "" : circuits + " circuits, ways 1–2"));
           });

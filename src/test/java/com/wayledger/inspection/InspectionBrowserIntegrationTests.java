@@ -131,6 +131,10 @@ class InspectionBrowserIntegrationTests {
     signIn("demo", "wayledger-demo");
     browser.findElement(By.linkText("Tallow Lane Works")).click();
     wait.until(ExpectedConditions.elementToBeClickable(By.linkText("FLAT-2"))).click();
+    // the board's less frequent actions are folded behind "More…"
+    wait.until(
+            ExpectedConditions.elementToBeClickable(By.cssSelector("details.more-menu > summary")))
+        .click();
     wait.until(ExpectedConditions.elementToBeClickable(By.linkText("Inspections"))).click();
     wait.until(ExpectedConditions.elementToBeClickable(By.id("new-inspection"))).click();
     WebElement grid = wait.until(ExpectedConditions.presenceOfElementLocated(By.id("results")));
@@ -227,6 +231,10 @@ class InspectionBrowserIntegrationTests {
     signIn("demo", "wayledger-demo");
     browser.findElement(By.linkText("Tallow Lane Works")).click();
     wait.until(ExpectedConditions.elementToBeClickable(By.linkText("FLAT-2"))).click();
+    // the board's less frequent actions are folded behind "More…"
+    wait.until(
+            ExpectedConditions.elementToBeClickable(By.cssSelector("details.more-menu > summary")))
+        .click();
     wait.until(ExpectedConditions.elementToBeClickable(By.linkText("Inspections"))).click();
     wait.until(ExpectedConditions.elementToBeClickable(By.id("new-inspection"))).click();
     WebElement grid = wait.until(ExpectedConditions.presenceOfElementLocated(By.id("results")));

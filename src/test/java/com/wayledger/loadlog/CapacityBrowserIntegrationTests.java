@@ -111,6 +111,10 @@ class CapacityBrowserIntegrationTests {
 
     new WebDriverWait(browser, Duration.ofSeconds(10))
         .until(d -> d.getCurrentUrl().endsWith("/history"));
+    // slip: no confirmation after adding a load from the answer
+    assertThat(browser.findElement(By.id("load-added")).getText())
+        .as("the history page confirms the load added")
+        .contains("Van charger");
     WebElement newest = browser.findElement(By.cssSelector("table.history tbody tr"));
     assertThat(newest.getText())
         .as("newest history row")

@@ -496,7 +496,7 @@ final class BoardCalculation {
     if (board.parentBoardId() != null) {
       supplyFuse =
           RatingLoading.notApplicable(
-              "supply fuse", "not applicable — board fed from board #" + board.parentBoardId());
+              "supply fuse", "not applicable — fed from a way of its parent board");
     } else if (context.supply() == null) {
       supplyFuse = RatingLoading.notApplicable("supply fuse", "not assessed — missing supply");
     } else {
