@@ -1,15 +1,13 @@
 package com.wayledger.board;
 
+import com.wayledger.system.VersionedJavaMigration;
 import java.sql.Connection;
 import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.Statement;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
-import org.flywaydb.core.api.MigrationVersion;
 import org.flywaydb.core.api.migration.Context;
-import org.flywaydb.core.api.migration.JavaMigration;
 import org.springframework.stereotype.Component;
 
 /**
@@ -21,7 +19,11 @@ import org.springframework.stereotype.Component;
  * makes measured_demand append-only like the change log.
  */
 @Component
-class DwellingMigration implements JavaMigration {
+class DwellingMigration extends VersionedJavaMigration {
+
+  DwellingMigration() {
+    super("17", "dwelling inputs and measured demand");
+  }
 
   static final String CATEGORIES =
       "'LIGHTING', 'SOCKET_OUTLETS', 'COOKING', 'WATER_HEATING_INSTANTANEOUS',"
@@ -91,34 +93,14 @@ class DwellingMigration implements JavaMigration {
               + " FOR EACH STATEMENT EXECUTE FUNCTION measured_demand_refuse_change()");
 
   @Override
-  public MigrationVersion getVersion() {
-    return MigrationVersion.fromVersion("17");
-  }
-
-  @Override
-  public String getDescription() {
-    return "dwelling inputs and measured demand";
-  }
-
-  @Override
   public Integer getChecksum() {
     return (String.join(";", BOTH) + String.join(";", POSTGRESQL)).hashCode();
   }
 
   @Override
-  public boolean canExecuteInTransaction() {
-    return true;
-  }
-
-  @Override
   public void migrate(Context context) throws Exception {
     Connection connection = context.getConnection();
-    boolean postgres =
-        connection
-            .getMetaData()
-            .getDatabaseProductName()
-            .toLowerCase(Locale.ROOT)
-            .contains("postgresql");
+    boolean postgres = onPostgres(connection);
     try (Statement statement = connection.createStatement()) {
       // the old, narrower checks: found by what they list, since their names were generated
       for (String name : checksListing(connection, "load_item", "FIXED_APPLIANCE")) {
@@ -127,13 +109,9 @@ class DwellingMigration implements JavaMigration {
       for (String name : checksListing(connection, "change_log", "BALANCING_APPLIED")) {
         statement.execute("ALTER TABLE change_log DROP CONSTRAINT " + quoted(name));
       }
-      for (String sql : BOTH) {
-        statement.execute(sql);
-      }
+      execute(statement, BOTH);
       if (postgres) {
-        for (String sql : POSTGRESQL) {
-          statement.execute(sql);
-        }
+        execute(statement, POSTGRESQL);
       }
     }
   }

@@ -1,11 +1,10 @@
 package com.wayledger.inspection;
 
+import com.wayledger.system.VersionedJavaMigration;
 import java.sql.Connection;
 import java.sql.Statement;
 import java.util.List;
-import org.flywaydb.core.api.MigrationVersion;
 import org.flywaydb.core.api.migration.Context;
-import org.flywaydb.core.api.migration.JavaMigration;
 import org.springframework.stereotype.Component;
 
 /**
@@ -18,7 +17,11 @@ import org.springframework.stereotype.Component;
  * to Flyway.
  */
 @Component
-class InspectionProtection implements JavaMigration {
+class InspectionProtection extends VersionedJavaMigration {
+
+  InspectionProtection() {
+    super("11.1", "protect inspections");
+  }
 
   /** The append-only tables. */
   static final List<String> TABLES =
@@ -53,39 +56,18 @@ class InspectionProtection implements JavaMigration {
   }
 
   @Override
-  public MigrationVersion getVersion() {
-    return MigrationVersion.fromVersion("11.1");
-  }
-
-  @Override
-  public String getDescription() {
-    return "protect inspections";
-  }
-
-  @Override
   public Integer getChecksum() {
     return String.join(";", POSTGRESQL).hashCode();
   }
 
   @Override
-  public boolean canExecuteInTransaction() {
-    return true;
-  }
-
-  @Override
   public void migrate(Context context) throws Exception {
     Connection connection = context.getConnection();
-    if (!connection
-        .getMetaData()
-        .getDatabaseProductName()
-        .toLowerCase(java.util.Locale.ROOT)
-        .contains("postgresql")) {
+    if (!onPostgres(connection)) {
       return;
     }
     try (Statement statement = connection.createStatement()) {
-      for (String sql : POSTGRESQL) {
-        statement.execute(sql);
-      }
+      execute(statement, POSTGRESQL);
     }
   }
 }

@@ -1,16 +1,14 @@
 package com.wayledger.loadlog;
 
+import com.wayledger.system.VersionedJavaMigration;
 import java.sql.Connection;
 import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.Statement;
 import java.util.HashMap;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
-import org.flywaydb.core.api.MigrationVersion;
 import org.flywaydb.core.api.migration.Context;
-import org.flywaydb.core.api.migration.JavaMigration;
 import org.springframework.stereotype.Component;
 
 /**
@@ -23,7 +21,11 @@ import org.springframework.stereotype.Component;
  * migrations; the application's role cannot replace, disable or drop them (see docs/security.md).
  */
 @Component
-class ChangeLogChainMigration implements JavaMigration {
+class ChangeLogChainMigration extends VersionedJavaMigration {
+
+  ChangeLogChainMigration() {
+    super("8.1", "chain change log");
+  }
 
   static final List<String> POSTGRESQL =
       List.of(
@@ -64,34 +66,14 @@ class ChangeLogChainMigration implements JavaMigration {
               + " FOR EACH ROW EXECUTE FUNCTION change_log_chain()");
 
   @Override
-  public MigrationVersion getVersion() {
-    return MigrationVersion.fromVersion("8.1");
-  }
-
-  @Override
-  public String getDescription() {
-    return "chain change log";
-  }
-
-  @Override
   public Integer getChecksum() {
     return String.join(";", POSTGRESQL).hashCode();
   }
 
   @Override
-  public boolean canExecuteInTransaction() {
-    return true;
-  }
-
-  @Override
   public void migrate(Context context) throws Exception {
     Connection connection = context.getConnection();
-    boolean postgres =
-        connection
-            .getMetaData()
-            .getDatabaseProductName()
-            .toLowerCase(Locale.ROOT)
-            .contains("postgresql");
+    boolean postgres = onPostgres(connection);
     try (Statement statement = connection.createStatement()) {
       if (postgres) {
         // Migration 4.1's guard refuses UPDATE; the owner lifts it for this one backfill only.
@@ -104,9 +86,7 @@ class ChangeLogChainMigration implements JavaMigration {
       statement.execute(
           "CREATE UNIQUE INDEX change_log_chain_idx ON change_log (site_id, site_seq)");
       if (postgres) {
-        for (String sql : POSTGRESQL) {
-          statement.execute(sql);
-        }
+        execute(statement, POSTGRESQL);
       }
     }
   }

@@ -1,12 +1,10 @@
 package com.wayledger.loadlog;
 
+import com.wayledger.system.VersionedJavaMigration;
 import java.sql.Connection;
 import java.sql.Statement;
 import java.util.List;
-import java.util.Locale;
-import org.flywaydb.core.api.MigrationVersion;
 import org.flywaydb.core.api.migration.Context;
-import org.flywaydb.core.api.migration.JavaMigration;
 import org.springframework.stereotype.Component;
 
 /**
@@ -18,7 +16,11 @@ import org.springframework.stereotype.Component;
  * forward-dating.
  */
 @Component
-class ChangeLogEffectiveDateMigration implements JavaMigration {
+class ChangeLogEffectiveDateMigration extends VersionedJavaMigration {
+
+  ChangeLogEffectiveDateMigration() {
+    super("15", "change log effective day");
+  }
 
   static final List<String> POSTGRESQL =
       List.of(
@@ -60,40 +62,18 @@ class ChangeLogEffectiveDateMigration implements JavaMigration {
           $$""");
 
   @Override
-  public MigrationVersion getVersion() {
-    return MigrationVersion.fromVersion("15");
-  }
-
-  @Override
-  public String getDescription() {
-    return "change log effective day";
-  }
-
-  @Override
   public Integer getChecksum() {
     return String.join(";", POSTGRESQL).hashCode();
   }
 
   @Override
-  public boolean canExecuteInTransaction() {
-    return true;
-  }
-
-  @Override
   public void migrate(Context context) throws Exception {
     Connection connection = context.getConnection();
-    boolean postgres =
-        connection
-            .getMetaData()
-            .getDatabaseProductName()
-            .toLowerCase(Locale.ROOT)
-            .contains("postgresql");
+    boolean postgres = onPostgres(connection);
     try (Statement statement = connection.createStatement()) {
       statement.execute("ALTER TABLE change_log ADD COLUMN effective_on DATE");
       if (postgres) {
-        for (String sql : POSTGRESQL) {
-          statement.execute(sql);
-        }
+        execute(statement, POSTGRESQL);
       }
     }
   }

@@ -1,11 +1,10 @@
 package com.wayledger.loadlog;
 
+import com.wayledger.system.VersionedJavaMigration;
 import java.sql.Connection;
 import java.sql.Statement;
 import java.util.List;
-import org.flywaydb.core.api.MigrationVersion;
 import org.flywaydb.core.api.migration.Context;
-import org.flywaydb.core.api.migration.JavaMigration;
 import org.springframework.stereotype.Component;
 
 /**
@@ -17,7 +16,11 @@ import org.springframework.stereotype.Component;
  * databases. Spring Boot hands JavaMigration beans to Flyway.
  */
 @Component
-class ChangeLogProtection implements JavaMigration {
+class ChangeLogProtection extends VersionedJavaMigration {
+
+  ChangeLogProtection() {
+    super("4.1", "protect change log");
+  }
 
   static final List<String> POSTGRESQL =
       List.of(
@@ -33,39 +36,18 @@ class ChangeLogProtection implements JavaMigration {
               + " FOR EACH STATEMENT EXECUTE FUNCTION change_log_refuse_change()");
 
   @Override
-  public MigrationVersion getVersion() {
-    return MigrationVersion.fromVersion("4.1");
-  }
-
-  @Override
-  public String getDescription() {
-    return "protect change log";
-  }
-
-  @Override
   public Integer getChecksum() {
     return String.join(";", POSTGRESQL).hashCode();
   }
 
   @Override
-  public boolean canExecuteInTransaction() {
-    return true;
-  }
-
-  @Override
   public void migrate(Context context) throws Exception {
     Connection connection = context.getConnection();
-    if (!connection
-        .getMetaData()
-        .getDatabaseProductName()
-        .toLowerCase(java.util.Locale.ROOT)
-        .contains("postgresql")) {
+    if (!onPostgres(connection)) {
       return;
     }
     try (Statement statement = connection.createStatement()) {
-      for (String sql : POSTGRESQL) {
-        statement.execute(sql);
-      }
+      execute(statement, POSTGRESQL);
     }
   }
 }

@@ -11,6 +11,7 @@ import com.wayledger.board.BoardService;
 import com.wayledger.board.ScheduleService;
 import com.wayledger.engine.PhasePosition;
 import com.wayledger.engine.protection.result.Verdict;
+import com.wayledger.loadlog.LogFixtures;
 import com.wayledger.site.Site;
 import com.wayledger.site.SiteService;
 import java.util.ArrayList;
@@ -54,10 +55,10 @@ class EstateFindingsIntegrationTests {
 
   @BeforeEach
   void aSecondSiteWithAnOverloadedWay() {
-    extra = sites.create(EstateFixtures.site());
-    board = boards.create(extra.getId(), EstateFixtures.board("EST-1", 63.0));
+    extra = sites.create(LogFixtures.site());
+    board = boards.create(extra.getId(), LogFixtures.board("EST-1", 63.0));
     // 9 kW at 230 V and unity power factor is 39 A on a 32 A breaker: Ib > In
-    schedule.addCircuit(board.getId(), EstateFixtures.circuit(1, PhasePosition.L1, "Kiln", 9000));
+    schedule.addCircuit(board.getId(), LogFixtures.circuit(1, PhasePosition.L1, "Kiln", 9000));
   }
 
   @Test
@@ -156,7 +157,7 @@ class EstateFindingsIntegrationTests {
         .as("engine runs after three more estate-wide reads of unchanged sites")
         .isEqualTo(afterFirstRead);
 
-    schedule.addCircuit(board.getId(), EstateFixtures.circuit(2, PhasePosition.L2, "Fan", 100));
+    schedule.addCircuit(board.getId(), LogFixtures.circuit(2, PhasePosition.L2, "Fan", 100));
     mvc.perform(get("/findings").with(viewer())).andExpect(status().isOk());
     assertThat(analysis.siteAnalysisRuns())
         .as("a change to one site recomputes that site once, and no other")

@@ -13,12 +13,15 @@ import com.wayledger.engine.WayStatus;
 import com.wayledger.site.SiteForm;
 import java.util.UUID;
 
-/** Forms for the load-log tests; figures are chosen per test and explained there. */
-final class LogFixtures {
+/**
+ * Forms for tests that store a site of their own (load log, estate findings); figures are chosen
+ * per test and explained there.
+ */
+public final class LogFixtures {
 
   private LogFixtures() {}
 
-  static SiteForm site() {
+  public static SiteForm site() {
     return new SiteForm(
         "Log test " + UUID.randomUUID(),
         null,
@@ -35,7 +38,7 @@ final class LogFixtures {
   }
 
   /** A three-phase board fed from the origin with a 63 A incomer, no diversity method. */
-  static BoardForm board(String reference, double incomerAmps) {
+  public static BoardForm board(String reference, double incomerAmps) {
     return new BoardForm(
         reference,
         "Test room",
@@ -69,7 +72,8 @@ final class LogFixtures {
   }
 
   /** An in-use single-pole circuit with one load of {@code watts} at unity power factor. */
-  static CircuitForm circuit(int way, PhasePosition position, String description, double watts) {
+  public static CircuitForm circuit(
+      int way, PhasePosition position, String description, double watts) {
     return new CircuitForm(
         way,
         position,
@@ -102,7 +106,7 @@ final class LogFixtures {
         null);
   }
 
-  static LoadForm load(String description, double watts) {
+  public static LoadForm load(String description, double watts) {
     return new LoadForm(
         description, LoadCategory.FIXED_APPLIANCE, 1, watts, RatingUnit.W, 1.0, null, null, false);
   }
