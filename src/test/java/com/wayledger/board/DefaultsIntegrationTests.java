@@ -324,7 +324,11 @@ class DefaultsIntegrationTests {
         .param("motorStartUpMultiple", motorMultiple);
   }
 
-  /** Device, cable size, length and one load: what a contractor types for a new circuit. */
+  /**
+   * Device, cable size, length, where the equipment is and one load: what a contractor types for a
+   * new circuit. The location is a fact of the circuit that no site or board default supplies;
+   * without it the residual-current check by location is not assessed.
+   */
   private long addMotorCircuit(String ambient) throws Exception {
     var request =
         post("/boards/{id}/circuits", boardId)
@@ -333,6 +337,7 @@ class DefaultsIntegrationTests {
             .param("wayNumber", "1")
             .param("position", "L1")
             .param("description", "Dough mixer")
+            .param("location", "INDOORS")
             .param("status", "IN_USE")
             .param("deviceKind", "MCB")
             .param("deviceCurve", "C")

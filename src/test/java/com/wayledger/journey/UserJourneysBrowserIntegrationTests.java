@@ -138,6 +138,7 @@ class UserJourneysBrowserIntegrationTests {
         wait.until(
             ExpectedConditions.visibilityOfElementLocated(By.id("editor-" + way + "-" + line)));
     editor.findElement(By.name("description")).sendKeys(name);
+    choose(editor, "location", "INDOORS"); // a fact of the circuit; no default supplies it
     choose(editor, "deviceKind", "MCB");
     choose(editor, "deviceCurve", "B");
     fill(editor, "deviceRatingAmps", "16");
