@@ -20,10 +20,10 @@ import org.springframework.boot.test.web.server.LocalServerPort;
 import org.springframework.test.context.ActiveProfiles;
 
 /**
- * Every main page of the demo site on a 768 px tablet and a 390 px phone: the page's scroll width
- * does not exceed the viewport (a table may scroll inside its own box or reflow into cards; the
- * page may not), and on the phone the board's own facts start on the first screen, not below a wall
- * of buttons.
+ * Every main page of the demo site on a 1400 px desktop, a 768 px tablet and a 390 px phone (the
+ * spare-capacity answers included): the page's scroll width does not exceed the viewport (a table
+ * may scroll inside its own box or reflow into cards; the page may not), and on the phone the
+ * board's own facts start on the first screen, not below a wall of buttons.
  */
 @SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT)
 @ActiveProfiles({"test", "demo"})
@@ -44,7 +44,7 @@ class NarrowScreensBrowserIntegrationTests {
   }
 
   @ParameterizedTest(name = "{0} px wide")
-  @ValueSource(ints = {768, 390})
+  @ValueSource(ints = {1400, 768, 390})
   void noMainPageScrollsSideways(int width) throws IOException {
     try (Chromium chromium = Chromium.atWidth(width, width < 500 ? 844 : 1024)) {
       org.openqa.selenium.chrome.ChromeDriver browser = chromium.driver();
@@ -83,6 +83,11 @@ class NarrowScreensBrowserIntegrationTests {
       pages.put("new inspection", board + "/inspections/new");
       pages.put("door chart", board + "/door-chart");
       pages.put("site room for a new load", site + "/can-it-take-it");
+      String question =
+          "/can-it-take-it?ask=1&description=Van+charger&category=EV_CHARGING"
+              + "&ratingValue=7&ratingUnit=W&powerFactor=1";
+      pages.put("room for a new load, answered", board + question);
+      pages.put("site room for a new load, answered", site + question);
       pages.put("site change log", site + "/log");
       pages.put("headroom", site + "/headroom");
       pages.put("site edit", site + "/edit");
@@ -100,6 +105,11 @@ class NarrowScreensBrowserIntegrationTests {
         browser.get(page.getValue());
         // the door chart is a print page without the layout's main element
         wait.until(ExpectedConditions.presenceOfElementLocated(By.cssSelector("body > *")));
+        if (page.getKey().endsWith("answered")) {
+          assertThat(browser.findElements(By.cssSelector("table.candidates")))
+              .as("the %s page shows its table of places", page.getKey())
+              .isNotEmpty();
+        }
         long[] widths = chromium.scrollAndViewportWidth();
         if (widths[0] > widths[1]) {
           String wide = page.getKey() + " " + widths[0] + " px > " + widths[1] + " px";
