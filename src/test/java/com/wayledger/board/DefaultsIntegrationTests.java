@@ -217,6 +217,22 @@ class DefaultsIntegrationTests {
   }
 
   @Test
+  void theLogSaysWhichDefaultsChangedFromWhatToWhat() throws Exception {
+    mvc.perform(siteDefaults("C", "30", "1", "0", "8")).andExpect(status().is3xxRedirection());
+    mvc.perform(siteDefaults("C", "35", "1", "0", "8")).andExpect(status().is3xxRedirection());
+    String latest =
+        jdbc.sql("SELECT summary FROM change_log WHERE site_id = ? ORDER BY id DESC")
+            .param(site.getId())
+            .query(String.class)
+            .list()
+            .get(0);
+    assertThat(latest)
+        .as("the newest log line names the changed default, old and new value")
+        .contains("defaults changed: Ambient temperature (°C) 30 → 35")
+        .doesNotContain("Installation method");
+  }
+
+  @Test
   void commonPracticeFillsEmptyFieldsAndMarksThem() throws Exception {
     String page =
         mvc.perform(
