@@ -8,9 +8,9 @@ import java.io.OutputStreamWriter;
 import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.util.List;
-import java.util.Locale;
 import org.springframework.beans.factory.annotation.Value;
 import org.springframework.context.MessageSource;
+import org.springframework.context.i18n.LocaleContextHolder;
 import org.springframework.http.ContentDisposition;
 import org.springframework.http.HttpHeaders;
 import org.springframework.stereotype.Controller;
@@ -129,7 +129,7 @@ public class ExportController {
   }
 
   private String caution() {
-    return messages.getMessage("caution.short", null, Locale.UK);
+    return messages.getMessage("caution.short", null, LocaleContextHolder.getLocale());
   }
 
   private static void attachment(HttpServletResponse response, String type, String name) {
