@@ -59,7 +59,8 @@ public class ExportController {
         response,
         XLSX,
         fileName(data.siteName() + "-" + data.boards().get(0).reference()) + ".xlsx");
-    new WorkbookWriter(caution()).write(data, false, extraSheets, response.getOutputStream());
+    new WorkbookWriter(caution(), sheetWords())
+        .write(data, false, extraSheets, response.getOutputStream());
   }
 
   @GetMapping("/sites/{siteId}/export.xlsx")
@@ -68,7 +69,7 @@ public class ExportController {
     ExportData data = reader.site(siteId);
     byte[] diagram = data.boards().isEmpty() ? null : diagramPicture.png(siteId);
     attachment(response, XLSX, fileName(data.siteName()) + ".xlsx");
-    new WorkbookWriter(caution())
+    new WorkbookWriter(caution(), sheetWords())
         .withDiagram(diagram)
         .write(data, true, extraSheets, response.getOutputStream());
   }
@@ -126,6 +127,12 @@ public class ExportController {
     return publicBaseUrl.isEmpty()
         ? ServletUriComponentsBuilder.fromCurrentContextPath().build().toUriString()
         : publicBaseUrl;
+  }
+
+  /** The workbook's titles and labels in the language of the page it is exported from. */
+  private SheetWords sheetWords() {
+    java.util.Locale locale = LocaleContextHolder.getLocale();
+    return SheetWords.of((key, args) -> messages.getMessage(key, args, locale));
   }
 
   private String caution() {

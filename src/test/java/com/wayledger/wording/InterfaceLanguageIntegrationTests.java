@@ -10,7 +10,11 @@ import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.
 import com.wayledger.account.AccountService;
 import com.wayledger.account.Role;
 import com.wayledger.account.UserForm;
+import java.io.ByteArrayInputStream;
 import java.util.UUID;
+import org.apache.poi.ss.usermodel.Sheet;
+import org.apache.poi.ss.usermodel.Workbook;
+import org.apache.poi.xssf.usermodel.XSSFWorkbook;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.springframework.beans.factory.annotation.Autowired;
@@ -106,6 +110,24 @@ class InterfaceLanguageIntegrationTests {
   }
 
   @Test
+  void theWorkbookOfABoardReadsInTheWordsOfItsPage() throws Exception {
+    try (Workbook nec = workbook(necBoard);
+        Workbook iec = workbook(iecBoard)) {
+      Sheet necSheet = nec.getSheetAt(0);
+      Sheet iecSheet = iec.getSheetAt(0);
+      assertThat(necSheet.getRow(0).getCell(0).getStringCellValue())
+          .startsWith("Schedule of panelboard ");
+      assertThat(necSheet.getRow(1).getCell(4).getStringCellValue()).isEqualTo("Spaces");
+      assertThat(iecSheet.getRow(0).getCell(0).getStringCellValue())
+          .startsWith("Schedule of board ");
+      assertThat(iecSheet.getRow(1).getCell(4).getStringCellValue()).isEqualTo("Ways");
+      assertThat(necSheet.getRow(2).getCell(0).getStringCellValue())
+          .as("the caution line on the US workbook too")
+          .startsWith("Caution: ");
+    }
+  }
+
+  @Test
   void theAccountPageOffersTheThreeChoicesWithFollowTheSiteFirst() throws Exception {
     String page = page(get("/account").with(user(storedUser()).roles("VIEWER")));
 
@@ -147,6 +169,16 @@ class InterfaceLanguageIntegrationTests {
             .with(csrf())
             .param("language", language)
             .param("version", String.valueOf(version)));
+  }
+
+  private Workbook workbook(long board) throws Exception {
+    byte[] xlsx =
+        mvc.perform(get("/boards/{id}/export.xlsx", board).with(user("vera").roles("VIEWER")))
+            .andExpect(status().isOk())
+            .andReturn()
+            .getResponse()
+            .getContentAsByteArray();
+    return new XSSFWorkbook(new ByteArrayInputStream(xlsx));
   }
 
   private String methods(String acceptLanguage) throws Exception {
