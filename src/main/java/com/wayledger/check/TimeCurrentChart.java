@@ -40,9 +40,12 @@ public record TimeCurrentChart(
      * current never reads as "0 A".
      */
     public String text() {
-      return label
-          + " "
-          + (amps < 100
+      return label + " " + amount();
+    }
+
+    /** "0.5 A", "1200 A": the current as the page's words for this marker kind carry it. */
+    public String amount() {
+      return (amps < 100
               ? String.format(java.util.Locale.ROOT, "%.1f", amps)
               : String.format(java.util.Locale.ROOT, "%.0f", amps))
           + " A";
