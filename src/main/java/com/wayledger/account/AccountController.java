@@ -68,7 +68,7 @@ public class AccountController {
     if (!errors.hasErrors()) {
       try {
         languages.choose(who.getName(), form);
-        return "redirect:/account?language";
+        return "redirect:/account?language#language";
       } catch (StaleEditException stale) {
         // The stored choice, at its current version, with the refusal beside the field.
         LanguageForm current = languages.formOf(who.getName());
