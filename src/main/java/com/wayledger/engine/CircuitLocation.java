@@ -40,7 +40,9 @@ public enum CircuitLocation {
   NEAR_TUB_OR_SHOWER,
   /** A laundry area (NEC set). */
   LAUNDRY,
-  /** A family, dining or living room, parlor, library, den, sunroom or recreation room (NEC set). */
+  /**
+   * A family, dining or living room, parlor, library, den, sunroom or recreation room (NEC set).
+   */
   LIVING_AREA,
   /** A bedroom (NEC set). */
   BEDROOM,

@@ -1,11 +1,11 @@
 package com.wayledger.engine;
 
 /**
- * The NEC's personnel and fire protection functions of a breaker: a ground-fault circuit interrupter
- * (NEC 210.8, a Class A device per UL 943 that opens at 4 to 6 mA of ground current — from memory),
- * an arc-fault circuit interrupter (NEC 210.12, UL 1699) or a dual-function breaker that is both. A
- * 30 mA residual-current device of the IEC set is not a GFCI and is never read as one. A circuit
- * whose device records none (null) has neither.
+ * The NEC's personnel and fire protection functions of a breaker: a ground-fault circuit
+ * interrupter (NEC 210.8, a Class A device per UL 943 that opens at 4 to 6 mA of ground current —
+ * from memory), an arc-fault circuit interrupter (NEC 210.12, UL 1699) or a dual-function breaker
+ * that is both. A 30 mA residual-current device of the IEC set is not a GFCI and is never read as
+ * one. A circuit whose device records none (null) has neither.
  */
 public enum FaultInterrupter {
   /** Ground-fault circuit interrupter, Class A (UL 943). */

@@ -434,8 +434,7 @@ public final class CapacityAdvisor {
     }
     if (rules.usesAwgAndFeet()) {
       // the NEC set proposes no IEC device: the smallest 240.6(A) standard breaker not below Ib
-      Integer rating =
-          com.wayledger.engine.nec.OvercurrentLimits.nextStandardRatingAtOrAbove(ib);
+      Integer rating = com.wayledger.engine.nec.OvercurrentLimits.nextStandardRatingAtOrAbove(ib);
       if (rating != null) {
         return withDevice(
             candidate,

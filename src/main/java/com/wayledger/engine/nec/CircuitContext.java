@@ -3,9 +3,9 @@ package com.wayledger.engine.nec;
 import com.wayledger.engine.SupplySystem;
 
 /**
- * What the NEC checks of one circuit need from around it: the supply, whether its panelboard
- * serves a dwelling unit, the available fault current at the panelboard and the feeders' voltage
- * drop from the origin.
+ * What the NEC checks of one circuit need from around it: the supply, whether its panelboard serves
+ * a dwelling unit, the available fault current at the panelboard and the feeders' voltage drop from
+ * the origin.
  *
  * @param system the supply's line geometry
  * @param u0 voltage line to neutral, V

@@ -22,9 +22,9 @@ import java.util.Set;
  * single-phase branch circuits rated 150 V or less to ground; 210.12(A) covers 120 V single-phase
  * 15 and 20 A branch circuits supplying outlets or devices. A receptacle-type GFCI or an outlet
  * branch-circuit AFCI at the first outlet also meets the rules; the schedule records the breaker
- * only, so a missing breaker function is a warning to check on site, not proof of a fault.
- * 210.8(B) (other than dwelling units), 210.8(D)/(E) (specific appliances, equipment) and the
- * 2023 edition's extensions are not in this version.
+ * only, so a missing breaker function is a warning to check on site, not proof of a fault. 210.8(B)
+ * (other than dwelling units), 210.8(D)/(E) (specific appliances, equipment) and the 2023 edition's
+ * extensions are not in this version.
  */
 public final class DwellingProtection {
 
@@ -45,8 +45,7 @@ public final class DwellingProtection {
   static {
     TABLE.put(CircuitLocation.INDOORS, new Row(null, null));
     TABLE.put(CircuitLocation.BATHROOM, new Row("210.8(A)(1) bathrooms", null));
-    TABLE.put(
-        CircuitLocation.GARAGE, new Row("210.8(A)(2) garages and accessory buildings", null));
+    TABLE.put(CircuitLocation.GARAGE, new Row("210.8(A)(2) garages and accessory buildings", null));
     TABLE.put(CircuitLocation.OUTDOORS, new Row("210.8(A)(3) outdoors", null));
     TABLE.put(CircuitLocation.CRAWL_SPACE, new Row("210.8(A)(4) crawl spaces", null));
     TABLE.put(CircuitLocation.BASEMENT, new Row("210.8(A)(5) basements", null));
@@ -59,8 +58,7 @@ public final class DwellingProtection {
         CircuitLocation.NEAR_TUB_OR_SHOWER,
         new Row("210.8(A)(9) within 6 ft of a bathtub or shower stall", null));
     TABLE.put(
-        CircuitLocation.LAUNDRY,
-        new Row("210.8(A)(10) laundry areas", "210.12(A) laundry areas"));
+        CircuitLocation.LAUNDRY, new Row("210.8(A)(10) laundry areas", "210.12(A) laundry areas"));
     TABLE.put(
         CircuitLocation.LIVING_AREA,
         new Row(
@@ -117,7 +115,8 @@ public final class DwellingProtection {
 
   /** 210.8(A): ground-fault protection of a dwelling circuit. */
   public static Finding groundFault(CircuitSpec circuit, double u0, boolean dwelling) {
-    Finding early = early(CheckKind.GROUND_FAULT_PROTECTION, circuit, dwelling, REF_GFCI, "210.8(B)");
+    Finding early =
+        early(CheckKind.GROUND_FAULT_PROTECTION, circuit, dwelling, REF_GFCI, "210.8(B)");
     if (early != null) {
       return early;
     }

@@ -19,9 +19,9 @@ import java.util.Optional;
 
 /**
  * The motor branch-circuit checks of NEC Article 430: the full-load current from Table 430.248 or
- * 430.250 and not the nameplate (430.6(A)(1)); the conductor at 125 % of it, plus the other
- * motors' full-load currents and the other loads where several share the circuit (430.22, 430.24);
- * the largest inverse-time breaker or fuse of Table 430.52, the next standard rating up where the
+ * 430.250 and not the nameplate (430.6(A)(1)); the conductor at 125 % of it, plus the other motors'
+ * full-load currents and the other loads where several share the circuit (430.22, 430.24); the
+ * largest inverse-time breaker or fuse of Table 430.52, the next standard rating up where the
  * percentage falls between two (430.52(C)(1) Exception No. 1). A motor without its horsepower is
  * not assessed.
  */
@@ -260,12 +260,7 @@ public final class MotorCircuit {
     if (max != null && in <= max + 1e-9) {
       return Finding.pass(
           CheckKind.MOTOR_BREAKER,
-          "In = "
-              + NecCircuitChecks.fmt(in)
-              + " A within the "
-              + max
-              + " A maximum"
-              + basis,
+          "In = " + NecCircuitChecks.fmt(in) + " A within the " + max + " A maximum" + basis,
           values,
           REF_BREAKER);
     }
@@ -285,7 +280,12 @@ public final class MotorCircuit {
 
   private static Finding notAssessed(CheckKind check, String why, String reference) {
     Finding f = Finding.notAssessedBecause(check, why, reference);
-    return new Finding(f.check(), f.verdict(), f.summary(), f.values(), reference, "record the "
-        + (why.contains("horsepower") ? "motor's horsepower" : "missing input"));
+    return new Finding(
+        f.check(),
+        f.verdict(),
+        f.summary(),
+        f.values(),
+        reference,
+        "record the " + (why.contains("horsepower") ? "motor's horsepower" : "missing input"));
   }
 }

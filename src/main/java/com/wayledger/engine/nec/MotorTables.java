@@ -142,10 +142,7 @@ public final class MotorTables {
       if (row[0] >= horsepower - 1e-9 && !Double.isNaN(row[index])) {
         return Optional.of(
             new Reading(
-                row[index],
-                row[0],
-                column.get(),
-                threePhase ? "Table 430.250" : "Table 430.248"));
+                row[index], row[0], column.get(), threePhase ? "Table 430.250" : "Table 430.248"));
       }
     }
     return Optional.empty();

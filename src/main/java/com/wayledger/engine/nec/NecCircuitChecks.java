@@ -99,8 +99,7 @@ public final class NecCircuitChecks {
     if (MotorCircuit.hasMotor(circuit)) {
       MotorCircuit.Duty duty = MotorCircuit.duty(context.system(), context.u0(), circuit);
       Ampacity ampacity =
-          Ampacity.of(
-              Conductor.of(circuit.cable()), circuit.cable(), circuit.position(), device);
+          Ampacity.of(Conductor.of(circuit.cable()), circuit.cable(), circuit.position(), device);
       findings.add(MotorCircuit.conductor(duty, ampacity));
       findings.add(MotorCircuit.breaker(duty, device));
     }
@@ -113,8 +112,7 @@ public final class NecCircuitChecks {
             context.feederMissing(),
             context.feederNote()));
     findings.add(
-        InterruptingRating.assess(
-            device, context.availableFaultKiloAmps(), context.faultBasis()));
+        InterruptingRating.assess(device, context.availableFaultKiloAmps(), context.faultBasis()));
     findings.add(DwellingProtection.groundFault(circuit, context.u0(), context.dwelling()));
     findings.add(DwellingProtection.arcFault(circuit, context.u0(), context.dwelling()));
     return findings;

@@ -17,15 +17,15 @@ import java.util.Set;
 
 /**
  * The NEC set's proposal for a circuit: a breaker at a 240.6(A) standard rating and an AWG or kcmil
- * conductor of the recorded metal, insulation and conditions that together pass every NEC check
- * the engine runs on the circuit ({@link NecCircuitChecks#assess(CircuitContext, CircuitSpec,
+ * conductor of the recorded metal, insulation and conditions that together pass every NEC check the
+ * engine runs on the circuit ({@link NecCircuitChecks#assess(CircuitContext, CircuitSpec,
  * Double)}): 210.19(A)/210.20(A) or 215.2/215.3, 240.4 and 240.4(D), Table 310.16 with its
- * corrections, 110.14(C), and for a motor 430.22 and 430.52; the branch voltage-drop
- * recommendation where the length is recorded; the interrupting rating (the lowest common rating
- * covering the available fault current, never below the one fitted); and the GFCI or AFCI function
- * the dwelling location asks for. The lowest breaker is chosen and, for it, the smallest conductor;
- * for a motor circuit the largest breaker 430.52 allows, so that the motor can start. Candidates
- * are judged by running the checks themselves, so a proposal cannot fall below them.
+ * corrections, 110.14(C), and for a motor 430.22 and 430.52; the branch voltage-drop recommendation
+ * where the length is recorded; the interrupting rating (the lowest common rating covering the
+ * available fault current, never below the one fitted); and the GFCI or AFCI function the dwelling
+ * location asks for. The lowest breaker is chosen and, for it, the smallest conductor; for a motor
+ * circuit the largest breaker 430.52 allows, so that the motor can start. Candidates are judged by
+ * running the checks themselves, so a proposal cannot fall below them.
  */
 public final class NecDeviceProposer {
 

@@ -67,11 +67,7 @@ public final class VoltageDrop {
    * @param powerFactor the load's power factor; null when not known (|Z| taken)
    */
   public static Run of(
-      CableSpec cable,
-      double amps,
-      Double powerFactor,
-      boolean threePhase,
-      double circuitVolts) {
+      CableSpec cable, double amps, Double powerFactor, boolean threePhase, double circuitVolts) {
     NecCircuitChecks.Conductor conductor = NecCircuitChecks.Conductor.of(cable);
     if (conductor.missing() != null) {
       return Run.missing(conductor.missing());
@@ -99,8 +95,7 @@ public final class VoltageDrop {
       note = "power factor not known: |Z| taken; conduit not recorded: " + words(worst) + " taken";
     } else {
       Conduit worst = ConductorImpedance.worstConduit(size, cable.material(), powerFactor);
-      ze =
-          ConductorImpedance.effectiveOhmsPer1000Feet(size, cable.material(), worst, powerFactor);
+      ze = ConductorImpedance.effectiveOhmsPer1000Feet(size, cable.material(), worst, powerFactor);
       note =
           "PF "
               + NecCircuitChecks.fmt(powerFactor)
@@ -118,7 +113,11 @@ public final class VoltageDrop {
   /** The plain-number core: k · I · Ze · L / 1000 as % of the circuit voltage. */
   public static double percent(
       double amps, double ohmsPer1000Feet, double feet, boolean threePhase, double circuitVolts) {
-    return (threePhase ? Math.sqrt(3.0) : 2.0) * amps * ohmsPer1000Feet * feet / 1000.0
+    return (threePhase ? Math.sqrt(3.0) : 2.0)
+        * amps
+        * ohmsPer1000Feet
+        * feet
+        / 1000.0
         / circuitVolts
         * 100.0;
   }
@@ -152,8 +151,13 @@ public final class VoltageDrop {
     if (!run.isKnown()) {
       return Finding.notAssessed(CheckKind.BRANCH_VOLTAGE_DROP, run.missing(), REF_BRANCH);
     }
-    return graded(CheckKind.BRANCH_VOLTAGE_DROP, run.percent(), BRANCH_PERCENT, run.note(),
-        REF_BRANCH, "branch circuit");
+    return graded(
+        CheckKind.BRANCH_VOLTAGE_DROP,
+        run.percent(),
+        BRANCH_PERCENT,
+        run.note(),
+        REF_BRANCH,
+        "branch circuit");
   }
 
   /** The feeder-plus-branch finding; {@code feederMissing} names a feeder input not recorded. */
@@ -171,8 +175,13 @@ public final class VoltageDrop {
         CheckKind.TOTAL_VOLTAGE_DROP,
         feederPercent + branch.percent(),
         TOTAL_PERCENT,
-        "feeders " + NecCircuitChecks.fmt(feederPercent) + " % (" + feederNote + ") + branch "
-            + NecCircuitChecks.fmt(branch.percent()) + " %",
+        "feeders "
+            + NecCircuitChecks.fmt(feederPercent)
+            + " % ("
+            + feederNote
+            + ") + branch "
+            + NecCircuitChecks.fmt(branch.percent())
+            + " %",
         REF_TOTAL,
         "feeders and branch circuit");
   }
@@ -181,8 +190,7 @@ public final class VoltageDrop {
       CheckKind check, double percent, double limit, String note, String reference, String what) {
     List<Quantity> values =
         List.of(new Quantity("drop", percent, "%"), new Quantity("recommended", limit, "%"));
-    String text =
-        what + " drop " + NecCircuitChecks.fmt(percent) + " % (" + note + ")";
+    String text = what + " drop " + NecCircuitChecks.fmt(percent) + " % (" + note + ")";
     if (percent > limit + 1e-9) {
       return new Finding(
           check,

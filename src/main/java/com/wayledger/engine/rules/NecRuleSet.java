@@ -121,7 +121,8 @@ final class NecRuleSet implements RuleSet {
       }
       List<Finding> boardFindings = new ArrayList<>(relabelled(board.findings()));
       if (spec != null && spec.incomer() != null) {
-        boardFindings.add(com.wayledger.engine.nec.InterruptingRating.incomer(spec.incomer(), context));
+        boardFindings.add(
+            com.wayledger.engine.nec.InterruptingRating.incomer(spec.incomer(), context));
       }
       boards.add(
           new BoardFindings(
@@ -179,7 +180,8 @@ final class NecRuleSet implements RuleSet {
       basis = "recorded at the panelboard";
     } else if (site.supply().prospectiveFaultCurrentKiloAmps() != null) {
       fault = site.supply().prospectiveFaultCurrentKiloAmps();
-      basis = "the service's available fault current taken at the panelboard unreduced, the safe side";
+      basis =
+          "the service's available fault current taken at the panelboard unreduced, the safe side";
     }
     Double feeders = 0.0;
     String missing = null;

@@ -46,8 +46,8 @@ public interface RuleSet {
       ProtectionSettings settings);
 
   /**
-   * The same checks knowing which boards serve a dwelling unit (the NEC's dwelling rules read it;
-   * a rule set without such rules ignores it).
+   * The same checks knowing which boards serve a dwelling unit (the NEC's dwelling rules read it; a
+   * rule set without such rules ignores it).
    *
    * @param dwellingBoardIds ids of the boards recorded as serving a dwelling unit
    */

@@ -62,7 +62,9 @@ class DwellingProtectionTests {
             CircuitLocation.LAUNDRY, "210.8(A)(10)");
     expected.forEach(
         (where, clause) ->
-            assertThat(DwellingProtection.row(where).gfciClause()).as(where.name()).startsWith(clause));
+            assertThat(DwellingProtection.row(where).gfciClause())
+                .as(where.name())
+                .startsWith(clause));
   }
 
   @Test
@@ -76,7 +78,9 @@ class DwellingProtectionTests {
             CircuitLocation.BEDROOM,
             CircuitLocation.CLOSET_OR_HALLWAY,
             CircuitLocation.LAUNDRY)) {
-      assertThat(DwellingProtection.row(where).afciClause()).as(where.name()).startsWith("210.12(A)");
+      assertThat(DwellingProtection.row(where).afciClause())
+          .as(where.name())
+          .startsWith("210.12(A)");
     }
     for (CircuitLocation where :
         List.of(CircuitLocation.BATHROOM, CircuitLocation.GARAGE, CircuitLocation.OUTDOORS)) {

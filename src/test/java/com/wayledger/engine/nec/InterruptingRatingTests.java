@@ -14,8 +14,7 @@ class InterruptingRatingTests {
   void tenKiloampBreakerOnA22KiloampPanelIsDanger() {
     assertThat(InterruptingRating.assess(10.0, 22.0, "recorded").verdict())
         .isEqualTo(Verdict.DANGER);
-    assertThat(InterruptingRating.assess(22.0, 22.0, "recorded").verdict())
-        .isEqualTo(Verdict.PASS);
+    assertThat(InterruptingRating.assess(22.0, 22.0, "recorded").verdict()).isEqualTo(Verdict.PASS);
   }
 
   @Test

@@ -48,7 +48,13 @@ class NecDeviceProposerTests {
         WayStatus.IN_USE,
         false,
         // an IEC-looking device as recorded: the proposal must not keep its curve or its 30 mA
-        new DeviceSpec(DeviceKind.RCBO, com.wayledger.engine.TripCurve.B, 16.0, 1, 6.0, 30.0,
+        new DeviceSpec(
+            DeviceKind.RCBO,
+            com.wayledger.engine.TripCurve.B,
+            16.0,
+            1,
+            6.0,
+            30.0,
             com.wayledger.engine.RcdType.A),
         cable,
         List.of(loads),
@@ -81,8 +87,8 @@ class NecDeviceProposerTests {
             PhasePosition.L1,
             cable(ConductorMaterial.COPPER, Insulation.THERMOSETTING_90, 30, 1, null),
             null,
-            new LoadSpec("Lights", LoadCategory.LIGHTING, 1, 16, RatingUnit.A, 1.0, null, null,
-                true));
+            new LoadSpec(
+                "Lights", LoadCategory.LIGHTING, 1, 16, RatingUnit.A, 1.0, null, null, true));
     DeviceProposal p =
         NecDeviceProposer.propose(
             c, CircuitContext.of(SupplySystem.SPLIT_PHASE_120_240, 120.0), 16.0);
@@ -191,8 +197,7 @@ class NecDeviceProposerTests {
               "feeders",
               "");
       // Ib: the loads' connected current, computed here independently of the proposer
-      double perAmp =
-          com.wayledger.engine.LinePhasors.voltAmperesPerAmp(system, position, 120.0);
+      double perAmp = com.wayledger.engine.LinePhasors.voltAmperesPerAmp(system, position, 120.0);
       double ib = 0.0;
       for (LoadSpec load : loads) {
         ib += ConnectedLoad.ofPerAmp(load, perAmp).apparentVoltAmperes() / perAmp;
@@ -223,9 +228,7 @@ class NecDeviceProposerTests {
               false,
               c.location());
       for (Finding f : NecCircuitChecks.assess(context, fitted, ib)) {
-        assertThat(f.isProblem())
-            .as("case " + i + " " + f.check() + ": " + f.summary())
-            .isFalse();
+        assertThat(f.isProblem()).as("case " + i + " " + f.check() + ": " + f.summary()).isFalse();
         if (MUST_PASS.contains(f.check())) {
           assertThat(f.verdict()).as("case " + i + " " + f.check()).isEqualTo(Verdict.PASS);
         }

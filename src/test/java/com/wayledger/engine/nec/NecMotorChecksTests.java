@@ -26,7 +26,15 @@ class NecMotorChecksTests {
 
   static LoadSpec motor(Double horsepower, double ratingAmps) {
     return new LoadSpec(
-        "Pump motor", LoadCategory.MOTOR, 1, ratingAmps, RatingUnit.A, 0.8, null, null, true,
+        "Pump motor",
+        LoadCategory.MOTOR,
+        1,
+        ratingAmps,
+        RatingUnit.A,
+        0.8,
+        null,
+        null,
+        true,
         horsepower);
   }
 
@@ -161,8 +169,7 @@ class NecMotorChecksTests {
     assertThat(finding(findings, CheckKind.MOTOR_BREAKER).verdict())
         .isEqualTo(Verdict.NOT_ASSESSED);
     // without the table current the ordinary 240.4 check applies: 70 A on 8 AWG fails it
-    assertThat(finding(findings, CheckKind.CONDUCTOR_AMPACITY).verdict())
-        .isEqualTo(Verdict.DANGER);
+    assertThat(finding(findings, CheckKind.CONDUCTOR_AMPACITY).verdict()).isEqualTo(Verdict.DANGER);
   }
 
   @Test
