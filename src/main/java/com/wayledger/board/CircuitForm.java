@@ -3,6 +3,7 @@ package com.wayledger.board;
 import com.wayledger.engine.CircuitLocation;
 import com.wayledger.engine.ConductorMaterial;
 import com.wayledger.engine.DeviceKind;
+import com.wayledger.engine.FaultInterrupter;
 import com.wayledger.engine.InstallationMethod;
 import com.wayledger.engine.Insulation;
 import com.wayledger.engine.LoadCategory;
@@ -60,7 +61,82 @@ public record CircuitForm(
     @Positive @DecimalMax("63000") Double deviceOverloadSettingAmps,
     @Positive @DecimalMax("63000") Double deviceInstantaneousSettingAmps,
     @DecimalMin("1") @DecimalMax("50") Double loadStartUpMultiple,
-    CircuitLocation location) {
+    CircuitLocation location,
+    FaultInterrupter deviceFaultInterrupter) {
+
+  /** A row whose device has no GFCI/AFCI function: the argument list from before NEC devices. */
+  public CircuitForm(
+      Integer wayNumber,
+      PhasePosition position,
+      String description,
+      WayStatus status,
+      Boolean lockedForBalancing,
+      DeviceKind deviceKind,
+      TripCurve deviceCurve,
+      Double deviceRatingAmps,
+      Integer devicePoles,
+      Double deviceBreakingCapacityKiloAmps,
+      Double deviceResidualMilliAmps,
+      RcdType deviceRcdType,
+      Double cableLineCsa,
+      Double cableCpcCsa,
+      ConductorMaterial cableMaterial,
+      Insulation cableInsulation,
+      Double cableLengthMetres,
+      InstallationMethod cableInstallationMethod,
+      Double cableAmbientCelsius,
+      Integer cableGroupedCircuits,
+      Integer cableThermalInsulationMm,
+      Double measuredLoopImpedanceOhms,
+      String loadDescription,
+      LoadCategory loadCategory,
+      Integer loadQuantity,
+      Double loadRatingValue,
+      RatingUnit loadRatingUnit,
+      Double loadPowerFactor,
+      Long version,
+      Boolean ringFinal,
+      Double deviceOverloadSettingAmps,
+      Double deviceInstantaneousSettingAmps,
+      Double loadStartUpMultiple,
+      CircuitLocation location) {
+    this(
+        wayNumber,
+        position,
+        description,
+        status,
+        lockedForBalancing,
+        deviceKind,
+        deviceCurve,
+        deviceRatingAmps,
+        devicePoles,
+        deviceBreakingCapacityKiloAmps,
+        deviceResidualMilliAmps,
+        deviceRcdType,
+        cableLineCsa,
+        cableCpcCsa,
+        cableMaterial,
+        cableInsulation,
+        cableLengthMetres,
+        cableInstallationMethod,
+        cableAmbientCelsius,
+        cableGroupedCircuits,
+        cableThermalInsulationMm,
+        measuredLoopImpedanceOhms,
+        loadDescription,
+        loadCategory,
+        loadQuantity,
+        loadRatingValue,
+        loadRatingUnit,
+        loadPowerFactor,
+        version,
+        ringFinal,
+        deviceOverloadSettingAmps,
+        deviceInstantaneousSettingAmps,
+        loadStartUpMultiple,
+        location,
+        null);
+  }
 
   /** A row whose location is not recorded: the argument list from before locations. */
   public CircuitForm(
@@ -170,7 +246,8 @@ public record CircuitForm(
         deviceOverloadSettingAmps,
         deviceInstantaneousSettingAmps,
         loadStartUpMultiple,
-        where);
+        where,
+        deviceFaultInterrupter);
   }
 
   /** A row without a start-up multiple for its first load: the argument list from before. */
@@ -386,7 +463,8 @@ public record CircuitForm(
           null,
           null,
           null,
-          null);
+          null,
+          deviceFaultInterrupter);
     }
     return copy(
         newDescription,
@@ -399,7 +477,8 @@ public record CircuitForm(
         null,
         null,
         null,
-        null);
+        null,
+        replacement.faultInterrupter());
   }
 
   private CircuitForm copy(
@@ -413,7 +492,8 @@ public record CircuitForm(
       Integer firstLoadQuantity,
       Double firstLoadRatingValue,
       RatingUnit firstLoadRatingUnit,
-      Double firstLoadPowerFactor) {
+      Double firstLoadPowerFactor,
+      FaultInterrupter function) {
     boolean hasDevice = device != null;
     return new CircuitForm(
         wayNumber,
@@ -449,7 +529,8 @@ public record CircuitForm(
         overloadSettingAmps,
         instantaneousSettingAmps,
         null,
-        location);
+        location,
+        function);
   }
 
   /** The one place the withers copy the whole row, with the fields they may change. */
@@ -492,7 +573,8 @@ public record CircuitForm(
         overloadSettingAmps,
         instantaneousSettingAmps,
         loadStartUpMultiple,
-        location);
+        location,
+        deviceFaultInterrupter);
   }
 
   /**
@@ -571,7 +653,8 @@ public record CircuitForm(
         hasDevice ? device.getOverloadSettingAmps() : null,
         hasDevice ? device.getInstantaneousSettingAmps() : null,
         null,
-        circuit.getLocation());
+        circuit.getLocation(),
+        circuit.getFaultInterrupter());
   }
 
   DeviceDetails deviceDetails() {
