@@ -73,7 +73,11 @@ class SchedulePage {
         circuit -> inherited.put(circuit.getId(), new Inheritance.Values(Inheritance.of(circuit))));
     model.addAttribute("inheritedByCircuit", inherited);
     java.util.Map<Long, java.util.List<String>> missing = new java.util.HashMap<>();
-    onBoard.forEach(circuit -> missing.put(circuit.getId(), MissingInputs.of(circuit)));
+    boolean locationChecked =
+        MissingInputs.locationChecked(
+            board, analysis.dwellingBoardIds(board.getSite().getId()).contains(boardId));
+    onBoard.forEach(
+        circuit -> missing.put(circuit.getId(), MissingInputs.of(circuit, locationChecked)));
     model.addAttribute("missingByCircuit", missing);
     SiteAnalysis results = analysis.ofSite(board.getSite().getId());
     var demand = results.boardDemand(boardId);

@@ -38,6 +38,7 @@ public class ScheduleService {
   private final RowLocks locks;
   private final Validator validator;
   private final ApplicationEventPublisher events;
+  private final DwellingRepository dwellings;
 
   public ScheduleService(
       BoardRepository boards,
@@ -46,8 +47,10 @@ public class ScheduleService {
       JdbcClient jdbc,
       RowLocks locks,
       Validator validator,
-      ApplicationEventPublisher events) {
+      ApplicationEventPublisher events,
+      DwellingRepository dwellings) {
     this.events = events;
+    this.dwellings = dwellings;
     this.boards = boards;
     this.circuits = circuits;
     this.loads = loads;
@@ -70,7 +73,11 @@ public class ScheduleService {
   /** Every form input the circuit's checks still lack (defaults counted), all at once. */
   @Transactional(readOnly = true)
   public java.util.List<String> missingInputs(long circuitId) {
-    return MissingInputs.of(circuit(circuitId));
+    Circuit circuit = circuit(circuitId);
+    return MissingInputs.of(
+        circuit,
+        MissingInputs.locationChecked(
+            circuit.getBoard(), dwellings.existsById(circuit.getBoard().getId())));
   }
 
   /** A view of the circuit made inside a transaction, so that its loads can be read. */
