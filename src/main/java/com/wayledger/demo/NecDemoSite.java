@@ -38,7 +38,7 @@ import org.springframework.stereotype.Component;
 import org.springframework.transaction.support.TransactionTemplate;
 
 /**
- * The second demo site, under the NEC rule set: "Quillon Court", an invented three-unit apartment
+ * The second demo site, under the NEC rule set: "Wrenfield Court", an invented three-unit apartment
  * building on a 120/240 V single-phase three-wire service. A house panel feeds three 200 A dwelling
  * panels and a common-area panel. Wrong on purpose: the common-area panel's line A is overloaded
  * (washers added later, all on A), apartment 2 has a 20 A breaker on 14 AWG, the house panel's
@@ -53,7 +53,7 @@ import org.springframework.transaction.support.TransactionTemplate;
 @Profile("demo")
 class NecDemoSite {
 
-  static final String SITE_NAME = "Quillon Court Apartments";
+  static final String SITE_NAME = "Wrenfield Court Apartments";
 
   /** Invented days: the building's completion and the later changes, back-dated in the log. */
   static final LocalDate COMPLETED = LocalDate.of(2018, 9, 4);
