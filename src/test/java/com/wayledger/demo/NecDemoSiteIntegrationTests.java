@@ -129,6 +129,19 @@ class NecDemoSiteIntegrationTests {
   }
 
   @Test
+  void apartmentWaterHeaterLineToLinePutsNothingOnTheNeutral() {
+    // NEC 220.61(A) (as published): only the unbalanced load between neutral and a line counts
+    Worksheet neutral = sheet(board("APT-1").boardId(), WorksheetMethod.NEUTRAL);
+    assertThat(neutral.lines())
+        .anyMatch(
+            line ->
+                line.description().startsWith("Water heater")
+                    && line.description().contains("line to line, no neutral current")
+                    && line.resultVoltAmperes() != null
+                    && line.resultVoltAmperes() == 0.0);
+  }
+
+  @Test
   void housePanelHasAYearOfRecordedMaximumDemand() {
     // NEC 220.87(1) (as published): a year of maximum demand × 125 %; the largest invented
     // monthly figure is 52.6 kVA → 65,750 VA

@@ -523,8 +523,8 @@ public final class NecDwellingCalculator {
       } else {
         total += w.add(load.description(), "220.61(A)", load.voltAmperes(), factor);
         w.assume(
-            "Loads whose connection is not recorded as line to line are counted on the neutral"
-                + " (the safe side).");
+            "Loads not recorded as line to line (two-pole) are counted on the neutral (the safe"
+                + " side where the connection is not recorded).");
       }
     }
     if (standard.motorAllowanceVoltAmperes > 0) {
@@ -533,6 +533,11 @@ public final class NecDwellingCalculator {
     }
     for (ApplianceLoad house : houseLoads) {
       if (house.lineToLine()) {
+        w.add(
+            "House load: " + house.description() + ": line to line, no neutral current",
+            "220.61(A)",
+            house.voltAmperes(),
+            0.0);
         continue;
       }
       total += w.add("House load: " + house.description(), "220.61(A)", house.voltAmperes(), 1.0);
