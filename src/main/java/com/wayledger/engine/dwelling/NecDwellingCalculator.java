@@ -116,6 +116,9 @@ public final class NecDwellingCalculator {
       Standard standard = standard(units, houseLoads);
       sheets.add(standard.sheet);
       sheets.add(neutral(standard, units, houseLoads, dividingVolts));
+      if (units.size() >= NecMultifamilyOptional.MINIMUM_UNITS) {
+        sheets.add(NecMultifamilyOptional.worksheet(units, houseLoads));
+      }
       if (units.size() == 1 && houseLoads.isEmpty()) {
         DwellingUnit unit = units.get(0);
         if (unit.inputs().optionalMethod()) {
