@@ -474,6 +474,17 @@ class NecDemoSite {
             ConductorSize.AWG_10,
             50),
         load("Condensing unit", LoadCategory.AIR_CONDITIONING, 1, 4_200, RatingUnit.VA));
+    add(
+        units[1],
+        circuit(
+            10,
+            PhasePosition.L1_L2,
+            "Through-wall air conditioner",
+            DeviceKind.MCB,
+            20,
+            ConductorSize.AWG_12,
+            20),
+        load("Air conditioner", LoadCategory.AIR_CONDITIONING, 1, 3_500, RatingUnit.VA));
     EffectiveDate.set(WASHERS_ADDED);
     add(
         common,

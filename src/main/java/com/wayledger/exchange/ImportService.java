@@ -50,7 +50,8 @@ public class ImportService {
         rows.read(
             table,
             mapping,
-            new RowReader.BoardContext(board.getPhases(), board.getWayCount(), Set.of()));
+            new RowReader.BoardContext(
+                board.getPhases(), board.getWayCount(), Set.of(), board.getPositions()));
     List<CircuitEntry> stored = ExportReader.entry(board, 0).circuits();
     ScheduleMatcher.Result matched = ScheduleMatcher.match(read.circuits(), stored, removeMissing);
     Map<Integer, ImportPlan.Problem> taken = new HashMap<>();

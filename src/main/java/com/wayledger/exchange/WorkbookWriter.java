@@ -286,6 +286,8 @@ public final class WorkbookWriter {
     text(facts, 9, demand == null ? "not assessed" : demand.methodName(), styles.text, null);
     text(facts, 13, "Rule set", styles.label, null);
     text(facts, 14, data.ruleSetTitle(), styles.text, null);
+    text(facts, 15, "Supply system", styles.label, null);
+    text(facts, 16, data.supplySystemWords(), styles.text, null);
     text(facts, 11, "Fed from", styles.label, null);
     text(
         facts,
@@ -433,6 +435,7 @@ public final class WorkbookWriter {
     number(row, THERMAL_INSULATION_MM.ordinal(), c.cableThermalInsulationMm(), s.integer, w);
     number(row, MEASURED_ZS.ordinal(), c.measuredLoopImpedanceOhms(), s.ohms, w);
     text(row, LOCATION.ordinal(), name(c.location()), s.text, w);
+    text(row, CONNECTION.ordinal(), Codes.connection(c.position()), s.text, w);
   }
 
   /**
@@ -857,6 +860,8 @@ public final class WorkbookWriter {
     text(facts, 3, data.exportedOn().toString(), s.text, null);
     text(facts, 4, "Rule set", s.label, null);
     text(facts, 5, data.ruleSetTitle(), s.text, null);
+    text(facts, 6, "Supply system", s.label, null);
+    text(facts, 7, data.supplySystemWords(), s.text, null);
     text(sheet.createRow(2), 0, "Caution: " + caution, s.caution, null);
     String[] heads = {
       "Board",
