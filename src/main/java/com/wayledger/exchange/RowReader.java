@@ -47,9 +47,9 @@ public final class RowReader {
       int phases, int wayCount, Set<String> occupied, List<PhasePosition> positions) {
 
     /**
-     * A board known by its phases only: L1 on a single-phase board; every single-pole, two-pole
-     * and three-pole position on a three-phase one (the schedule refuses what the site's rule set
-     * does not allow).
+     * A board known by its phases only: L1 on a single-phase board; every single-pole, two-pole and
+     * three-pole position on a three-phase one (the schedule refuses what the site's rule set does
+     * not allow).
      */
     public BoardContext(int phases, int wayCount, Set<String> occupied) {
       this(phases, wayCount, occupied, PhasePosition.onBoardWith(phases == 3 ? 3 : 1, true));
