@@ -163,6 +163,50 @@ class NecExchangeIntegrationTests {
         .isZero();
   }
 
+  @Test
+  void apiTakesALineToLineCircuitAndRefusesAPositionThePanelHasNot() throws Exception {
+    long panel = emptyPanel("API circuits " + UUID.randomUUID().toString().substring(0, 6), null);
+    String twoPole =
+        """
+        {"wayNumber": 1, "position": "%s", "description": "Water heater", "status": "IN_USE",
+         "deviceKind": "MCB", "deviceCurve": "C", "deviceRatingAmps": 30, "devicePoles": 2,
+         "deviceBreakingCapacityKiloAmps": 10, "loadDescription": "Water heater",
+         "loadCategory": "WATER_HEATING_STORAGE", "loadQuantity": 1, "loadRatingValue": 4500,
+         "loadRatingUnit": "W", "loadPowerFactor": 1, "location": "INDOORS"}
+        """;
+
+    String id =
+        mvc.perform(
+                post("/api/boards/{id}/circuits", panel)
+                    .with(EDITOR)
+                    .with(csrf())
+                    .contentType(MediaType.APPLICATION_JSON)
+                    .content(twoPole.formatted("L1_L2")))
+            .andExpect(status().isCreated())
+            .andReturn()
+            .getResponse()
+            .getContentAsString();
+    mvc.perform(get("/api/circuits/{id}", id.strip()).with(EDITOR))
+        .andExpect(status().isOk())
+        .andExpect(jsonPath("$..position", Matchers.hasItem("L1_L2")));
+    // a 120/240 V panel has lines A and B only: B–C is not one of its positions
+    mvc.perform(
+            post("/api/boards/{id}/circuits", panel)
+                .with(EDITOR)
+                .with(csrf())
+                .contentType(MediaType.APPLICATION_JSON)
+                .content(
+                    twoPole.formatted("L2_L3").replace("\"wayNumber\": 1", "\"wayNumber\": 2")))
+        .andExpect(status().is4xxClientError());
+    assertThat(
+            jdbc.sql("SELECT COUNT(*) FROM circuit WHERE board_id = ?")
+                .param(panel)
+                .query(Long.class)
+                .single())
+        .as("only the two-pole A–B circuit stored")
+        .isEqualTo(1L);
+  }
+
   private void assertSameDemand(long original, long copy) {
     SiteAnalysis results = analysis.ofSite(site.getId());
     BoardDemand before = results.demand().board(original);
