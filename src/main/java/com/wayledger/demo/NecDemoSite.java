@@ -20,7 +20,6 @@ import com.wayledger.engine.Insulation;
 import com.wayledger.engine.LoadCategory;
 import com.wayledger.engine.PhasePosition;
 import com.wayledger.engine.RatingUnit;
-import com.wayledger.engine.RcdType;
 import com.wayledger.engine.SupplySystem;
 import com.wayledger.engine.TripCurve;
 import com.wayledger.engine.WayStatus;
@@ -387,7 +386,7 @@ class NecDemoSite {
                 20,
                 ConductorSize.AWG_12,
                 25)
-            .at(CircuitLocation.BATH_OR_SHOWER),
+            .at(CircuitLocation.BATHROOM),
         load("Bathroom receptacle", LoadCategory.SOCKET_OUTLETS, 1, 1_500, RatingUnit.VA));
   }
 
@@ -615,7 +614,10 @@ class NecDemoSite {
       double amps,
       ConductorSize size,
       double feet) {
+    // a breaker with a GFCI function is written RCBO in this demo's lists; it is stored as what it
+    // is under the NEC set: a breaker (MCB) recording the ground-fault function, no 30 mA rating
     boolean gfci = kind == DeviceKind.RCBO;
+    DeviceKind breaker = gfci ? DeviceKind.MCB : kind;
     ConductorSize ground =
         size.ordinal() <= ConductorSize.AWG_10.ordinal() ? size : ConductorSize.AWG_10;
     return new CircuitForm(
@@ -624,13 +626,13 @@ class NecDemoSite {
         description,
         WayStatus.IN_USE,
         false,
-        kind,
-        kind == DeviceKind.MCCB ? null : TripCurve.C,
+        breaker,
+        breaker == DeviceKind.MCCB ? null : TripCurve.C,
         amps,
         position.poles(),
         10.0,
-        gfci ? 5.0 : null,
-        gfci ? RcdType.A : null,
+        null,
+        null,
         size.squareMillimetres(),
         ground.squareMillimetres(),
         ConductorMaterial.COPPER,
@@ -652,7 +654,8 @@ class NecDemoSite {
         null,
         null,
         null,
-        CircuitLocation.INDOORS);
+        CircuitLocation.INDOORS,
+        gfci ? com.wayledger.engine.FaultInterrupter.GFCI : null);
   }
 
   private static LoadForm load(
