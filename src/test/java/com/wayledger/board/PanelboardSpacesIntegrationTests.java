@@ -239,4 +239,30 @@ class PanelboardSpacesIntegrationTests {
         .doesNotContain("id=\"space-4\"") // under the water heater's cell, which spans it
         .doesNotContain(">L1<");
   }
+
+  @Test
+  void balancingASplitPhasePanelMovesA120VoltBreakerFromAnASpaceToABSpace() throws Exception {
+    long boardId = panel(necSite("SPLIT_PHASE_120_240"), 1, 42);
+    // three 1,200 W loads on line A (spaces 1, 2 and 5 are rows 1, 1 and 3: all A)
+    for (int space : new int[] {1, 2, 5}) {
+      mvc.perform(
+              breaker(boardId, space, "L1", "Receptacles " + space)
+                  .param("loadDescription", "Receptacles " + space)
+                  .param("loadCategory", "OTHER")
+                  .param("loadQuantity", "1")
+                  .param("loadRatingValue", "1200")
+                  .param("loadRatingUnit", "W")
+                  .param("loadPowerFactor", "1"))
+          .andExpect(status().is3xxRedirection());
+    }
+    String page =
+        mvc.perform(get("/boards/{id}/balance", boardId).with(user("ed").roles("EDITOR")))
+            .andExpect(status().isOk())
+            .andReturn()
+            .getResponse()
+            .getContentAsString();
+    // 3 × 10 A on A, none on B: the best plan puts one on B (20 A / 10 A), one move
+    assertThat(page).containsPattern("space [125] \\(A\\) → space \\d+ \\(B\\), 10\\.0 A");
+    assertThat(page).doesNotContain("single-phase board");
+  }
 }
