@@ -58,8 +58,7 @@ public class BalanceService {
             .findFirst()
             .orElseThrow(() -> new NotFoundException("Board", boardId));
     BoardDemand before = results.boardDemand(boardId);
-    BalanceProblem problem =
-        problemOf(board, before, basis, results.spec().panelSpacesOf(board));
+    BalanceProblem problem = problemOf(board, before, basis, results.spec().panelSpacesOf(board));
     PhaseBalancer balancer = new PhaseBalancer();
     BalanceResult optimal = balancer.optimise(problem);
     FewestMovesResult fewest = balancer.fewestMoves(problem);
@@ -131,9 +130,9 @@ public class BalanceService {
 
   /**
    * The balancing problem of a board; on a panelboard ({@code panel} not null) the free positions
-   * are its free spaces, each on the line of its row, so a move is from one space to another and
-   * a multi-pole breaker keeps its adjacent spaces. A split-phase panelboard is solved as three
-   * lines with none free on the third.
+   * are its free spaces, each on the line of its row, so a move is from one space to another and a
+   * multi-pole breaker keeps its adjacent spaces. A split-phase panelboard is solved as three lines
+   * with none free on the third.
    */
   public static BalanceProblem problemOf(
       BoardSpec board, BoardDemand demand, Basis basis, PanelSpaces panel) {

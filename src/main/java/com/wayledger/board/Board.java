@@ -199,8 +199,8 @@ public class Board {
 
   /**
    * Whether the board is laid out as a panelboard (spaces odd left, even right, lines by row): a
-   * board of two or three lines on a site under the NEC rule set. Its way count is its space
-   * count and a circuit's way number is its first space (docs/data-model.md).
+   * board of two or three lines on a site under the NEC rule set. Its way count is its space count
+   * and a circuit's way number is its first space (docs/data-model.md).
    */
   public boolean isPanelboard() {
     return panelSpaces() != null;

@@ -276,8 +276,7 @@ public class BoardService {
   private int lowestSpaceTaken(Board board) {
     int lowest = 0;
     for (Circuit circuit : circuits.findByBoard(board.getId())) {
-      lowest =
-          Math.max(lowest, circuit.getWayNumber() + 2 * (circuit.getPosition().poles() - 1));
+      lowest = Math.max(lowest, circuit.getWayNumber() + 2 * (circuit.getPosition().poles() - 1));
     }
     return lowest;
   }

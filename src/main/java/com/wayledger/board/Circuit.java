@@ -175,7 +175,8 @@ public class Circuit {
   public String spacesLabel() {
     com.wayledger.engine.PanelSpaces panel = board.panelSpaces();
     int poles = getPosition().poles();
-    if (panel == null || panel.fitOf(wayNumber, poles) != com.wayledger.engine.PanelSpaces.Fit.FITS) {
+    if (panel == null
+        || panel.fitOf(wayNumber, poles) != com.wayledger.engine.PanelSpaces.Fit.FITS) {
       return Integer.toString(wayNumber);
     }
     return panel.spacesOf(wayNumber, poles).stream()
@@ -190,7 +191,8 @@ public class Circuit {
   public String linesLabel() {
     com.wayledger.engine.PanelSpaces panel = board.panelSpaces();
     int poles = getPosition().poles();
-    if (panel == null || panel.fitOf(wayNumber, poles) != com.wayledger.engine.PanelSpaces.Fit.FITS) {
+    if (panel == null
+        || panel.fitOf(wayNumber, poles) != com.wayledger.engine.PanelSpaces.Fit.FITS) {
       return getPosition().label();
     }
     return panel.spacesOf(wayNumber, poles).stream()

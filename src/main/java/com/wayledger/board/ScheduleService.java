@@ -211,8 +211,7 @@ public class ScheduleService {
       if (board.isPanelboard()) {
         // a move on a panelboard is to a space; the space decides the line
         if (board.panelSpaces().lineOf(placement.wayNumber()) != placement.phase()) {
-          throw new RuleViolation(
-              "placements", "panel.move.wrongLine", placement.wayNumber());
+          throw new RuleViolation("placements", "panel.move.wrongLine", placement.wayNumber());
         }
       } else if (!board.isThreePhase() && placement.phase() != com.wayledger.engine.Phase.L1) {
         throw new RuleViolation("placements", "circuit.position.singlePhaseBoard");
@@ -614,7 +613,8 @@ public class ScheduleService {
         form.deviceInstantaneousSettingAmps(),
         "deviceOverloadSettingAmps",
         "deviceInstantaneousSettingAmps");
-    for (Phase phase : board.isPanelboard() ? java.util.Set.<Phase>of() : form.position().phases()) {
+    for (Phase phase :
+        board.isPanelboard() ? java.util.Set.<Phase>of() : form.position().phases()) {
       Long holder =
           jdbc.sql(
                   "SELECT circuit_id FROM way_slot WHERE board_id = ? AND way_number = ? AND phase = ?")
@@ -630,8 +630,8 @@ public class ScheduleService {
   }
 
   /**
-   * A panelboard breaker (its first space is the way number, its poles those of the position)
-   * must fit the panel and share no space with another breaker; its lines follow from the spaces.
+   * A panelboard breaker (its first space is the way number, its poles those of the position) must
+   * fit the panel and share no space with another breaker; its lines follow from the spaces.
    */
   private void checkPanelSpaces(Board board, CircuitForm form, Long circuitId) {
     com.wayledger.engine.PanelSpaces panel = board.panelSpaces();
@@ -652,13 +652,13 @@ public class ScheduleService {
         continue;
       }
       int otherPoles = other.getPosition().poles();
-      if (panel.fitOf(other.getWayNumber(), otherPoles) != com.wayledger.engine.PanelSpaces.Fit.FITS) {
+      if (panel.fitOf(other.getWayNumber(), otherPoles)
+          != com.wayledger.engine.PanelSpaces.Fit.FITS) {
         continue; // stored before spaces were checked; the database slots still guard it
       }
       int shared = panel.sharedSpace(first, poles, other.getWayNumber(), otherPoles);
       if (shared > 0) {
-        throw new RuleViolation(
-            "wayNumber", "panel.space.taken", shared, other.getDescription());
+        throw new RuleViolation("wayNumber", "panel.space.taken", shared, other.getDescription());
       }
     }
   }
@@ -697,8 +697,7 @@ public class ScheduleService {
         // one row per space the breaker takes, keyed by that space and its line: a space holds
         // one pole, so the primary key refuses two breakers sharing a space
         com.wayledger.engine.PanelSpaces panel = board.panelSpaces();
-        for (int space :
-            panel.spacesOf(circuit.getWayNumber(), circuit.getPosition().poles())) {
+        for (int space : panel.spacesOf(circuit.getWayNumber(), circuit.getPosition().poles())) {
           jdbc.sql(
                   "INSERT INTO way_slot (board_id, way_number, phase, circuit_id) VALUES (?, ?, ?, ?)")
               .params(board.getId(), space, panel.lineOf(space).name(), circuit.getId())

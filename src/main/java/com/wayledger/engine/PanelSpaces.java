@@ -27,9 +27,9 @@ public record PanelSpaces(int spaceCount, int lines) {
   }
 
   /**
-   * The spaces of a board laid out as a panelboard, or null when it is not one: a board with two
-   * or three lines on a site under a rule set other than the IEC one (the NEC set). Its way count
-   * is its space count; a count stored odd is taken as the next even number.
+   * The spaces of a board laid out as a panelboard, or null when it is not one: a board with two or
+   * three lines on a site under a rule set other than the IEC one (the NEC set). Its way count is
+   * its space count; a count stored odd is taken as the next even number.
    *
    * @param ruleSetKey the site's rule set key (null: the IEC set)
    * @param lineCount the board's lines on its supply (1, 2 or 3)

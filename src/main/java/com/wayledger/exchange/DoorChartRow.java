@@ -59,13 +59,15 @@ public record DoorChartRow(
   /**
    * A panelboard's door chart as the panel is laid out: the odd spaces (left column) and the even
    * spaces (right column), one row per space with its line (A, B, C); a multi-pole breaker is
-   * written on its top space with all its spaces and lines, the spaces under it say so, and a
-   * space nothing takes is written as free.
+   * written on its top space with all its spaces and lines, the spaces under it say so, and a space
+   * nothing takes is written as free.
    *
    * @return two lists of equal length: left column, right column
    */
   static List<List<DoorChartRow>> ofPanel(
-      BoardEntry board, com.wayledger.engine.PanelSpaces panel, java.util.function.Function<com.wayledger.engine.Phase, String> lineName) {
+      BoardEntry board,
+      com.wayledger.engine.PanelSpaces panel,
+      java.util.function.Function<com.wayledger.engine.Phase, String> lineName) {
     java.util.Map<Integer, DoorChartRow> byTop = new java.util.HashMap<>();
     java.util.Map<Integer, Integer> under = new java.util.HashMap<>();
     for (DoorChartRow row : of(board)) {
@@ -84,7 +86,9 @@ public record DoorChartRow(
       }
       List<Integer> spaces = panel.spacesOf(first, poles);
       String lines =
-          spaces.stream().map(s -> lineName.apply(panel.lineOf(s))).collect(Collectors.joining("–"));
+          spaces.stream()
+              .map(s -> lineName.apply(panel.lineOf(s)))
+              .collect(Collectors.joining("–"));
       byTop.put(
           first,
           new DoorChartRow(
@@ -99,7 +103,8 @@ public record DoorChartRow(
         String line = lineName.apply(panel.lineOf(space));
         row =
             under.containsKey(space)
-                ? new DoorChartRow(space, line, "↑ breaker at space " + under.get(space), "", "", "")
+                ? new DoorChartRow(
+                    space, line, "↑ breaker at space " + under.get(space), "", "", "")
                 : new DoorChartRow(space, line, "free space", "", "", "");
       }
       (space % 2 == 1 ? left : right).add(row);

@@ -33,7 +33,9 @@ public class PanelSheet implements WorkbookSheet {
 
   static final String NAME = "Panel layout";
 
-  /** Columns: left space, its breaker, poles, Ib; the row's line; right breaker, poles, Ib, space. */
+  /**
+   * Columns: left space, its breaker, poles, Ib; the row's line; right breaker, poles, Ib, space.
+   */
   static final String[] HEADER = {
     "Space", "Breaker", "Poles", "Ib A", "Line", "Breaker", "Poles", "Ib A", "Space"
   };
@@ -88,10 +90,7 @@ public class PanelSheet implements WorkbookSheet {
       BoardSpec spec = specOf(results, board.id());
       r++;
       text(
-          sheet.createRow(r++),
-          0,
-          spec.reference() + " — " + panel.spaceCount() + " spaces",
-          bold);
+          sheet.createRow(r++), 0, spec.reference() + " — " + panel.spaceCount() + " spaces", bold);
       Row header = sheet.createRow(r++);
       for (int c = 0; c < HEADER.length; c++) {
         text(header, c, HEADER[c], bold);

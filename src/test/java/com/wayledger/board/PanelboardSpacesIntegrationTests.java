@@ -67,7 +67,10 @@ class PanelboardSpacesIntegrationTests {
     mvc.perform(
             boardForm(post("/sites/{id}/boards", siteId), "LP-1", phases, Integer.toString(spaces)))
         .andExpect(status().is3xxRedirection());
-    return jdbc.sql("SELECT id FROM board WHERE site_id = ?").param(siteId).query(Long.class).single();
+    return jdbc.sql("SELECT id FROM board WHERE site_id = ?")
+        .param(siteId)
+        .query(Long.class)
+        .single();
   }
 
   private MockHttpServletRequestBuilder breaker(
@@ -144,7 +147,8 @@ class PanelboardSpacesIntegrationTests {
     assertThat(storedPosition(boardId, 3)).isEqualTo("L2");
     assertThat(storedPosition(boardId, 6)).isEqualTo("L1+LL");
     assertThat(
-            jdbc.sql("SELECT way_number || ':' || phase FROM way_slot WHERE board_id = ? ORDER BY way_number")
+            jdbc.sql(
+                    "SELECT way_number || ':' || phase FROM way_slot WHERE board_id = ? ORDER BY way_number")
                 .param(boardId)
                 .query(String.class)
                 .list())

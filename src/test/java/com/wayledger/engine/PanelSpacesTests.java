@@ -74,7 +74,9 @@ class PanelSpacesTests {
     assertThat(panel.fitOf(25, 1)).isEqualTo(PanelSpaces.Fit.NO_SUCH_SPACE);
     assertThat(panel.fitOf(0, 1)).isEqualTo(PanelSpaces.Fit.NO_SUCH_SPACE);
     assertThat(panel.fitOf(1, 3)).isEqualTo(PanelSpaces.Fit.TOO_MANY_POLES);
-    assertThat(new PanelSpaces(24, 3).fitOf(19, 3)).as("19, 21, 23").isEqualTo(PanelSpaces.Fit.FITS);
+    assertThat(new PanelSpaces(24, 3).fitOf(19, 3))
+        .as("19, 21, 23")
+        .isEqualTo(PanelSpaces.Fit.FITS);
     assertThat(new PanelSpaces(24, 3).fitOf(21, 3)).isEqualTo(PanelSpaces.Fit.RUNS_PAST_BOTTOM);
   }
 
