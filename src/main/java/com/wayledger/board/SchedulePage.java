@@ -56,6 +56,7 @@ class SchedulePage {
                                 ? ""
                                 : " “" + way.getDescription() + "”"))
                 .orElse(null));
+    model.addAttribute("panel", PanelLayout.of(board, onBoard));
     var rows = ScheduleRows.of(board, onBoard);
     model.addAttribute("rows", rows);
     model.addAttribute(
