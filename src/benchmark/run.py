@@ -244,7 +244,10 @@ def main():
         start = {}
         for app in (bare, wl):
             load_before = load()
-            jvm = ([f"-XX:StartFlightRecording=filename={jfr_file},settings=profile,dumponexit=true"]
+            # stacks of 256 frames: a template's render stack is deeper than JFR's default 64, and a cut stack
+            # loses the frames that say which request (and bucket) it belongs to
+            jvm = (["-XX:FlightRecorderOptions=stackdepth=256",
+                    f"-XX:StartFlightRecording=filename={jfr_file},settings=profile,dumponexit=true"]
                    if args.jfr and app is wl else [])
             secs = app.start(work, args.heap, jvm)
             time.sleep(10)
@@ -333,7 +336,7 @@ JFR_BUCKETS = [
 
 def summarise_jfr(path):
     """Counts request-thread CPU samples per bucket (first bucket found anywhere on the stack)."""
-    out = subprocess.run(["jfr", "print", "--events", "jdk.ExecutionSample", "--stack-depth", "128", path],
+    out = subprocess.run(["jfr", "print", "--events", "jdk.ExecutionSample", "--stack-depth", "256", path],
                          capture_output=True, text=True).stdout
     counts, total = {}, 0
     for event in out.split("jdk.ExecutionSample")[1:]:
