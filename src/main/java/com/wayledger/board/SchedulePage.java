@@ -83,7 +83,17 @@ class SchedulePage {
     SiteAnalysis results = analysis.ofSite(board.getSite().getId());
     var demand = results.boardDemand(boardId);
     model.addAttribute("demand", demand);
-    model.addAttribute("circuitDemand", results.circuitDemands(boardId));
+    var circuitDemands = results.circuitDemands(boardId);
+    model.addAttribute("circuitDemand", circuitDemands);
+    model.addAttribute(
+        "figures",
+        demand == null
+            ? java.util.Map.of()
+            : ScheduleFigures.of(
+                rows,
+                circuitDemands,
+                demand.nominalVoltageVolts(),
+                org.springframework.context.i18n.LocaleContextHolder.getLocale()));
     model.addAttribute("circuitFindings", results.circuitFindings(boardId));
     model.addAttribute("circuitProblems", results.circuitProblemCounts(boardId));
     model.addAttribute("problems", results.problems(boardId));
