@@ -250,6 +250,46 @@ public record CircuitForm(
         deviceFaultInterrupter);
   }
 
+  /** The same row on another way (on a panelboard: with its top pole on another space). */
+  public CircuitForm onWay(int way) {
+    return new CircuitForm(
+        way,
+        position,
+        description,
+        status,
+        lockedForBalancing,
+        deviceKind,
+        deviceCurve,
+        deviceRatingAmps,
+        devicePoles,
+        deviceBreakingCapacityKiloAmps,
+        deviceResidualMilliAmps,
+        deviceRcdType,
+        cableLineCsa,
+        cableCpcCsa,
+        cableMaterial,
+        cableInsulation,
+        cableLengthMetres,
+        cableInstallationMethod,
+        cableAmbientCelsius,
+        cableGroupedCircuits,
+        cableThermalInsulationMm,
+        measuredLoopImpedanceOhms,
+        loadDescription,
+        loadCategory,
+        loadQuantity,
+        loadRatingValue,
+        loadRatingUnit,
+        loadPowerFactor,
+        version,
+        ringFinal,
+        deviceOverloadSettingAmps,
+        deviceInstantaneousSettingAmps,
+        loadStartUpMultiple,
+        location,
+        deviceFaultInterrupter);
+  }
+
   /** A row without a start-up multiple for its first load: the argument list from before. */
   public CircuitForm(
       Integer wayNumber,

@@ -73,6 +73,7 @@ class NecDemoSite {
   private final ScheduleService schedule;
   private final DwellingService dwellings;
   private final TransactionTemplate transaction;
+  private final java.util.Map<Long, java.util.Set<Integer>> takenSpaces = new java.util.HashMap<>();
 
   NecDemoSite(
       SiteService sites,
@@ -122,7 +123,7 @@ class NecDemoSite {
     long siteId = site.getId();
 
     Board house =
-        boards.create(siteId, panel("HP", "Basement electrical room", 12, 400, null, null));
+        boards.create(siteId, panel("HP", "Basement electrical room", 24, 400, null, null));
     Circuit[] feeders = new Circuit[3];
     for (int unit = 1; unit <= 3; unit++) {
       feeders[unit - 1] =
@@ -180,7 +181,7 @@ class NecDemoSite {
             panel(
                 "CP",
                 "Ground floor laundry room",
-                8,
+                16,
                 100,
                 house,
                 commonFeeder,
@@ -195,7 +196,7 @@ class NecDemoSite {
               panel(
                   "APT-" + unit,
                   "Apartment " + unit + " kitchen hallway",
-                  12,
+                  30,
                   200,
                   house,
                   feeders[unit - 1]));
@@ -317,6 +318,19 @@ class NecDemoSite {
         circuit(
             8, PhasePosition.L2, "Waste disposer", DeviceKind.MCB, 20, ConductorSize.AWG_12, 25),
         load("Waste disposer", LoadCategory.FIXED_APPLIANCE, 1, 900, RatingUnit.VA));
+    // deliberate: a balcony receptacle on a plain breaker, no GFCI (NEC 210.8(A)(3) outdoors)
+    add(
+        apt,
+        circuit(
+                9,
+                PhasePosition.L1,
+                "Balcony receptacle",
+                DeviceKind.MCB,
+                20,
+                ConductorSize.AWG_12,
+                35)
+            .at(CircuitLocation.OUTDOORS),
+        load("Balcony receptacle", LoadCategory.SOCKET_OUTLETS, 1, 180, RatingUnit.VA));
   }
 
   /** Lighting, two small-appliance circuits, laundry and a GFCI bathroom receptacle. */
@@ -663,8 +677,36 @@ class NecDemoSite {
     return new LoadForm(description, category, quantity, rating, unit, 1.0, null, null, false);
   }
 
+  /**
+   * The demo's circuits are written by the line(s) they should take; on a panelboard the lines
+   * follow from the space, so each goes on the first free space (top down) whose line(s) are the
+   * ones written, and its way number is that space.
+   */
+  private int spaceFor(Board board, CircuitForm circuit) {
+    com.wayledger.engine.PanelSpaces panel = board.panelSpaces();
+    if (panel == null) {
+      return circuit.wayNumber();
+    }
+    int poles = circuit.position().poles();
+    java.util.Set<Integer> taken =
+        takenSpaces.computeIfAbsent(board.getId(), id -> new java.util.HashSet<>());
+    for (int space = 1; space <= panel.spaceCount(); space++) {
+      if (panel.fitOf(space, poles) != com.wayledger.engine.PanelSpaces.Fit.FITS
+          || panel.positionOf(space, poles) != circuit.position()) {
+        continue;
+      }
+      java.util.List<Integer> spaces = panel.spacesOf(space, poles);
+      if (spaces.stream().noneMatch(taken::contains)) {
+        taken.addAll(spaces);
+        return space;
+      }
+    }
+    throw new IllegalStateException(
+        "demo panel " + board.getReference() + " has no free space for " + circuit.description());
+  }
+
   private Circuit add(Board board, CircuitForm circuit, LoadForm... loads) {
-    Circuit saved = schedule.addCircuit(board.getId(), circuit);
+    Circuit saved = schedule.addCircuit(board.getId(), circuit.onWay(spaceFor(board, circuit)));
     for (LoadForm load : loads) {
       schedule.addLoad(saved.getId(), load);
     }

@@ -120,11 +120,31 @@ class NecDemoSiteIntegrationTests {
 
   @Test
   void outdoorReceptaclesOnTheHousePanelHaveNoGroundFaultProtection() {
-    // NEC 210.8(A)(3) (from memory): outdoor receptacles of a dwelling need GFCI protection; the
-    // check itself comes with the NEC ground-fault rules; here the demo's precondition
+    // the house panel is not a dwelling panel: 210.8(B) for other occupancies is not built, so
+    // this stays a precondition; the dwelling case below is the finding
     CircuitSpec walk = circuit("HP", "Front walk receptacles");
     assertThat(walk.location()).isEqualTo(CircuitLocation.OUTDOORS);
     assertThat(walk.device().kind().isResidualCurrent()).as("no GFCI device").isFalse();
+  }
+
+  @Test
+  void balconyReceptacleOfApartmentThreeLacksGroundFaultProtection() throws Exception {
+    // NEC 210.8(A)(3) (from memory): outdoor receptacles of a dwelling unit need GFCI protection
+    Finding gfci =
+        circuitFindings("APT-3", "Balcony receptacle").stream()
+            .filter(f -> f.check() == CheckKind.GROUND_FAULT_PROTECTION)
+            .findFirst()
+            .orElseThrow();
+    assertThat(gfci.verdict()).as(gfci.summary()).isIn(Verdict.DANGER, Verdict.WARNING);
+    assertThat(page("APT-3")).contains("210.8(A)");
+    Finding protectedOne =
+        circuitFindings("APT-1", "Balcony receptacle").stream()
+            .filter(f -> f.check() == CheckKind.GROUND_FAULT_PROTECTION)
+            .findFirst()
+            .orElseThrow();
+    assertThat(protectedOne.verdict())
+        .as("apartment 1's balcony breaker records the GFCI function: " + protectedOne.summary())
+        .isEqualTo(Verdict.PASS);
   }
 
   @Test
