@@ -120,7 +120,7 @@ public class ScheduleService {
   public Circuit updateCircuit(long circuitId, CircuitForm form, String reason) {
     Circuit circuit = lockedCircuit(circuitId);
     if (form.version() != null && !Objects.equals(form.version(), circuit.getVersion())) {
-      throw new StaleEditException("Circuit " + circuit.getDescription(), CircuitForm.of(circuit));
+      throw new StaleEditException("Circuit " + circuit.getDescription(), savedAsShown(circuit));
     }
     Board board = circuit.getBoard();
     checkCircuitRules(board, form, circuitId);
@@ -153,7 +153,7 @@ public class ScheduleService {
       long circuitId, long expectedVersion, com.wayledger.engine.DeviceSpec device) {
     Circuit circuit = lockedCircuit(circuitId);
     if (circuit.getVersion() != expectedVersion) {
-      throw new StaleEditException("Circuit " + circuit.getDescription(), CircuitForm.of(circuit));
+      throw new StaleEditException("Circuit " + circuit.getDescription(), savedAsShown(circuit));
     }
     if (circuit.getStatus() == WayStatus.EMPTY) {
       throw new RuleViolation("deviceKind", "circuit.device.emptyPosition");
@@ -269,7 +269,7 @@ public class ScheduleService {
       if (edit.expectedVersion() != null
           && !edit.expectedVersion().equals(circuit.recordVersion())) {
         throw new StaleEditException(
-            "Circuit " + circuit.getDescription(), CircuitForm.of(circuit));
+            "Circuit " + circuit.getDescription(), savedAsShown(circuit));
       }
       if (edit.isRemoved()) {
         removed.add(circuit);
@@ -553,6 +553,11 @@ public class ScheduleService {
                 .optional()
                 .orElse(null);
     return ScheduleMapper.snapshotOf(circuit, feeds);
+  }
+
+  /** The stored row in its site's units: what a 409 hands back as the values saved meanwhile. */
+  private static CircuitForm savedAsShown(Circuit circuit) {
+    return CableUnitsOfForms.shown(CircuitForm.of(circuit), circuit.getBoard().cableUnits());
   }
 
   /** "changed In (A) 16 → 20; Device MCB → RCBO", so a log line says what changed. */

@@ -25,13 +25,30 @@ public record ExportData(
     SiteDemand demand,
     SiteFindings findings,
     LocalDate exportedOn,
-    String ruleSetTitle) {
+    String ruleSetTitle,
+    com.wayledger.engine.rules.CableUnits cableUnits) {
 
   public ExportData {
     boards = List.copyOf(boards);
     if (ruleSetTitle == null) {
       ruleSetTitle = com.wayledger.engine.rules.RuleSets.IEC.title();
     }
+    if (cableUnits == null) {
+      cableUnits = com.wayledger.engine.rules.CableUnits.METRIC;
+    }
+  }
+
+  /** Export data in mm² and metres (the argument list from before units followed the site). */
+  public ExportData(
+      long siteId,
+      String siteName,
+      String earthing,
+      List<BoardEntry> boards,
+      SiteDemand demand,
+      SiteFindings findings,
+      LocalDate exportedOn,
+      String ruleSetTitle) {
+    this(siteId, siteName, earthing, boards, demand, findings, exportedOn, ruleSetTitle, null);
   }
 
   /** Export data of an IEC site (the argument list from before rule sets). */
@@ -43,6 +60,6 @@ public record ExportData(
       SiteDemand demand,
       SiteFindings findings,
       LocalDate exportedOn) {
-    this(siteId, siteName, earthing, boards, demand, findings, exportedOn, null);
+    this(siteId, siteName, earthing, boards, demand, findings, exportedOn, null, null);
   }
 }

@@ -69,7 +69,8 @@ public class ExportReader {
         analysis.demand(),
         analysis.findings(),
         LocalDate.now(clock),
-        com.wayledger.engine.rules.RuleSets.of(site.getRuleSet()).title());
+        com.wayledger.engine.rules.RuleSets.of(site.getRuleSet()).title(),
+        site.cableUnits());
   }
 
   static BoardEntry entry(Board board, int depth) {
