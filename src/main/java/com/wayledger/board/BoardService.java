@@ -157,8 +157,8 @@ public class BoardService {
     String fields =
         com.wayledger.system.RecordDiff.describe(
             com.wayledger.system.RecordDiff.between(
-                beforeForm,
-                BoardForm.of(saved),
+                CableUnitsOfForms.shown(beforeForm, saved.cableUnits()),
+                CableUnitsOfForms.shown(BoardForm.of(saved), saved.cableUnits()),
                 java.util.Set.of("version", "parentBoardId", "fedFromCircuitId")),
             "board",
             6);

@@ -137,7 +137,10 @@ public class ScheduleService {
     logged(
         circuit,
         ChangeKind.CIRCUIT_EDITED,
-        changedWhat(beforeForm, CircuitForm.of(circuit), form.hasFirstLoad()),
+        changedWhat(
+            CableUnitsOfForms.shown(beforeForm, board.cableUnits()),
+            savedAsShown(circuit),
+            form.hasFirstLoad()),
         before,
         snapshot(circuit),
         reason);
