@@ -4,9 +4,9 @@ import com.wayledger.engine.rules.CableUnits;
 import com.wayledger.system.RuleViolation;
 
 /**
- * The edge between what people type or read (a site's units: mm² and metres, or AWG/kcmil and
- * feet) and what is stored (always mm² and metres). Pages and the API pass every circuit and board
- * form through here, both ways; the services below see stored units only.
+ * The edge between what people type or read (a site's units: mm² and metres, or AWG/kcmil and feet)
+ * and what is stored (always mm² and metres). Pages and the API pass every circuit and board form
+ * through here, both ways; the services below see stored units only.
  *
  * <p>On an AWG-and-feet site a size is one of the NEC sizes by its label ("12 AWG", "250 kcmil")
  * and a length is in feet; a metric value sent there is refused, naming the field and the field to
@@ -40,7 +40,11 @@ public final class CableUnitsOfForms {
   public static CircuitForm stored(CircuitForm form, CableUnits units) {
     if (!units.awgAndFeet()) {
       refuseUnitFields(
-          form.cableLineSize(), form.cableCpcSize(), form.cableLengthFeet(), "cable", "cableLineCsa");
+          form.cableLineSize(),
+          form.cableCpcSize(),
+          form.cableLengthFeet(),
+          "cable",
+          "cableLineCsa");
       return form;
     }
     refuseMetric(form.cableLineCsa(), "cableLineCsa", "cableLineSize");

@@ -87,8 +87,7 @@ public class ScheduleController {
     form = FormRecovery.ensure(form, errors, model, "form", CircuitForm.class, request);
     if (!errors.hasErrors()) {
       try {
-        CircuitForm stored =
-            CableUnitsOfForms.stored(form, boards.get(boardId).cableUnits());
+        CircuitForm stored = CableUnitsOfForms.stored(form, boards.get(boardId).cableUnits());
         Circuit saved = schedule.addCircuit(boardId, stored, reason);
         return savedSchedule(boardId, saved.getWayNumber(), htmx, model, response);
       } catch (RuleViolation violation) {
@@ -141,8 +140,7 @@ public class ScheduleController {
     }
     if (!errors.hasErrors()) {
       try {
-        CircuitForm stored =
-            CableUnitsOfForms.stored(form, boards.get(boardId).cableUnits());
+        CircuitForm stored = CableUnitsOfForms.stored(form, boards.get(boardId).cableUnits());
         boolean changed =
             stored.hasFirstLoad() || !CircuitForm.of(schedule.circuit(id)).sameRowAs(stored);
         schedule.updateCircuit(id, stored, reason);

@@ -271,8 +271,7 @@ public class ScheduleService {
       }
       if (edit.expectedVersion() != null
           && !edit.expectedVersion().equals(circuit.recordVersion())) {
-        throw new StaleEditException(
-            "Circuit " + circuit.getDescription(), savedAsShown(circuit));
+        throw new StaleEditException("Circuit " + circuit.getDescription(), savedAsShown(circuit));
       }
       if (edit.isRemoved()) {
         removed.add(circuit);

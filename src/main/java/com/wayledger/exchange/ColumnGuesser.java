@@ -1,9 +1,9 @@
 package com.wayledger.exchange;
 
-import com.wayledger.engine.rules.CableUnits;
 import com.wayledger.engine.DeviceKind;
 import com.wayledger.engine.LoadCategory;
 import com.wayledger.engine.RatingUnit;
+import com.wayledger.engine.rules.CableUnits;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Comparator;

@@ -105,7 +105,9 @@ public enum ImportField {
           "cable mm2",
           "size mm2",
           "cable")),
-  /** units (AWG/feet): a line conductor size written as the NEC writes it ("12 AWG", "250 kcmil"). */
+  /**
+   * units (AWG/feet): a line conductor size written as the NEC writes it ("12 AWG", "250 kcmil").
+   */
   LINE_AWG(
       null,
       List.of(

@@ -1,6 +1,5 @@
 package com.wayledger.exchange;
 
-import com.wayledger.engine.rules.CableUnits;
 import static com.wayledger.exchange.ImportField.*;
 
 import com.wayledger.board.CircuitForm;
@@ -17,6 +16,7 @@ import com.wayledger.engine.RatingUnit;
 import com.wayledger.engine.RcdType;
 import com.wayledger.engine.TripCurve;
 import com.wayledger.engine.WayStatus;
+import com.wayledger.engine.rules.CableUnits;
 import com.wayledger.system.EnumWords;
 import jakarta.validation.ConstraintViolation;
 import jakarta.validation.Validator;
@@ -659,8 +659,10 @@ public final class RowReader {
       return number(LENGTH_METRES, problems);
     }
 
-    private static final Pattern FEET_MARK = Pattern.compile("(?i)(\\d\\s*(ft|feet|foot)\\s*$|['′]\\s*$)");
-    private static final Pattern METRE_MARK = Pattern.compile("(?i)\\d\\s*(m|metres?|meters?)\\s*$");
+    private static final Pattern FEET_MARK =
+        Pattern.compile("(?i)(\\d\\s*(ft|feet|foot)\\s*$|['′]\\s*$)");
+    private static final Pattern METRE_MARK =
+        Pattern.compile("(?i)\\d\\s*(m|metres?|meters?)\\s*$");
 
     Integer whole(ImportField field, List<ImportPlan.Problem> problems) {
       Double value = number(field, problems);

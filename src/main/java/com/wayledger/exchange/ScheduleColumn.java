@@ -76,9 +76,8 @@ public enum ScheduleColumn {
   }
 
   /**
-   * The header as written for a site in these units: the size and length columns name AWG/kcmil
-   * and feet on an AWG-and-feet site ("Line AWG/kcmil", "Length ft"); every other header is the
-   * same.
+   * The header as written for a site in these units: the size and length columns name AWG/kcmil and
+   * feet on an AWG-and-feet site ("Line AWG/kcmil", "Length ft"); every other header is the same.
    */
   public String header(com.wayledger.engine.rules.CableUnits units) {
     if (!units.awgAndFeet()) {
@@ -105,7 +104,8 @@ public enum ScheduleColumn {
     String wanted = text.strip();
     for (ScheduleColumn column : values()) {
       if (column.header.equalsIgnoreCase(wanted)
-          || column.header(com.wayledger.engine.rules.CableUnits.AWG_AND_FEET)
+          || column
+              .header(com.wayledger.engine.rules.CableUnits.AWG_AND_FEET)
               .equalsIgnoreCase(wanted)) {
         return column;
       }

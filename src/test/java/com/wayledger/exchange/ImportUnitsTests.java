@@ -57,7 +57,8 @@ class ImportUnitsTests {
   @Test
   void wireSizeAndRunFeetColumnsAreGuessedAndConverted() {
     ImportPlan plan =
-        plan("Way,Line,Circuit,Device,Curve,In A,Wire size,Run ft\n1,L1,Kitchen,MCB,B,20,12 AWG,50\n");
+        plan(
+            "Way,Line,Circuit,Device,Curve,In A,Wire size,Run ft\n1,L1,Kitchen,MCB,B,20,12 AWG,50\n");
     ImportPlan.PreviewRow kitchen = row(plan, 2);
     assertThat(kitchen.problems()).as("problems").isEmpty();
     // 12 AWG = 3.31 mm² (ASTM B258, from memory); 50 ft = 15.24 m (1 ft = 0.3048 m exactly)
@@ -75,30 +76,36 @@ class ImportUnitsTests {
     assertThat(row(plan, 2).isValid()).as("row 2 with 12 AWG").isTrue();
     assertThat(row(plan, 3).problems())
         .extracting(ImportPlan.Problem::field, ImportPlan.Problem::code)
-        .containsExactly(org.assertj.core.groups.Tuple.tuple(ImportField.LINE_AWG, "import.cell.notAwg"));
+        .containsExactly(
+            org.assertj.core.groups.Tuple.tuple(ImportField.LINE_AWG, "import.cell.notAwg"));
   }
 
   @Test
   void anAwgSizeInASquareMillimetreColumnIsRefusedNotReadAsTwelveSquareMillimetres() {
-    ImportPlan plan = plan("Way,Line,Circuit,Device,Curve,In A,Line mm²\n1,L1,Kitchen,MCB,B,20,12 AWG\n");
+    ImportPlan plan =
+        plan("Way,Line,Circuit,Device,Curve,In A,Line mm²\n1,L1,Kitchen,MCB,B,20,12 AWG\n");
     assertThat(row(plan, 2).problems())
         .extracting(ImportPlan.Problem::field, ImportPlan.Problem::code)
-        .containsExactly(org.assertj.core.groups.Tuple.tuple(ImportField.LINE_CSA, "import.cell.awgInMm2"));
+        .containsExactly(
+            org.assertj.core.groups.Tuple.tuple(ImportField.LINE_CSA, "import.cell.awgInMm2"));
   }
 
   @Test
   void feetWrittenInAMetresColumnAreRefused() {
-    ImportPlan plan = plan("Way,Line,Circuit,Device,Curve,In A,Length m\n1,L1,Kitchen,MCB,B,20,50 ft\n");
+    ImportPlan plan =
+        plan("Way,Line,Circuit,Device,Curve,In A,Length m\n1,L1,Kitchen,MCB,B,20,50 ft\n");
     assertThat(row(plan, 2).problems())
         .extracting(ImportPlan.Problem::field, ImportPlan.Problem::code)
         .containsExactly(
-            org.assertj.core.groups.Tuple.tuple(ImportField.LENGTH_METRES, "import.cell.feetInMetres"));
+            org.assertj.core.groups.Tuple.tuple(
+                ImportField.LENGTH_METRES, "import.cell.feetInMetres"));
   }
 
   @Test
   void metresColumnsStillReadAsBefore() {
     ImportPlan plan =
-        plan("Way,Line,Circuit,Device,Curve,In A,Line mm²,Length metres\n1,L1,Kitchen,MCB,B,20,2.5,18\n");
+        plan(
+            "Way,Line,Circuit,Device,Curve,In A,Line mm²,Length metres\n1,L1,Kitchen,MCB,B,20,2.5,18\n");
     ImportPlan.PreviewRow kitchen = row(plan, 2);
     assertThat(kitchen.problems()).isEmpty();
     assertThat(kitchen.circuit().cableLineCsa()).isEqualTo(2.5);
@@ -111,28 +118,60 @@ class ImportUnitsTests {
     double six = ConductorSize.AWG_6.squareMillimetres();
     var kitchen =
         ExchangeFixtures.circuit(
-                1, PhasePosition.L1, "Kitchen counter", DeviceKind.MCB, TripCurve.B, 20, null,
-                null, null)
+                1,
+                PhasePosition.L1,
+                "Kitchen counter",
+                DeviceKind.MCB,
+                TripCurve.B,
+                20,
+                null,
+                null,
+                null)
             .withCableUnits(twelve, twelve, CableUnits.metresOfFeet(50), null, null, null);
     var range =
         ExchangeFixtures.circuit(
                 3, PhasePosition.L1, "Range", DeviceKind.MCB, TripCurve.C, 50, null, null, null)
-            .withCableUnits(six, ConductorSize.AWG_10.squareMillimetres(),
-                CableUnits.metresOfFeet(35), null, null, null);
+            .withCableUnits(
+                six,
+                ConductorSize.AWG_10.squareMillimetres(),
+                CableUnits.metresOfFeet(35),
+                null,
+                null,
+                null);
     BoardEntry board =
         new BoardEntry(
-            1L, "Unit 2A", "Hall closet", 1, 42, null, "", 0,
+            1L,
+            "Unit 2A",
+            "Hall closet",
+            1,
+            42,
+            null,
+            "",
+            0,
             List.of(
-                new CircuitEntry(201L, kitchen,
-                    List.of(ExchangeFixtures.load("Toaster", LoadCategory.OTHER, 1, 1200,
-                        RatingUnit.W, 1.0))),
-                new CircuitEntry(202L, range,
-                    List.of(ExchangeFixtures.load("Range", LoadCategory.COOKING, 1, 8000,
-                        RatingUnit.W, 1.0)))));
+                new CircuitEntry(
+                    201L,
+                    kitchen,
+                    List.of(
+                        ExchangeFixtures.load(
+                            "Toaster", LoadCategory.OTHER, 1, 1200, RatingUnit.W, 1.0))),
+                new CircuitEntry(
+                    202L,
+                    range,
+                    List.of(
+                        ExchangeFixtures.load(
+                            "Range", LoadCategory.COOKING, 1, 8000, RatingUnit.W, 1.0)))));
     ExportData metric = ExchangeFixtures.export(List.of(board), DiversityMethods.UK_SMALL_SHOP);
     return new ExportData(
-        metric.siteId(), metric.siteName(), metric.earthing(), metric.boards(), metric.demand(),
-        metric.findings(), metric.exportedOn(), "NEC (NFPA 70)", CableUnits.AWG_AND_FEET);
+        metric.siteId(),
+        metric.siteName(),
+        metric.earthing(),
+        metric.boards(),
+        metric.demand(),
+        metric.findings(),
+        metric.exportedOn(),
+        "NEC (NFPA 70)",
+        CableUnits.AWG_AND_FEET);
   }
 
   @Test

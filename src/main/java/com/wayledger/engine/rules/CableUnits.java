@@ -87,8 +87,8 @@ public enum CableUnits {
   }
 
   /**
-   * "2.5 mm²" or "12 AWG"; empty for null. A stored area that is no NEC size on an AWG site is shown
-   * in mm², never rounded to a neighbouring gauge.
+   * "2.5 mm²" or "12 AWG"; empty for null. A stored area that is no NEC size on an AWG site is
+   * shown in mm², never rounded to a neighbouring gauge.
    */
   public String sizeText(Double squareMillimetres) {
     if (squareMillimetres == null) {
@@ -116,7 +116,8 @@ public enum CableUnits {
     if (text == null || text.isBlank()) {
       return Optional.empty();
     }
-    String t = text.strip().toLowerCase(Locale.ROOT).replace("mcm", "kcmil").replaceAll("\\s+", " ");
+    String t =
+        text.strip().toLowerCase(Locale.ROOT).replace("mcm", "kcmil").replaceAll("\\s+", " ");
     return ConductorSize.ofLabel(t).map(ConductorSize::squareMillimetres);
   }
 
