@@ -165,6 +165,15 @@ class AwgAndFeetIntegrationTests {
             .getResponse()
             .getContentAsString(StandardCharsets.UTF_8);
     assertThat(checks).as("the circuit's checks page").contains("12 AWG / 12 AWG 50 ft");
+    String inspection =
+        mvc.perform(get("/boards/{id}/inspections/new", boardId).with(EDITOR))
+            .andExpect(status().isOk())
+            .andReturn()
+            .getResponse()
+            .getContentAsString(StandardCharsets.UTF_8);
+    assertThat(inspection)
+        .as("the inspection grid's recorded cable")
+        .contains("12 AWG / 12 AWG 50 ft");
   }
 
   @Test
@@ -223,7 +232,8 @@ class AwgAndFeetIntegrationTests {
     assertThat(doc.select(".field.has-error select[name=cableLineSize]"))
         .as("the size field is marked")
         .hasSize(1);
-    assertThat(doc.select(".field.has-error .error").text())
+    assertThat(doc.select("#cableLineSize-error").text())
+        .as("the message beside the size field")
         .contains("13 AWG is not an NEC conductor size");
     assertThat(
             jdbc.sql("SELECT COUNT(*) FROM circuit WHERE board_id = ?")
