@@ -199,7 +199,11 @@ public class BoardService {
     logged(
         saved,
         ChangeKind.BOARD_EDITED,
-        "defaults changed",
+        "defaults changed: "
+            + com.wayledger.system.RecordDiff.describe(
+                com.wayledger.system.RecordDiff.between(before, form, java.util.Set.of()),
+                "defaults",
+                6),
         header,
         ScheduleMapper.headerOf(saved),
         reason);

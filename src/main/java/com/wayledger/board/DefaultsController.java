@@ -18,9 +18,9 @@ import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestParam;
 
 /**
- * The defaults of a site and of a board: the cable conditions and start-up multiples their circuits
- * inherit unless they record their own. "Common practice" fills the empty fields with values marked
- * as such; the user saves them or not.
+ * The defaults of a site and of a board: the cable conditions, location and start-up multiples
+ * their circuits inherit unless they record their own. "Common practice" fills the empty fields
+ * with values marked as such; the user saves them or not.
  */
 @Controller
 public class DefaultsController {
@@ -38,6 +38,7 @@ public class DefaultsController {
   @ModelAttribute
   void choices(Model model) {
     FormChoices.addDeviceAndCable(model);
+    model.addAttribute("locations", com.wayledger.engine.CircuitLocation.values());
   }
 
   @GetMapping("/sites/{id}/defaults")
@@ -134,6 +135,7 @@ public class DefaultsController {
             first(stored.thermalInsulationMm(), usual.thermalInsulationMm()),
             first(stored.material(), usual.material()),
             first(stored.insulation(), usual.insulation()),
+            first(stored.location(), usual.location()),
             first(stored.motorStartUpMultiple(), usual.motorStartUpMultiple()),
             first(stored.airConditioningStartUpMultiple(), usual.airConditioningStartUpMultiple()),
             first(stored.lightingStartUpMultiple(), usual.lightingStartUpMultiple()));

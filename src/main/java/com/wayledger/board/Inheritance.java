@@ -1,6 +1,7 @@
 package com.wayledger.board;
 
 import com.wayledger.engine.CableSpec;
+import com.wayledger.engine.CircuitLocation;
 import com.wayledger.engine.ConductorMaterial;
 import com.wayledger.engine.Insulation;
 import com.wayledger.engine.LoadCategory;
@@ -48,10 +49,14 @@ public final class Inheritance {
         case VOLTAGE_DROP, LOOP_IMPEDANCE ->
             field.equals("cableMaterial") || field.equals("cableInsulation");
         case START_UP_SURGE -> field.equals("loadStartUpMultiple");
+        case SOCKET_RCD -> field.equals(LOCATION_FIELD);
         default -> false;
       };
     }
   }
+
+  /** The circuit form's field for where the circuit's equipment is. */
+  static final String LOCATION_FIELD = "location";
 
   private static final Set<String> CAPACITY_FIELDS =
       Set.of(
@@ -93,6 +98,17 @@ public final class Inheritance {
             cable.getThermalInsulationMillimetres(),
             own.getThermalInsulationMillimetres(),
             site.getThermalInsulationMillimetres()));
+  }
+
+  /**
+   * Where a circuit's equipment is, as the checks see it: its own record, else the board's default,
+   * else the site's; null (not recorded) when nobody states it.
+   */
+  static CircuitLocation effectiveLocation(Circuit circuit, Board board) {
+    return first(
+        circuit.getLocation(),
+        board.getDefaults().getLocation(),
+        board.getSite().getDefaults().getLocation());
   }
 
   /** A load's start-up multiple: its own, else the board's for its category, else the site's. */
@@ -160,19 +176,28 @@ public final class Inheritance {
           CableDetails::getThermalInsulationMillimetres,
           CableDefaults::getThermalInsulationMillimetres);
     }
+    if (circuit.getLocation() == null) {
+      InheritedValue location =
+          fromBoardOrSite(
+              LOCATION_FIELD,
+              board.getDefaults().getLocation(),
+              board.getSite().getDefaults().getLocation(),
+              null);
+      if (location != null) {
+        inherited.add(location);
+      }
+    }
     for (LoadItem load : circuit.getLoads()) {
       if (load.getStartUpSurgeMultiple() != null) {
         continue;
       }
       LoadCategory category = load.getCategory();
-      Double onBoard = board.getStartUpMultiples().get(category);
-      Double onSite = board.getSite().getStartUpMultiples().get(category);
       InheritedValue value =
-          onBoard != null
-              ? new InheritedValue("loadStartUpMultiple", onBoard, Source.BOARD, category)
-              : onSite != null
-                  ? new InheritedValue("loadStartUpMultiple", onSite, Source.SITE, category)
-                  : null;
+          fromBoardOrSite(
+              "loadStartUpMultiple",
+              board.getStartUpMultiples().get(category),
+              board.getSite().getStartUpMultiples().get(category),
+              category);
       if (value != null && !inherited.contains(value)) {
         inherited.add(value);
       }
@@ -204,13 +229,19 @@ public final class Inheritance {
     if (recorded.apply(cable) != null) {
       return;
     }
-    T onBoard = defaulted.apply(own);
-    T onSite = defaulted.apply(site);
-    if (onBoard != null) {
-      inherited.add(new InheritedValue(field, onBoard, Source.BOARD, null));
-    } else if (onSite != null) {
-      inherited.add(new InheritedValue(field, onSite, Source.SITE, null));
+    InheritedValue value =
+        fromBoardOrSite(field, defaulted.apply(own), defaulted.apply(site), null);
+    if (value != null) {
+      inherited.add(value);
     }
+  }
+
+  /** The board's value if it sets one, else the site's; null when neither does. */
+  private static InheritedValue fromBoardOrSite(
+      String field, Object onBoard, Object onSite, LoadCategory category) {
+    return onBoard != null
+        ? new InheritedValue(field, onBoard, Source.BOARD, category)
+        : onSite != null ? new InheritedValue(field, onSite, Source.SITE, category) : null;
   }
 
   @SafeVarargs

@@ -54,6 +54,10 @@ final class MissingInputs {
         missing,
         cable == null ? null : cable.thermalInsulationMillimetres(),
         "cableThermalInsulationMm");
+    addIfNull(
+        missing,
+        Inheritance.effectiveLocation(circuit, circuit.getBoard()),
+        Inheritance.LOCATION_FIELD);
     if (circuit.getLoads().isEmpty()) {
       missing.add("loads");
     }

@@ -222,7 +222,7 @@ public final class ScheduleMapper {
         feedsBoardId,
         circuit.getMeasuredLoopImpedanceOhms(),
         circuit.isRingFinal(),
-        circuit.getLocation());
+        withDefaults ? Inheritance.effectiveLocation(circuit, board) : circuit.getLocation());
   }
 
   private static LoadSpec toSpec(LoadItem load, Double startUpMultiple) {

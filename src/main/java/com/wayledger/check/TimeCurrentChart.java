@@ -40,9 +40,12 @@ public record TimeCurrentChart(
      * current never reads as "0 A".
      */
     public String text() {
-      return label
-          + " "
-          + (amps < 100
+      return label + " " + amount();
+    }
+
+    /** "0.5 A", "1200 A": the current as the page's words for this marker kind carry it. */
+    public String amount() {
+      return (amps < 100
               ? String.format(java.util.Locale.ROOT, "%.1f", amps)
               : String.format(java.util.Locale.ROOT, "%.0f", amps))
           + " A";
@@ -56,7 +59,13 @@ public record TimeCurrentChart(
 
   public record Tick(String label, double position) {}
 
-  public record Point(double x, double y, String label) {}
+  /** The surge's point: "73 A for 150 ms" as {@link #label}, its figures for the page's words. */
+  public record Point(double x, double y, String amps, String millis) {
+
+    public String label() {
+      return amps + " A for " + millis + " ms";
+    }
+  }
 
   /**
    * Lays out the chart.
@@ -98,8 +107,8 @@ public record TimeCurrentChart(
           new Point(
               x.at(Math.log10(surgeAmps)),
               y.at(Math.log10(clampSeconds(surgeSeconds))),
-              String.format(
-                  java.util.Locale.ROOT, "%.0f A for %.0f ms", surgeAmps, surgeSeconds * 1000));
+              String.format(java.util.Locale.ROOT, "%.0f", surgeAmps),
+              String.format(java.util.Locale.ROOT, "%.0f", surgeSeconds * 1000));
     }
     List<Tick> currentTicks = new ArrayList<>();
     for (double decade = x.low; decade <= x.high; decade++) {

@@ -4,8 +4,8 @@ import jakarta.servlet.http.HttpServletRequest;
 import jakarta.servlet.http.HttpServletResponse;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
-import java.util.Locale;
 import org.springframework.context.MessageSource;
+import org.springframework.context.i18n.LocaleContextHolder;
 import org.springframework.http.ContentDisposition;
 import org.springframework.http.HttpHeaders;
 import org.springframework.stereotype.Controller;
@@ -62,11 +62,11 @@ public class DiagramController {
   }
 
   static Words words(MessageSource messages) {
-    return (key, args) -> messages.getMessage(key, args, Locale.UK);
+    return (key, args) -> messages.getMessage(key, args, LocaleContextHolder.getLocale());
   }
 
   static String caution(MessageSource messages) {
-    return messages.getMessage("caution.short", null, Locale.UK);
+    return messages.getMessage("caution.short", null, LocaleContextHolder.getLocale());
   }
 
   static String fileName(String text) {

@@ -8,9 +8,9 @@ import jakarta.servlet.http.HttpServletResponse;
 import java.security.Principal;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import org.springframework.context.MessageSource;
+import org.springframework.context.i18n.LocaleContextHolder;
 import org.springframework.orm.ObjectOptimisticLockingFailureException;
 import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
@@ -82,7 +82,10 @@ public class MethodController {
     try {
       problems = library.update(key, version, name, submitted, user.getName());
     } catch (RuleViolation violation) {
-      problems = Map.of("name", messages.getMessage(violation.messageCode(), null, Locale.UK));
+      problems =
+          Map.of(
+              "name",
+              messages.getMessage(violation.messageCode(), null, LocaleContextHolder.getLocale()));
     } catch (StaleEditException | ObjectOptimisticLockingFailureException stale) {
       // The form comes back with the saved method's version and the user's typed values: saving
       // again is a deliberate overwrite, and nothing typed is lost.
@@ -90,7 +93,8 @@ public class MethodController {
           model,
           library.entry(key),
           submitted,
-          Map.of("name", messages.getMessage("method.stale", null, Locale.UK)));
+          Map.of(
+              "name", messages.getMessage("method.stale", null, LocaleContextHolder.getLocale())));
       response.setStatus(HttpServletResponse.SC_CONFLICT);
       return "diversity/method";
     }

@@ -8,9 +8,9 @@ import java.io.OutputStreamWriter;
 import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.util.List;
-import java.util.Locale;
 import org.springframework.beans.factory.annotation.Value;
 import org.springframework.context.MessageSource;
+import org.springframework.context.i18n.LocaleContextHolder;
 import org.springframework.http.ContentDisposition;
 import org.springframework.http.HttpHeaders;
 import org.springframework.stereotype.Controller;
@@ -59,7 +59,8 @@ public class ExportController {
         response,
         XLSX,
         fileName(data.siteName() + "-" + data.boards().get(0).reference()) + ".xlsx");
-    new WorkbookWriter(caution()).write(data, false, extraSheets, response.getOutputStream());
+    new WorkbookWriter(caution(), sheetWords())
+        .write(data, false, extraSheets, response.getOutputStream());
   }
 
   @GetMapping("/sites/{siteId}/export.xlsx")
@@ -68,7 +69,7 @@ public class ExportController {
     ExportData data = reader.site(siteId);
     byte[] diagram = data.boards().isEmpty() ? null : diagramPicture.png(siteId);
     attachment(response, XLSX, fileName(data.siteName()) + ".xlsx");
-    new WorkbookWriter(caution())
+    new WorkbookWriter(caution(), sheetWords())
         .withDiagram(diagram)
         .write(data, true, extraSheets, response.getOutputStream());
   }
@@ -128,8 +129,14 @@ public class ExportController {
         : publicBaseUrl;
   }
 
+  /** The workbook's titles and labels in the language of the page it is exported from. */
+  private SheetWords sheetWords() {
+    java.util.Locale locale = LocaleContextHolder.getLocale();
+    return SheetWords.of((key, args) -> messages.getMessage(key, args, locale));
+  }
+
   private String caution() {
-    return messages.getMessage("caution.short", null, Locale.UK);
+    return messages.getMessage("caution.short", null, LocaleContextHolder.getLocale());
   }
 
   private static void attachment(HttpServletResponse response, String type, String name) {

@@ -56,12 +56,22 @@ public final class WorkbookWriter {
   static final String METHODS_SHEET = "Methods";
 
   private final String caution;
+  private final SheetWords words;
 
   /**
    * @param caution the caution printed on every sheet
    */
   public WorkbookWriter(String caution) {
+    this(caution, SheetWords.base());
+  }
+
+  /**
+   * @param caution the caution printed on every sheet
+   * @param words the titles and labels people read, in the export's language
+   */
+  public WorkbookWriter(String caution, SheetWords words) {
     this.caution = caution;
+    this.words = words;
   }
 
   private byte[] diagramPng;
@@ -270,30 +280,37 @@ public final class WorkbookWriter {
     text(
         title,
         0,
-        "Schedule of board " + board.reference() + " — " + data.siteName(),
+        words.of("workbook.title.board", board.reference(), data.siteName()),
         styles.title,
         null);
     Row facts = sheet.createRow(1);
     text(facts, 0, "U0 V", styles.label, null);
     number(facts, 1, u0, styles.number, null);
-    text(facts, 2, "Lines", styles.label, null);
+    text(facts, 2, words.of("workbook.fact.lines"), styles.label, null);
     number(facts, 3, board.phases(), styles.integer, null);
-    text(facts, 4, "Ways", styles.label, null);
+    text(facts, 4, words.of("workbook.fact.ways"), styles.label, null);
     number(facts, 5, board.wayCount(), styles.integer, null);
-    text(facts, 6, "Exported", styles.label, null);
+    text(facts, 6, words.of("workbook.fact.exported"), styles.label, null);
     text(facts, 7, data.exportedOn().toString(), styles.text, null);
-    text(facts, 8, "Diversity", styles.label, null);
-    text(facts, 9, demand == null ? "not assessed" : demand.methodName(), styles.text, null);
-    text(facts, 13, "Rule set", styles.label, null);
+    text(facts, 8, words.of("workbook.fact.diversity"), styles.label, null);
+    text(
+        facts,
+        9,
+        demand == null ? words.of("workbook.fact.notAssessed") : demand.methodName(),
+        styles.text,
+        null);
+    text(facts, 13, words.of("workbook.fact.ruleSet"), styles.label, null);
     text(facts, 14, data.ruleSetTitle(), styles.text, null);
-    text(facts, 11, "Fed from", styles.label, null);
+    text(facts, 11, words.of("workbook.fact.fedFrom"), styles.label, null);
     text(
         facts,
         12,
-        board.parentReference() == null ? "origin" : board.parentReference(),
+        board.parentReference() == null
+            ? words.of("workbook.fact.origin")
+            : board.parentReference(),
         styles.text,
         null);
-    text(sheet.createRow(2), 0, "Caution: " + caution, styles.caution, null);
+    text(sheet.createRow(2), 0, words.of("workbook.caution", caution), styles.caution, null);
 
     Row header = sheet.createRow(HEADER_ROW);
     for (ScheduleColumn column : ScheduleColumn.values()) {
@@ -859,15 +876,15 @@ public final class WorkbookWriter {
   private void writeSummary(
       SXSSFSheet sheet, ExportData data, Map<Long, TotalsCells> totals, WorkbookStyles s) {
     Widths w = new Widths(12);
-    text(sheet.createRow(0), 0, "Site " + data.siteName() + " — boards", s.title, null);
+    text(sheet.createRow(0), 0, words.of("workbook.title.site", data.siteName()), s.title, null);
     Row facts = sheet.createRow(1);
-    text(facts, 0, "Earthing", s.label, null);
+    text(facts, 0, words.of("workbook.fact.earthing"), s.label, null);
     text(facts, 1, data.earthing(), s.text, null);
-    text(facts, 2, "Exported", s.label, null);
+    text(facts, 2, words.of("workbook.fact.exported"), s.label, null);
     text(facts, 3, data.exportedOn().toString(), s.text, null);
-    text(facts, 4, "Rule set", s.label, null);
+    text(facts, 4, words.of("workbook.fact.ruleSet"), s.label, null);
     text(facts, 5, data.ruleSetTitle(), s.text, null);
-    text(sheet.createRow(2), 0, "Caution: " + caution, s.caution, null);
+    text(sheet.createRow(2), 0, words.of("workbook.caution", caution), s.caution, null);
     String[] heads = {
       "Board",
       "Location",

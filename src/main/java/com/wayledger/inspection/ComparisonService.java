@@ -14,6 +14,8 @@ import java.util.Map;
 import java.util.Objects;
 import java.util.function.Function;
 import java.util.stream.Collectors;
+import org.springframework.context.MessageSource;
+import org.springframework.context.i18n.LocaleContextHolder;
 import org.springframework.stereotype.Service;
 import org.springframework.transaction.annotation.Transactional;
 
@@ -29,10 +31,22 @@ public class ComparisonService {
   private final ChangeLog log;
   private final HistoryService history;
 
-  public ComparisonService(InspectionService inspections, ChangeLog log, HistoryService history) {
+  private final MessageSource messages;
+
+  public ComparisonService(
+      InspectionService inspections,
+      ChangeLog log,
+      HistoryService history,
+      MessageSource messages) {
     this.inspections = inspections;
     this.log = log;
     this.history = history;
+    this.messages = messages;
+  }
+
+  /** A sentence of the comparison in the reader's language (the page's, else en-GB). */
+  private String words(String key, Object... args) {
+    return messages.getMessage(key, args, LocaleContextHolder.getLocale());
   }
 
   /**
@@ -80,7 +94,8 @@ public class ComparisonService {
     for (CircuitDrift d : drift) {
       for (ResultDrift.Move m : d.moves()) {
         if (m.attention()) {
-          attention.add(d.wayLabel() + " " + d.description() + ": " + m.message());
+          attention.add(
+              words("inspection.compare.note.drift", d.wayLabel(), d.description(), m.message()));
         }
       }
     }
@@ -88,20 +103,21 @@ public class ComparisonService {
       if (c.category().equals("added")
           || c.category().equals("device")
           || c.category().equals("cable")) {
-        attention.add(c.summary() + " — not covered by the earlier tests");
+        attention.add(words("inspection.compare.note.untested", c.summary()));
       }
     }
     if (before != null && after != null && after > before * 1.1) {
       attention.add(
-          String.format(
-              java.util.Locale.ROOT,
-              "demand on the most loaded line rose from %.1f A to %.1f A",
-              before,
-              after));
+          words(
+              "inspection.compare.note.demandRose",
+              String.format(java.util.Locale.ROOT, "%.1f", before),
+              String.format(java.util.Locale.ROOT, "%.1f", after)));
     }
     return new Comparison(
-        "inspection of " + from.inspectedOn(),
-        to == null ? "now" : "inspection of " + to.inspectedOn(),
+        words("inspection.compare.side.of", from.inspectedOn().toString()),
+        to == null
+            ? words("inspection.compare.side.now")
+            : words("inspection.compare.side.of", to.inspectedOn().toString()),
         changes,
         before,
         after,

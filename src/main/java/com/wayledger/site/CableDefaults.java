@@ -1,5 +1,6 @@
 package com.wayledger.site;
 
+import com.wayledger.engine.CircuitLocation;
 import com.wayledger.engine.ConductorMaterial;
 import com.wayledger.engine.InstallationMethod;
 import com.wayledger.engine.Insulation;
@@ -9,8 +10,8 @@ import jakarta.persistence.EnumType;
 import jakarta.persistence.Enumerated;
 
 /**
- * The cable conditions a site or a board sets for its circuits: what a circuit uses when it records
- * none of its own. Any field may be empty (nothing set at this level).
+ * The cable conditions and the equipment location a site or a board sets for its circuits: what a
+ * circuit uses when it records none of its own. Any field may be empty (nothing set at this level).
  */
 @Embeddable
 public class CableDefaults {
@@ -36,6 +37,10 @@ public class CableDefaults {
   @Column(name = "default_insulation")
   private Insulation insulation;
 
+  @Enumerated(EnumType.STRING)
+  @Column(name = "default_location")
+  private CircuitLocation location;
+
   protected CableDefaults() {}
 
   public CableDefaults(
@@ -44,13 +49,15 @@ public class CableDefaults {
       Integer groupedCircuits,
       Integer thermalInsulationMillimetres,
       ConductorMaterial material,
-      Insulation insulation) {
+      Insulation insulation,
+      CircuitLocation location) {
     this.installationMethod = installationMethod;
     this.ambientCelsius = ambientCelsius;
     this.groupedCircuits = groupedCircuits;
     this.thermalInsulationMillimetres = thermalInsulationMillimetres;
     this.material = material;
     this.insulation = insulation;
+    this.location = location;
   }
 
   /** Nothing set: every field inherits from the level above, or is missing. */
@@ -80,5 +87,9 @@ public class CableDefaults {
 
   public Insulation getInsulation() {
     return insulation;
+  }
+
+  public CircuitLocation getLocation() {
+    return location;
   }
 }

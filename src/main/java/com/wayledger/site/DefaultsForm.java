@@ -1,5 +1,6 @@
 package com.wayledger.site;
 
+import com.wayledger.engine.CircuitLocation;
 import com.wayledger.engine.ConductorMaterial;
 import com.wayledger.engine.InstallationMethod;
 import com.wayledger.engine.Insulation;
@@ -13,8 +14,8 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * The defaults of a site or a board as typed: cable conditions and the start-up multiple of the
- * load categories that usually have one. Every field is optional.
+ * The defaults of a site or a board as typed: cable conditions, where the circuits' equipment is,
+ * and the start-up multiple of the load categories that usually have one. Every field is optional.
  */
 public record DefaultsForm(
     InstallationMethod installationMethod,
@@ -23,6 +24,7 @@ public record DefaultsForm(
     @Min(0) @Max(100000) Integer thermalInsulationMm,
     ConductorMaterial material,
     Insulation insulation,
+    CircuitLocation location,
     @DecimalMin("1") @DecimalMax("50") Double motorStartUpMultiple,
     @DecimalMin("1") @DecimalMax("50") Double airConditioningStartUpMultiple,
     @DecimalMin("1") @DecimalMax("50") Double lightingStartUpMultiple) {
@@ -36,15 +38,25 @@ public record DefaultsForm(
    * usual capacity tables are drawn for), no thermal insulation, copper with 70 °C thermoplastic
    * insulation, a direct-on-line motor starting at 8 times its running current and an
    * air-conditioning compressor at 6 times (the upper end of the usual range, the safe side for a
-   * nuisance-trip check). Installation method and grouping depend on the route: no common value.
+   * nuisance-trip check). Installation method and grouping depend on the route, and where the
+   * equipment is depends on the building: no common value, so none is filled in.
    */
   public static DefaultsForm commonPractice() {
     return new DefaultsForm(
-        null, 30.0, null, 0, ConductorMaterial.COPPER, Insulation.THERMOPLASTIC_70, 8.0, 6.0, null);
+        null,
+        30.0,
+        null,
+        0,
+        ConductorMaterial.COPPER,
+        Insulation.THERMOPLASTIC_70,
+        null,
+        8.0,
+        6.0,
+        null);
   }
 
   public static DefaultsForm empty() {
-    return new DefaultsForm(null, null, null, null, null, null, null, null, null);
+    return new DefaultsForm(null, null, null, null, null, null, null, null, null, null);
   }
 
   public static DefaultsForm of(CableDefaults cable, Map<LoadCategory, Double> startUp) {
@@ -56,6 +68,7 @@ public record DefaultsForm(
         c.getThermalInsulationMillimetres(),
         c.getMaterial(),
         c.getInsulation(),
+        c.getLocation(),
         startUp.get(LoadCategory.MOTOR),
         startUp.get(LoadCategory.AIR_CONDITIONING),
         startUp.get(LoadCategory.LIGHTING));
@@ -68,7 +81,8 @@ public record DefaultsForm(
         groupedCircuits,
         thermalInsulationMm,
         material,
-        insulation);
+        insulation,
+        location);
   }
 
   /** The start-up multiples set, by category; categories left empty are absent. */
@@ -89,6 +103,7 @@ public record DefaultsForm(
     fields.put("thermalInsulationMm", thermalInsulationMm);
     fields.put("material", material);
     fields.put("insulation", insulation);
+    fields.put("location", location);
     fields.put("motorStartUpMultiple", motorStartUpMultiple);
     fields.put("airConditioningStartUpMultiple", airConditioningStartUpMultiple);
     fields.put("lightingStartUpMultiple", lightingStartUpMultiple);

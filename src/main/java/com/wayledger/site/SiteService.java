@@ -157,7 +157,13 @@ public class SiteService {
     SiteForm header = SiteForm.of(site);
     site.applyDefaults(form);
     Site saved = sites.saveAndFlush(site);
-    logged(saved, ChangeKind.SITE_EDITED, "defaults changed", header, SiteForm.of(saved), reason);
+    String what =
+        "defaults changed: "
+            + com.wayledger.system.RecordDiff.describe(
+                com.wayledger.system.RecordDiff.between(before, form, java.util.Set.of()),
+                "defaults",
+                6);
+    logged(saved, ChangeKind.SITE_EDITED, what, header, SiteForm.of(saved), reason);
     return saved;
   }
 

@@ -1,10 +1,10 @@
 package com.wayledger.system;
 
 import jakarta.servlet.http.HttpServletResponse;
-import java.util.Locale;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 import org.springframework.context.MessageSource;
+import org.springframework.context.i18n.LocaleContextHolder;
 import org.springframework.dao.DataIntegrityViolationException;
 import org.springframework.dao.PessimisticLockingFailureException;
 import org.springframework.http.HttpStatus;
@@ -33,7 +33,7 @@ public class PageErrorHandling {
   @ExceptionHandler(TextRefused.class)
   public String textRefused(TextRefused e, Model model, HttpServletResponse response) {
     String why =
-        messages.getMessage(e.messageCode(), null, e.messageCode(), Locale.UK)
+        messages.getMessage(e.messageCode(), null, e.messageCode(), LocaleContextHolder.getLocale())
             + (e.character().isEmpty() ? "" : " (" + e.character() + ")");
     model.addAttribute("messageArgs", new Object[] {e.field(), why});
     return problem(HttpStatus.BAD_REQUEST, "error.textRefused", model, response);
@@ -45,7 +45,9 @@ public class PageErrorHandling {
    */
   @ExceptionHandler(RuleViolation.class)
   public String rule(RuleViolation e, Model model, HttpServletResponse response) {
-    String why = messages.getMessage(e.messageCode(), e.arguments(), e.messageCode(), Locale.UK);
+    String why =
+        messages.getMessage(
+            e.messageCode(), e.arguments(), e.messageCode(), LocaleContextHolder.getLocale());
     model.addAttribute("messageArgs", new Object[] {e.field(), why});
     return problem(HttpStatus.UNPROCESSABLE_CONTENT, "error.rule", model, response);
   }

@@ -135,7 +135,8 @@ class DefaultsIntegrationTests {
             post("/boards/{id}/defaults", boardId)
                 .with(user("ed").roles("EDITOR"))
                 .with(csrf())
-                .param("ambientCelsius", "40"))
+                .param("ambientCelsius", "40")
+                .param("location", "OUTDOORS"))
         .andExpect(status().is3xxRedirection());
     long circuitId = addMotorCircuit(null);
 
@@ -153,7 +154,12 @@ class DefaultsIntegrationTests {
                 "loadStartUpMultiple",
                 8.0,
                 Inheritance.Source.SITE,
-                com.wayledger.engine.LoadCategory.MOTOR));
+                com.wayledger.engine.LoadCategory.MOTOR),
+            new Inheritance.InheritedValue(
+                "location",
+                com.wayledger.engine.CircuitLocation.OUTDOORS,
+                Inheritance.Source.BOARD,
+                null));
 
     String checks =
         mvc.perform(get("/circuits/{id}", circuitId).with(user("ed").roles("EDITOR")))
@@ -166,7 +172,16 @@ class DefaultsIntegrationTests {
         .contains("ambient 40 °C (board default)")
         .contains("method C clipped direct (site default)")
         .contains("not grouped (site default)")
-        .contains("start-up 8 × for Motor (site default)");
+        .contains("start-up 8 × for Motor (site default)")
+        .contains("Outdoors, or equipment used outdoors (board default)");
+    assertThat(findingsOf(circuitId))
+        .as("outdoors, from the board's default, brings in the 30 mA rule for outdoor equipment")
+        .anySatisfy(
+            finding -> {
+              assertThat(finding.check())
+                  .isEqualTo(com.wayledger.engine.protection.result.CheckKind.SOCKET_RCD);
+              assertThat(finding.verdict()).isNotEqualTo(Verdict.NOT_ASSESSED);
+            });
   }
 
   @Test
@@ -202,6 +217,22 @@ class DefaultsIntegrationTests {
   }
 
   @Test
+  void theLogSaysWhichDefaultsChangedFromWhatToWhat() throws Exception {
+    mvc.perform(siteDefaults("C", "30", "1", "0", "8")).andExpect(status().is3xxRedirection());
+    mvc.perform(siteDefaults("C", "35", "1", "0", "8")).andExpect(status().is3xxRedirection());
+    String latest =
+        jdbc.sql("SELECT summary FROM change_log WHERE site_id = ? ORDER BY id DESC")
+            .param(site.getId())
+            .query(String.class)
+            .list()
+            .get(0);
+    assertThat(latest)
+        .as("the newest log line names the changed default, old and new value")
+        .contains("defaults changed: Ambient temperature (°C) 30 → 35")
+        .doesNotContain("Installation method");
+  }
+
+  @Test
   void commonPracticeFillsEmptyFieldsAndMarksThem() throws Exception {
     String page =
         mvc.perform(
@@ -231,7 +262,8 @@ class DefaultsIntegrationTests {
             "cableInstallationMethod",
             "cableAmbientCelsius",
             "cableGroupedCircuits",
-            "cableThermalInsulationMm")) {
+            "cableThermalInsulationMm",
+            "location")) {
       String fieldBlock =
           java.util.Arrays.stream(editor.split("<div class=\"field"))
               .filter(block -> block.contains("name=\"" + field + "\""))
@@ -242,10 +274,11 @@ class DefaultsIntegrationTests {
           .contains("needed for the checks");
     }
     assertThat(schedulePage())
-        .as("the schedule row lists all four at once")
-        .contains("Still needed for full checks (4 inputs)")
+        .as("the schedule row lists all five at once")
+        .contains("Still needed for full checks (5 inputs)")
         .contains("installation method,")
-        .contains("thermal insulation");
+        .contains("thermal insulation")
+        .contains("where its equipment is");
 
     mvc.perform(siteDefaults("C", "30", "1", "0", "8")).andExpect(status().is3xxRedirection());
     assertThat(editorOf(circuitId))
@@ -321,13 +354,13 @@ class DefaultsIntegrationTests {
         .param("thermalInsulationMm", insulationMm)
         .param("material", "COPPER")
         .param("insulation", "THERMOPLASTIC_70")
+        .param("location", "INDOORS")
         .param("motorStartUpMultiple", motorMultiple);
   }
 
   /**
-   * Device, cable size, length, where the equipment is and one load: what a contractor types for a
-   * new circuit. The location is a fact of the circuit that no site or board default supplies;
-   * without it the residual-current check by location is not assessed.
+   * Device, cable size, length and one load: what a contractor types for a new circuit. Where its
+   * equipment is comes from the site's default when the test sets one.
    */
   private long addMotorCircuit(String ambient) throws Exception {
     var request =
@@ -337,7 +370,6 @@ class DefaultsIntegrationTests {
             .param("wayNumber", "1")
             .param("position", "L1")
             .param("description", "Dough mixer")
-            .param("location", "INDOORS")
             .param("status", "IN_USE")
             .param("deviceKind", "MCB")
             .param("deviceCurve", "C")

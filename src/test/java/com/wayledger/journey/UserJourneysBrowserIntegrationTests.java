@@ -92,6 +92,7 @@ class UserJourneysBrowserIntegrationTests {
           wait.until(ExpectedConditions.presenceOfElementLocated(By.cssSelector("main form")));
       choose(defaults, "installationMethod", "C");
       fill(defaults, "groupedCircuits", "1");
+      choose(defaults, "location", "INDOORS"); // a kitchen's circuits: indoors, no special location
       click(browser, defaults.findElement(By.cssSelector("button[type=submit].primary")));
       wait.until(ExpectedConditions.urlToBe(url("/sites/" + site.getId())));
 
@@ -138,7 +139,6 @@ class UserJourneysBrowserIntegrationTests {
         wait.until(
             ExpectedConditions.visibilityOfElementLocated(By.id("editor-" + way + "-" + line)));
     editor.findElement(By.name("description")).sendKeys(name);
-    choose(editor, "location", "INDOORS"); // a fact of the circuit; no default supplies it
     choose(editor, "deviceKind", "MCB");
     choose(editor, "deviceCurve", "B");
     fill(editor, "deviceRatingAmps", "16");
