@@ -184,6 +184,41 @@ public class AnalysisService {
     return analyse(spec, methods(), recordedMccbSettings, inputs, records);
   }
 
+  /** Ids of the site's boards recorded as serving a dwelling unit (the NEC dwelling rules). */
+  public java.util.Set<Long> dwellingBoardIds(long siteId) {
+    java.util.Set<Long> ids = new java.util.HashSet<>();
+    dwellings.findBySite(siteId).forEach(record -> ids.add(record.getBoardId()));
+    return ids;
+  }
+
+  /**
+   * The device (and, under the NEC set, conductor) proposed for a circuit by its site's rule set,
+   * with the design current of this analysis; null when the circuit has no device.
+   */
+  public com.wayledger.engine.protection.DeviceProposal proposal(
+      SiteAnalysis results, long circuitId, CircuitDemand demand) {
+    com.wayledger.engine.CircuitSpec spec = null;
+    for (com.wayledger.engine.BoardSpec board : results.spec().boards()) {
+      for (com.wayledger.engine.CircuitSpec circuit : board.circuits()) {
+        if (circuit.id() == circuitId) {
+          spec = circuit;
+        }
+      }
+    }
+    if (spec == null || spec.device() == null) {
+      return null;
+    }
+    Double designCurrent =
+        demand != null && demand.isAssessed() ? demand.designCurrentAmps() : null;
+    return RuleSets.of(results.spec().ruleSetKey())
+        .propose(
+            results.spec(),
+            circuitId,
+            new CircuitLoading(circuitId, designCurrent),
+            ProtectionSettings.DEFAULTS,
+            dwellingBoardIds(results.spec().id()));
+  }
+
   /** Both engines on an engine input with no MCCB settings recorded. */
   public static SiteAnalysis analyse(SiteSpec spec, DiversityMethodCatalog methods) {
     return analyse(spec, methods, RecordedMccbSettings.NONE);
@@ -223,7 +258,8 @@ public class AnalysisService {
                 circuitLoadings(demand),
                 boardLoadings(demand),
                 recordedMccbSettings,
-                ProtectionSettings.DEFAULTS);
+                ProtectionSettings.DEFAULTS,
+                dwellingInputs.keySet());
     Map<Long, List<com.wayledger.engine.dwelling.Worksheet>> worksheets =
         dwellingInputs.isEmpty() && measuredDemands.isEmpty()
             ? Map.of()

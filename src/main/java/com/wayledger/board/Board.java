@@ -193,6 +193,16 @@ public class Board {
         lineCount(), !com.wayledger.engine.SiteSpec.DEFAULT_RULE_SET_KEY.equals(site.getRuleSet()));
   }
 
+  /** The circuit locations the site's rule set knows (the editor offers only these). */
+  public java.util.Set<com.wayledger.engine.CircuitLocation> getCircuitLocations() {
+    return com.wayledger.engine.rules.RuleSets.of(site.getRuleSet()).circuitLocations();
+  }
+
+  /** Whether the site's rule set records GFCI/AFCI functions (the NEC set). */
+  public boolean isFaultInterrupterRecorded() {
+    return com.wayledger.engine.rules.RuleSets.of(site.getRuleSet()).usesAwgAndFeet();
+  }
+
   public boolean isThreePhase() {
     return phases == 3;
   }

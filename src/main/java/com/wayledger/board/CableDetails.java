@@ -59,6 +59,22 @@ public class CableDetails {
     this.thermalInsulationMillimetres = thermalInsulationMillimetres;
   }
 
+  /** A copy of {@code cable} (which may be null) with other line conductors. */
+  static CableDetails withConductor(
+      CableDetails cable, Double lineCsaSquareMillimetres, ConductorMaterial material) {
+    CableDetails c = cable == null ? new CableDetails() : cable;
+    return new CableDetails(
+        lineCsaSquareMillimetres,
+        c.protectiveCsaSquareMillimetres,
+        material != null ? material : c.material,
+        c.insulation,
+        c.lengthMetres,
+        c.installationMethod,
+        c.ambientCelsius,
+        c.groupedCircuits,
+        c.thermalInsulationMillimetres);
+  }
+
   /**
    * Whether a cable is recorded at all: a cross-section or a length. A conductor material or
    * insulation alone (a form's preset) is not a cable, so a board fed from the origin with nothing

@@ -1,6 +1,7 @@
 package com.wayledger.board;
 
 import com.wayledger.engine.CircuitLocation;
+import com.wayledger.engine.FaultInterrupter;
 import com.wayledger.engine.PhasePosition;
 import com.wayledger.engine.WayStatus;
 import jakarta.persistence.AttributeOverride;
@@ -105,6 +106,11 @@ public class Circuit {
   @Column(name = "measured_zs_ohms")
   private Double measuredLoopImpedanceOhms;
 
+  /** The device's GFCI/AFCI function (NEC set); null for none (migration V18). */
+  @Enumerated(EnumType.STRING)
+  @Column(name = "device_fault_interrupter")
+  private FaultInterrupter faultInterrupter;
+
   @Version private long version;
 
   // Load lines carry their own versions: adding or editing one must not move the circuit's.
@@ -129,6 +135,7 @@ public class Circuit {
     ringFinal = Boolean.TRUE.equals(form.ringFinal());
     location = form.location();
     device = status == WayStatus.EMPTY ? null : form.deviceDetails();
+    faultInterrupter = status == WayStatus.EMPTY ? null : form.deviceFaultInterrupter();
     cable = status == WayStatus.IN_USE ? form.cableDetails() : null;
     measuredLoopImpedanceOhms = form.measuredLoopImpedanceOhms();
   }
@@ -144,8 +151,19 @@ public class Circuit {
     position = lineToLine ? PhasePosition.on(newPosition.fromLine()) : newPosition;
   }
 
-  void replaceDevice(DeviceDetails newDevice) {
+  void replaceDevice(DeviceDetails newDevice, FaultInterrupter newFunction) {
     device = newDevice;
+    faultInterrupter = newFunction;
+  }
+
+  /** Sets the line conductors' size and metal (a proposal's conductor), keeping the rest. */
+  void replaceConductor(Double lineCsaSquareMillimetres, com.wayledger.engine.ConductorMaterial m) {
+    cable = CableDetails.withConductor(cable, lineCsaSquareMillimetres, m);
+  }
+
+  /** The device's GFCI/AFCI function; null for none. */
+  public FaultInterrupter getFaultInterrupter() {
+    return faultInterrupter;
   }
 
   void addLoad(LoadItem load) {

@@ -3,6 +3,7 @@ package com.wayledger.board;
 import com.wayledger.engine.CircuitLocation;
 import com.wayledger.engine.ConductorMaterial;
 import com.wayledger.engine.DeviceKind;
+import com.wayledger.engine.FaultInterrupter;
 import com.wayledger.engine.InstallationMethod;
 import com.wayledger.engine.Insulation;
 import com.wayledger.engine.LoadCategory;
@@ -61,6 +62,7 @@ public record CircuitForm(
     @Positive @DecimalMax("63000") Double deviceInstantaneousSettingAmps,
     @DecimalMin("1") @DecimalMax("50") Double loadStartUpMultiple,
     CircuitLocation location,
+    FaultInterrupter deviceFaultInterrupter,
     @Size(max = 40) String cableLineSize,
     @Size(max = 40) String cableCpcSize,
     @Positive @DecimalMax("16405") Double cableLengthFeet) {
@@ -70,6 +72,136 @@ public record CircuitForm(
    * kcmil, "12 AWG") and {@code cableLengthFeet} carry what a person on an AWG-and-feet site typed
    * or reads; {@link CableUnitsOfForms} turns them into the stored fields and back.
    */
+  public CircuitForm(
+      Integer wayNumber,
+      PhasePosition position,
+      String description,
+      WayStatus status,
+      Boolean lockedForBalancing,
+      DeviceKind deviceKind,
+      TripCurve deviceCurve,
+      Double deviceRatingAmps,
+      Integer devicePoles,
+      Double deviceBreakingCapacityKiloAmps,
+      Double deviceResidualMilliAmps,
+      RcdType deviceRcdType,
+      Double cableLineCsa,
+      Double cableCpcCsa,
+      ConductorMaterial cableMaterial,
+      Insulation cableInsulation,
+      Double cableLengthMetres,
+      InstallationMethod cableInstallationMethod,
+      Double cableAmbientCelsius,
+      Integer cableGroupedCircuits,
+      Integer cableThermalInsulationMm,
+      Double measuredLoopImpedanceOhms,
+      String loadDescription,
+      LoadCategory loadCategory,
+      Integer loadQuantity,
+      Double loadRatingValue,
+      RatingUnit loadRatingUnit,
+      Double loadPowerFactor,
+      Long version,
+      Boolean ringFinal,
+      Double deviceOverloadSettingAmps,
+      Double deviceInstantaneousSettingAmps,
+      Double loadStartUpMultiple,
+      CircuitLocation location,
+      FaultInterrupter deviceFaultInterrupter) {
+    this(
+        wayNumber,
+        position,
+        description,
+        status,
+        lockedForBalancing,
+        deviceKind,
+        deviceCurve,
+        deviceRatingAmps,
+        devicePoles,
+        deviceBreakingCapacityKiloAmps,
+        deviceResidualMilliAmps,
+        deviceRcdType,
+        cableLineCsa,
+        cableCpcCsa,
+        cableMaterial,
+        cableInsulation,
+        cableLengthMetres,
+        cableInstallationMethod,
+        cableAmbientCelsius,
+        cableGroupedCircuits,
+        cableThermalInsulationMm,
+        measuredLoopImpedanceOhms,
+        loadDescription,
+        loadCategory,
+        loadQuantity,
+        loadRatingValue,
+        loadRatingUnit,
+        loadPowerFactor,
+        version,
+        ringFinal,
+        deviceOverloadSettingAmps,
+        deviceInstantaneousSettingAmps,
+        loadStartUpMultiple,
+        location,
+        deviceFaultInterrupter,
+        null,
+        null,
+        null);
+  }
+
+  /**
+   * The same row with its cable's sizes and length replaced: stored values (mm², m) and the values
+   * in site units (AWG label, ft), any of them null.
+   */
+  public CircuitForm withCableUnits(
+      Double lineCsa,
+      Double cpcCsa,
+      Double lengthMetres,
+      String lineSize,
+      String cpcSize,
+      Double lengthFeet) {
+    return new CircuitForm(
+        wayNumber,
+        position,
+        description,
+        status,
+        lockedForBalancing,
+        deviceKind,
+        deviceCurve,
+        deviceRatingAmps,
+        devicePoles,
+        deviceBreakingCapacityKiloAmps,
+        deviceResidualMilliAmps,
+        deviceRcdType,
+        lineCsa,
+        cpcCsa,
+        cableMaterial,
+        cableInsulation,
+        lengthMetres,
+        cableInstallationMethod,
+        cableAmbientCelsius,
+        cableGroupedCircuits,
+        cableThermalInsulationMm,
+        measuredLoopImpedanceOhms,
+        loadDescription,
+        loadCategory,
+        loadQuantity,
+        loadRatingValue,
+        loadRatingUnit,
+        loadPowerFactor,
+        version,
+        ringFinal,
+        deviceOverloadSettingAmps,
+        deviceInstantaneousSettingAmps,
+        loadStartUpMultiple,
+        location,
+        deviceFaultInterrupter,
+        lineSize,
+        cpcSize,
+        lengthFeet);
+  }
+
+  /** A row whose device has no GFCI/AFCI function: the argument list from before NEC devices. */
   public CircuitForm(
       Integer wayNumber,
       PhasePosition position,
@@ -140,60 +272,7 @@ public record CircuitForm(
         deviceInstantaneousSettingAmps,
         loadStartUpMultiple,
         location,
-        null,
-        null,
         null);
-  }
-
-  /**
-   * The same row with its cable's sizes and length replaced: stored values (mm², m) and the values
-   * in site units (AWG label, ft), any of them null.
-   */
-  public CircuitForm withCableUnits(
-      Double lineCsa,
-      Double cpcCsa,
-      Double lengthMetres,
-      String lineSize,
-      String cpcSize,
-      Double lengthFeet) {
-    return new CircuitForm(
-        wayNumber,
-        position,
-        description,
-        status,
-        lockedForBalancing,
-        deviceKind,
-        deviceCurve,
-        deviceRatingAmps,
-        devicePoles,
-        deviceBreakingCapacityKiloAmps,
-        deviceResidualMilliAmps,
-        deviceRcdType,
-        lineCsa,
-        cpcCsa,
-        cableMaterial,
-        cableInsulation,
-        lengthMetres,
-        cableInstallationMethod,
-        cableAmbientCelsius,
-        cableGroupedCircuits,
-        cableThermalInsulationMm,
-        measuredLoopImpedanceOhms,
-        loadDescription,
-        loadCategory,
-        loadQuantity,
-        loadRatingValue,
-        loadRatingUnit,
-        loadPowerFactor,
-        version,
-        ringFinal,
-        deviceOverloadSettingAmps,
-        deviceInstantaneousSettingAmps,
-        loadStartUpMultiple,
-        location,
-        lineSize,
-        cpcSize,
-        lengthFeet);
   }
 
   /** A row whose location is not recorded: the argument list from before locations. */
@@ -304,7 +383,8 @@ public record CircuitForm(
         deviceOverloadSettingAmps,
         deviceInstantaneousSettingAmps,
         loadStartUpMultiple,
-        where);
+        where,
+        deviceFaultInterrupter);
   }
 
   /** A row without a start-up multiple for its first load: the argument list from before. */
@@ -520,7 +600,8 @@ public record CircuitForm(
           null,
           null,
           null,
-          null);
+          null,
+          deviceFaultInterrupter);
     }
     return copy(
         newDescription,
@@ -533,7 +614,8 @@ public record CircuitForm(
         null,
         null,
         null,
-        null);
+        null,
+        replacement.faultInterrupter());
   }
 
   private CircuitForm copy(
@@ -547,7 +629,8 @@ public record CircuitForm(
       Integer firstLoadQuantity,
       Double firstLoadRatingValue,
       RatingUnit firstLoadRatingUnit,
-      Double firstLoadPowerFactor) {
+      Double firstLoadPowerFactor,
+      FaultInterrupter function) {
     boolean hasDevice = device != null;
     return new CircuitForm(
         wayNumber,
@@ -583,7 +666,8 @@ public record CircuitForm(
         overloadSettingAmps,
         instantaneousSettingAmps,
         null,
-        location);
+        location,
+        function);
   }
 
   /** The one place the withers copy the whole row, with the fields they may change. */
@@ -626,7 +710,8 @@ public record CircuitForm(
         overloadSettingAmps,
         instantaneousSettingAmps,
         loadStartUpMultiple,
-        location);
+        location,
+        deviceFaultInterrupter);
   }
 
   /**
@@ -705,7 +790,8 @@ public record CircuitForm(
         hasDevice ? device.getOverloadSettingAmps() : null,
         hasDevice ? device.getInstantaneousSettingAmps() : null,
         null,
-        circuit.getLocation());
+        circuit.getLocation(),
+        circuit.getFaultInterrupter());
   }
 
   DeviceDetails deviceDetails() {

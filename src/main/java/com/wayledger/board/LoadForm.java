@@ -23,7 +23,32 @@ public record LoadForm(
     @NotNull @DecimalMin(value = "0", inclusive = false) @DecimalMax("1") Double powerFactor,
     @DecimalMin("1") @DecimalMax("50") Double startUpSurgeMultiple,
     @Positive @DecimalMax("60000") Double startUpSurgeMillis,
-    boolean continuous) {
+    boolean continuous,
+    @Positive @DecimalMax("1000") Double motorHorsepower) {
+
+  /** A load with no motor horsepower: the argument list from before motor ratings. */
+  public LoadForm(
+      String description,
+      LoadCategory category,
+      Integer quantity,
+      Double ratingValue,
+      RatingUnit ratingUnit,
+      Double powerFactor,
+      Double startUpSurgeMultiple,
+      Double startUpSurgeMillis,
+      boolean continuous) {
+    this(
+        description,
+        category,
+        quantity,
+        ratingValue,
+        ratingUnit,
+        powerFactor,
+        startUpSurgeMultiple,
+        startUpSurgeMillis,
+        continuous,
+        null);
+  }
 
   public static LoadForm blank() {
     return new LoadForm(
@@ -40,7 +65,8 @@ public record LoadForm(
         load.getPowerFactor(),
         load.getStartUpSurgeMultiple(),
         load.getStartUpSurgeMillis(),
-        load.isContinuous());
+        load.isContinuous(),
+        load.getMotorHorsepower());
   }
 
   /** The rating as written on a schedule: "2 × 100 W", "16 A"; empty when none. */

@@ -50,6 +50,10 @@ public class LoadItem {
 
   private boolean continuous;
 
+  /** Rated horsepower of one motor (NEC Tables 430.248/430.250); null when not recorded. */
+  @Column(name = "motor_horsepower")
+  private Double motorHorsepower;
+
   /** This line's own version: edits of other lines or of the circuit do not move it. */
   @Version private long version;
 
@@ -74,6 +78,7 @@ public class LoadItem {
     startUpSurgeMultiple = form.startUpSurgeMultiple();
     startUpSurgeMillis = form.startUpSurgeMillis();
     continuous = Boolean.TRUE.equals(form.continuous());
+    motorHorsepower = form.motorHorsepower();
   }
 
   /** "2 × 3 kW" style summary for the schedule. */
@@ -133,6 +138,10 @@ public class LoadItem {
 
   public boolean isContinuous() {
     return continuous;
+  }
+
+  public Double getMotorHorsepower() {
+    return motorHorsepower;
   }
 
   public long getVersion() {

@@ -214,7 +214,9 @@ public final class ScheduleMapper {
         circuit.getDescription(),
         circuit.getStatus(),
         circuit.isLockedForBalancing(),
-        circuit.getDevice() == null ? null : circuit.getDevice().toSpec(poles),
+        circuit.getDevice() == null || circuit.getDevice().toSpec(poles) == null
+            ? null
+            : circuit.getDevice().toSpec(poles).withFaultInterrupter(circuit.getFaultInterrupter()),
         withDefaults
             ? Inheritance.effectiveCable(circuit.getCable(), board)
             : circuit.getCable() == null ? null : circuit.getCable().toSpec(),
@@ -235,6 +237,7 @@ public final class ScheduleMapper {
         load.getPowerFactor(),
         startUpMultiple,
         load.getStartUpSurgeMillis(),
-        load.isContinuous());
+        load.isContinuous(),
+        load.getMotorHorsepower());
   }
 }

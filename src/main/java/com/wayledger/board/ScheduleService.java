@@ -154,6 +154,19 @@ public class ScheduleService {
   @Transactional
   public Circuit replaceDevice(
       long circuitId, long expectedVersion, com.wayledger.engine.DeviceSpec device) {
+    return replaceDevice(circuitId, expectedVersion, device, null);
+  }
+
+  /**
+   * As {@link #replaceDevice(long, long, com.wayledger.engine.DeviceSpec)}, also fitting the
+   * proposal's conductor (its size and metal; the rest of the cable as recorded) when it has one.
+   */
+  @Transactional
+  public Circuit replaceDevice(
+      long circuitId,
+      long expectedVersion,
+      com.wayledger.engine.DeviceSpec device,
+      com.wayledger.engine.CableSpec conductor) {
     Circuit circuit = lockedCircuit(circuitId);
     if (circuit.getVersion() != expectedVersion) {
       throw new StaleEditException("Circuit " + circuit.getDescription(), savedAsShown(circuit));
@@ -162,7 +175,10 @@ public class ScheduleService {
       throw new RuleViolation("deviceKind", "circuit.device.emptyPosition");
     }
     com.wayledger.engine.CircuitSpec before = snapshot(circuit);
-    circuit.replaceDevice(DeviceDetails.fromSpec(device));
+    circuit.replaceDevice(DeviceDetails.fromSpec(device), device.faultInterrupter());
+    if (conductor != null) {
+      circuit.replaceConductor(conductor.lineCsaSquareMillimetres(), conductor.material());
+    }
     logged(
         circuit,
         ChangeKind.CIRCUIT_EDITED,
@@ -605,6 +621,21 @@ public class ScheduleService {
     }
     if (form.deviceKind() == DeviceKind.RCD && form.deviceResidualMilliAmps() == null) {
       throw new RuleViolation("deviceResidualMilliAmps", "circuit.device.residualRequired");
+    }
+    com.wayledger.engine.rules.RuleSet rules =
+        com.wayledger.engine.rules.RuleSets.of(board.getSite().getRuleSet());
+    if (form.location() != null && !rules.circuitLocations().contains(form.location())) {
+      throw new RuleViolation("location", "circuit.location.otherRuleSet", rules.title());
+    }
+    if (form.deviceFaultInterrupter() != null && form.status() != WayStatus.EMPTY) {
+      if (!rules.usesAwgAndFeet()) {
+        throw new RuleViolation(
+            "deviceFaultInterrupter", "circuit.device.faultInterrupterNecOnly", rules.title());
+      }
+      if (form.deviceKind() == DeviceKind.FUSE || form.deviceKind() == DeviceKind.RCD) {
+        throw new RuleViolation(
+            "deviceFaultInterrupter", "circuit.device.faultInterrupterBreakerOnly");
+      }
     }
     MccbSettingRules.check(
         form.deviceKind(),

@@ -9,9 +9,7 @@ import com.wayledger.engine.BoardSpec;
 import com.wayledger.engine.CircuitSpec;
 import com.wayledger.engine.demand.CircuitDemand;
 import com.wayledger.engine.protection.CircuitFindings;
-import com.wayledger.engine.protection.CircuitLoading;
 import com.wayledger.engine.protection.DeviceProposal;
-import com.wayledger.engine.protection.DeviceProposer;
 import com.wayledger.engine.protection.ProtectionSettings;
 import com.wayledger.engine.protection.device.DeviceCharacteristic;
 import com.wayledger.engine.protection.device.TimeCurrentBand;
@@ -113,7 +111,7 @@ public class CircuitCheckController {
       return "redirect:/circuits/" + id;
     }
     try {
-      schedule.replaceDevice(id, version, proposal.device());
+      schedule.replaceDevice(id, version, proposal.device(), proposal.cable());
       redirect.addFlashAttribute("applied", true);
     } catch (RuleViolation violation) {
       redirect.addFlashAttribute("problem", violation.messageCode());
@@ -121,18 +119,8 @@ public class CircuitCheckController {
     return "redirect:/circuits/" + id;
   }
 
-  static DeviceProposal proposal(SiteAnalysis results, long circuitId, CircuitDemand demand) {
-    CircuitSpec spec = specOf(results, circuitId);
-    if (spec == null || spec.device() == null) {
-      return null;
-    }
-    Double designCurrent =
-        demand != null && demand.isAssessed() ? demand.designCurrentAmps() : null;
-    return DeviceProposer.propose(
-        results.spec(),
-        circuitId,
-        new CircuitLoading(circuitId, designCurrent),
-        ProtectionSettings.DEFAULTS);
+  private DeviceProposal proposal(SiteAnalysis results, long circuitId, CircuitDemand demand) {
+    return analysis.proposal(results, circuitId, demand);
   }
 
   private static CircuitSpec specOf(SiteAnalysis results, long circuitId) {

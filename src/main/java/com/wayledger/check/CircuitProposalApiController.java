@@ -66,7 +66,26 @@ public class CircuitProposalApiController {
       DeviceSpec device,
       List<CheckPassed> checks,
       List<String> reasons,
-      String caution) {}
+      String caution,
+      ProposedConductor conductor) {
+
+    public ProposalView(
+        long circuitId,
+        long version,
+        boolean found,
+        DeviceSpec device,
+        List<CheckPassed> checks,
+        List<String> reasons,
+        String caution) {
+      this(circuitId, version, found, device, checks, reasons, caution, null);
+    }
+  }
+
+  /**
+   * The conductor proposed with the device (NEC set: an AWG or kcmil size); absent when the
+   * recorded cable is kept.
+   */
+  public record ProposedConductor(String size, double squareMillimetres, String material) {}
 
   @GetMapping("/circuits/{id}/proposal")
   @Operation(summary = "The device proposed for a circuit, the checks it passes, or why none does")
@@ -86,7 +105,7 @@ public class CircuitProposalApiController {
     if (proposal == null || !proposal.found()) {
       return ResponseEntity.status(HttpStatus.UNPROCESSABLE_CONTENT).body(view(circuit, proposal));
     }
-    schedule.replaceDevice(id, version, proposal.device());
+    schedule.replaceDevice(id, version, proposal.device(), proposal.cable());
     Circuit fitted = schedule.circuit(id);
     return ResponseEntity.ok(view(fitted, proposalOf(fitted)));
   }
@@ -94,7 +113,7 @@ public class CircuitProposalApiController {
   private DeviceProposal proposalOf(Circuit circuit) {
     long boardId = circuit.getBoard().getId();
     SiteAnalysis results = analysis.ofBoard(boardId);
-    return CircuitCheckController.proposal(
+    return analysis.proposal(
         results, circuit.getId(), results.circuitDemands(boardId).get(circuit.getId()));
   }
 
@@ -116,7 +135,21 @@ public class CircuitProposalApiController {
         proposal.device(),
         proposal.checks().stream().map(CircuitProposalApiController::passed).toList(),
         proposal.reasons(),
-        AnalysisApiController.CAUTION);
+        AnalysisApiController.CAUTION,
+        conductorOf(proposal));
+  }
+
+  private static ProposedConductor conductorOf(DeviceProposal proposal) {
+    if (proposal.cable() == null || proposal.cable().lineCsaSquareMillimetres() == null) {
+      return null;
+    }
+    double mm2 = proposal.cable().lineCsaSquareMillimetres();
+    return new ProposedConductor(
+        com.wayledger.engine.nec.ConductorSize.ofSquareMillimetres(mm2)
+            .map(com.wayledger.engine.nec.ConductorSize::label)
+            .orElse(null),
+        mm2,
+        proposal.cable().material() == null ? null : proposal.cable().material().name());
   }
 
   private static CheckPassed passed(Finding f) {

@@ -12,6 +12,7 @@ package com.wayledger.engine;
  *     when unknown
  * @param residualCurrentMilliAmps IΔn for RCDs and RCBOs; null otherwise
  * @param rcdType residual-current type for RCDs and RCBOs; null otherwise
+ * @param faultInterrupter GFCI, AFCI or dual-function breaker (NEC set only); null for none
  */
 public record DeviceSpec(
     DeviceKind kind,
@@ -20,4 +21,39 @@ public record DeviceSpec(
     int poles,
     Double breakingCapacityKiloAmps,
     Double residualCurrentMilliAmps,
-    RcdType rcdType) {}
+    RcdType rcdType,
+    FaultInterrupter faultInterrupter) {
+
+  /** A device with no GFCI or AFCI function: the argument list from before NEC devices. */
+  public DeviceSpec(
+      DeviceKind kind,
+      TripCurve curve,
+      Double ratedCurrentAmps,
+      int poles,
+      Double breakingCapacityKiloAmps,
+      Double residualCurrentMilliAmps,
+      RcdType rcdType) {
+    this(
+        kind,
+        curve,
+        ratedCurrentAmps,
+        poles,
+        breakingCapacityKiloAmps,
+        residualCurrentMilliAmps,
+        rcdType,
+        null);
+  }
+
+  /** The same device with another GFCI/AFCI function (null: none). */
+  public DeviceSpec withFaultInterrupter(FaultInterrupter function) {
+    return new DeviceSpec(
+        kind,
+        curve,
+        ratedCurrentAmps,
+        poles,
+        breakingCapacityKiloAmps,
+        residualCurrentMilliAmps,
+        rcdType,
+        function);
+  }
+}

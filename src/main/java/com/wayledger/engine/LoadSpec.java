@@ -14,6 +14,8 @@ package com.wayledger.engine;
  *     none
  * @param startUpSurgeMillis duration of the start-up surge, ms; null when none
  * @param continuous whether the load runs for three hours or more at a time
+ * @param motorHorsepower rated horsepower of one motor (NEC Tables 430.248/430.250 are read by it);
+ *     null when not recorded or not a motor
  */
 public record LoadSpec(
     String description,
@@ -24,4 +26,30 @@ public record LoadSpec(
     double powerFactor,
     Double startUpSurgeMultiple,
     Double startUpSurgeMillis,
-    boolean continuous) {}
+    boolean continuous,
+    Double motorHorsepower) {
+
+  /** A load with no motor horsepower recorded: the argument list from before motor ratings. */
+  public LoadSpec(
+      String description,
+      LoadCategory category,
+      int quantity,
+      double ratingValue,
+      RatingUnit ratingUnit,
+      double powerFactor,
+      Double startUpSurgeMultiple,
+      Double startUpSurgeMillis,
+      boolean continuous) {
+    this(
+        description,
+        category,
+        quantity,
+        ratingValue,
+        ratingUnit,
+        powerFactor,
+        startUpSurgeMultiple,
+        startUpSurgeMillis,
+        continuous,
+        null);
+  }
+}

@@ -88,6 +88,9 @@ public class CapacityController {
       HttpServletResponse response) {
     Site site = sites.get(siteId);
     model.addAttribute("site", site);
+    // only the locations the site's rule set knows (the other set's mean nothing to its rules)
+    model.addAttribute(
+        "locations", com.wayledger.engine.rules.RuleSets.of(site.getRuleSet()).circuitLocations());
     if (ask == null) {
       model.asMap().remove(BindingResult.MODEL_KEY_PREFIX + "form");
       model.addAttribute("form", CapacityForm.blank());

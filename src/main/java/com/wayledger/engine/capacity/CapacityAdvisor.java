@@ -422,13 +422,29 @@ public final class CapacityAdvisor {
       NewLoad load,
       ProtectionSettings settings) {
     int poles = candidate.position() == PhasePosition.THREE_POLE ? 3 : 1;
+    com.wayledger.engine.rules.RuleSet rules =
+        com.wayledger.engine.rules.RuleSets.of(trial.ruleSetKey());
     DeviceProposal proposal =
-        DeviceProposer.propose(trial, wayId, new CircuitLoading(wayId, ib), settings);
+        rules.propose(trial, wayId, new CircuitLoading(wayId, ib), settings, java.util.Set.of());
     if (proposal.found()) {
       return withDevice(
           candidate,
           proposal.device(),
           "device proposed by the protection checks for the recorded cable");
+    }
+    if (rules.usesAwgAndFeet()) {
+      // the NEC set proposes no IEC device: the smallest 240.6(A) standard breaker not below Ib
+      Integer rating = com.wayledger.engine.nec.OvercurrentLimits.nextStandardRatingAtOrAbove(ib);
+      if (rating != null) {
+        return withDevice(
+            candidate,
+            new DeviceSpec(DeviceKind.MCCB, null, (double) rating, poles, null, null, null),
+            "breaker "
+                + rating
+                + " A: the smallest NEC 240.6(A) standard rating not below Ib "
+                + fixed(ib)
+                + " A; its conductor is to be sized by the circuit's checks");
+      }
     }
     double surgeAmps = load.startUpSurgeMultiple() == null ? 0.0 : load.startUpSurgeMultiple() * ib;
     for (double rating : McbStandard.STANDARD_RATINGS_AMPS) {

@@ -61,16 +61,90 @@ public final class NecCircuitChecks {
     if (device == null) {
       return findings;
     }
+    MotorCircuit.Duty motors =
+        MotorCircuit.motorsOnly(system, nominalVoltageVolts, circuit)
+            ? MotorCircuit.duty(system, nominalVoltageVolts, circuit)
+            : null;
     findings.add(poles(circuit.position(), device));
     findings.add(standardRating(device));
     Conductor conductor = Conductor.of(circuit.cable());
-    findings.add(smallConductor(conductor, device));
     Ampacity ampacity = Ampacity.of(conductor, circuit.cable(), circuit.position(), device);
-    findings.add(ampacityFinding(ampacity, device, hasReceptacleLoads(circuit)));
-    findings.add(terminationFinding(ampacity, device, hasReceptacleLoads(circuit)));
+    if (motors != null) {
+      // 240.4(G): motor circuit conductors are protected under Article 430, not 240.4
+      findings.add(motorCircuitProtection(CheckKind.SMALL_CONDUCTOR, REF_SMALL));
+      findings.add(motorCircuitProtection(CheckKind.CONDUCTOR_AMPACITY, REF_AMPACITY));
+    } else {
+      findings.add(smallConductor(conductor, device));
+      findings.add(ampacityFinding(ampacity, device, hasReceptacleLoads(circuit)));
+    }
+    findings.add(terminationFinding(ampacity, device, hasReceptacleLoads(circuit), motors));
     findings.add(
         continuous(system, nominalVoltageVolts, circuit, designCurrentAmps, ampacity, device));
     return findings;
+  }
+
+  /**
+   * Every NEC check of one circuit: those of {@link #assess(SupplySystem, double, CircuitSpec,
+   * Double)}, then the motor checks (where the circuit feeds a motor), voltage drop, interrupting
+   * rating and the dwelling GFCI and AFCI rules.
+   */
+  public static List<Finding> assess(
+      CircuitContext context, CircuitSpec circuit, Double designCurrentAmps) {
+    List<Finding> findings =
+        new ArrayList<>(assess(context.system(), context.u0(), circuit, designCurrentAmps));
+    DeviceSpec device = circuit.device();
+    if (device == null) {
+      return findings;
+    }
+    if (MotorCircuit.hasMotor(circuit)) {
+      MotorCircuit.Duty duty = MotorCircuit.duty(context.system(), context.u0(), circuit);
+      Ampacity ampacity =
+          Ampacity.of(Conductor.of(circuit.cable()), circuit.cable(), circuit.position(), device);
+      findings.add(MotorCircuit.conductor(duty, ampacity));
+      findings.add(MotorCircuit.breaker(duty, device));
+    }
+    VoltageDrop.Run run = branchRun(context, circuit, designCurrentAmps);
+    findings.add(VoltageDrop.branch(run, designCurrentAmps));
+    findings.add(
+        VoltageDrop.total(
+            designCurrentAmps == null ? VoltageDrop.Run.missing("design current Ib") : run,
+            context.feederDropPercent(),
+            context.feederMissing(),
+            context.feederNote()));
+    findings.add(
+        InterruptingRating.assess(device, context.availableFaultKiloAmps(), context.faultBasis()));
+    findings.add(DwellingProtection.groundFault(circuit, context.u0(), context.dwelling()));
+    findings.add(DwellingProtection.arcFault(circuit, context.u0(), context.dwelling()));
+    return findings;
+  }
+
+  static VoltageDrop.Run branchRun(
+      CircuitContext context, CircuitSpec circuit, Double designCurrentAmps) {
+    if (designCurrentAmps == null) {
+      return VoltageDrop.Run.missing("design current Ib");
+    }
+    if (circuit.position() == null) {
+      return VoltageDrop.Run.missing("position");
+    }
+    if (circuit.cable() == null) {
+      return VoltageDrop.Run.missing("conductor size");
+    }
+    return VoltageDrop.of(
+        circuit.cable(),
+        designCurrentAmps,
+        VoltageDrop.powerFactor(
+            context.system(), context.u0(), circuit.position(), circuit.loads()),
+        circuit.position() == PhasePosition.THREE_POLE,
+        MotorCircuit.circuitVolts(context.system(), context.u0(), circuit.position()));
+  }
+
+  private static Finding motorCircuitProtection(CheckKind check, String reference) {
+    return Finding.pass(
+        check,
+        "motor branch circuit: its conductors are protected under Article 430 (240.4(G)); see the"
+            + " motor conductor and breaker findings",
+        List.of(),
+        reference + ", 240.4(G)");
   }
 
   /** The ampacity the checks used, A, or null when it could not be worked out. */
@@ -228,8 +302,41 @@ public final class NecCircuitChecks {
   // --- 110.14(C)
 
   static Finding terminationFinding(Ampacity a, DeviceSpec device, boolean receptacles) {
+    return terminationFinding(a, device, receptacles, null);
+  }
+
+  static Finding terminationFinding(
+      Ampacity a, DeviceSpec device, boolean receptacles, MotorCircuit.Duty motors) {
     if (a.missing != null) {
       return Finding.notAssessed(CheckKind.TERMINATION_TEMPERATURE, a.missing, REF_TERMINATION);
+    }
+    if (motors != null) {
+      // a motor circuit's conductor is held to 125 % of the full-load current, not to In
+      double needed = motors.requiredConductorAmps();
+      List<Quantity> values =
+          List.of(
+              new Quantity("required", needed, "A"),
+              new Quantity(
+                  "Table 310.16 (" + a.terminationColumn + " °C)", a.terminationAmps, "A"));
+      String text =
+          fmt(needed)
+              + " A (430.22) against the "
+              + a.terminationColumn
+              + " °C ampacity "
+              + a.terminationAmps
+              + " A (terminations assumed rated "
+              + a.terminationColumn
+              + " °C, equipment not marked otherwise)";
+      if (needed <= a.terminationAmps + 1e-9) {
+        return Finding.pass(CheckKind.TERMINATION_TEMPERATURE, text, values, REF_TERMINATION);
+      }
+      return new Finding(
+          CheckKind.TERMINATION_TEMPERATURE,
+          Verdict.WARNING,
+          text + ": too small",
+          values,
+          REF_TERMINATION,
+          "use a larger conductor, or record terminations listed for a higher temperature");
     }
     double in = device.ratedCurrentAmps();
     List<Quantity> values =
@@ -365,13 +472,13 @@ public final class NecCircuitChecks {
     };
   }
 
-  static String fmt(double value) {
+  public static String fmt(double value) {
     return new Quantity("", value, "").toString().substring(3);
   }
 
   /** A circuit's conductor as an NEC size, or what is missing. */
-  record Conductor(CableSpec cable, ConductorSize size, String missing) {
-    static Conductor of(CableSpec cable) {
+  public record Conductor(CableSpec cable, ConductorSize size, String missing) {
+    public static Conductor of(CableSpec cable) {
       if (cable == null || cable.lineCsaSquareMillimetres() == null) {
         return new Conductor(cable, null, "conductor size");
       }

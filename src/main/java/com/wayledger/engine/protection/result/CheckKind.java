@@ -22,7 +22,14 @@ public enum CheckKind {
   SMALL_CONDUCTOR("Small conductor within its overcurrent limit"),
   CONDUCTOR_AMPACITY("Conductor protected at its ampacity"),
   TERMINATION_TEMPERATURE("Conductor ampacity within the termination temperature"),
-  CONTINUOUS_LOAD("Continuous load at 125 % within the breaker and conductor");
+  CONTINUOUS_LOAD("Continuous load at 125 % within the breaker and conductor"),
+  MOTOR_CONDUCTOR("Motor circuit conductor at 125 % of the table full-load current"),
+  MOTOR_BREAKER("Motor circuit breaker within its maximum rating"),
+  BRANCH_VOLTAGE_DROP("Branch-circuit voltage drop within the recommendation"),
+  TOTAL_VOLTAGE_DROP("Feeder and branch voltage drop within the recommendation"),
+  INTERRUPTING_RATING("Interrupting rating at least the available fault current"),
+  GROUND_FAULT_PROTECTION("Ground-fault (GFCI) protection where the location needs it"),
+  ARC_FAULT_PROTECTION("Arc-fault (AFCI) protection where the location needs it");
 
   private final String title;
 
