@@ -62,7 +62,8 @@ class App:
 
     def start(self, log_dir, heap, jvm=()):
         log = open(os.path.join(log_dir, f"{self.name}.log"), "w")
-        cmd = ["java", f"-Xmx{heap}", *jvm, "-jar", self.jar, f"--server.port={self.port}",
+        launch = getattr(self, "launch", None) or ["-jar", self.jar]
+        cmd = ["java", f"-Xmx{heap}", *jvm, *launch, f"--server.port={self.port}",
                "--server.address=127.0.0.1"] + self.args
         started = time.monotonic()
         self.proc = subprocess.Popen(cmd, stdout=log, stderr=subprocess.STDOUT, cwd=log_dir)
@@ -143,6 +144,20 @@ class NoRedirect(urllib.request.HTTPRedirectHandler):
         return None
 
 
+def prepare_cds(jar, name, args):
+    """Class-data sharing for one app: extracts its jar (Spring Boot's tools jar mode; classes cannot be
+    archived from inside nested jars), then records the classes a start loads in a training run that
+    stops right after the context refresh, on a throwaway in-memory database. Returns the launch arguments."""
+    dest = os.path.join(OUT, f"cds-{name}")
+    shutil.rmtree(dest, ignore_errors=True)
+    sh(["java", "-Djarmode=tools", "-jar", jar, "extract", "--destination", dest])
+    app_jar = os.path.join(dest, os.path.basename(jar))
+    archive = os.path.join(dest, f"{name}.jsa")
+    sh(["java", f"-XX:ArchiveClassesAtExit={archive}", "-Dspring.context.exit=onRefresh", "-jar", app_jar,
+        "--server.port=0", "--server.address=127.0.0.1"] + args, stdout=subprocess.DEVNULL)
+    return [f"-XX:SharedArchiveFile={archive}", "-jar", app_jar]
+
+
 def cpu_seconds(pid):
     """User + system CPU time the process has used so far (Linux /proc), in seconds."""
     with open(f"/proc/{pid}/stat") as f:
@@ -195,6 +210,9 @@ def main():
     p.add_argument("--online", action="store_true", help="let Maven download (default offline)")
     p.add_argument("--jfr", action="store_true",
                    help="record Wayledger with Java Flight Recorder and summarise where its CPU samples fall")
+    p.add_argument("--cds", action="store_true",
+                   help="start Wayledger from its extracted jar with a class-data sharing archive (training run"
+                        " first); the bare app still starts as a plain jar")
     p.add_argument("--board", help="reference of the demo board to measure (default: the one with most circuits)")
     args = p.parse_args()
     for tool in ("wrk", "java"):
@@ -216,13 +234,20 @@ def main():
     wl.ready_after_sign_in = "/sites"
     bare = App("bare", bare_jar, args.port + 1, [], "/login")
     bare.ready_after_sign_in = "/table"
+    if args.cds:
+        wl.launch = prepare_cds(wl_jar, "wayledger", [
+            "--spring.profiles.active=demo",
+            "--spring.datasource.url=jdbc:h2:mem:cds;MODE=PostgreSQL;DATABASE_TO_LOWER=TRUE;DEFAULT_NULL_ORDERING=HIGH"])
     rows = []
     try:
         # Start-up: one after the other so that they do not compete; time to the first page, then idle RSS.
         start = {}
         for app in (bare, wl):
             load_before = load()
-            jvm = ([f"-XX:StartFlightRecording=filename={jfr_file},settings=profile,dumponexit=true"]
+            # stacks of 256 frames: a template's render stack is deeper than JFR's default 64, and a cut stack
+            # loses the frames that say which request (and bucket) it belongs to
+            jvm = (["-XX:FlightRecorderOptions=stackdepth=256",
+                    f"-XX:StartFlightRecording=filename={jfr_file},settings=profile,dumponexit=true"]
                    if args.jfr and app is wl else [])
             secs = app.start(work, args.heap, jvm)
             time.sleep(10)
@@ -311,7 +336,7 @@ JFR_BUCKETS = [
 
 def summarise_jfr(path):
     """Counts request-thread CPU samples per bucket (first bucket found anywhere on the stack)."""
-    out = subprocess.run(["jfr", "print", "--events", "jdk.ExecutionSample", "--stack-depth", "128", path],
+    out = subprocess.run(["jfr", "print", "--events", "jdk.ExecutionSample", "--stack-depth", "256", path],
                          capture_output=True, text=True).stdout
     counts, total = {}, 0
     for event in out.split("jdk.ExecutionSample")[1:]:
@@ -371,7 +396,7 @@ def median(xs, key):
 
 def write_report(args, start, board, results, export, sizes):
     lines = [f"# Benchmark run {time.strftime('%Y-%m-%d %H:%M UTC', time.gmtime())}", "",
-             f"`python3 src/benchmark/run.py --rounds {args.rounds} --seconds {args.seconds}` — wrk -t{args.threads} "
+             f"`python3 src/benchmark/run.py --rounds {args.rounds} --seconds {args.seconds}{' --cds' if args.cds else ''}` — wrk -t{args.threads} "
              f"-c{args.connections}, {args.rounds} interleaved rounds of {args.seconds} s, heap {args.heap}; "
              f"board {board[0]} ({board[1]} circuits). Medians; load = 1-minute load average during the runs.", "",
              "Throughput ratio = Wayledger req/s ÷ bare req/s (higher is better, goal ≥ the issue's figure); CPU ratio ="
@@ -388,7 +413,9 @@ def write_report(args, start, board, results, export, sizes):
                      f"{median(mine, 'cpu_ms'):.2f} | {median(theirs, 'cpu_ms'):.2f} | {cpu_ratio:.2f} | "
                      f"{min(loads):.1f}–{max(loads):.1f} |")
     w, b = start["wayledger"], start["bare"]
-    lines += ["", "| start-up | Wayledger | bare | ratio |", "|---|---|---|---|",
+    lines += ["", *(["Wayledger started from its extracted jar with a class-data sharing archive (`--cds`, training run"
+                     " before the timing); the bare app as a plain jar.", ""] if args.cds else []),
+              "| start-up | Wayledger | bare | ratio |", "|---|---|---|---|",
               f"| time to first page (s) | {w[0]:.1f} (load {w[2]:.1f}) | {b[0]:.1f} (load {b[2]:.1f}) | {w[0] / b[0]:.2f} |",
               f"| idle RSS 10 s later (MB) | {w[1]:.0f} | {b[1]:.0f} | {w[1] / b[1]:.2f} |", "",
               f"Site export (XLSX, whole demo site), 5 single requests: median {statistics.median(export):.2f} s "

@@ -7,6 +7,7 @@ import com.wayledger.board.ScheduleMapper;
 import com.wayledger.board.SiteAnalysis;
 import com.wayledger.engine.BoardSpec;
 import com.wayledger.engine.CircuitSpec;
+import com.wayledger.engine.PanelSpaces;
 import com.wayledger.engine.Phase;
 import com.wayledger.engine.PhasePosition;
 import com.wayledger.engine.WayStatus;
@@ -57,7 +58,7 @@ public class BalanceService {
             .findFirst()
             .orElseThrow(() -> new NotFoundException("Board", boardId));
     BoardDemand before = results.boardDemand(boardId);
-    BalanceProblem problem = problemOf(board, before, basis);
+    BalanceProblem problem = problemOf(board, before, basis, results.spec().panelSpacesOf(board));
     PhaseBalancer balancer = new PhaseBalancer();
     BalanceResult optimal = balancer.optimise(problem);
     FewestMovesResult fewest = balancer.fewestMoves(problem);
@@ -124,6 +125,17 @@ public class BalanceService {
 
   /** The balancing problem of a board: public so the API can show what was solved. */
   public static BalanceProblem problemOf(BoardSpec board, BoardDemand demand, Basis basis) {
+    return problemOf(board, demand, basis, null);
+  }
+
+  /**
+   * The balancing problem of a board; on a panelboard ({@code panel} not null) the free positions
+   * are its free spaces, each on the line of its row, so a move is from one space to another and a
+   * multi-pole breaker keeps its adjacent spaces. A split-phase panelboard is solved as three lines
+   * with none free on the third.
+   */
+  public static BalanceProblem problemOf(
+      BoardSpec board, BoardDemand demand, Basis basis, PanelSpaces panel) {
     Map<Long, CircuitDemand> byCircuit = new java.util.HashMap<>();
     if (demand != null) {
       demand.circuits().forEach(c -> byCircuit.put(c.circuitId(), c));
@@ -137,8 +149,17 @@ public class BalanceService {
     Set<String> taken = new HashSet<>();
     Map<Phase, Double> singlePole = new EnumMap<>(Phase.class);
     for (CircuitSpec circuit : board.circuits()) {
-      for (Phase phase : circuit.position().phases()) {
-        taken.add(circuit.wayNumber() + ":" + phase);
+      if (panel != null) {
+        int poles = circuit.position().poles();
+        if (panel.fitOf(circuit.wayNumber(), poles) == PanelSpaces.Fit.FITS) {
+          for (int space : panel.spacesOf(circuit.wayNumber(), poles)) {
+            taken.add(space + ":" + panel.lineOf(space));
+          }
+        }
+      } else {
+        for (Phase phase : circuit.position().phases()) {
+          taken.add(circuit.wayNumber() + ":" + phase);
+        }
       }
       CircuitDemand result = byCircuit.get(circuit.id());
       Double amps = result == null || !result.isAssessed() ? null : amps(result, basis, u0);
@@ -191,15 +212,28 @@ public class BalanceService {
     Map<Phase, List<Integer>> freeWays = new EnumMap<>(Phase.class);
     for (Phase phase : Phase.values()) {
       List<Integer> ways = new ArrayList<>();
-      for (int way = 1; way <= board.wayCount(); way++) {
-        if (!taken.contains(way + ":" + phase)) {
-          ways.add(way);
+      if (panel != null) {
+        for (int space = 1; space <= panel.spaceCount(); space++) {
+          if (panel.lineOf(space) == phase && !taken.contains(space + ":" + phase)) {
+            ways.add(space);
+          }
+        }
+      } else {
+        for (int way = 1; way <= board.wayCount(); way++) {
+          if (!taken.contains(way + ":" + phase)) {
+            ways.add(way);
+          }
         }
       }
       freeWays.put(phase, ways);
     }
     return new BalanceProblem(
-        items, fixed, null, freeWays, board.unbalanceLimitPercent(), board.isThreePhase());
+        items,
+        fixed,
+        null,
+        freeWays,
+        board.unbalanceLimitPercent(),
+        board.isThreePhase() || panel != null);
   }
 
   /** A circuit's weight in amps: its share of demand on its line, or its connected current. */

@@ -50,8 +50,32 @@ public class AnalysisApiController {
   }
 
   /** A board described in full, with the supply it hangs from, for the stateless calculation. */
+  /**
+   * A board to compute. {@code dwelling} carries the NEC dwelling inputs (floor area ft², small-
+   * appliance and laundry circuits) read by the NEC dwelling diversity methods; without it their
+   * general lighting group is "not assessed, taken at 100 %" as on a stored board without inputs.
+   */
   public record BoardRequest(
-      @NotNull SupplySpec supply, @NotNull BoardSpec board, String siteDefaultMethodKey) {}
+      @NotNull SupplySpec supply,
+      @NotNull BoardSpec board,
+      String siteDefaultMethodKey,
+      @Valid DwellingRequest dwelling) {}
+
+  /** NEC dwelling inputs of a what-if board; each may be left out (not assessed). */
+  public record DwellingRequest(
+      @jakarta.validation.constraints.Positive
+          @jakarta.validation.constraints.DecimalMax("10000000")
+          Double floorAreaSquareFeet,
+      @jakarta.validation.constraints.Min(0) @jakarta.validation.constraints.Max(1000)
+          Integer smallApplianceCircuits,
+      @jakarta.validation.constraints.Min(0) @jakarta.validation.constraints.Max(1000)
+          Integer laundryCircuits) {
+
+    com.wayledger.engine.demand.DwellingParameters parameters() {
+      return new com.wayledger.engine.demand.DwellingParameters(
+          floorAreaSquareFeet, smallApplianceCircuits, laundryCircuits);
+    }
+  }
 
   @GetMapping("/sites/{id}/demand")
   @Operation(summary = "Demand on every board of a stored site")
@@ -122,6 +146,13 @@ public class AnalysisApiController {
       @Valid @org.springframework.web.bind.annotation.RequestBody BoardRequest request) {
     return Result.of(
         DemandEngine.evaluateBoard(
-            request.board(), request.supply(), analysis.methods(), request.siteDefaultMethodKey()));
+            request.board(),
+            request.supply(),
+            analysis.methods(),
+            request.siteDefaultMethodKey(),
+            com.wayledger.engine.demand.DemandSettings.DEFAULTS,
+            request.dwelling() == null
+                ? com.wayledger.engine.demand.DwellingParameters.UNKNOWN
+                : request.dwelling().parameters()));
   }
 }

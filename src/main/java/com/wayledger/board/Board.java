@@ -207,6 +207,44 @@ public class Board {
     return phases == 3;
   }
 
+  /**
+   * Whether the board is laid out as a panelboard (spaces odd left, even right, lines by row): a
+   * board of two or three lines on a site under the NEC rule set. Its way count is its space count
+   * and a circuit's way number is its first space (docs/data-model.md).
+   */
+  public boolean isPanelboard() {
+    return panelSpaces() != null;
+  }
+
+  /** The panelboard's spaces, or null when the board is not a panelboard. */
+  public com.wayledger.engine.PanelSpaces panelSpaces() {
+    return com.wayledger.engine.PanelSpaces.ofBoard(site.getRuleSet(), lineCount(), wayCount);
+  }
+
+  /**
+   * The positions the circuit editor offers at a space of a panelboard, one per pole count that
+   * fits there (1, 2 and on a three-phase panel 3 poles), the lines taken from the space.
+   */
+  public java.util.List<com.wayledger.engine.PhasePosition> positionsAtSpace(Integer space) {
+    com.wayledger.engine.PanelSpaces panel = panelSpaces();
+    if (panel == null) {
+      return getPositions();
+    }
+    int first = space == null || space < 1 || space > panel.spaceCount() ? 1 : space;
+    java.util.List<com.wayledger.engine.PhasePosition> choices = new java.util.ArrayList<>();
+    for (int poles = 1; poles <= panel.lines(); poles++) {
+      if (panel.fitOf(first, poles) == com.wayledger.engine.PanelSpaces.Fit.FITS) {
+        choices.add(panel.positionOf(first, poles));
+      }
+    }
+    return choices;
+  }
+
+  /** A line's name for people on this board: A, B, C on a North American supply, else L1…L3. */
+  public String lineName(com.wayledger.engine.Phase line) {
+    return site.getSupplySystem().lineName(line);
+  }
+
   public Long getId() {
     return id;
   }

@@ -278,6 +278,15 @@ public class BoardService {
     }
   }
 
+  /** The lowest space of a panelboard a breaker reaches down to (0 when it holds none). */
+  private int lowestSpaceTaken(Board board) {
+    int lowest = 0;
+    for (Circuit circuit : circuits.findByBoard(board.getId())) {
+      lowest = Math.max(lowest, circuit.getWayNumber() + 2 * (circuit.getPosition().poles() - 1));
+    }
+    return lowest;
+  }
+
   private Board checkRules(Site site, BoardForm form, Board existing) {
     if (form.phases() != 1 && form.phases() != 3) {
       throw new RuleViolation("phases", "board.phases.invalid");
@@ -309,7 +318,19 @@ public class BoardService {
     if (existing != null && form.phases() == 1 && existing.isThreePhase()) {
       checkCanBecomeSinglePhase(existing);
     }
-    if (existing != null) {
+    boolean panelboard =
+        !com.wayledger.engine.SiteSpec.DEFAULT_RULE_SET_KEY.equals(site.getRuleSet())
+            && site.getSupplySystem().lineCount(form.phases()) >= 2;
+    if (panelboard && form.wayCount() % 2 != 0) {
+      // two spaces to a row: a panelboard's space count is even (common practice: 24, 30, 42)
+      throw new RuleViolation("wayCount", "board.spaceCount.even");
+    }
+    if (existing != null && panelboard) {
+      int lowestSpace = lowestSpaceTaken(existing);
+      if (form.wayCount() < lowestSpace) {
+        throw new RuleViolation("wayCount", "board.spaceCount.belowUsed", lowestSpace);
+      }
+    } else if (existing != null) {
       Integer highestWay = circuits.highestWay(existing.getId());
       if (highestWay != null && form.wayCount() < highestWay) {
         throw new RuleViolation("wayCount", "board.wayCount.belowUsed", highestWay);

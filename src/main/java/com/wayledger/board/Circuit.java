@@ -128,7 +128,11 @@ public class Circuit {
   /** Copies the circuit's own fields (not its loads) from a validated form. */
   void apply(CircuitForm form) {
     wayNumber = form.wayNumber();
-    place(form.position());
+    // on a panelboard the form gives the first space and the poles; the lines follow from them
+    place(
+        board.isPanelboard()
+            ? board.panelSpaces().positionOf(form.wayNumber(), form.position().poles())
+            : form.position());
     description = form.description().strip();
     status = form.status();
     lockedForBalancing = Boolean.TRUE.equals(form.lockedForBalancing());
@@ -176,10 +180,42 @@ public class Circuit {
    * board.
    */
   public String positionLabel() {
+    if (board.isPanelboard()) {
+      return spacesLabel() + " " + linesLabel();
+    }
     if (board.lineCount() == 1) {
       return Integer.toString(wayNumber);
     }
     return wayNumber + " " + getPosition().label();
+  }
+
+  /** On a panelboard the spaces the breaker takes, "3" or "3/5"; else the way number. */
+  public String spacesLabel() {
+    com.wayledger.engine.PanelSpaces panel = board.panelSpaces();
+    int poles = getPosition().poles();
+    if (panel == null
+        || panel.fitOf(wayNumber, poles) != com.wayledger.engine.PanelSpaces.Fit.FITS) {
+      return Integer.toString(wayNumber);
+    }
+    return panel.spacesOf(wayNumber, poles).stream()
+        .map(String::valueOf)
+        .collect(java.util.stream.Collectors.joining("/"));
+  }
+
+  /**
+   * The lines the circuit takes in the names people use on its board: "B", "A–B", "C–A" or "A–B–C"
+   * on a panelboard (in the order of its spaces), "L1–L2" on an IEC board.
+   */
+  public String linesLabel() {
+    com.wayledger.engine.PanelSpaces panel = board.panelSpaces();
+    int poles = getPosition().poles();
+    if (panel == null
+        || panel.fitOf(wayNumber, poles) != com.wayledger.engine.PanelSpaces.Fit.FITS) {
+      return getPosition().label();
+    }
+    return panel.spacesOf(wayNumber, poles).stream()
+        .map(space -> board.lineName(panel.lineOf(space)))
+        .collect(java.util.stream.Collectors.joining("–"));
   }
 
   public Long getId() {

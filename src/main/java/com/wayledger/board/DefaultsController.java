@@ -38,7 +38,6 @@ public class DefaultsController {
   @ModelAttribute
   void choices(Model model) {
     FormChoices.addDeviceAndCable(model);
-    model.addAttribute("locations", com.wayledger.engine.CircuitLocation.values());
   }
 
   @GetMapping("/sites/{id}/defaults")
@@ -63,6 +62,7 @@ public class DefaultsController {
       Model model,
       HttpServletResponse response) {
     form = FormRecovery.ensure(form, errors, model, "form", DefaultsForm.class, request);
+    refuseOtherRuleSetsLocation(form, sites.get(id), errors);
     if (errors.hasErrors()) {
       forSite(model, sites.get(id));
       return FormStatus.invalid(response, VIEW);
@@ -93,6 +93,7 @@ public class DefaultsController {
       Model model,
       HttpServletResponse response) {
     form = FormRecovery.ensure(form, errors, model, "form", DefaultsForm.class, request);
+    refuseOtherRuleSetsLocation(form, boards.get(id).getSite(), errors);
     if (errors.hasErrors()) {
       forBoard(model, boards.get(id));
       return FormStatus.invalid(response, VIEW);
@@ -101,7 +102,19 @@ public class DefaultsController {
     return "redirect:/boards/" + id;
   }
 
+  /** A default location must be one of the site's rule set's own, as a circuit's must. */
+  private static void refuseOtherRuleSetsLocation(
+      DefaultsForm form, Site site, BindingResult errors) {
+    com.wayledger.engine.rules.RuleSet rules =
+        com.wayledger.engine.rules.RuleSets.of(site.getRuleSet());
+    if (form.location() != null && !rules.circuitLocations().contains(form.location())) {
+      errors.rejectValue(
+          "location", "circuit.location.otherRuleSet", new Object[] {rules.title()}, null);
+    }
+  }
+
   private static void forSite(Model model, Site site) {
+    model.addAttribute("locations", locationsOf(site));
     model.addAttribute("site", site);
     model.addAttribute("action", "/sites/" + site.getId() + "/defaults");
     model.addAttribute("backUrl", "/sites/" + site.getId());
@@ -110,6 +123,7 @@ public class DefaultsController {
   }
 
   private static void forBoard(Model model, Board board) {
+    model.addAttribute("locations", locationsOf(board.getSite()));
     model.addAttribute("site", board.getSite());
     model.addAttribute("board", board);
     model.addAttribute("action", "/boards/" + board.getId() + "/defaults");
@@ -145,6 +159,14 @@ public class DefaultsController {
             .map(com.wayledger.system.RecordDiff.FieldChange::field)
             .toList());
     return filled;
+  }
+
+  /** The site's rule set's locations, in the order of their declaration. */
+  private static java.util.List<com.wayledger.engine.CircuitLocation> locationsOf(Site site) {
+    var own = com.wayledger.engine.rules.RuleSets.of(site.getRuleSet()).circuitLocations();
+    return java.util.Arrays.stream(com.wayledger.engine.CircuitLocation.values())
+        .filter(own::contains)
+        .toList();
   }
 
   private static <T> T first(T own, T usual) {

@@ -49,7 +49,8 @@ public final class Inheritance {
         case VOLTAGE_DROP, LOOP_IMPEDANCE ->
             field.equals("cableMaterial") || field.equals("cableInsulation");
         case START_UP_SURGE -> field.equals("loadStartUpMultiple");
-        case SOCKET_RCD -> field.equals(LOCATION_FIELD);
+        case SOCKET_RCD, GROUND_FAULT_PROTECTION, ARC_FAULT_PROTECTION ->
+            field.equals(LOCATION_FIELD);
         default -> false;
       };
     }

@@ -16,7 +16,12 @@ final class MissingInputs {
 
   private MissingInputs() {}
 
-  static List<String> of(Circuit circuit) {
+  /**
+   * @param locationChecked whether a check of this circuit reads where its equipment is: every
+   *     circuit under the IEC set (the 30 mA rules), circuits of dwelling panels under the NEC set
+   *     (the GFCI and AFCI rules); see {@link #locationChecked(Board, boolean)}
+   */
+  static List<String> of(Circuit circuit, boolean locationChecked) {
     List<String> missing = new ArrayList<>();
     if (circuit.getStatus() != WayStatus.IN_USE) {
       return missing;
@@ -54,14 +59,22 @@ final class MissingInputs {
         missing,
         cable == null ? null : cable.thermalInsulationMillimetres(),
         "cableThermalInsulationMm");
-    addIfNull(
-        missing,
-        Inheritance.effectiveLocation(circuit, circuit.getBoard()),
-        Inheritance.LOCATION_FIELD);
+    if (locationChecked) {
+      addIfNull(
+          missing,
+          Inheritance.effectiveLocation(circuit, circuit.getBoard()),
+          Inheritance.LOCATION_FIELD);
+    }
     if (circuit.getLoads().isEmpty()) {
       missing.add("loads");
     }
     return missing;
+  }
+
+  /** Whether the checks of circuits on this board read their location. */
+  static boolean locationChecked(Board board, boolean dwellingPanel) {
+    return com.wayledger.engine.SiteSpec.DEFAULT_RULE_SET_KEY.equals(board.getSite().getRuleSet())
+        || dwellingPanel;
   }
 
   private static void addIfNull(List<String> missing, Object value, String field) {

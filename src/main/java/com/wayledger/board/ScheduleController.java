@@ -31,6 +31,7 @@ public class ScheduleController {
 
   private static final String HX = "HX-Request";
   private static final String SCHEDULE_FRAGMENT = "board/schedule :: scheduleTable";
+  private static final String PANEL_FRAGMENT = "board/panel :: panelTable";
   private static final String SCHEDULE_UPDATE = "board/schedule :: scheduleUpdate";
   private static final String EDITOR_FRAGMENT = "board/schedule :: circuitEditor";
   private static final String EDITOR_PAGE = "board/circuit";
@@ -53,8 +54,8 @@ public class ScheduleController {
 
   @GetMapping("/boards/{boardId}/schedule")
   public String table(@PathVariable long boardId, Model model) {
-    schedulePage.fill(model, boardId);
-    return SCHEDULE_FRAGMENT;
+    Board board = schedulePage.fill(model, boardId);
+    return board.isPanelboard() ? PANEL_FRAGMENT : SCHEDULE_FRAGMENT;
   }
 
   @GetMapping("/boards/{boardId}/circuits/new")

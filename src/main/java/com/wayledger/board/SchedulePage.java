@@ -56,6 +56,7 @@ class SchedulePage {
                                 ? ""
                                 : " “" + way.getDescription() + "”"))
                 .orElse(null));
+    model.addAttribute("panel", PanelLayout.of(board, onBoard));
     var rows = ScheduleRows.of(board, onBoard);
     model.addAttribute("rows", rows);
     model.addAttribute(
@@ -73,12 +74,26 @@ class SchedulePage {
         circuit -> inherited.put(circuit.getId(), new Inheritance.Values(Inheritance.of(circuit))));
     model.addAttribute("inheritedByCircuit", inherited);
     java.util.Map<Long, java.util.List<String>> missing = new java.util.HashMap<>();
-    onBoard.forEach(circuit -> missing.put(circuit.getId(), MissingInputs.of(circuit)));
+    boolean locationChecked =
+        MissingInputs.locationChecked(
+            board, analysis.dwellingBoardIds(board.getSite().getId()).contains(boardId));
+    onBoard.forEach(
+        circuit -> missing.put(circuit.getId(), MissingInputs.of(circuit, locationChecked)));
     model.addAttribute("missingByCircuit", missing);
     SiteAnalysis results = analysis.ofSite(board.getSite().getId());
     var demand = results.boardDemand(boardId);
     model.addAttribute("demand", demand);
-    model.addAttribute("circuitDemand", results.circuitDemands(boardId));
+    var circuitDemands = results.circuitDemands(boardId);
+    model.addAttribute("circuitDemand", circuitDemands);
+    model.addAttribute(
+        "figures",
+        demand == null
+            ? java.util.Map.of()
+            : ScheduleFigures.of(
+                rows,
+                circuitDemands,
+                demand.nominalVoltageVolts(),
+                org.springframework.context.i18n.LocaleContextHolder.getLocale()));
     model.addAttribute("circuitFindings", results.circuitFindings(boardId));
     model.addAttribute("circuitProblems", results.circuitProblemCounts(boardId));
     model.addAttribute("problems", results.problems(boardId));

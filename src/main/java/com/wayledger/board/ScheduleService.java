@@ -38,6 +38,7 @@ public class ScheduleService {
   private final RowLocks locks;
   private final Validator validator;
   private final ApplicationEventPublisher events;
+  private final DwellingRepository dwellings;
 
   public ScheduleService(
       BoardRepository boards,
@@ -46,8 +47,10 @@ public class ScheduleService {
       JdbcClient jdbc,
       RowLocks locks,
       Validator validator,
-      ApplicationEventPublisher events) {
+      ApplicationEventPublisher events,
+      DwellingRepository dwellings) {
     this.events = events;
+    this.dwellings = dwellings;
     this.boards = boards;
     this.circuits = circuits;
     this.loads = loads;
@@ -70,7 +73,11 @@ public class ScheduleService {
   /** Every form input the circuit's checks still lack (defaults counted), all at once. */
   @Transactional(readOnly = true)
   public java.util.List<String> missingInputs(long circuitId) {
-    return MissingInputs.of(circuit(circuitId));
+    Circuit circuit = circuit(circuitId);
+    return MissingInputs.of(
+        circuit,
+        MissingInputs.locationChecked(
+            circuit.getBoard(), dwellings.existsById(circuit.getBoard().getId())));
   }
 
   /** A view of the circuit made inside a transaction, so that its loads can be read. */
@@ -227,7 +234,12 @@ public class ScheduleService {
       if (placement.wayNumber() < 1 || placement.wayNumber() > board.getWayCount()) {
         throw new RuleViolation("placements", "circuit.way.beyondBoard", board.getWayCount());
       }
-      if (!board.isThreePhase() && placement.phase() != com.wayledger.engine.Phase.L1) {
+      if (board.isPanelboard()) {
+        // a move on a panelboard is to a space; the space decides the line
+        if (board.panelSpaces().lineOf(placement.wayNumber()) != placement.phase()) {
+          throw new RuleViolation("placements", "panel.move.wrongLine", placement.wayNumber());
+        }
+      } else if (!board.isThreePhase() && placement.phase() != com.wayledger.engine.Phase.L1) {
         throw new RuleViolation("placements", "circuit.position.singlePhaseBoard");
       }
       moving.add(circuit);
@@ -606,10 +618,12 @@ public class ScheduleService {
   }
 
   private void checkCircuitRules(Board board, CircuitForm form, Long circuitId) {
-    if (form.wayNumber() > board.getWayCount()) {
+    if (board.isPanelboard()) {
+      checkPanelSpaces(board, form, circuitId);
+    } else if (form.wayNumber() > board.getWayCount()) {
       throw new RuleViolation("wayNumber", "circuit.way.beyondBoard", board.getWayCount());
     }
-    if (!board.getPositions().contains(form.position())) {
+    if (!board.isPanelboard() && !board.getPositions().contains(form.position())) {
       throw new RuleViolation(
           "position",
           board.lineCount() == 1
@@ -644,7 +658,8 @@ public class ScheduleService {
         form.deviceInstantaneousSettingAmps(),
         "deviceOverloadSettingAmps",
         "deviceInstantaneousSettingAmps");
-    for (Phase phase : form.position().phases()) {
+    for (Phase phase :
+        board.isPanelboard() ? java.util.Set.<Phase>of() : form.position().phases()) {
       Long holder =
           jdbc.sql(
                   "SELECT circuit_id FROM way_slot WHERE board_id = ? AND way_number = ? AND phase = ?")
@@ -655,6 +670,40 @@ public class ScheduleService {
       if (holder != null && !holder.equals(circuitId)) {
         throw new RuleViolation(
             "wayNumber", "circuit.position.occupied", form.wayNumber(), phase.name());
+      }
+    }
+  }
+
+  /**
+   * A panelboard breaker (its first space is the way number, its poles those of the position) must
+   * fit the panel and share no space with another breaker; its lines follow from the spaces.
+   */
+  private void checkPanelSpaces(Board board, CircuitForm form, Long circuitId) {
+    com.wayledger.engine.PanelSpaces panel = board.panelSpaces();
+    int first = form.wayNumber();
+    int poles = form.position().poles();
+    switch (panel.fitOf(first, poles)) {
+      case NO_SUCH_SPACE ->
+          throw new RuleViolation("wayNumber", "panel.space.notOnPanel", panel.spaceCount());
+      case TOO_MANY_POLES ->
+          throw new RuleViolation("position", "panel.poles.tooMany", board.lineCount());
+      case RUNS_PAST_BOTTOM ->
+          throw new RuleViolation(
+              "wayNumber", "panel.space.runsPastBottom", first, poles, panel.spaceCount());
+      case FITS -> {}
+    }
+    for (Circuit other : circuits.findByBoard(board.getId())) {
+      if (other.getId().equals(circuitId)) {
+        continue;
+      }
+      int otherPoles = other.getPosition().poles();
+      if (panel.fitOf(other.getWayNumber(), otherPoles)
+          != com.wayledger.engine.PanelSpaces.Fit.FITS) {
+        continue; // stored before spaces were checked; the database slots still guard it
+      }
+      int shared = panel.sharedSpace(first, poles, other.getWayNumber(), otherPoles);
+      if (shared > 0) {
+        throw new RuleViolation("wayNumber", "panel.space.taken", shared, other.getDescription());
       }
     }
   }
@@ -689,6 +738,18 @@ public class ScheduleService {
   private void occupy(Board board, Circuit circuit) {
     try {
       jdbc.sql("DELETE FROM way_slot WHERE circuit_id = ?").param(circuit.getId()).update();
+      if (board.isPanelboard()) {
+        // one row per space the breaker takes, keyed by that space and its line: a space holds
+        // one pole, so the primary key refuses two breakers sharing a space
+        com.wayledger.engine.PanelSpaces panel = board.panelSpaces();
+        for (int space : panel.spacesOf(circuit.getWayNumber(), circuit.getPosition().poles())) {
+          jdbc.sql(
+                  "INSERT INTO way_slot (board_id, way_number, phase, circuit_id) VALUES (?, ?, ?, ?)")
+              .params(board.getId(), space, panel.lineOf(space).name(), circuit.getId())
+              .update();
+        }
+        return;
+      }
       for (Phase phase : circuit.getPosition().phases()) {
         jdbc.sql(
                 "INSERT INTO way_slot (board_id, way_number, phase, circuit_id) VALUES (?, ?, ?, ?)")

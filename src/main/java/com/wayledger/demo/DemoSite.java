@@ -70,6 +70,7 @@ class DemoSite implements SmartLifecycle {
   private final ScheduleService schedule;
   private final AccountService accounts;
   private final TransactionTemplate transaction;
+  private final NecDemoSite necDemo;
   private final String adminUsername;
   private final String adminPassword;
 
@@ -79,6 +80,7 @@ class DemoSite implements SmartLifecycle {
       ScheduleService schedule,
       AccountService accounts,
       TransactionTemplate transaction,
+      NecDemoSite necDemo,
       @Value("${wayledger.admin.username:}") String adminUsername,
       @Value("${wayledger.admin.password:}") String adminPassword) {
     this.adminUsername = adminUsername;
@@ -88,6 +90,7 @@ class DemoSite implements SmartLifecycle {
     this.schedule = schedule;
     this.accounts = accounts;
     this.transaction = transaction;
+    this.necDemo = necDemo;
   }
 
   private volatile boolean running;
@@ -104,6 +107,7 @@ class DemoSite implements SmartLifecycle {
   @Override
   public void start() {
     loadOnce();
+    necDemo.loadOnce();
     running = true;
   }
 

@@ -26,6 +26,22 @@ public record PanelSpaces(int spaceCount, int lines) {
     }
   }
 
+  /**
+   * The spaces of a board laid out as a panelboard, or null when it is not one: a board with two or
+   * three lines on a site under a rule set other than the IEC one (the NEC set). Its way count is
+   * its space count; a count stored odd is taken as the next even number.
+   *
+   * @param ruleSetKey the site's rule set key (null: the IEC set)
+   * @param lineCount the board's lines on its supply (1, 2 or 3)
+   * @param wayCount the board's stored way count
+   */
+  public static PanelSpaces ofBoard(String ruleSetKey, int lineCount, int wayCount) {
+    if (ruleSetKey == null || SiteSpec.DEFAULT_RULE_SET_KEY.equals(ruleSetKey) || lineCount < 2) {
+      return null;
+    }
+    return new PanelSpaces(Math.max(2, wayCount + wayCount % 2), lineCount);
+  }
+
   /** Row of a space from the top, from 1: spaces 1 and 2 are row 1. */
   public int rowOf(int space) {
     checkSpace(space);
@@ -80,6 +96,51 @@ public record PanelSpaces(int spaceCount, int lines) {
       case 2 -> PhasePosition.between(first, lineOf(spaces.get(1)));
       default -> PhasePosition.THREE_POLE;
     };
+  }
+
+  /** Whether a breaker fits the panel, and if not, why (see {@link #fitOf}). */
+  public enum Fit {
+    /** It fits: every space it needs is on the panel. */
+    FITS,
+    /** Its first space is not on the panel (below 1 or past the space count). */
+    NO_SUCH_SPACE,
+    /** It starts too low: its last pole would run past the bottom of the panel. */
+    RUNS_PAST_BOTTOM,
+    /** It has more poles than the panel has lines (or fewer than one). */
+    TOO_MANY_POLES
+  }
+
+  /**
+   * Whether a breaker with {@code poles} poles whose top pole is on {@code firstSpace} fits the
+   * panel, without throwing: the form and the API refuse a breaker beside the field that caused it.
+   */
+  public Fit fitOf(int firstSpace, int poles) {
+    if (firstSpace < 1 || firstSpace > spaceCount) {
+      return Fit.NO_SUCH_SPACE;
+    }
+    if (poles < 1 || poles > lines) {
+      return Fit.TOO_MANY_POLES;
+    }
+    return firstSpace + 2 * (poles - 1) > spaceCount ? Fit.RUNS_PAST_BOTTOM : Fit.FITS;
+  }
+
+  /**
+   * The first space two breakers would both take, or 0 when they share none. Each breaker is given
+   * by its top space and its poles and must fit the panel.
+   */
+  public int sharedSpace(int firstSpace, int poles, int otherFirstSpace, int otherPoles) {
+    List<Integer> other = spacesOf(otherFirstSpace, otherPoles);
+    for (int space : spacesOf(firstSpace, poles)) {
+      if (other.contains(space)) {
+        return space;
+      }
+    }
+    return 0;
+  }
+
+  /** Number of rows: two spaces to a row. */
+  public int rowCount() {
+    return spaceCount / 2;
   }
 
   private void checkSpace(int space) {

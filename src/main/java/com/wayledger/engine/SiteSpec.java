@@ -42,6 +42,12 @@ public record SiteSpec(
     this(id, name, supply, defaultDiversityMethodKey, boards, DEFAULT_RULE_SET_KEY);
   }
 
+  /** The spaces of a board of this site when it is laid out as a panelboard, else null. */
+  public PanelSpaces panelSpacesOf(BoardSpec board) {
+    return PanelSpaces.ofBoard(
+        ruleSetKey, supply.system().lineCount(board.phases()), board.wayCount());
+  }
+
   /** The same site holding other boards. */
   public SiteSpec withBoards(List<BoardSpec> other) {
     return new SiteSpec(id, name, supply, defaultDiversityMethodKey, other, ruleSetKey);

@@ -48,6 +48,100 @@ final class Codes {
     };
   }
 
+  /** How a load is connected, as the Connection column says it. */
+  enum Connection {
+    LINE_TO_NEUTRAL("L-N"),
+    LINE_TO_LINE("L-L"),
+    THREE_PHASE("3-phase");
+
+    final String code;
+
+    Connection(String code) {
+      this.code = code;
+    }
+  }
+
+  /** "L-N", "L-L" or "3-phase" for a position; empty when none. */
+  static String connection(PhasePosition position) {
+    if (position == null) {
+      return "";
+    }
+    if (position == PhasePosition.THREE_POLE) {
+      return Connection.THREE_PHASE.code;
+    }
+    return position.isLineToLine() ? Connection.LINE_TO_LINE.code : Connection.LINE_TO_NEUTRAL.code;
+  }
+
+  /**
+   * A connection in the usual spellings of both vocabularies: "L-N", "line to neutral", "120 V",
+   * "277 V", "1P" for line to neutral; "L-L", "line to line", "240 V", "208 V", "480 V", "2P",
+   * "two-pole" for line to line; "3-phase", "3P", "three-phase" for three-phase; null otherwise.
+   */
+  static Connection parseConnection(String text) {
+    String t = squash(text).replace("VOLTS", "").replace("VOLT", "");
+    if (t.endsWith("V")) {
+      t = t.substring(0, t.length() - 1);
+    }
+    return switch (t) {
+      case "LN",
+          "LINETONEUTRAL",
+          "PHASETONEUTRAL",
+          "SINGLEPOLE",
+          "1P",
+          "1POLE",
+          "120",
+          "230",
+          "277" ->
+          Connection.LINE_TO_NEUTRAL;
+      case "LL",
+          "LINETOLINE",
+          "PHASETOPHASE",
+          "TWOPOLE",
+          "2P",
+          "2POLE",
+          "DOUBLEPOLE",
+          "240",
+          "208",
+          "480",
+          "400" ->
+          Connection.LINE_TO_LINE;
+      case "3PHASE", "3PH", "THREEPHASE", "3P", "3POLE", "THREEPOLE", "TP", "TPN" ->
+          Connection.THREE_PHASE;
+      default -> null;
+    };
+  }
+
+  /**
+   * The position a row's line and connection say together, among the positions the board may take:
+   * a single line with "line to line" is the two-pole position from that line (on a split-phase
+   * board always A–B); a line with "three-phase" is the three-pole position; null when they
+   * contradict each other or the board has no such position.
+   */
+  static PhasePosition connect(
+      PhasePosition line, Connection connection, java.util.List<PhasePosition> allowed) {
+    PhasePosition wanted =
+        switch (connection) {
+          case LINE_TO_NEUTRAL -> line.isSinglePole() ? line : null;
+          case THREE_PHASE ->
+              line.isSinglePole() || line == PhasePosition.THREE_POLE
+                  ? PhasePosition.THREE_POLE
+                  : null;
+          case LINE_TO_LINE -> {
+            if (line.isLineToLine()) {
+              yield line;
+            }
+            if (!line.isSinglePole()) {
+              yield null;
+            }
+            PhasePosition from = PhasePosition.twoPoleFrom(line.phases().iterator().next());
+            yield allowed.contains(from) || !allowed.contains(PhasePosition.L1_L2)
+                ? from
+                : PhasePosition.L1_L2;
+          }
+        };
+    return wanted;
+  }
+
   static String state(WayStatus status) {
     return switch (status) {
       case IN_USE -> "in use";

@@ -115,6 +115,7 @@ public final class ColumnGuesser {
     }
     return switch (field) {
       case LINE -> all(sample, v -> Codes.parseLine(v) != null && !v.matches("\\d+")) ? 45 : 0;
+      case CONNECTION -> all(sample, v -> Codes.parseConnection(v) != null) ? 40 : 0;
       case DEVICE_SUMMARY -> all(sample, v -> DEVICE_TEXT.matcher(v.strip()).matches()) ? 45 : 0;
       case CURVE -> all(sample, v -> v.strip().matches("(?i)[BCD]")) ? 35 : 0;
       case DEVICE -> all(sample, v -> Codes.parseEnum(DeviceKind.class, v) != null) ? 35 : 0;

@@ -104,6 +104,7 @@ public final class CsvWriter {
     cells[THERMAL_INSULATION_MM.ordinal()] = num(c.cableThermalInsulationMm());
     cells[MEASURED_ZS.ordinal()] = num(c.measuredLoopImpedanceOhms());
     cells[LOCATION.ordinal()] = name(c.location());
+    cells[CONNECTION.ordinal()] = Codes.connection(c.position());
     if (l != null) {
       cells[LOAD.ordinal()] = CellText.forCsv(l.description());
       cells[CATEGORY.ordinal()] = name(l.category());

@@ -29,6 +29,7 @@ public class ExportController {
   static final String XLSX = "application/vnd.openxmlformats-officedocument.spreadsheetml.sheet";
 
   private final ExportReader reader;
+  private final com.wayledger.board.AnalysisService analysis;
   private final MessageSource messages;
   private final ChangeLog changeLog;
   private final DiagramPicture diagramPicture;
@@ -42,8 +43,10 @@ public class ExportController {
       ChangeLog changeLog,
       DiagramPicture diagramPicture,
       java.util.List<WorkbookSheet> extraSheets,
+      com.wayledger.board.AnalysisService analysis,
       @Value("${wayledger.public-base-url:}") String publicBaseUrl) {
     this.reader = reader;
+    this.analysis = analysis;
     this.messages = messages;
     this.changeLog = changeLog;
     this.diagramPicture = diagramPicture;
@@ -95,8 +98,31 @@ public class ExportController {
     model.addAttribute("board", board);
     List<DoorChartRow> rows = DoorChartRow.of(board);
     model.addAttribute("rows", rows);
-    model.addAttribute("halves", halves(rows));
-    model.addAttribute("free", FreePositions.of(board));
+    var results = analysis.ofBoard(boardId);
+    com.wayledger.engine.PanelSpaces panel =
+        results.spec().boards().stream()
+            .filter(spec -> spec.id() == boardId)
+            .findFirst()
+            .map(spec -> results.spec().panelSpacesOf(spec))
+            .orElse(null);
+    model.addAttribute("panelboard", panel != null);
+    if (panel != null) {
+      // a panelboard's chart is the panel itself: odd spaces left, even right, row by row
+      var system = results.spec().supply().system();
+      List<List<DoorChartRow>> columns = DoorChartRow.ofPanel(board, panel, system::lineName);
+      model.addAttribute("halves", columns);
+      List<String> free = new java.util.ArrayList<>();
+      columns.forEach(
+          column ->
+              column.stream()
+                  .filter(row -> row.device().isEmpty() && row.description().equals("free space"))
+                  .forEach(row -> free.add(Integer.toString(row.way()))));
+      free.sort(java.util.Comparator.comparingInt(Integer::parseInt));
+      model.addAttribute("free", new FreePositions(free, free.size()));
+    } else {
+      model.addAttribute("halves", halves(rows));
+      model.addAttribute("free", FreePositions.of(board));
+    }
     model.addAttribute(
         "code",
         DoorChartCode.of(baseUrl(), boardId, data.exportedOn(), changeLog.latestPosition(boardId)));

@@ -183,6 +183,13 @@ public class ImportController {
       model.addAttribute("refusal", new ImportRefused("import.refused.removeNeedsAllValid"));
       return "exchange/preview";
     }
+    DwellingInputsInFile dwellingInputs =
+        (DwellingInputsInFile) model.getAttribute("dwellingInputs");
+    if (dwellingInputs != null && !dwellingInputs.isValid()) {
+      response.setStatus(FormStatus.UNPROCESSABLE);
+      model.addAttribute("refusal", new ImportRefused("import.refused.dwellingInputs"));
+      return "exchange/preview";
+    }
     if (plan.hasConflicts()) {
       response.setStatus(HttpStatus.CONFLICT.value());
       model.addAttribute(
@@ -194,7 +201,7 @@ public class ImportController {
       return "exchange/preview"; // says so; nothing stored, nothing logged
     }
     try {
-      int[] stored = imports.store(boardId, plan, upload.fileName(), reason);
+      int[] stored = imports.store(boardId, plan, upload.fileName(), reason, dwellingInputs);
       uploads.remove(upload);
       redirect.addFlashAttribute("imported", stored);
       return redirect(request, response, "/boards/" + boardId);
@@ -238,6 +245,9 @@ public class ImportController {
       mapping = ColumnGuesser.guess(table);
     }
     ImportPlan plan = imports.plan(boardId, table, mapping, removeMissing);
+    model.addAttribute(
+        "dwellingInputs",
+        DwellingInputsInFile.read(uploads.bytes(upload), upload.fileName()).orElse(null));
     model.addAttribute("board", boards.get(boardId));
     model.addAttribute("upload", upload);
     model.addAttribute("table", table);

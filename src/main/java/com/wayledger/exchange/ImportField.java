@@ -23,8 +23,15 @@ public enum ImportField {
           "circuit no",
           "circuit number",
           "position",
-          "#")),
-  LINE(ScheduleColumn.LINE, List.of("line", "phase", "ph", "phases", "pole position", "l")),
+          "#",
+          "space",
+          "space no",
+          "space number",
+          "spaces",
+          "ckt no")),
+  LINE(
+      ScheduleColumn.LINE,
+      List.of("line", "phase", "ph", "phases", "pole position", "l", "leg", "phase leg", "bus")),
   CIRCUIT(
       ScheduleColumn.CIRCUIT,
       List.of(
@@ -202,6 +209,21 @@ public enum ImportField {
   CONTINUOUS(ScheduleColumn.CONTINUOUS, List.of("continuous", "cont")),
   CIRCUIT_KEY(ScheduleColumn.CIRCUIT_KEY, List.of("circuit key", "key")),
   RECORD_VERSION(ScheduleColumn.RECORD_VERSION, List.of("record version", "version")),
+  CONNECTION(
+      ScheduleColumn.CONNECTION,
+      List.of(
+          "connection",
+          "connection type",
+          "l l",
+          "line to line",
+          "l n",
+          "voltage",
+          "volts",
+          "v",
+          "load voltage",
+          "circuit voltage",
+          "240 v",
+          "wiring")),
   DEVICE_SUMMARY(
       null,
       List.of(

@@ -2,6 +2,7 @@ package com.wayledger.exchange;
 
 import com.wayledger.board.Board;
 import com.wayledger.board.BoardService;
+import com.wayledger.board.DwellingForm;
 import com.wayledger.board.ScheduleService;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -22,12 +23,17 @@ public class ImportService {
   private final BoardService boards;
   private final ScheduleService schedule;
   private final RowReader rows;
+  private final com.wayledger.board.DwellingService dwellings;
 
   public ImportService(
-      BoardService boards, ScheduleService schedule, jakarta.validation.Validator validator) {
+      BoardService boards,
+      ScheduleService schedule,
+      jakarta.validation.Validator validator,
+      com.wayledger.board.DwellingService dwellings) {
     this.boards = boards;
     this.schedule = schedule;
     this.rows = new RowReader(validator);
+    this.dwellings = dwellings;
   }
 
   /** Every row of the table checked, and matched against the board as it is now. */
@@ -50,7 +56,8 @@ public class ImportService {
         rows.read(
             table,
             mapping,
-            new RowReader.BoardContext(board.getPhases(), board.getWayCount(), Set.of()));
+            new RowReader.BoardContext(
+                board.getPhases(), board.getWayCount(), Set.of(), board.getPositions()));
     List<CircuitEntry> stored = ExportReader.entry(board, 0).circuits();
     ScheduleMatcher.Result matched = ScheduleMatcher.match(read.circuits(), stored, removeMissing);
     Map<Integer, ImportPlan.Problem> taken = new HashMap<>();
@@ -103,6 +110,39 @@ public class ImportService {
    */
   @Transactional
   public int[] store(long boardId, ImportPlan plan, String fileName, String reason) {
+    return store(boardId, plan, fileName, reason, null);
+  }
+
+  /**
+   * Stores the plan and, when the file carries one board's NEC dwelling inputs (all of them valid),
+   * those inputs on the board, in the same transaction: both or neither.
+   */
+  @Transactional
+  public int[] store(
+      long boardId,
+      ImportPlan plan,
+      String fileName,
+      String reason,
+      DwellingInputsInFile dwellingInputs) {
+    int[] stored = storePlan(boardId, plan, fileName, reason);
+    if (dwellingInputs != null && dwellingInputs.isValid()) {
+      DwellingForm form = dwellingInputs.form();
+      dwellings.save(
+          boardId,
+          new DwellingForm(
+              form.floorArea(),
+              form.areaUnit(),
+              form.smallApplianceCircuits(),
+              form.laundryCircuits(),
+              form.optionalMethod(),
+              form.addition(),
+              null,
+              reason));
+    }
+    return stored;
+  }
+
+  private int[] storePlan(long boardId, ImportPlan plan, String fileName, String reason) {
     int added = (int) plan.count(ImportOutcome.Kind.ADDED);
     int changed = (int) plan.count(ImportOutcome.Kind.CHANGED);
     int removed = (int) plan.count(ImportOutcome.Kind.REMOVED);

@@ -45,10 +45,29 @@ import java.util.regex.Pattern;
 public final class RowReader {
 
   /** The board the rows go into. */
-  public record BoardContext(int phases, int wayCount, Set<String> occupied) {
+  public record BoardContext(
+      int phases, int wayCount, Set<String> occupied, List<PhasePosition> positions) {
+
+    /**
+     * A board known by its phases only: L1 on a single-phase board; every single-pole, two-pole and
+     * three-pole position on a three-phase one (the schedule refuses what the site's rule set does
+     * not allow).
+     */
+    public BoardContext(int phases, int wayCount, Set<String> occupied) {
+      this(phases, wayCount, occupied, PhasePosition.onBoardWith(phases == 3 ? 3 : 1, true));
+    }
+
+    public BoardContext {
+      positions = List.copyOf(positions);
+    }
 
     boolean isThreePhase() {
       return phases == 3;
+    }
+
+    /** Whether the board has one line only (every circuit on L1). */
+    boolean hasOneLine() {
+      return positions.size() == 1;
     }
 
     static String slot(int way, Phase phase) {
@@ -254,29 +273,74 @@ public final class RowReader {
 
   // ---------------------------------------------------------------- circuit
 
+  /**
+   * The row's position from its Line cell and, when there is one, its Connection cell ("A" with
+   * "240 V" is the two-pole position A–B); refused on the cell that is wrong.
+   */
+  private static PhasePosition readPosition(
+      Cells cells, BoardContext board, List<ImportPlan.Problem> problems) {
+    Codes.Connection connection = null;
+    if (!cells.blank(CONNECTION)) {
+      connection = Codes.parseConnection(cells.text(CONNECTION));
+      if (connection == null) {
+        problems.add(
+            new ImportPlan.Problem(
+                CONNECTION,
+                "import.cell.unknownConnection",
+                new Object[] {cells.text(CONNECTION)}));
+      }
+    }
+    PhasePosition position = null;
+    if (cells.blank(LINE)) {
+      if (connection != null && connection != Codes.Connection.LINE_TO_NEUTRAL) {
+        position = Codes.connect(PhasePosition.L1, connection, board.positions());
+      } else if (board.isThreePhase()) {
+        problems.add(new ImportPlan.Problem(LINE, "import.cell.lineMissing", new Object[0]));
+        return null;
+      } else {
+        position = PhasePosition.L1;
+      }
+    } else {
+      PhasePosition line = Codes.parseLine(cells.text(LINE));
+      if (line == null) {
+        problems.add(
+            new ImportPlan.Problem(
+                LINE, "import.cell.unknownLine", new Object[] {cells.text(LINE)}));
+        return null;
+      }
+      position = line;
+      if (connection != null) {
+        position = Codes.connect(line, connection, board.positions());
+        if (position == null) {
+          problems.add(
+              new ImportPlan.Problem(
+                  CONNECTION,
+                  "import.cell.connectionContradicts",
+                  new Object[] {cells.text(CONNECTION), cells.text(LINE)}));
+          return null;
+        }
+      }
+    }
+    if (position != null && !board.positions().contains(position)) {
+      if (board.hasOneLine()) {
+        problems.add(new ImportPlan.Problem(LINE, "import.cell.singlePhaseBoard", new Object[0]));
+      } else {
+        problems.add(
+            new ImportPlan.Problem(
+                LINE, "import.cell.positionNotOnBoard", new Object[] {position.label()}));
+      }
+      return null;
+    }
+    return position;
+  }
+
   private CircuitForm readCircuit(
       Cells cells, BoardContext board, List<ImportPlan.Problem> problems, List<String> notes) {
     Integer way = cells.whole(WAY, problems);
     if (way == null && !cells.hasError(problems, WAY)) {
       problems.add(new ImportPlan.Problem(WAY, "import.cell.wayMissing", new Object[0]));
     }
-    PhasePosition position = null;
-    if (cells.blank(LINE)) {
-      if (board.isThreePhase()) {
-        problems.add(new ImportPlan.Problem(LINE, "import.cell.lineMissing", new Object[0]));
-      } else {
-        position = PhasePosition.L1;
-      }
-    } else {
-      position = Codes.parseLine(cells.text(LINE));
-      if (position == null) {
-        problems.add(
-            new ImportPlan.Problem(
-                LINE, "import.cell.unknownLine", new Object[] {cells.text(LINE)}));
-      } else if (!board.isThreePhase() && position != PhasePosition.L1) {
-        problems.add(new ImportPlan.Problem(LINE, "import.cell.singlePhaseBoard", new Object[0]));
-      }
-    }
+    PhasePosition position = readPosition(cells, board, problems);
     String description = CellText.fromCsv(cells.text(CIRCUIT));
     WayStatus status;
     if (cells.blank(STATE)) {

@@ -58,7 +58,13 @@ public enum ScheduleColumn {
    * The circuit's edition when exported ({@code Circuit.recordVersion()}): an import refuses to
    * overwrite a circuit changed since.
    */
-  RECORD_VERSION("Record version", true);
+  RECORD_VERSION("Record version", true),
+  /**
+   * How the circuit's load is connected: line to neutral, line to line (two-pole, no neutral) or
+   * three-phase; the Line column already says it, this column says it in words and lets a sheet
+   * that names only one line per row ("A" + "240 V") mark a two-pole circuit.
+   */
+  CONNECTION("Connection", true);
 
   /** How a three-pole position is written in the Line column. */
   public static final String THREE_POLE_CODE = "3P";

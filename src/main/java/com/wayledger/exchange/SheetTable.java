@@ -47,8 +47,10 @@ public record SheetTable(
         return false;
       }
     }
-    // exports written before the circuit key and record version columns end at Findings
+    // exports written before the circuit key and record version columns end at Findings; those
+    // written before the connection column at the record version
     return headers.size() == ScheduleColumn.values().length
+        || headers.size() == ScheduleColumn.CONNECTION.ordinal()
         || headers.size() == ScheduleColumn.CIRCUIT_KEY.ordinal();
   }
 }

@@ -301,6 +301,8 @@ public final class WorkbookWriter {
         null);
     text(facts, 13, words.of("workbook.fact.ruleSet"), styles.label, null);
     text(facts, 14, data.ruleSetTitle(), styles.text, null);
+    text(facts, 15, words.of("workbook.fact.supplySystem"), styles.label, null);
+    text(facts, 16, data.supplySystemWords(), styles.text, null);
     text(facts, 11, words.of("workbook.fact.fedFrom"), styles.label, null);
     text(
         facts,
@@ -460,6 +462,7 @@ public final class WorkbookWriter {
     number(row, THERMAL_INSULATION_MM.ordinal(), c.cableThermalInsulationMm(), s.integer, w);
     number(row, MEASURED_ZS.ordinal(), c.measuredLoopImpedanceOhms(), s.ohms, w);
     text(row, LOCATION.ordinal(), name(c.location()), s.text, w);
+    text(row, CONNECTION.ordinal(), Codes.connection(c.position()), s.text, w);
   }
 
   /**
@@ -884,6 +887,8 @@ public final class WorkbookWriter {
     text(facts, 3, data.exportedOn().toString(), s.text, null);
     text(facts, 4, words.of("workbook.fact.ruleSet"), s.label, null);
     text(facts, 5, data.ruleSetTitle(), s.text, null);
+    text(facts, 6, words.of("workbook.fact.supplySystem"), s.label, null);
+    text(facts, 7, data.supplySystemWords(), s.text, null);
     text(sheet.createRow(2), 0, words.of("workbook.caution", caution), s.caution, null);
     String[] heads = {
       "Board",

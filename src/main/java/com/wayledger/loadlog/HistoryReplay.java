@@ -26,7 +26,8 @@ import java.util.Set;
  * board header. Then each entry's "after" snapshot replaces the circuit (or header), and a removal
  * drops it. The board is evaluated on its own (sub-boards' demand is not carried onto the ways
  * feeding them), with today's supply and diversity catalogue: the log records the schedule, not the
- * site's supply.
+ * site's supply. A dwelling board's NEC dwelling inputs (floor area, small-appliance and laundry
+ * circuits) are today's at every point: the NEC dwelling methods read them as they now stand.
  */
 final class HistoryReplay {
 
@@ -42,6 +43,26 @@ final class HistoryReplay {
       SupplySpec supply,
       DiversityMethodCatalog methods,
       String siteDefaultMethodKey) {
+    return replay(
+        entries,
+        currentHeader,
+        supply,
+        methods,
+        siteDefaultMethodKey,
+        com.wayledger.engine.demand.DwellingParameters.UNKNOWN);
+  }
+
+  /**
+   * @param dwelling the board's NEC dwelling inputs as they now stand; {@code UNKNOWN} for a board
+   *     without them
+   */
+  static List<HistoryPoint> replay(
+      List<ChangeLogEntry> entries,
+      BoardSpec currentHeader,
+      SupplySpec supply,
+      DiversityMethodCatalog methods,
+      String siteDefaultMethodKey,
+      com.wayledger.engine.demand.DwellingParameters dwelling) {
     BoardSpec header = null;
     Map<Long, CircuitSpec> circuits = new LinkedHashMap<>();
     Set<Long> seen = new HashSet<>();
@@ -101,7 +122,8 @@ final class HistoryReplay {
                   com.wayledger.board.ScheduleMapper.replayed(header, circuits.values()),
                   supply,
                   methods,
-                  siteDefaultMethodKey);
+                  siteDefaultMethodKey,
+                  dwelling);
       points.add(
           new HistoryPoint(
               entry.id(),
@@ -129,8 +151,16 @@ final class HistoryReplay {
       BoardSpec board,
       SupplySpec supply,
       DiversityMethodCatalog methods,
-      String siteDefaultMethodKey) {
-    BoardDemand demand = DemandEngine.evaluateBoard(board, supply, methods, siteDefaultMethodKey);
+      String siteDefaultMethodKey,
+      com.wayledger.engine.demand.DwellingParameters dwelling) {
+    BoardDemand demand =
+        DemandEngine.evaluateBoard(
+            board,
+            supply,
+            methods,
+            siteDefaultMethodKey,
+            com.wayledger.engine.demand.DemandSettings.DEFAULTS,
+            dwelling);
     Map<Phase, Double> currents = new EnumMap<>(Phase.class);
     for (PhaseDemand phase : demand.phases()) {
       currents.put(phase.phase(), phase.currentAmps());

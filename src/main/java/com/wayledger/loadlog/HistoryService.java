@@ -16,11 +16,17 @@ public class HistoryService {
   private final ChangeLog log;
   private final BoardService boards;
   private final AnalysisService analysis;
+  private final com.wayledger.board.DwellingService dwellings;
 
-  public HistoryService(ChangeLog log, BoardService boards, AnalysisService analysis) {
+  public HistoryService(
+      ChangeLog log,
+      BoardService boards,
+      AnalysisService analysis,
+      com.wayledger.board.DwellingService dwellings) {
     this.log = log;
     this.boards = boards;
     this.analysis = analysis;
+    this.dwellings = dwellings;
   }
 
   @Transactional(readOnly = true)
@@ -39,7 +45,16 @@ public class HistoryService {
         ScheduleMapper.headerOf(board),
         ScheduleMapper.supplyOf(site),
         analysis.methods(),
-        site.getDefaultDiversityMethod());
+        site.getDefaultDiversityMethod(),
+        dwellings
+            .find(boardId)
+            .map(
+                record -> {
+                  var in = record.inputs();
+                  return new com.wayledger.engine.demand.DwellingParameters(
+                      in.floorAreaSquareFeet(), in.smallApplianceCircuits(), in.laundryCircuits());
+                })
+            .orElse(com.wayledger.engine.demand.DwellingParameters.UNKNOWN));
   }
 
   @Transactional(readOnly = true)

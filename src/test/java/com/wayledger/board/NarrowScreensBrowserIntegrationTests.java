@@ -30,6 +30,9 @@ import org.springframework.test.context.ActiveProfiles;
 class NarrowScreensBrowserIntegrationTests {
 
   @LocalServerPort int port;
+  @org.springframework.beans.factory.annotation.Autowired com.wayledger.site.SiteService sites;
+  @org.springframework.beans.factory.annotation.Autowired BoardService boards;
+  @org.springframework.beans.factory.annotation.Autowired ScheduleService schedule;
 
   @BeforeAll
   static void chromiumIsInstalled() {
@@ -85,6 +88,15 @@ class NarrowScreensBrowserIntegrationTests {
       pages.put("headroom", site + "/headroom");
       pages.put("site edit", site + "/edit");
       pages.put("board edit", board + "/edit");
+      // an NEC-set panelboard: odd spaces left, even right, lines A and B
+      String panel =
+          url(
+              "/boards/"
+                  + com.wayledger.support.NecPanels.splitPhasePanel(sites, boards, schedule)
+                      .getId());
+      pages.put("NEC panelboard schedule", panel);
+      pages.put("NEC panelboard door chart", panel + "/door-chart");
+      pages.put("NEC panelboard balancing", panel + "/balance");
       browser.get(board + "/inspections");
       browser.findElements(By.cssSelector("main a[href*='/inspections/']")).stream()
           .map(link -> link.getAttribute("href"))

@@ -57,4 +57,60 @@ class PanelSpacesTests {
     assertThatThrownBy(() -> panel.spacesOf(1, 3)).isInstanceOf(IllegalArgumentException.class);
     assertThatThrownBy(() -> new PanelSpaces(25, 2)).isInstanceOf(IllegalArgumentException.class);
   }
+
+  @Test
+  void aTwoPoleBreakerStartingOnTheLastRowRunsPastTheBottom() {
+    PanelSpaces panel = new PanelSpaces(42, 2);
+    // spaces 41 and 42 are the last row: a second pole would need space 43 or 44
+    assertThat(panel.fitOf(41, 2)).isEqualTo(PanelSpaces.Fit.RUNS_PAST_BOTTOM);
+    assertThat(panel.fitOf(42, 2)).isEqualTo(PanelSpaces.Fit.RUNS_PAST_BOTTOM);
+    assertThat(panel.fitOf(39, 2)).as("39 and 41").isEqualTo(PanelSpaces.Fit.FITS);
+    assertThat(panel.fitOf(41, 1)).isEqualTo(PanelSpaces.Fit.FITS);
+  }
+
+  @Test
+  void aSpacePastTheCountOrAThirdPoleOnASplitPhasePanelDoesNotFit() {
+    PanelSpaces panel = new PanelSpaces(24, 2);
+    assertThat(panel.fitOf(25, 1)).isEqualTo(PanelSpaces.Fit.NO_SUCH_SPACE);
+    assertThat(panel.fitOf(0, 1)).isEqualTo(PanelSpaces.Fit.NO_SUCH_SPACE);
+    assertThat(panel.fitOf(1, 3)).isEqualTo(PanelSpaces.Fit.TOO_MANY_POLES);
+    assertThat(new PanelSpaces(24, 3).fitOf(19, 3))
+        .as("19, 21, 23")
+        .isEqualTo(PanelSpaces.Fit.FITS);
+    assertThat(new PanelSpaces(24, 3).fitOf(21, 3)).isEqualTo(PanelSpaces.Fit.RUNS_PAST_BOTTOM);
+  }
+
+  @Test
+  void breakersOverlapOnlyWhenTheyShareASpaceInTheSameColumn() {
+    PanelSpaces panel = new PanelSpaces(42, 2);
+    // a 2-pole at 7 takes 7 and 9; a 1-pole at 9 sits on its second pole
+    assertThat(panel.sharedSpace(9, 1, 7, 2)).isEqualTo(9);
+    assertThat(panel.sharedSpace(5, 2, 7, 2)).as("5/7 against 7/9").isEqualTo(7);
+    assertThat(panel.sharedSpace(8, 2, 7, 2)).as("the other column").isZero();
+    assertThat(panel.sharedSpace(11, 1, 7, 2)).isZero();
+    PanelSpaces threeLine = new PanelSpaces(42, 3);
+    assertThat(threeLine.sharedSpace(5, 1, 1, 3)).as("1, 3, 5").isEqualTo(5);
+  }
+
+  @Test
+  void onlyBoardsOfTwoOrThreeLinesUnderTheNecSetAreLaidOutAsPanelboards() {
+    assertThat(PanelSpaces.ofBoard("IEC", 3, 12)).isNull();
+    assertThat(PanelSpaces.ofBoard(null, 2, 12)).isNull();
+    assertThat(PanelSpaces.ofBoard("NEC", 1, 12)).as("a two-wire board has one line").isNull();
+    assertThat(PanelSpaces.ofBoard("NEC", 2, 42)).isEqualTo(new PanelSpaces(42, 2));
+    assertThat(PanelSpaces.ofBoard("NEC", 3, 29))
+        .as("a count stored odd is shown with one more space")
+        .isEqualTo(new PanelSpaces(30, 3));
+  }
+
+  @Test
+  void everySpaceOfA42SpaceSplitPhasePanelHasTheLineOfItsRow() {
+    PanelSpaces panel = new PanelSpaces(42, 2);
+    assertThat(panel.rowCount()).isEqualTo(21);
+    for (int space = 1; space <= 42; space++) {
+      int row = (space + 1) / 2;
+      Phase expected = row % 2 == 1 ? Phase.L1 : Phase.L2; // A on odd rows, B on even (practice)
+      assertThat(panel.lineOf(space)).as("space %d", space).isEqualTo(expected);
+    }
+  }
 }

@@ -171,6 +171,7 @@ class ImportUnitsTests {
         metric.findings(),
         metric.exportedOn(),
         "NEC (NFPA 70)",
+        "120/240 V single-phase three-wire",
         CableUnits.AWG_AND_FEET);
   }
 

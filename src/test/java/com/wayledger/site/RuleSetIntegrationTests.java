@@ -262,12 +262,13 @@ class RuleSetIntegrationTests {
 
     assertThat(
             jdbc.sql(
-                    "SELECT phase FROM way_slot WHERE board_id = ? AND way_number = 2 ORDER BY phase")
+                    "SELECT way_number || ':' || phase FROM way_slot WHERE board_id = ?"
+                        + " AND way_number IN (2, 4) ORDER BY way_number")
                 .param(boardId)
                 .query(String.class)
                 .list())
-        .as("the two-pole circuit holds both lines of way 2")
-        .containsExactly("L1", "L2");
+        .as("the two-pole breaker at space 2 takes spaces 2 (row 1, A) and 4 (row 2, B)")
+        .containsExactly("2:L1", "4:L2");
     var demand = analysis.ofSite(siteId).boardDemand(boardId);
     assertThat(demand.lines()).as("a 120/240 V board has lines A and B").isEqualTo(2);
     assertThat(demand.phases().get(0).currentAmps())
@@ -285,7 +286,9 @@ class RuleSetIntegrationTests {
             .andReturn()
             .getResponse()
             .getContentAsString();
-    assertThat(schedule).as("line B rows are on the schedule").contains("pos-2-L2");
+    assertThat(schedule)
+        .as("the panelboard layout, the heater spanning spaces 2 and 4 on lines A and B")
+        .contains("spaces 2/4 · lines A–B");
   }
 
   @Test

@@ -2,9 +2,12 @@ package com.wayledger.engine.dwelling;
 
 import com.wayledger.engine.BoardSpec;
 import com.wayledger.engine.CircuitSpec;
+import com.wayledger.engine.LinePhasors;
 import com.wayledger.engine.LoadSpec;
+import com.wayledger.engine.PhasePosition;
 import com.wayledger.engine.RatingUnit;
 import com.wayledger.engine.SiteSpec;
+import com.wayledger.engine.SupplySystem;
 import com.wayledger.engine.demand.ConnectedLoad;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -51,16 +54,19 @@ public final class DwellingSite {
       }
     }
     double u0 = site.supply().nominalVoltageToEarthVolts();
+    SupplySystem system = site.supply().system();
     Map<Long, List<Worksheet>> out = new LinkedHashMap<>();
     for (BoardSpec board : site.boards()) {
       List<DwellingUnit> units = new ArrayList<>();
       List<ApplianceLoad> houseLoads = new ArrayList<>();
       if (inputs.containsKey(board.id())) {
-        units.add(unitOf(board, inputs.get(board.id()), children, inputs, u0));
+        units.add(unitOf(board, inputs.get(board.id()), children, inputs, u0, system));
       } else {
-        collectUnits(board, children, inputs, u0, units, 0);
+        List<ApplianceLoad> below = new ArrayList<>();
+        collectUnits(board, children, inputs, u0, system, units, below, 0);
         if (!units.isEmpty()) {
-          houseLoads.addAll(loadsOf(board, u0));
+          houseLoads.addAll(loadsOf(board, u0, system));
+          houseLoads.addAll(below);
         }
       }
       List<MeasuredMaximumDemand> recorded = records.getOrDefault(board.id(), List.of());
@@ -89,21 +95,28 @@ public final class DwellingSite {
     return u0 <= NORTH_AMERICAN_U0_LIMIT_VOLTS ? 2.0 * u0 : u0;
   }
 
+  /**
+   * The dwelling units below a board, and the loads of the boards below it that are not dwelling
+   * units nor below one (a common-area panel): house loads of a multifamily calculation.
+   */
   private static void collectUnits(
       BoardSpec board,
       Map<Long, List<BoardSpec>> children,
       Map<Long, DwellingInputs> inputs,
       double u0,
+      SupplySystem system,
       List<DwellingUnit> units,
+      List<ApplianceLoad> houseLoads,
       int depth) {
     if (depth > 64) {
       return; // a cycle; the demand engine reports it
     }
     for (BoardSpec child : children.getOrDefault(board.id(), List.of())) {
       if (inputs.containsKey(child.id())) {
-        units.add(unitOf(child, inputs.get(child.id()), children, inputs, u0));
+        units.add(unitOf(child, inputs.get(child.id()), children, inputs, u0, system));
       } else {
-        collectUnits(child, children, inputs, u0, units, depth + 1);
+        houseLoads.addAll(loadsOf(child, u0, system));
+        collectUnits(child, children, inputs, u0, system, units, houseLoads, depth + 1);
       }
     }
   }
@@ -113,27 +126,38 @@ public final class DwellingSite {
       DwellingInputs unitInputs,
       Map<Long, List<BoardSpec>> children,
       Map<Long, DwellingInputs> inputs,
-      double u0) {
-    List<ApplianceLoad> loads = new ArrayList<>(loadsOf(board, u0));
+      double u0,
+      SupplySystem system) {
+    List<ApplianceLoad> loads = new ArrayList<>(loadsOf(board, u0, system));
     List<BoardSpec> below = new ArrayList<>(children.getOrDefault(board.id(), List.of()));
     for (int i = 0; i < below.size() && i < 10_000; i++) {
       BoardSpec child = below.get(i);
       if (!inputs.containsKey(child.id())) {
-        loads.addAll(loadsOf(child, u0));
+        loads.addAll(loadsOf(child, u0, system));
         below.addAll(children.getOrDefault(child.id(), List.of()));
       }
     }
     return new DwellingUnit(board.id(), board.reference(), unitInputs, loads);
   }
 
-  /** The board's own load lines in VA (circuits feeding another board carry none). */
-  static List<ApplianceLoad> loadsOf(BoardSpec board, double u0) {
+  /**
+   * The board's own load lines in VA (circuits feeding another board carry none), each marked line
+   * to line when its circuit sits in a two-pole position (a 240 V load on a 120/240 V board: no
+   * neutral current, NEC 220.61). A rating in A is turned into VA at the voltage of its position:
+   * U0 line to neutral, the line-to-line voltage for two poles, 3 × U0 for three. A circuit whose
+   * position is not recorded is taken at the line-to-line voltage (the larger VA, the safe side)
+   * and counted on the neutral.
+   */
+  static List<ApplianceLoad> loadsOf(BoardSpec board, double u0, SupplySystem system) {
     List<ApplianceLoad> loads = new ArrayList<>();
     double lineVolts = u0 <= NORTH_AMERICAN_U0_LIMIT_VOLTS ? 2.0 * u0 : u0;
     for (CircuitSpec circuit : board.circuits()) {
-      boolean threePole = circuit.position() != null && !circuit.position().isSinglePole();
+      PhasePosition position = circuit.position();
+      boolean lineToLine = position != null && position.isLineToLine();
+      double perAmp =
+          position == null ? lineVolts : LinePhasors.voltAmperesPerAmp(system, position, u0);
       for (LoadSpec load : circuit.loads()) {
-        ConnectedLoad connected = ConnectedLoad.of(load, u0, threePole);
+        ConnectedLoad connected = ConnectedLoad.ofPerAmp(load, perAmp);
         if (!connected.isAssessed() || load.quantity() < 1) {
           continue;
         }
@@ -142,13 +166,10 @@ public final class DwellingSite {
             load.description() == null || load.description().isBlank()
                 ? circuit.description()
                 : load.description();
-        if (load.ratingUnit() == RatingUnit.A && !threePole) {
-          // the connection is not recorded: an amperes rating is taken line to line (240 V), which
-          // overstates a 120 V load — the safe side
-          each = load.ratingValue() * lineVolts;
-          name += " (rated in A, taken at " + Lines.figure(lineVolts) + " V)";
+        if (load.ratingUnit() == RatingUnit.A) {
+          name += " (rated in A, taken at " + Lines.figure(perAmp) + " V)";
         }
-        loads.add(new ApplianceLoad(name, load.category(), load.quantity(), each, false));
+        loads.add(new ApplianceLoad(name, load.category(), load.quantity(), each, lineToLine));
       }
     }
     return loads;

@@ -116,6 +116,9 @@ public final class NecDwellingCalculator {
       Standard standard = standard(units, houseLoads);
       sheets.add(standard.sheet);
       sheets.add(neutral(standard, units, houseLoads, dividingVolts));
+      if (units.size() >= NecMultifamilyOptional.MINIMUM_UNITS) {
+        sheets.add(NecMultifamilyOptional.worksheet(units, houseLoads));
+      }
       if (units.size() == 1 && houseLoads.isEmpty()) {
         DwellingUnit unit = units.get(0);
         if (unit.inputs().optionalMethod()) {
@@ -523,8 +526,8 @@ public final class NecDwellingCalculator {
       } else {
         total += w.add(load.description(), "220.61(A)", load.voltAmperes(), factor);
         w.assume(
-            "Loads whose connection is not recorded as line to line are counted on the neutral"
-                + " (the safe side).");
+            "Loads not recorded as line to line (two-pole) are counted on the neutral (the safe"
+                + " side where the connection is not recorded).");
       }
     }
     if (standard.motorAllowanceVoltAmperes > 0) {
@@ -533,6 +536,11 @@ public final class NecDwellingCalculator {
     }
     for (ApplianceLoad house : houseLoads) {
       if (house.lineToLine()) {
+        w.add(
+            "House load: " + house.description() + ": line to line, no neutral current",
+            "220.61(A)",
+            house.voltAmperes(),
+            0.0);
         continue;
       }
       total += w.add("House load: " + house.description(), "220.61(A)", house.voltAmperes(), 1.0);

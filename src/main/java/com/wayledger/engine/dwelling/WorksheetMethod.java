@@ -8,6 +8,8 @@ public enum WorksheetMethod {
   NEUTRAL("Feeder or service neutral", "220.61"),
   /** Optional method for one dwelling unit (220.82). */
   OPTIONAL("Optional method, one dwelling unit", "220.82"),
+  /** Optional method for a multifamily dwelling of three or more units (220.84). */
+  MULTIFAMILY_OPTIONAL("Optional method, multifamily dwelling", "220.84"),
   /** Additions to an existing dwelling unit (220.83). */
   ADDITION("Addition to an existing dwelling unit", "220.83"),
   /** Existing load from recorded maximum demand (220.87). */

@@ -1,0 +1,321 @@
+package com.wayledger.exchange;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+import static org.springframework.security.test.web.servlet.request.SecurityMockMvcRequestPostProcessors.csrf;
+import static org.springframework.security.test.web.servlet.request.SecurityMockMvcRequestPostProcessors.user;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.multipart;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.post;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.put;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.jsonPath;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
+
+import com.wayledger.board.AnalysisService;
+import com.wayledger.board.SiteAnalysis;
+import com.wayledger.engine.Phase;
+import com.wayledger.engine.PhasePosition;
+import com.wayledger.engine.demand.BoardDemand;
+import com.wayledger.site.Site;
+import com.wayledger.site.SiteService;
+import java.io.ByteArrayInputStream;
+import java.util.UUID;
+import org.apache.poi.ss.usermodel.DataFormatter;
+import org.apache.poi.ss.usermodel.Row;
+import org.apache.poi.ss.usermodel.Sheet;
+import org.apache.poi.xssf.usermodel.XSSFWorkbook;
+import org.hamcrest.Matchers;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.springframework.beans.factory.annotation.Autowired;
+import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
+import org.springframework.http.MediaType;
+import org.springframework.jdbc.core.simple.JdbcClient;
+import org.springframework.mock.web.MockMultipartFile;
+import org.springframework.test.context.ActiveProfiles;
+import org.springframework.test.web.servlet.MockMvc;
+import org.springframework.test.web.servlet.request.RequestPostProcessor;
+
+/**
+ * The NEC demo's panels go out to a workbook and come back into empty panels with the same
+ * analysis: split-phase lines A and B, two-pole (240 V) circuits and the dwelling inputs ("Dwelling
+ * load" sheet). The figures compared are the stored panel's own, so nothing is computed here.
+ */
+@SpringBootTest
+@AutoConfigureMockMvc
+@ActiveProfiles({"test", "demo"})
+class NecExchangeIntegrationTests {
+
+  private static final RequestPostProcessor EDITOR = user("ed").roles("EDITOR");
+
+  @Autowired MockMvc mvc;
+  @Autowired SiteService sites;
+  @Autowired AnalysisService analysis;
+  @Autowired JdbcClient jdbc;
+
+  Site site;
+
+  @BeforeEach
+  void necDemo() {
+    site =
+        sites.all().stream()
+            .filter(s -> s.getName().equals("Wrenfield Court Apartments"))
+            .findFirst()
+            .orElseThrow();
+  }
+
+  @Test
+  void workbookWritesTheRuleSetSupplySystemAndConnections() throws Exception {
+    long common = boardId("CP");
+    try (XSSFWorkbook workbook = new XSSFWorkbook(new ByteArrayInputStream(export(common)))) {
+      Sheet sheet = boardSheet(workbook);
+      DataFormatter text = new DataFormatter();
+      String facts = rowText(sheet.getRow(1), text);
+      assertThat(facts).contains("NEC").contains("120/240 V single-phase three-wire");
+      Row header = sheet.getRow(3);
+      int line = column(header, "Line", text);
+      int connection = column(header, "Connection", text);
+      boolean twoPole = false;
+      for (int r = 4; r <= sheet.getLastRowNum(); r++) {
+        Row row = sheet.getRow(r);
+        if (row != null && "L1-L2".equals(text.formatCellValue(row.getCell(line)))) {
+          assertThat(text.formatCellValue(row.getCell(connection))).isEqualTo("L-L");
+          twoPole = true;
+        }
+      }
+      assertThat(twoPole).as("a two-pole row").isTrue();
+    }
+  }
+
+  @Test
+  void commonAreaPanelRoundTripsIntoAnEmptyPanel() throws Exception {
+    long common = boardId("CP");
+    long copy = emptyPanel("CP copy " + UUID.randomUUID().toString().substring(0, 6), "none");
+
+    importInto(copy, export(common));
+
+    assertSameDemand(common, copy);
+  }
+
+  @Test
+  void apartmentPanelRoundTripsWithItsDwellingInputs() throws Exception {
+    long apartment = boardId("APT-1");
+    long copy = emptyPanel("APT-1 copy " + UUID.randomUUID().toString().substring(0, 6), null);
+
+    String preview = importInto(copy, export(apartment));
+
+    assertThat(preview)
+        .contains("Dwelling inputs in the file (exported from APT-1)")
+        .contains("1,150 ft²");
+    assertThat(
+            jdbc.sql(
+                    "SELECT floor_area_square_feet || '|' || small_appliance_circuits || '|'"
+                        + " || laundry_circuits FROM board_dwelling WHERE board_id = ?")
+                .param(copy)
+                .query(String.class)
+                .single())
+        .as("the apartment's inputs stored on the copy")
+        .isEqualTo(
+            jdbc.sql(
+                    "SELECT floor_area_square_feet || '|' || small_appliance_circuits || '|'"
+                        + " || laundry_circuits FROM board_dwelling WHERE board_id = ?")
+                .param(apartment)
+                .query(String.class)
+                .single());
+    assertSameDemand(apartment, copy);
+    SiteAnalysis results = analysis.ofSite(site.getId());
+    assertThat(results.dwellingWorksheets(copy).get(0).resultVoltAmperes())
+        .as("standard method of the copy")
+        .isCloseTo(results.dwellingWorksheets(apartment).get(0).resultVoltAmperes(), within(1e-6));
+    assertThat(
+            results.spec().boards().stream()
+                .filter(b -> b.id() == copy)
+                .flatMap(b -> b.circuits().stream())
+                .filter(c -> c.description().equals("Water heater"))
+                .findFirst()
+                .orElseThrow()
+                .position())
+        .isEqualTo(PhasePosition.L1_L2);
+  }
+
+  @Test
+  void dwellingInputsSetThroughTheApiAreRefusedBesideTheBadField() throws Exception {
+    long copy = emptyPanel("API " + UUID.randomUUID().toString().substring(0, 6), null);
+
+    mvc.perform(
+            put("/api/boards/{id}/dwelling", copy)
+                .with(EDITOR)
+                .with(csrf())
+                .contentType(MediaType.APPLICATION_JSON)
+                .content(
+                    """
+                    {"floorArea": -3, "areaUnit": "FT2", "smallApplianceCircuits": 2,
+                     "laundryCircuits": 1, "addition": "NONE"}
+                    """))
+        .andExpect(status().is4xxClientError())
+        .andExpect(jsonPath("$.fields[*].field", Matchers.hasItem("floorArea")));
+    assertThat(
+            jdbc.sql("SELECT COUNT(*) FROM board_dwelling WHERE board_id = ?")
+                .param(copy)
+                .query(Long.class)
+                .single())
+        .isZero();
+  }
+
+  @Test
+  void apiTakesALineToLineCircuitAndRefusesAPositionThePanelHasNot() throws Exception {
+    long panel = emptyPanel("API circuits " + UUID.randomUUID().toString().substring(0, 6), null);
+    String twoPole =
+        """
+        {"wayNumber": 1, "position": "%s", "description": "Water heater", "status": "IN_USE",
+         "deviceKind": "MCB", "deviceCurve": "C", "deviceRatingAmps": 30, "devicePoles": 2,
+         "deviceBreakingCapacityKiloAmps": 10, "loadDescription": "Water heater",
+         "loadCategory": "WATER_HEATING_STORAGE", "loadQuantity": 1, "loadRatingValue": 4500,
+         "loadRatingUnit": "W", "loadPowerFactor": 1, "location": "INDOORS"}
+        """;
+
+    String id =
+        mvc.perform(
+                post("/api/boards/{id}/circuits", panel)
+                    .with(EDITOR)
+                    .with(csrf())
+                    .contentType(MediaType.APPLICATION_JSON)
+                    .content(twoPole.formatted("L1_L2")))
+            .andExpect(status().isCreated())
+            .andReturn()
+            .getResponse()
+            .getContentAsString();
+    mvc.perform(get("/api/circuits/{id}", id.strip()).with(EDITOR))
+        .andExpect(status().isOk())
+        .andExpect(jsonPath("$..position", Matchers.hasItem("L1_L2")));
+    // a 120/240 V panel has lines A and B only: B–C is not one of its positions
+    mvc.perform(
+            post("/api/boards/{id}/circuits", panel)
+                .with(EDITOR)
+                .with(csrf())
+                .contentType(MediaType.APPLICATION_JSON)
+                .content(
+                    twoPole.formatted("L2_L3").replace("\"wayNumber\": 1", "\"wayNumber\": 2")))
+        .andExpect(status().is4xxClientError());
+    assertThat(
+            jdbc.sql("SELECT COUNT(*) FROM circuit WHERE board_id = ?")
+                .param(panel)
+                .query(Long.class)
+                .single())
+        .as("only the two-pole A–B circuit stored")
+        .isEqualTo(1L);
+  }
+
+  private void assertSameDemand(long original, long copy) {
+    SiteAnalysis results = analysis.ofSite(site.getId());
+    BoardDemand before = results.demand().board(original);
+    BoardDemand after = results.demand().board(copy);
+    assertThat(after.demandWatts()).as("demand W").isCloseTo(before.demandWatts(), within(1e-6));
+    assertThat(after.connectedWatts())
+        .as("connected W")
+        .isCloseTo(before.connectedWatts(), within(1e-6));
+    for (Phase line : new Phase[] {Phase.L1, Phase.L2}) {
+      assertThat(after.onPhase(line).currentAmps())
+          .as("line %s", line)
+          .isCloseTo(before.onPhase(line).currentAmps(), within(1e-6));
+    }
+    assertThat(after.neutralCurrentAmps())
+        .as("neutral")
+        .isCloseTo(before.neutralCurrentAmps(), within(1e-6));
+  }
+
+  private long boardId(String reference) {
+    return jdbc.sql("SELECT id FROM board WHERE site_id = ? AND reference = ?")
+        .param(site.getId())
+        .param(reference)
+        .query(Long.class)
+        .single();
+  }
+
+  private long emptyPanel(String reference, String method) throws Exception {
+    var request =
+        post("/sites/{id}/boards", site.getId())
+            .with(EDITOR)
+            .with(csrf())
+            .param("reference", reference)
+            .param("phases", "1")
+            .param("wayCount", "12")
+            .param("busbarRatingAmps", "200")
+            .param("incomerKind", "MCCB")
+            .param("incomerRatingAmps", "200")
+            .param("incomerPoles", "2")
+            .param("incomerBreakingCapacityKiloAmps", "22")
+            .param("unbalanceLimitPercent", "10")
+            .param("coincidenceFactor", "1");
+    if (method != null) {
+      request.param("diversityMethod", method);
+    }
+    mvc.perform(request).andExpect(status().is3xxRedirection());
+    return boardId(reference);
+  }
+
+  private byte[] export(long boardId) throws Exception {
+    return mvc.perform(get("/boards/{id}/export.xlsx", boardId).with(EDITOR))
+        .andExpect(status().isOk())
+        .andReturn()
+        .getResponse()
+        .getContentAsByteArray();
+  }
+
+  /** Uploads, previews and imports a workbook; returns the preview page. */
+  private String importInto(long boardId, byte[] workbook) throws Exception {
+    String location =
+        mvc.perform(
+                multipart("/boards/{id}/import", boardId)
+                    .file(
+                        new MockMultipartFile(
+                            "file", "panel.xlsx", "application/octet-stream", workbook))
+                    .with(EDITOR)
+                    .with(csrf()))
+            .andExpect(status().is3xxRedirection())
+            .andReturn()
+            .getResponse()
+            .getRedirectedUrl();
+    assertThat(location).as("our own export goes straight to the preview").endsWith("/preview");
+    String token = location.split("/")[4];
+    String preview =
+        mvc.perform(get(location).with(EDITOR))
+            .andExpect(status().isOk())
+            .andReturn()
+            .getResponse()
+            .getContentAsString();
+    mvc.perform(
+            post("/boards/{id}/import/{t}", boardId, token)
+                .param("mode", "all")
+                .param("reason", "round trip")
+                .with(EDITOR)
+                .with(csrf()))
+        .andExpect(status().is3xxRedirection());
+    return preview;
+  }
+
+  private static Sheet boardSheet(XSSFWorkbook workbook) {
+    for (int i = 0; i < workbook.getNumberOfSheets(); i++) {
+      if (workbook.getSheetName(i).startsWith("Board ")) {
+        return workbook.getSheetAt(i);
+      }
+    }
+    throw new AssertionError("no board sheet");
+  }
+
+  private static String rowText(Row row, DataFormatter text) {
+    StringBuilder all = new StringBuilder();
+    row.forEach(cell -> all.append(text.formatCellValue(cell)).append(' '));
+    return all.toString();
+  }
+
+  private static int column(Row header, String name, DataFormatter text) {
+    for (var cell : header) {
+      if (name.equals(text.formatCellValue(cell))) {
+        return cell.getColumnIndex();
+      }
+    }
+    throw new AssertionError("no column " + name);
+  }
+}
