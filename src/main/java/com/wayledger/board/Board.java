@@ -253,6 +253,11 @@ public class Board {
     return site;
   }
 
+  /** The units this board's cable sizes and lengths are read and typed in (its site's). */
+  public com.wayledger.engine.rules.CableUnits cableUnits() {
+    return site.cableUnits();
+  }
+
   public String getReference() {
     return reference;
   }

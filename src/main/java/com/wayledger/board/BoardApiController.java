@@ -30,12 +30,17 @@ public class BoardApiController {
   private final BoardService boards;
   private final ScheduleService schedule;
   private final BoardRepository boardRepository;
+  private final com.wayledger.site.SiteService sites;
 
   public BoardApiController(
-      BoardService boards, ScheduleService schedule, BoardRepository boardRepository) {
+      BoardService boards,
+      ScheduleService schedule,
+      BoardRepository boardRepository,
+      com.wayledger.site.SiteService sites) {
     this.boards = boards;
     this.schedule = schedule;
     this.boardRepository = boardRepository;
+    this.sites = sites;
   }
 
   public record BoardSummary(
@@ -114,8 +119,10 @@ public class BoardApiController {
           circuit.getStatus(),
           circuit.isLockedForBalancing(),
           circuit.getDevice() == null ? null : circuit.getDevice().label(),
-          circuit.getCable() == null ? null : circuit.getCable().label(),
-          CircuitForm.of(circuit),
+          circuit.getCable() == null
+              ? null
+              : circuit.getCable().label(circuit.getBoard().cableUnits()),
+          CableUnitsOfForms.shown(CircuitForm.of(circuit), circuit.getBoard().cableUnits()),
           circuit.getLoads().stream().map(LoadView::of).toList());
     }
   }
@@ -138,7 +145,7 @@ public class BoardApiController {
             .orElseThrow(() -> new com.wayledger.system.NotFoundException("Board", id));
     return new BoardDetail(
         BoardSummary.of(board),
-        BoardForm.of(board),
+        CableUnitsOfForms.shown(BoardForm.of(board), board.cableUnits()),
         board.getCircuits().stream().map(CircuitView::of).toList());
   }
 
@@ -146,20 +153,24 @@ public class BoardApiController {
   @ResponseStatus(HttpStatus.CREATED)
   @Operation(summary = "Create a board on a site (editor)")
   public BoardSummary create(@PathVariable long siteId, @Valid @RequestBody BoardForm form) {
-    return BoardSummary.of(boards.create(siteId, form));
+    return BoardSummary.of(
+        boards.create(siteId, CableUnitsOfForms.stored(form, sites.get(siteId).cableUnits())));
   }
 
   @PutMapping("/boards/{id}")
   @Operation(summary = "Replace a board's fields (editor)")
   public BoardSummary update(@PathVariable long id, @Valid @RequestBody BoardForm form) {
-    return BoardSummary.of(boards.update(id, form));
+    return BoardSummary.of(
+        boards.update(id, CableUnitsOfForms.stored(form, boards.get(id).cableUnits())));
   }
 
   @PostMapping("/boards/{id}/circuits")
   @ResponseStatus(HttpStatus.CREATED)
   @Operation(summary = "Add a circuit, optionally with its first load (editor)")
   public long addCircuit(@PathVariable long id, @Valid @RequestBody CircuitForm form) {
-    return schedule.addCircuit(id, form).getId();
+    return schedule
+        .addCircuit(id, CableUnitsOfForms.stored(form, boards.get(id).cableUnits()))
+        .getId();
   }
 
   @GetMapping("/circuits/{id}")
@@ -177,7 +188,8 @@ public class BoardApiController {
     if (form.version() == null) {
       throw new com.wayledger.system.RuleViolation("version", "api.version.required");
     }
-    schedule.updateCircuit(id, form);
+    var units = schedule.readCircuit(id, circuit -> circuit.getBoard().cableUnits());
+    schedule.updateCircuit(id, CableUnitsOfForms.stored(form, units));
     return circuit(id);
   }
 

@@ -66,7 +66,8 @@ public class BoardController {
     model.addAttribute("site", site);
     model.addAttribute("parents", boards.onSite(siteId));
     model.addAttribute("feeds", boards.feedOptions(siteId));
-    model.addAttribute("form", BoardForm.blank(site.getPhases()));
+    model.addAttribute(
+        "form", CableUnitsOfForms.shown(BoardForm.blank(site.getPhases()), site.cableUnits()));
     return FORM_VIEW;
   }
 
@@ -87,7 +88,8 @@ public class BoardController {
       return FormStatus.invalid(response, FORM_VIEW);
     }
     try {
-      return "redirect:/boards/" + boards.create(siteId, form, reason).getId();
+      BoardForm stored = CableUnitsOfForms.stored(form, sites.get(siteId).cableUnits());
+      return "redirect:/boards/" + boards.create(siteId, stored, reason).getId();
     } catch (RuleViolation violation) {
       FormStatus.reject(errors, violation);
       return FormStatus.invalid(response, FORM_VIEW);
@@ -107,7 +109,7 @@ public class BoardController {
     model.addAttribute("site", board.getSite());
     model.addAttribute("parents", parentsFor(board));
     model.addAttribute("feeds", feedsFor(board));
-    model.addAttribute("form", BoardForm.of(board));
+    model.addAttribute("form", CableUnitsOfForms.shown(BoardForm.of(board), board.cableUnits()));
     return FORM_VIEW;
   }
 
@@ -130,7 +132,7 @@ public class BoardController {
       return FormStatus.invalid(response, FORM_VIEW);
     }
     try {
-      boards.update(id, form, reason);
+      boards.update(id, CableUnitsOfForms.stored(form, board.cableUnits()), reason);
       return "redirect:/boards/" + id;
     } catch (RuleViolation violation) {
       FormStatus.reject(errors, violation);

@@ -143,7 +143,9 @@ public class BoardService {
     }
     Board board = get(boardId);
     if (form.version() != null && !Objects.equals(form.version(), board.getVersion())) {
-      throw new StaleEditException("Board " + board.getReference(), BoardForm.of(board));
+      throw new StaleEditException(
+          "Board " + board.getReference(),
+          CableUnitsOfForms.shown(BoardForm.of(board), board.cableUnits()));
     }
     Board parent = checkRules(board.getSite(), form, board);
     var before = ScheduleMapper.headerOf(board);
@@ -155,8 +157,8 @@ public class BoardService {
     String fields =
         com.wayledger.system.RecordDiff.describe(
             com.wayledger.system.RecordDiff.between(
-                beforeForm,
-                BoardForm.of(saved),
+                CableUnitsOfForms.shown(beforeForm, saved.cableUnits()),
+                CableUnitsOfForms.shown(BoardForm.of(saved), saved.cableUnits()),
                 java.util.Set.of("version", "parentBoardId", "fedFromCircuitId")),
             "board",
             6);

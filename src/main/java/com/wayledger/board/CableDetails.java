@@ -107,21 +107,52 @@ public class CableDetails {
 
   /** Short text such as "2.5/1.5 mm² 18 m". */
   public String label() {
-    if (!isRecorded()) {
-      return "";
-    }
+    return label(com.wayledger.engine.rules.CableUnits.METRIC);
+  }
+
+  /** Short text in a site's units: "2.5/1.5 mm² 18 m", or "12/12 AWG 50 ft". */
+  public String label(com.wayledger.engine.rules.CableUnits units) {
+    return describe(lineCsaSquareMillimetres, protectiveCsaSquareMillimetres, lengthMetres, units);
+  }
+
+  /** Sizes and length as short text in the given units; empty when none is recorded. */
+  static String describe(
+      Double lineCsa,
+      Double protectiveCsa,
+      Double lengthMetres,
+      com.wayledger.engine.rules.CableUnits units) {
     StringBuilder text = new StringBuilder();
-    if (lineCsaSquareMillimetres != null) {
-      text.append(Numbers.plain(lineCsaSquareMillimetres));
-      if (protectiveCsaSquareMillimetres != null) {
-        text.append('/').append(Numbers.plain(protectiveCsaSquareMillimetres));
+    if (lineCsa != null) {
+      String line = units.sizeText(lineCsa);
+      if (protectiveCsa != null) {
+        String protective = units.sizeText(protectiveCsa);
+        if (units.awgAndFeet()) {
+          text.append(line).append(" / ").append(protective); // "1/0/6 AWG" would misread
+        } else {
+          text.append(sameUnit(line, protective) ? number(line) : line)
+              .append('/')
+              .append(protective);
+        }
+      } else {
+        text.append(line);
       }
-      text.append(" mm²");
     }
     if (lengthMetres != null) {
-      text.append(' ').append(Numbers.plain(lengthMetres)).append(" m");
+      text.append(' ').append(units.lengthText(lengthMetres));
     }
     return text.toString().strip();
+  }
+
+  private static boolean sameUnit(String a, String b) {
+    return unit(a).equals(unit(b));
+  }
+
+  private static String number(String sizeText) {
+    return sizeText.substring(0, sizeText.indexOf(' '));
+  }
+
+  private static String unit(String sizeText) {
+    return sizeText.substring(sizeText.indexOf(' ') + 1);
   }
 
   public Double getLineCsaSquareMillimetres() {

@@ -62,7 +62,144 @@ public record CircuitForm(
     @Positive @DecimalMax("63000") Double deviceInstantaneousSettingAmps,
     @DecimalMin("1") @DecimalMax("50") Double loadStartUpMultiple,
     CircuitLocation location,
-    FaultInterrupter deviceFaultInterrupter) {
+    FaultInterrupter deviceFaultInterrupter,
+    @Size(max = 40) String cableLineSize,
+    @Size(max = 40) String cableCpcSize,
+    @Positive @DecimalMax("16405") Double cableLengthFeet) {
+
+  /**
+   * A row in stored units only (mm², metres). {@code cableLineSize}, {@code cableCpcSize} (AWG or
+   * kcmil, "12 AWG") and {@code cableLengthFeet} carry what a person on an AWG-and-feet site typed
+   * or reads; {@link CableUnitsOfForms} turns them into the stored fields and back.
+   */
+  public CircuitForm(
+      Integer wayNumber,
+      PhasePosition position,
+      String description,
+      WayStatus status,
+      Boolean lockedForBalancing,
+      DeviceKind deviceKind,
+      TripCurve deviceCurve,
+      Double deviceRatingAmps,
+      Integer devicePoles,
+      Double deviceBreakingCapacityKiloAmps,
+      Double deviceResidualMilliAmps,
+      RcdType deviceRcdType,
+      Double cableLineCsa,
+      Double cableCpcCsa,
+      ConductorMaterial cableMaterial,
+      Insulation cableInsulation,
+      Double cableLengthMetres,
+      InstallationMethod cableInstallationMethod,
+      Double cableAmbientCelsius,
+      Integer cableGroupedCircuits,
+      Integer cableThermalInsulationMm,
+      Double measuredLoopImpedanceOhms,
+      String loadDescription,
+      LoadCategory loadCategory,
+      Integer loadQuantity,
+      Double loadRatingValue,
+      RatingUnit loadRatingUnit,
+      Double loadPowerFactor,
+      Long version,
+      Boolean ringFinal,
+      Double deviceOverloadSettingAmps,
+      Double deviceInstantaneousSettingAmps,
+      Double loadStartUpMultiple,
+      CircuitLocation location,
+      FaultInterrupter deviceFaultInterrupter) {
+    this(
+        wayNumber,
+        position,
+        description,
+        status,
+        lockedForBalancing,
+        deviceKind,
+        deviceCurve,
+        deviceRatingAmps,
+        devicePoles,
+        deviceBreakingCapacityKiloAmps,
+        deviceResidualMilliAmps,
+        deviceRcdType,
+        cableLineCsa,
+        cableCpcCsa,
+        cableMaterial,
+        cableInsulation,
+        cableLengthMetres,
+        cableInstallationMethod,
+        cableAmbientCelsius,
+        cableGroupedCircuits,
+        cableThermalInsulationMm,
+        measuredLoopImpedanceOhms,
+        loadDescription,
+        loadCategory,
+        loadQuantity,
+        loadRatingValue,
+        loadRatingUnit,
+        loadPowerFactor,
+        version,
+        ringFinal,
+        deviceOverloadSettingAmps,
+        deviceInstantaneousSettingAmps,
+        loadStartUpMultiple,
+        location,
+        deviceFaultInterrupter,
+        null,
+        null,
+        null);
+  }
+
+  /**
+   * The same row with its cable's sizes and length replaced: stored values (mm², m) and the values
+   * in site units (AWG label, ft), any of them null.
+   */
+  public CircuitForm withCableUnits(
+      Double lineCsa,
+      Double cpcCsa,
+      Double lengthMetres,
+      String lineSize,
+      String cpcSize,
+      Double lengthFeet) {
+    return new CircuitForm(
+        wayNumber,
+        position,
+        description,
+        status,
+        lockedForBalancing,
+        deviceKind,
+        deviceCurve,
+        deviceRatingAmps,
+        devicePoles,
+        deviceBreakingCapacityKiloAmps,
+        deviceResidualMilliAmps,
+        deviceRcdType,
+        lineCsa,
+        cpcCsa,
+        cableMaterial,
+        cableInsulation,
+        lengthMetres,
+        cableInstallationMethod,
+        cableAmbientCelsius,
+        cableGroupedCircuits,
+        cableThermalInsulationMm,
+        measuredLoopImpedanceOhms,
+        loadDescription,
+        loadCategory,
+        loadQuantity,
+        loadRatingValue,
+        loadRatingUnit,
+        loadPowerFactor,
+        version,
+        ringFinal,
+        deviceOverloadSettingAmps,
+        deviceInstantaneousSettingAmps,
+        loadStartUpMultiple,
+        location,
+        deviceFaultInterrupter,
+        lineSize,
+        cpcSize,
+        lengthFeet);
+  }
 
   /** A row whose device has no GFCI/AFCI function: the argument list from before NEC devices. */
   public CircuitForm(
@@ -787,13 +924,11 @@ public record CircuitForm(
 
   /** The cable as short text ("2.5 mm² 18 m"); empty when none is recorded. */
   public String cableLabel() {
-    StringBuilder text = new StringBuilder();
-    if (cableLineCsa != null) {
-      text.append(Numbers.plain(cableLineCsa)).append(" mm²");
-    }
-    if (cableLengthMetres != null) {
-      text.append(' ').append(Numbers.plain(cableLengthMetres)).append(" m");
-    }
-    return text.toString().strip();
+    return cableLabel(com.wayledger.engine.rules.CableUnits.METRIC);
+  }
+
+  /** The stored cable as short text in a site's units ("12 AWG 50 ft"). */
+  public String cableLabel(com.wayledger.engine.rules.CableUnits units) {
+    return CableDetails.describe(cableLineCsa, null, cableLengthMetres, units);
   }
 }

@@ -29,6 +29,11 @@ final class FormChoices {
     model.addAttribute("materials", ConductorMaterial.values());
     model.addAttribute("insulations", Insulation.values());
     model.addAttribute("installationMethods", InstallationMethod.values());
+    model.addAttribute(
+        "necSizes",
+        java.util.Arrays.stream(com.wayledger.engine.nec.ConductorSize.values())
+            .map(com.wayledger.engine.nec.ConductorSize::label)
+            .toList());
   }
 
   /** Everything the circuit editor offers: positions, states, devices, cables and loads. */

@@ -67,7 +67,8 @@ public class ScheduleController {
       Model model) {
     Board board = boards.get(boardId);
     model.addAttribute("board", board);
-    model.addAttribute("form", blankFor(board, way, position));
+    model.addAttribute(
+        "form", CableUnitsOfForms.shown(blankFor(board, way, position), board.cableUnits()));
     if (htmx == null) {
       ReturnTo.BOARD.standalone(model, null, boardId);
     }
@@ -87,7 +88,8 @@ public class ScheduleController {
     form = FormRecovery.ensure(form, errors, model, "form", CircuitForm.class, request);
     if (!errors.hasErrors()) {
       try {
-        Circuit saved = schedule.addCircuit(boardId, form, reason);
+        CircuitForm stored = CableUnitsOfForms.stored(form, boards.get(boardId).cableUnits());
+        Circuit saved = schedule.addCircuit(boardId, stored, reason);
         return savedSchedule(boardId, saved.getWayNumber(), htmx, model, response);
       } catch (RuleViolation violation) {
         FormStatus.reject(errors, violation);
@@ -139,9 +141,10 @@ public class ScheduleController {
     }
     if (!errors.hasErrors()) {
       try {
+        CircuitForm stored = CableUnitsOfForms.stored(form, boards.get(boardId).cableUnits());
         boolean changed =
-            form.hasFirstLoad() || !CircuitForm.of(schedule.circuit(id)).sameRowAs(form);
-        schedule.updateCircuit(id, form, reason);
+            stored.hasFirstLoad() || !CircuitForm.of(schedule.circuit(id)).sameRowAs(stored);
+        schedule.updateCircuit(id, stored, reason);
         if (back != null) {
           redirect.addFlashAttribute("saved", changed ? "circuit.saved" : "circuit.unchanged");
           return "redirect:" + ReturnTo.of(back).url(id, boardId);
@@ -297,7 +300,9 @@ public class ScheduleController {
    */
   private String conflict(
       long id, CircuitForm yours, String htmx, Model model, HttpServletResponse response) {
-    CircuitForm saved = CircuitForm.of(schedule.circuit(id));
+    Circuit circuit = schedule.circuit(id);
+    CircuitForm saved =
+        CableUnitsOfForms.shown(CircuitForm.of(circuit), circuit.getBoard().cableUnits());
     model.asMap().remove(BindingResult.MODEL_KEY_PREFIX + "form");
     model.addAttribute("conflict", RecordDiff.between(yours, saved, java.util.Set.of("version")));
     model.addAttribute("yours", yours);
@@ -333,12 +338,14 @@ public class ScheduleController {
 
   private void fillEditor(Model model, long circuitId, CircuitForm form) {
     Circuit circuit = schedule.circuit(circuitId);
-    model.addAttribute("missingFields", schedule.missingInputs(circuitId));
+    var units = circuit.getBoard().cableUnits();
+    model.addAttribute(
+        "missingFields", CableUnitsOfForms.fieldNames(schedule.missingInputs(circuitId), units));
     model.addAttribute("circuit", circuit);
     model.addAttribute("circuitLoads", schedule.loadsOf(circuitId));
     model.addAttribute("board", boards.get(circuit.getBoard().getId()));
     if (form != null) {
-      model.addAttribute("form", form);
+      model.addAttribute("form", CableUnitsOfForms.shown(form, units));
     }
     if (!model.containsAttribute("loadForm")) {
       model.addAttribute("loadForm", LoadForm.blank());

@@ -127,7 +127,7 @@ public class ScheduleService {
   public Circuit updateCircuit(long circuitId, CircuitForm form, String reason) {
     Circuit circuit = lockedCircuit(circuitId);
     if (form.version() != null && !Objects.equals(form.version(), circuit.getVersion())) {
-      throw new StaleEditException("Circuit " + circuit.getDescription(), CircuitForm.of(circuit));
+      throw new StaleEditException("Circuit " + circuit.getDescription(), savedAsShown(circuit));
     }
     Board board = circuit.getBoard();
     checkCircuitRules(board, form, circuitId);
@@ -144,7 +144,10 @@ public class ScheduleService {
     logged(
         circuit,
         ChangeKind.CIRCUIT_EDITED,
-        changedWhat(beforeForm, CircuitForm.of(circuit), form.hasFirstLoad()),
+        changedWhat(
+            CableUnitsOfForms.shown(beforeForm, board.cableUnits()),
+            savedAsShown(circuit),
+            form.hasFirstLoad()),
         before,
         snapshot(circuit),
         reason);
@@ -173,7 +176,7 @@ public class ScheduleService {
       com.wayledger.engine.CableSpec conductor) {
     Circuit circuit = lockedCircuit(circuitId);
     if (circuit.getVersion() != expectedVersion) {
-      throw new StaleEditException("Circuit " + circuit.getDescription(), CircuitForm.of(circuit));
+      throw new StaleEditException("Circuit " + circuit.getDescription(), savedAsShown(circuit));
     }
     if (circuit.getStatus() == WayStatus.EMPTY) {
       throw new RuleViolation("deviceKind", "circuit.device.emptyPosition");
@@ -296,8 +299,7 @@ public class ScheduleService {
       }
       if (edit.expectedVersion() != null
           && !edit.expectedVersion().equals(circuit.recordVersion())) {
-        throw new StaleEditException(
-            "Circuit " + circuit.getDescription(), CircuitForm.of(circuit));
+        throw new StaleEditException("Circuit " + circuit.getDescription(), savedAsShown(circuit));
       }
       if (edit.isRemoved()) {
         removed.add(circuit);
@@ -581,6 +583,11 @@ public class ScheduleService {
                 .optional()
                 .orElse(null);
     return ScheduleMapper.snapshotOf(circuit, feeds);
+  }
+
+  /** The stored row in its site's units: what a 409 hands back as the values saved meanwhile. */
+  private static CircuitForm savedAsShown(Circuit circuit) {
+    return CableUnitsOfForms.shown(CircuitForm.of(circuit), circuit.getBoard().cableUnits());
   }
 
   /** "changed In (A) 16 → 20; Device MCB → RCBO", so a log line says what changed. */

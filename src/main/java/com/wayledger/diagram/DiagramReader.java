@@ -137,7 +137,7 @@ public class DiagramReader {
         circuitCount,
         feedDevice,
         board.getFedFromCircuitId(),
-        board.getSubmain() == null ? "" : board.getSubmain().label(),
+        board.getSubmain() == null ? "" : board.getSubmain().label(board.cableUnits()),
         drop == null || !drop.isKnown() ? null : drop.value(),
         drop == null ? "no figures for this board" : drop.missing(),
         expand ? ways(board, results) : List.of());

@@ -3,6 +3,7 @@ package com.wayledger.exchange;
 import com.wayledger.engine.DeviceKind;
 import com.wayledger.engine.LoadCategory;
 import com.wayledger.engine.RatingUnit;
+import com.wayledger.engine.rules.CableUnits;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Comparator;
@@ -33,7 +34,7 @@ public final class ColumnGuesser {
       List<ImportField> own = new ArrayList<>(columns);
       for (String header : table.headers()) {
         ScheduleColumn column = ScheduleColumn.byHeader(header);
-        own.add(column.isInput() ? ImportField.of(column) : ImportField.IGNORE);
+        own.add(column.isInput() ? ImportField.ofOwnHeader(header) : ImportField.IGNORE);
       }
       return own;
     }
@@ -87,7 +88,7 @@ public final class ColumnGuesser {
     if (header == null || header.isBlank()) {
       return 0;
     }
-    if (field.column() != null && ScheduleColumn.byHeader(header) == field.column()) {
+    if (field.ownHeader() != null && field.ownHeader().equalsIgnoreCase(header.strip())) {
       return 1000;
     }
     String text = normalise(header);
@@ -129,6 +130,7 @@ public final class ColumnGuesser {
           LINE_CSA,
           CPC_CSA,
           LENGTH_METRES,
+          LENGTH_FEET,
           AMBIENT_CELSIUS,
           GROUPED,
           THERMAL_INSULATION_MM,
@@ -142,6 +144,8 @@ public final class ColumnGuesser {
           LOAD_WATTS,
           LOAD_AMPS ->
           all(sample, v -> NUMBER.matcher(v.strip()).matches()) ? 0 : -60;
+      case LINE_AWG, CPC_AWG ->
+          all(sample, v -> CableUnits.squareMillimetresOfAwg(v).isPresent()) ? 35 : 0;
       case POWER_FACTOR -> all(sample, v -> v.strip().matches("0?[.,]\\d+|1([.,]0+)?")) ? 5 : -60;
       default -> 0;
     };

@@ -33,7 +33,7 @@ public final class CsvWriter {
     BoardFigures figures = new BoardFigures(board, data.demand(), data.findings());
     List<String> header = new ArrayList<>();
     for (ScheduleColumn column : ScheduleColumn.values()) {
-      header.add(column.header());
+      header.add(column.header(data.cableUnits()));
     }
     // not closed here: the caller owns the writer (a response stream, say)
     CSVPrinter printer =
@@ -54,7 +54,7 @@ public final class CsvWriter {
             entry.loads().isEmpty() ? Collections.singletonList(null) : entry.loads();
         boolean first = true;
         for (LoadForm load : loads) {
-          List<String> cells = row(entry.circuit(), load, f, first);
+          List<String> cells = row(entry.circuit(), load, f, first, data.cableUnits());
           cells.set(CIRCUIT_KEY.ordinal(), num(entry.circuitId()));
           cells.set(
               RECORD_VERSION.ordinal(), entry.recordVersion() == null ? "" : entry.recordVersion());
@@ -70,7 +70,11 @@ public final class CsvWriter {
   }
 
   private static List<String> row(
-      CircuitForm c, LoadForm l, BoardFigures.CircuitFigures f, boolean first) {
+      CircuitForm c,
+      LoadForm l,
+      BoardFigures.CircuitFigures f,
+      boolean first,
+      com.wayledger.engine.rules.CableUnits units) {
     String[] cells = new String[ScheduleColumn.values().length];
     cells[WAY.ordinal()] = num(c.wayNumber());
     cells[LINE.ordinal()] = Codes.line(c.position());
@@ -86,11 +90,13 @@ public final class CsvWriter {
     cells[RCD_TYPE.ordinal()] = name(c.deviceRcdType());
     cells[OVERLOAD_SETTING_AMPS.ordinal()] = num(c.deviceOverloadSettingAmps());
     cells[INSTANTANEOUS_SETTING_AMPS.ordinal()] = num(c.deviceInstantaneousSettingAmps());
-    cells[LINE_CSA.ordinal()] = num(c.cableLineCsa());
-    cells[CPC_CSA.ordinal()] = num(c.cableCpcCsa());
+    cells[LINE_CSA.ordinal()] =
+        units.awgAndFeet() ? units.sizeText(c.cableLineCsa()) : num(c.cableLineCsa());
+    cells[CPC_CSA.ordinal()] =
+        units.awgAndFeet() ? units.sizeText(c.cableCpcCsa()) : num(c.cableCpcCsa());
     cells[CONDUCTOR.ordinal()] = name(c.cableMaterial());
     cells[INSULATION.ordinal()] = name(c.cableInsulation());
-    cells[LENGTH_METRES.ordinal()] = num(c.cableLengthMetres());
+    cells[LENGTH_METRES.ordinal()] = num(units.lengthInUnit(c.cableLengthMetres()));
     cells[RING.ordinal()] = Codes.yes(Boolean.TRUE.equals(c.ringFinal()));
     cells[INSTALLATION.ordinal()] = name(c.cableInstallationMethod());
     cells[AMBIENT_CELSIUS.ordinal()] = num(c.cableAmbientCelsius());

@@ -26,7 +26,8 @@ public record ExportData(
     SiteFindings findings,
     LocalDate exportedOn,
     String ruleSetTitle,
-    String supplySystemWords) {
+    String supplySystemWords,
+    com.wayledger.engine.rules.CableUnits cableUnits) {
 
   public ExportData {
     boards = List.copyOf(boards);
@@ -36,6 +37,33 @@ public record ExportData(
     if (supplySystemWords == null) {
       supplySystemWords = "";
     }
+    if (cableUnits == null) {
+      cableUnits = com.wayledger.engine.rules.CableUnits.METRIC;
+    }
+  }
+
+  /** Export data in mm² and metres (the argument list from before units followed the site). */
+  public ExportData(
+      long siteId,
+      String siteName,
+      String earthing,
+      List<BoardEntry> boards,
+      SiteDemand demand,
+      SiteFindings findings,
+      LocalDate exportedOn,
+      String ruleSetTitle,
+      String supplySystemWords) {
+    this(
+        siteId,
+        siteName,
+        earthing,
+        boards,
+        demand,
+        findings,
+        exportedOn,
+        ruleSetTitle,
+        supplySystemWords,
+        null);
   }
 
   /** Export data without the supply system in words (the argument list from before it). */

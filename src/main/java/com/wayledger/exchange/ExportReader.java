@@ -70,7 +70,8 @@ public class ExportReader {
         analysis.findings(),
         LocalDate.now(clock),
         com.wayledger.engine.rules.RuleSets.of(site.getRuleSet()).title(),
-        site.getSupplySystem() == null ? null : EnumWords.standard().of(site.getSupplySystem()));
+        site.getSupplySystem() == null ? null : EnumWords.standard().of(site.getSupplySystem()),
+        site.cableUnits());
   }
 
   static BoardEntry entry(Board board, int depth) {

@@ -253,11 +253,29 @@ public class ImportController {
     model.addAttribute("table", table);
     model.addAttribute("plan", plan);
     model.addAttribute("ownExport", table.isOwnExport());
+    model.addAttribute("unitsRead", unitsRead(table, mapping));
     model.addAttribute("removeMissing", removeMissing);
     model.addAttribute(
         "nothingToChange",
         plan.isAllValid() && !plan.outcomes().isEmpty() && plan.changesNothing());
     return plan;
+  }
+
+  /** units (AWG/feet): a column holding sizes or lengths, and the unit its values are read in. */
+  public record UnitReading(String header, String messageKey) {}
+
+  /** The size and length columns of the mapping, each with how its values are read. */
+  static List<UnitReading> unitsRead(SheetTable table, List<ImportField> mapping) {
+    List<UnitReading> readings = new ArrayList<>();
+    for (int i = 0; i < mapping.size() && i < table.headers().size(); i++) {
+      ImportField field = mapping.get(i);
+      switch (field) {
+        case LINE_CSA, CPC_CSA, LENGTH_METRES, LINE_AWG, CPC_AWG, LENGTH_FEET ->
+            readings.add(new UnitReading(table.headers().get(i), "import.units." + field.name()));
+        default -> {}
+      }
+    }
+    return readings;
   }
 
   private UploadStore.Upload upload(String token, long boardId, Principal principal) {

@@ -112,6 +112,46 @@ public enum ImportField {
           "cable mm2",
           "size mm2",
           "cable")),
+  /**
+   * units (AWG/feet): a line conductor size written as the NEC writes it ("12 AWG", "250 kcmil").
+   */
+  LINE_AWG(
+      null,
+      List.of(
+          "line awg kcmil",
+          "awg",
+          "awg kcmil",
+          "size awg",
+          "wire size",
+          "wire awg",
+          "conductor awg",
+          "gauge",
+          "wire gauge",
+          "kcmil")),
+  /** units (AWG/feet): a protective (equipment grounding) conductor size in AWG or kcmil. */
+  CPC_AWG(
+      null,
+      List.of(
+          "cpc awg kcmil",
+          "egc",
+          "egc awg",
+          "ground awg",
+          "ground size",
+          "grounding conductor",
+          "equipment grounding conductor",
+          "ground wire")),
+  /** units (AWG/feet): a cable length in feet (0.3048 m each). */
+  LENGTH_FEET(
+      null,
+      List.of(
+          "length ft",
+          "length feet",
+          "length in feet",
+          "run ft",
+          "run feet",
+          "distance ft",
+          "feet",
+          "ft")),
   CPC_CSA(
       ScheduleColumn.CPC_CSA,
       List.of("cpc mm2", "cpc", "earth mm2", "earth", "protective conductor")),
@@ -120,7 +160,18 @@ public enum ImportField {
   INSULATION(ScheduleColumn.INSULATION, List.of("insulation", "cable type", "insulation type")),
   LENGTH_METRES(
       ScheduleColumn.LENGTH_METRES,
-      List.of("length m", "length", "run m", "run", "distance", "route length", "m")),
+      List.of(
+          "length m",
+          "length metres",
+          "length meters",
+          "length",
+          "run m",
+          "run",
+          "distance",
+          "route length",
+          "metres",
+          "meters",
+          "m")),
   RING(
       ScheduleColumn.RING,
       List.of("ring", "ring final", "ring circuit", "ring final circuit", "rfc", "ring or radial")),
@@ -224,6 +275,31 @@ public enum ImportField {
   /** Header phrases that suggest this field, most telling first. */
   List<String> words() {
     return words;
+  }
+
+  /**
+   * The header our own export writes for this field: the schedule column's, and for the AWG/kcmil
+   * and feet fields the header an AWG-and-feet site's export writes; null for the other forms.
+   */
+  public String ownHeader() {
+    var awg = com.wayledger.engine.rules.CableUnits.AWG_AND_FEET;
+    return switch (this) {
+      case LINE_AWG -> ScheduleColumn.LINE_CSA.header(awg);
+      case CPC_AWG -> ScheduleColumn.CPC_CSA.header(awg);
+      case LENGTH_FEET -> ScheduleColumn.LENGTH_METRES.header(awg);
+      default -> column == null ? null : column.header();
+    };
+  }
+
+  /** The field our own export's header names (either units), or IGNORE. */
+  static ImportField ofOwnHeader(String header) {
+    String wanted = header == null ? "" : header.strip();
+    for (ImportField field : values()) {
+      if (field.ownHeader() != null && field.ownHeader().equalsIgnoreCase(wanted)) {
+        return field;
+      }
+    }
+    return IGNORE;
   }
 
   /** Key of the field's name in i18n/exchange.properties. */

@@ -16,6 +16,7 @@ import com.wayledger.engine.RatingUnit;
 import com.wayledger.engine.RcdType;
 import com.wayledger.engine.TripCurve;
 import com.wayledger.engine.WayStatus;
+import com.wayledger.engine.rules.CableUnits;
 import com.wayledger.system.EnumWords;
 import jakarta.validation.ConstraintViolation;
 import jakarta.validation.Validator;
@@ -26,6 +27,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Optional;
 import java.util.Set;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
@@ -444,11 +446,11 @@ public final class RowReader {
             cells.number(BREAKING_KILOAMPS, problems),
             residual,
             cells.choice(RCD_TYPE, RcdType.class, problems),
-            cells.number(LINE_CSA, problems),
-            cells.number(CPC_CSA, problems),
+            cells.size(LINE_CSA, ImportField.LINE_AWG, problems),
+            cells.size(CPC_CSA, ImportField.CPC_AWG, problems),
             cells.choice(CONDUCTOR, ConductorMaterial.class, problems),
             cells.choice(INSULATION, Insulation.class, problems),
-            cells.number(LENGTH_METRES, problems),
+            cells.length(problems),
             cells.choice(INSTALLATION, InstallationMethod.class, problems),
             cells.number(AMBIENT_CELSIUS, problems),
             cells.whole(GROUPED, problems),
@@ -657,6 +659,74 @@ public final class RowReader {
       }
       return value;
     }
+
+    /**
+     * A conductor size, mm²: from the mm² column as a number (a value written in AWG or kcmil there
+     * is refused, never read as mm²), or from the AWG/kcmil column as one of the NEC sizes, stored
+     * as its area ("13 AWG" or "2.5" there is refused).
+     */
+    Double size(ImportField metric, ImportField awg, List<ImportPlan.Problem> problems) {
+      String awgText = text(awg);
+      if (!awgText.isEmpty()) {
+        if (!blank(metric)) {
+          problems.add(new ImportPlan.Problem(awg, "import.cell.sizeTwice", new Object[0]));
+          return null;
+        }
+        redirect(metric, awg);
+        Optional<Double> area = CableUnits.squareMillimetresOfAwg(awgText);
+        if (area.isEmpty()) {
+          problems.add(new ImportPlan.Problem(awg, "import.cell.notAwg", new Object[] {awgText}));
+          return null;
+        }
+        return area.get();
+      }
+      String metricText = text(metric);
+      if (CableUnits.looksLikeAwg(metricText)) {
+        problems.add(
+            new ImportPlan.Problem(metric, "import.cell.awgInMm2", new Object[] {metricText}));
+        return null;
+      }
+      return number(metric, problems);
+    }
+
+    /**
+     * A cable length, metres: from the metres column, or from the feet column at 0.3048 m per foot.
+     * A value whose own unit contradicts its column ("50 ft" under metres, "15 m" under feet) is
+     * refused rather than read in the column's unit.
+     */
+    Double length(List<ImportPlan.Problem> problems) {
+      String feetText = text(ImportField.LENGTH_FEET);
+      if (!feetText.isEmpty()) {
+        if (!blank(LENGTH_METRES)) {
+          problems.add(
+              new ImportPlan.Problem(
+                  ImportField.LENGTH_FEET, "import.cell.lengthTwice", new Object[0]));
+          return null;
+        }
+        redirect(LENGTH_METRES, ImportField.LENGTH_FEET);
+        if (!FEET_MARK.matcher(feetText).find() && METRE_MARK.matcher(feetText).find()) {
+          problems.add(
+              new ImportPlan.Problem(
+                  ImportField.LENGTH_FEET, "import.cell.metresInFeet", new Object[] {feetText}));
+          return null;
+        }
+        Double feet = number(ImportField.LENGTH_FEET, problems);
+        return feet == null ? null : CableUnits.metresOfFeet(feet);
+      }
+      String metresText = text(LENGTH_METRES);
+      if (FEET_MARK.matcher(metresText).find()) {
+        problems.add(
+            new ImportPlan.Problem(
+                LENGTH_METRES, "import.cell.feetInMetres", new Object[] {metresText}));
+        return null;
+      }
+      return number(LENGTH_METRES, problems);
+    }
+
+    private static final Pattern FEET_MARK =
+        Pattern.compile("(?i)(\\d\\s*(ft|feet|foot)\\s*$|['′]\\s*$)");
+    private static final Pattern METRE_MARK =
+        Pattern.compile("(?i)\\d\\s*(m|metres?|meters?)\\s*$");
 
     Integer whole(ImportField field, List<ImportPlan.Problem> problems) {
       Double value = number(field, problems);

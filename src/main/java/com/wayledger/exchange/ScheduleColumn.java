@@ -81,6 +81,22 @@ public enum ScheduleColumn {
     return header;
   }
 
+  /**
+   * The header as written for a site in these units: the size and length columns name AWG/kcmil and
+   * feet on an AWG-and-feet site ("Line AWG/kcmil", "Length ft"); every other header is the same.
+   */
+  public String header(com.wayledger.engine.rules.CableUnits units) {
+    if (!units.awgAndFeet()) {
+      return header;
+    }
+    return switch (this) {
+      case LINE_CSA -> "Line AWG/kcmil";
+      case CPC_CSA -> "CPC AWG/kcmil";
+      case LENGTH_METRES -> "Length ft";
+      default -> header;
+    };
+  }
+
   /** Whether import reads this column (computed columns are ignored). */
   public boolean isInput() {
     return input;
@@ -93,7 +109,10 @@ public enum ScheduleColumn {
     }
     String wanted = text.strip();
     for (ScheduleColumn column : values()) {
-      if (column.header.equalsIgnoreCase(wanted)) {
+      if (column.header.equalsIgnoreCase(wanted)
+          || column
+              .header(com.wayledger.engine.rules.CableUnits.AWG_AND_FEET)
+              .equalsIgnoreCase(wanted)) {
         return column;
       }
     }

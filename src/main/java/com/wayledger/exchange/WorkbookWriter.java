@@ -316,7 +316,7 @@ public final class WorkbookWriter {
 
     Row header = sheet.createRow(HEADER_ROW);
     for (ScheduleColumn column : ScheduleColumn.values()) {
-      text(header, column.ordinal(), column.header(), styles.header, widths);
+      text(header, column.ordinal(), column.header(data.cableUnits()), styles.header, widths);
     }
 
     int firstData = HEADER_ROW + 1;
@@ -350,7 +350,7 @@ public final class WorkbookWriter {
       boolean first = true;
       for (LoadForm load : loads) {
         Row row = sheet.createRow(rowIndex);
-        writeCircuitCells(row, entry.circuit(), styles, widths);
+        writeCircuitCells(row, entry.circuit(), data.cableUnits(), styles, widths);
         writeRecordCells(row, entry, styles, widths);
         if (load != null) {
           writeLoadCells(row, load, styles, widths);
@@ -419,7 +419,12 @@ public final class WorkbookWriter {
     return rows;
   }
 
-  private static void writeCircuitCells(Row row, CircuitForm c, WorkbookStyles s, Widths w) {
+  private static void writeCircuitCells(
+      Row row,
+      CircuitForm c,
+      com.wayledger.engine.rules.CableUnits units,
+      WorkbookStyles s,
+      Widths w) {
     number(row, WAY.ordinal(), c.wayNumber(), s.integer, w);
     text(row, LINE.ordinal(), Codes.line(c.position()), s.text, w);
     text(row, CIRCUIT.ordinal(), c.description(), s.text, w);
@@ -440,11 +445,16 @@ public final class WorkbookWriter {
     number(row, OVERLOAD_SETTING_AMPS.ordinal(), c.deviceOverloadSettingAmps(), s.number, w);
     number(
         row, INSTANTANEOUS_SETTING_AMPS.ordinal(), c.deviceInstantaneousSettingAmps(), s.number, w);
-    number(row, LINE_CSA.ordinal(), c.cableLineCsa(), s.number, w);
-    number(row, CPC_CSA.ordinal(), c.cableCpcCsa(), s.number, w);
+    if (units.awgAndFeet()) { // sizes as the trade writes them: "12 AWG", "250 kcmil"
+      text(row, LINE_CSA.ordinal(), units.sizeText(c.cableLineCsa()), s.text, w);
+      text(row, CPC_CSA.ordinal(), units.sizeText(c.cableCpcCsa()), s.text, w);
+    } else {
+      number(row, LINE_CSA.ordinal(), c.cableLineCsa(), s.number, w);
+      number(row, CPC_CSA.ordinal(), c.cableCpcCsa(), s.number, w);
+    }
     text(row, CONDUCTOR.ordinal(), name(c.cableMaterial()), s.text, w);
     text(row, INSULATION.ordinal(), name(c.cableInsulation()), s.text, w);
-    number(row, LENGTH_METRES.ordinal(), c.cableLengthMetres(), s.number, w);
+    number(row, LENGTH_METRES.ordinal(), units.lengthInUnit(c.cableLengthMetres()), s.number, w);
     text(row, RING.ordinal(), Codes.yes(Boolean.TRUE.equals(c.ringFinal())), s.text, w);
     text(row, INSTALLATION.ordinal(), name(c.cableInstallationMethod()), s.text, w);
     number(row, AMBIENT_CELSIUS.ordinal(), c.cableAmbientCelsius(), s.number, w);

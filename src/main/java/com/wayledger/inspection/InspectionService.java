@@ -216,7 +216,7 @@ public class InspectionService {
               row.circuitId(),
               row.wayLabel(),
               row.description(),
-              recordedLabel(row.recorded()),
+              recordedLabel(row.recorded(), site.cableUnits()),
               row.recorded().ringFinal(),
               InspectionGrader.residualMilliAmpsOf(row.recorded().device()) != null,
               FormText.entry(row.circuitId(), row.results()),
@@ -326,7 +326,7 @@ public class InspectionService {
               c.getId(),
               c.positionLabel(),
               c.getDescription(),
-              recordedLabel(spec),
+              recordedLabel(spec, site.cableUnits()),
               spec.ringFinal(),
               InspectionGrader.residualMilliAmpsOf(spec.device()) != null,
               entry,
@@ -422,7 +422,8 @@ public class InspectionService {
         results, site.getEarthingSystem(), declaredZe, lowestBreaking, largestResidual);
   }
 
-  static String recordedLabel(CircuitSpec spec) {
+  /** The recorded device and cable as short text, sizes and length in the site's units. */
+  static String recordedLabel(CircuitSpec spec, com.wayledger.engine.rules.CableUnits units) {
     StringBuilder s = new StringBuilder();
     DeviceSpec d = spec.device();
     if (d != null) {
@@ -434,7 +435,17 @@ public class InspectionService {
         s.append(" ").append(FormText.number(d.residualCurrentMilliAmps())).append(" mA");
       }
     }
-    if (spec.cable() != null && spec.cable().lineCsaSquareMillimetres() != null) {
+    if (units.awgAndFeet()
+        && spec.cable() != null
+        && spec.cable().lineCsaSquareMillimetres() != null) {
+      s.append(" · ").append(units.sizeText(spec.cable().lineCsaSquareMillimetres()));
+      if (spec.cable().protectiveCsaSquareMillimetres() != null) {
+        s.append(" / ").append(units.sizeText(spec.cable().protectiveCsaSquareMillimetres()));
+      }
+      if (spec.cable().lengthMetres() != null) {
+        s.append(" ").append(units.lengthText(spec.cable().lengthMetres()));
+      }
+    } else if (spec.cable() != null && spec.cable().lineCsaSquareMillimetres() != null) {
       s.append(" · ")
           .append(FormText.number(spec.cable().lineCsaSquareMillimetres()))
           .append("/")

@@ -180,6 +180,11 @@ public class Site {
     return ruleSet;
   }
 
+  /** The units sizes and lengths are read and typed in on this site (mm²/m or AWG/ft). */
+  public com.wayledger.engine.rules.CableUnits cableUnits() {
+    return com.wayledger.engine.rules.CableUnits.ofRuleSet(ruleSet);
+  }
+
   public com.wayledger.engine.SupplySystem getSupplySystem() {
     return supplySystem;
   }

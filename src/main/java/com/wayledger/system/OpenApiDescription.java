@@ -24,7 +24,14 @@ class OpenApiDescription {
                         + " phase balancing; change log. Every request is signed in, preferably with a personal API token"
                         + " (create one on the account page; header Authorization: Bearer <token>; a read token acts"
                         + " as a viewer); HTTP Basic with the password also works but is slow, as it checks the password"
-                        + " on every request. Reading needs the viewer role, changing needs editor. Caution: figures assist a competent person; local wiring"
+                        + " on every request. Reading needs the viewer role, changing needs editor."
+                        + " Units follow the site's rule set: on a site whose rule set uses AWG and feet (NEC),"
+                        + " circuits read and take cableLineSize and cableCpcSize as NEC size labels (\"12 AWG\","
+                        + " \"250 kcmil\") and cableLengthFeet in feet (1 ft = 0.3048 m), boards submainLineSize,"
+                        + " submainCpcSize and submainLengthFeet; elsewhere cableLineCsa/cableCpcCsa in mm² and"
+                        + " cableLengthMetres (submain… alike). A field in the other units is refused with 422"
+                        + " naming it and the field to send instead; a size that is no NEC size is refused too."
+                        + " Caution: figures assist a competent person; local wiring"
                         + " regulations and the current edition of the relevant standard govern; electrical work must be"
                         + " designed, done and certified by qualified people.")
                 .license(new License().name("Apache-2.0")))

@@ -11,7 +11,6 @@ import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.
 
 import com.wayledger.board.AnalysisService;
 import com.wayledger.engine.SupplySystem;
-import com.wayledger.engine.nec.ConductorSize;
 import com.wayledger.engine.protection.result.CheckKind;
 import com.wayledger.engine.protection.result.Finding;
 import com.wayledger.engine.protection.result.Verdict;
@@ -173,12 +172,12 @@ class RuleSetIntegrationTests {
                 .param("deviceKind", "MCB")
                 .param("deviceRatingAmps", "20")
                 .param("deviceBreakingCapacityKiloAmps", "10")
-                // 14 AWG stored as its area, 2.08 mm²
-                .param("cableLineCsa", String.valueOf(ConductorSize.AWG_14.squareMillimetres()))
-                .param("cableCpcCsa", String.valueOf(ConductorSize.AWG_14.squareMillimetres()))
+                // an NEC site's page takes sizes as AWG/kcmil and lengths in feet
+                .param("cableLineSize", "14 AWG")
+                .param("cableCpcSize", "14 AWG")
                 .param("cableMaterial", "COPPER")
                 .param("cableInsulation", "THERMOSETTING_90")
-                .param("cableLengthMetres", "12")
+                .param("cableLengthFeet", "40")
                 .param("cableAmbientCelsius", "30")
                 .param("cableGroupedCircuits", "1")
                 .param("loadDescription", "Toaster")
