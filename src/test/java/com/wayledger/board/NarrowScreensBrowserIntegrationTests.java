@@ -109,6 +109,16 @@ class NarrowScreensBrowserIntegrationTests {
         browser.get(page.getValue());
         // the door chart is a print page without the layout's main element
         wait.until(ExpectedConditions.presenceOfElementLocated(By.cssSelector("body > *")));
+        // parts loaded after the page (the site's headroom table) are in place before measuring
+        wait.until(
+            driver ->
+                ((Number)
+                            ((org.openqa.selenium.JavascriptExecutor) driver)
+                                .executeScript(
+                                    "return document.querySelectorAll('[hx-trigger=\"load\"],"
+                                        + " .htmx-request').length;"))
+                        .intValue()
+                    == 0);
         if (page.getKey().endsWith("answered")) {
           assertThat(browser.findElements(By.cssSelector("table.candidates")))
               .as("the %s page shows its table of places", page.getKey())
@@ -116,7 +126,15 @@ class NarrowScreensBrowserIntegrationTests {
         }
         long[] widths = chromium.scrollAndViewportWidth();
         if (widths[0] > widths[1]) {
-          tooWide.add(page.getKey() + " " + widths[0] + " px > " + widths[1] + " px");
+          tooWide.add(
+              page.getKey()
+                  + " "
+                  + widths[0]
+                  + " px > "
+                  + widths[1]
+                  + " px ("
+                  + chromium.elementsPastRightEdge()
+                  + ")");
         }
       }
       assertThat(tooWide)

@@ -83,6 +83,25 @@ public final class Chromium implements AutoCloseable {
     return new long[] {((Number) scroll).longValue(), ((Number) viewport).longValue()};
   }
 
+  /**
+   * The elements that reach past the right edge of the viewport, deepest first (at most five, as
+   * "tag.class#id right px"): what a failed width check names so that it can be fixed.
+   */
+  public String elementsPastRightEdge() {
+    Object found =
+        driver.executeScript(
+            "const edge = document.documentElement.clientWidth; const out = [];"
+                + " for (const el of Array.from(document.querySelectorAll('body *')).reverse()) {"
+                + "  const r = el.getBoundingClientRect();"
+                + "  if (r.right > edge + 0.5 && r.width > 0) {"
+                + "   out.push(el.tagName.toLowerCase() + (el.className && el.className.baseVal === undefined"
+                + "    ? '.' + String(el.className).trim().replace(/\\s+/g, '.') : '')"
+                + "    + (el.id ? '#' + el.id : '') + ' ' + Math.round(r.right) + ' px');"
+                + "   if (out.length === 5) break; } }"
+                + " return out.join('; ');");
+    return String.valueOf(found);
+  }
+
   @Override
   public void close() throws IOException {
     driver.quit();
