@@ -160,6 +160,20 @@ class PanelboardJourneyBrowserIntegrationTests {
         assertThat(currents.get("Line A")).isCloseTo(28.75, within(0.005));
         assertThat(currents.get("Line B")).isCloseTo(31.75, within(0.005));
         assertThat(currents.get("Neutral")).isCloseTo(3.0, within(0.005));
+        // the schedule sheet speaks the site's units: AWG sizes and feet, as typed
+        var format = new org.apache.poi.ss.usermodel.DataFormatter();
+        StringBuilder cells = new StringBuilder();
+        book.forEach(
+            each ->
+                each.forEach(
+                    row ->
+                        row.forEach(
+                            cell -> cells.append(format.formatCellValue(cell)).append('|'))));
+        assertThat(cells.toString())
+            .as("the workbook's schedule columns in AWG and feet, with the typed size")
+            .contains("|Line AWG/kcmil|")
+            .contains("|Length ft|")
+            .contains("|12 AWG|");
       }
 
       // 8. a 208Y/120 V panel: a 208 V unit on two poles at spaces 1 and 3 (lines A and B):
@@ -256,14 +270,13 @@ class PanelboardJourneyBrowserIntegrationTests {
   }
 
   /**
-   * The cable as the circuit form takes it today (mm², metres). The one place the journey depends
-   * on the form's units: switch it when AWG and feet entry arrive (12 AWG is 3.31 mm², 40 ft is
-   * 12.2 m).
+   * The cable as an NEC site's circuit form takes it: an AWG size from the list of NEC sizes and a
+   * length in feet (stored as 3.31 mm² and 12.192 m; 1 ft = 0.3048 m exactly).
    */
   private static void typeCable(WebElement editor) {
-    fill(editor, "cableLineCsa", "3.31");
-    fill(editor, "cableCpcCsa", "3.31");
-    fill(editor, "cableLengthMetres", "12.2");
+    choose(editor, "cableLineSize", "12 AWG");
+    choose(editor, "cableCpcSize", "12 AWG");
+    fill(editor, "cableLengthFeet", "40");
   }
 
   // ------------------------------------------------------------------ checks
