@@ -623,7 +623,9 @@ public class ScheduleService {
     } else if (form.wayNumber() > board.getWayCount()) {
       throw new RuleViolation("wayNumber", "circuit.way.beyondBoard", board.getWayCount());
     }
-    if (!board.isPanelboard() && !board.getPositions().contains(form.position())) {
+    // on a panelboard the lines follow from the space, but a position naming a line the board has
+    // not (B–C on a 120/240 V panel) is refused, not silently moved
+    if (!board.getPositions().contains(form.position())) {
       throw new RuleViolation(
           "position",
           board.lineCount() == 1

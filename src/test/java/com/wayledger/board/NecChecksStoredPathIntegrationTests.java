@@ -113,11 +113,10 @@ class NecChecksStoredPathIntegrationTests {
         .param("deviceRatingAmps", Double.toString(amps))
         .param("devicePoles", Integer.toString(poles))
         .param("deviceBreakingCapacityKiloAmps", "10")
-        .param(
-            "cableLineCsa", String.format(java.util.Locale.ROOT, "%.3f", size.squareMillimetres()))
+        .param("cableLineSize", size.label())
         .param("cableMaterial", "COPPER")
         .param("cableInsulation", "THERMOSETTING_90")
-        .param("cableLengthMetres", "12")
+        .param("cableLengthFeet", "40") // an NEC site takes sizes and lengths in AWG and feet
         .param("cableAmbientCelsius", "30")
         .param("cableGroupedCircuits", "1")
         .param("loadDescription", description)
@@ -170,7 +169,7 @@ class NecChecksStoredPathIntegrationTests {
     assertThat(of(found, CheckKind.GROUND_FAULT_PROTECTION).verdict()).isEqualTo(Verdict.WARNING);
     // 110.9: a 10 kA breaker where the service's 22 kA (invented) is taken at the panel
     assertThat(of(found, CheckKind.INTERRUPTING_RATING).verdict()).isEqualTo(Verdict.DANGER);
-    // 12 AWG, 12 m, 5 A at 120 V: well within 3 % (a recommendation)
+    // 12 AWG, 40 ft, 5 A at 120 V: well within 3 % (a recommendation)
     assertThat(of(found, CheckKind.BRANCH_VOLTAGE_DROP).verdict()).isEqualTo(Verdict.PASS);
 
     mvc.perform(get("/boards/{id}", board).with(user("vi").roles("VIEWER")))

@@ -119,9 +119,9 @@ class NecMultifamilyStoredPathIntegrationTests {
     long bank = board(siteId, "Meter bank", null, 800);
     for (int unit = 1; unit <= 20; unit++) {
       long panel = board(siteId, "Unit " + unit, bank, 125);
-      twoPole(panel, 1, "Range", "COOKING", 1, 8_000);
-      twoPole(panel, 2, "Heaters", "SPACE_HEATING", 4, 1_500);
-      twoPole(panel, 3, "Water heater", "WATER_HEATING_STORAGE", 1, 2_500);
+      twoPole(panel, 1, "Range", "COOKING", 1, 8_000); // spaces 1 and 3
+      twoPole(panel, 2, "Heaters", "SPACE_HEATING", 4, 1_500); // spaces 2 and 4
+      twoPole(panel, 5, "Water heater", "WATER_HEATING_STORAGE", 1, 2_500); // spaces 5 and 7
       mvc.perform(
               editor(post("/boards/{id}/dwelling", panel))
                   .param("floorArea", "840")

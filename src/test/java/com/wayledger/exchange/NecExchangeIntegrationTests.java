@@ -240,7 +240,7 @@ class NecExchangeIntegrationTests {
             .with(csrf())
             .param("reference", reference)
             .param("phases", "1")
-            .param("wayCount", "12")
+            .param("wayCount", "30") // as many spaces as the demo's apartment panels
             .param("busbarRatingAmps", "200")
             .param("incomerKind", "MCCB")
             .param("incomerRatingAmps", "200")

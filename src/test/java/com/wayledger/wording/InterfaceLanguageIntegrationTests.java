@@ -83,8 +83,10 @@ class InterfaceLanguageIntegrationTests {
 
     String page = page(get("/boards/{id}", necBoard).with(user(who).roles("VIEWER")));
 
-    assertThat(page).contains("lang=\"en-GB\"").contains("Number of ways");
-    assertThat(page).doesNotContain("Number of spaces");
+    // an NEC board is a panelboard drawn by its spaces in either language (space is the
+    // panelboard's own word); the surrounding words are the UK ones
+    assertThat(page).contains("lang=\"en-GB\"").contains("Demand on this board");
+    assertThat(page).doesNotContain("Demand on this panelboard");
   }
 
   @Test
