@@ -171,6 +171,20 @@ public final class DwellingProtection {
     if (early != null) {
       return early;
     }
+    FaultInterrupter recorded =
+        circuit.device() == null ? null : circuit.device().faultInterrupter();
+    boolean arcFaultRecorded = recorded != null && recorded.arcFault();
+    if (circuit.location() == CircuitLocation.INDOORS
+        && afciCovers(circuit, u0)
+        && !arcFaultRecorded) {
+      // 210.12(A) ends its list with "or similar rooms or areas": indoors in a dwelling is most
+      // likely covered, and "indoors" does not say which room; no pass on that guess
+      return Finding.notAssessedBecause(
+          CheckKind.ARC_FAULT_PROTECTION,
+          "\"indoors\" does not say which room of the dwelling; 210.12(A) covers most rooms"
+              + " (and similar rooms or areas): record the room, or an AFCI breaker",
+          REF_AFCI);
+    }
     Row row = row(circuit.location());
     String where = locationWords(circuit.location());
     if (row.afciClause() == null) {

@@ -68,6 +68,29 @@ class DwellingProtectionTests {
   }
 
   @Test
+  void indoorsWithoutARoomIsNotAPassForArcFaultProtection() {
+    // 210.12(A) (from memory) ends its list with "or similar rooms or areas": a 120 V 20 A circuit
+    // somewhere indoors in a dwelling is most likely covered; "indoors" alone is no pass
+    Finding unknownRoom =
+        DwellingProtection.arcFault(
+            circuit(CircuitLocation.INDOORS, LoadCategory.LIGHTING, 20, breaker(20, null)),
+            120.0,
+            true);
+    assertThat(unknownRoom.verdict()).isEqualTo(Verdict.NOT_ASSESSED);
+    assertThat(unknownRoom.summary()).contains("record the room");
+    Finding withAfci =
+        DwellingProtection.arcFault(
+            circuit(
+                CircuitLocation.INDOORS,
+                LoadCategory.LIGHTING,
+                20,
+                breaker(20, FaultInterrupter.AFCI)),
+            120.0,
+            true);
+    assertThat(withAfci.verdict()).as(withAfci.summary()).isEqualTo(Verdict.PASS);
+  }
+
+  @Test
   void afciRoomsOf210_12A() {
     // 210.12(A) (from memory): kitchens, family/dining/living rooms and similar, bedrooms,
     // closets, hallways, laundry areas — not bathrooms, garages or outdoors
