@@ -1,8 +1,12 @@
 package com.wayledger.journey;
 
+import static com.wayledger.support.BrowserSteps.choose;
+import static com.wayledger.support.BrowserSteps.click;
+import static com.wayledger.support.BrowserSteps.fill;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
+import com.wayledger.support.BrowserSteps;
 import com.wayledger.support.Chromium;
 import java.io.ByteArrayInputStream;
 import java.net.URI;
@@ -24,7 +28,6 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 import org.openqa.selenium.By;
-import org.openqa.selenium.JavascriptExecutor;
 import org.openqa.selenium.WebDriver;
 import org.openqa.selenium.WebElement;
 import org.openqa.selenium.support.ui.ExpectedConditions;
@@ -357,24 +360,6 @@ class PanelboardJourneyBrowserIntegrationTests {
   }
 
   private void signIn(WebDriver browser, WebDriverWait wait) {
-    browser.get(url("/login"));
-    browser.findElement(By.id("username")).sendKeys("demo");
-    browser.findElement(By.id("password")).sendKeys("wayledger-demo");
-    browser.findElement(By.cssSelector("form button[type=submit]")).click();
-    wait.until(ExpectedConditions.urlContains("/sites"));
-  }
-
-  private static void click(WebDriver browser, WebElement element) {
-    ((JavascriptExecutor) browser).executeScript("arguments[0].click();", element);
-  }
-
-  private static void fill(WebElement form, String name, String value) {
-    WebElement input = form.findElement(By.name(name));
-    input.clear();
-    input.sendKeys(value);
-  }
-
-  private static void choose(WebElement form, String name, String value) {
-    new Select(form.findElement(By.name(name))).selectByValue(value);
+    BrowserSteps.signInAsDemo(browser, wait, url(""));
   }
 }

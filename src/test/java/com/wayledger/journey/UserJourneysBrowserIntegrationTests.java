@@ -1,5 +1,8 @@
 package com.wayledger.journey;
 
+import static com.wayledger.support.BrowserSteps.choose;
+import static com.wayledger.support.BrowserSteps.click;
+import static com.wayledger.support.BrowserSteps.fill;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import com.wayledger.board.Board;
@@ -10,6 +13,7 @@ import com.wayledger.engine.EarthingSystem;
 import com.wayledger.site.Site;
 import com.wayledger.site.SiteForm;
 import com.wayledger.site.SiteService;
+import com.wayledger.support.BrowserSteps;
 import com.wayledger.support.Chromium;
 import java.io.IOException;
 import java.net.URI;
@@ -29,7 +33,6 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 import org.openqa.selenium.By;
-import org.openqa.selenium.JavascriptExecutor;
 import org.openqa.selenium.Keys;
 import org.openqa.selenium.WebDriver;
 import org.openqa.selenium.WebElement;
@@ -339,25 +342,7 @@ class UserJourneysBrowserIntegrationTests {
   }
 
   private void signIn(WebDriver browser, WebDriverWait wait) {
-    browser.get(url("/login"));
-    browser.findElement(By.id("username")).sendKeys("demo");
-    browser.findElement(By.id("password")).sendKeys("wayledger-demo");
-    browser.findElement(By.cssSelector("form button[type=submit]")).click();
-    wait.until(ExpectedConditions.urlContains("/sites"));
-  }
-
-  private static void click(WebDriver browser, WebElement element) {
-    ((JavascriptExecutor) browser).executeScript("arguments[0].click();", element);
-  }
-
-  private static void fill(WebElement editor, String name, String value) {
-    WebElement input = editor.findElement(By.name(name));
-    input.clear();
-    input.sendKeys(value);
-  }
-
-  private static void choose(WebElement editor, String name, String value) {
-    new Select(editor.findElement(By.name(name))).selectByValue(value);
+    BrowserSteps.signInAsDemo(browser, wait, url(""));
   }
 
   private static SiteForm newSite(String name) {
