@@ -105,6 +105,9 @@ public class DefaultsController {
   /** A default location must be one of the site's rule set's own, as a circuit's must. */
   private static void refuseOtherRuleSetsLocation(
       DefaultsForm form, Site site, BindingResult errors) {
+    if (errors.hasErrors()) {
+      return; // a form that did not bind has no value to check (and no target to reject on)
+    }
     com.wayledger.engine.rules.RuleSet rules =
         com.wayledger.engine.rules.RuleSets.of(site.getRuleSet());
     if (form.location() != null && !rules.circuitLocations().contains(form.location())) {
