@@ -174,9 +174,14 @@ public final class DwellingProtection {
     FaultInterrupter recorded =
         circuit.device() == null ? null : circuit.device().faultInterrupter();
     boolean arcFaultRecorded = recorded != null && recorded.arcFault();
-    if (circuit.location() == CircuitLocation.INDOORS
-        && afciCovers(circuit, u0)
-        && !arcFaultRecorded) {
+    if (circuit.location() == CircuitLocation.INDOORS && afciCovers(circuit, u0)) {
+      if (arcFaultRecorded) {
+        return Finding.pass(
+            CheckKind.ARC_FAULT_PROTECTION,
+            "arc-fault protection recorded on the breaker; the room is not recorded",
+            List.of(),
+            REF_AFCI);
+      }
       // 210.12(A) ends its list with "or similar rooms or areas": indoors in a dwelling is most
       // likely covered, and "indoors" does not say which room; no pass on that guess
       return Finding.notAssessedBecause(

@@ -88,6 +88,10 @@ class DwellingProtectionTests {
             120.0,
             true);
     assertThat(withAfci.verdict()).as(withAfci.summary()).isEqualTo(Verdict.PASS);
+    assertThat(withAfci.summary())
+        .as("the pass rests on the recorded breaker, not on a room said to need none")
+        .contains("arc-fault protection recorded")
+        .doesNotContain("not required");
   }
 
   @Test
