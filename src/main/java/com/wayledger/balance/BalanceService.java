@@ -165,9 +165,10 @@ public class BalanceService {
       Double amps = result == null || !result.isAssessed() ? null : amps(result, basis, u0);
       if (circuit.position().isLineToLine()) {
         // a two-pole, line-to-line circuit occupies its pair of lines and never moves: its line
-        // current |S|/U_LL (U_LL = 2·U0 split-phase, √3·U0 wye) is fixed load on both
+        // current |S|/U_LL (U_LL = 2·U0 split-phase, √3·U0 on a wye and on
+        // 120/208 V) is fixed load on both
         if (amps != null) {
-          double lineToLine = demand != null && demand.lines() == 2 ? 2.0 : Math.sqrt(3.0);
+          double lineToLine = demand != null ? demand.system().lineToLineFactor() : Math.sqrt(3.0);
           for (Phase phase : circuit.position().phases()) {
             fixed.merge(phase, amps / lineToLine, Double::sum);
           }

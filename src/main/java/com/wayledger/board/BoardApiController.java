@@ -43,6 +43,12 @@ public class BoardApiController {
     this.sites = sites;
   }
 
+  /**
+   * A board in a list.
+   *
+   * @param supplySystem the system the board is on: its own ({@code fields.supplySystem}) or, when
+   *     it records none, its site's
+   */
   public record BoardSummary(
       long id,
       String reference,
@@ -51,7 +57,8 @@ public class BoardApiController {
       int wayCount,
       Long parentBoardId,
       Double incomerRatingAmps,
-      long version) {
+      long version,
+      com.wayledger.engine.SupplySystem supplySystem) {
 
     static BoardSummary of(Board board) {
       return new BoardSummary(
@@ -62,7 +69,8 @@ public class BoardApiController {
           board.getWayCount(),
           board.getParent() == null ? null : board.getParent().getId(),
           board.getIncomer() == null ? null : board.getIncomer().getRatingAmps(),
-          board.getVersion());
+          board.getVersion(),
+          board.system());
     }
   }
 
