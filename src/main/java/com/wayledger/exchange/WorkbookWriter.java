@@ -302,7 +302,15 @@ public final class WorkbookWriter {
     text(facts, 13, words.of("workbook.fact.ruleSet"), styles.label, null);
     text(facts, 14, data.ruleSetTitle(), styles.text, null);
     text(facts, 15, words.of("workbook.fact.supplySystem"), styles.label, null);
-    text(facts, 16, data.supplySystemWords(), styles.text, null);
+    // the board's own supply system (a second service, a 120/208 V panel) where it has one
+    text(
+        facts,
+        16,
+        demand != null && demand.system() != null
+            ? com.wayledger.system.EnumWords.standard().of(demand.system())
+            : data.supplySystemWords(),
+        styles.text,
+        null);
     text(facts, 11, words.of("workbook.fact.fedFrom"), styles.label, null);
     text(
         facts,

@@ -72,7 +72,8 @@ class NecExchangeIntegrationTests {
       Sheet sheet = boardSheet(workbook);
       DataFormatter text = new DataFormatter();
       String facts = rowText(sheet.getRow(1), text);
-      assertThat(facts).contains("NEC").contains("120/240 V single-phase three-wire");
+      // the panel's own system (two poles of the 208Y/120 V house panel), not the site's
+      assertThat(facts).contains("NEC").contains("120/208 V single-phase three-wire");
       Row header = sheet.getRow(3);
       int line = column(header, "Line", text);
       int connection = column(header, "Connection", text);
@@ -189,7 +190,7 @@ class NecExchangeIntegrationTests {
     mvc.perform(get("/api/circuits/{id}", id.strip()).with(EDITOR))
         .andExpect(status().isOk())
         .andExpect(jsonPath("$..position", Matchers.hasItem("L1_L2")));
-    // a 120/240 V panel has lines A and B only: B–C is not one of its positions
+    // a single-phase three-wire panel has lines A and B only: B–C is not one of its positions
     mvc.perform(
             post("/api/boards/{id}/circuits", panel)
                 .with(EDITOR)
@@ -240,6 +241,8 @@ class NecExchangeIntegrationTests {
             .with(csrf())
             .param("reference", reference)
             .param("phases", "1")
+            // the demo's apartment and common-area panels are 120/208 V single-phase three-wire
+            .param("supplySystem", "SINGLE_PHASE_120_208")
             .param("wayCount", "30") // as many spaces as the demo's apartment panels
             .param("busbarRatingAmps", "200")
             .param("incomerKind", "MCCB")
