@@ -7,6 +7,7 @@ import com.wayledger.board.LoadForm;
 import com.wayledger.engine.CircuitLocation;
 import com.wayledger.engine.ConductorMaterial;
 import com.wayledger.engine.DeviceKind;
+import com.wayledger.engine.FaultInterrupter;
 import com.wayledger.engine.InstallationMethod;
 import com.wayledger.engine.Insulation;
 import com.wayledger.engine.LoadCategory;
@@ -99,7 +100,8 @@ public final class RowReader {
           Map.entry("cableAmbientCelsius", AMBIENT_CELSIUS),
           Map.entry("cableGroupedCircuits", GROUPED),
           Map.entry("cableThermalInsulationMm", THERMAL_INSULATION_MM),
-          Map.entry("measuredLoopImpedanceOhms", MEASURED_ZS));
+          Map.entry("measuredLoopImpedanceOhms", MEASURED_ZS),
+          Map.entry("deviceFaultInterrupter", FAULT_INTERRUPTER));
 
   private static final Map<String, ImportField> LOAD_PROPERTIES =
       Map.of(
@@ -118,7 +120,9 @@ public final class RowReader {
           "startUpSurgeMultiple",
           SURGE_MULTIPLE,
           "startUpSurgeMillis",
-          SURGE_MILLIS);
+          SURGE_MILLIS,
+          "motorHorsepower",
+          MOTOR_HP);
 
   private final Validator validator;
 
@@ -467,7 +471,8 @@ public final class RowReader {
             overload,
             instantaneous,
             null,
-            cells.choice(LOCATION, CircuitLocation.class, problems));
+            cells.choice(LOCATION, CircuitLocation.class, problems),
+            cells.choice(FAULT_INTERRUPTER, FaultInterrupter.class, problems));
     for (ConstraintViolation<CircuitForm> violation : validator.validate(form)) {
       ImportField field =
           CIRCUIT_PROPERTIES.getOrDefault(violation.getPropertyPath().toString(), CIRCUIT);
@@ -549,7 +554,8 @@ public final class RowReader {
             powerFactor,
             cells.number(SURGE_MULTIPLE, problems),
             cells.number(SURGE_MILLIS, problems),
-            Boolean.TRUE.equals(continuous));
+            Boolean.TRUE.equals(continuous),
+            cells.number(MOTOR_HP, problems));
     for (ConstraintViolation<LoadForm> violation : validator.validate(form)) {
       ImportField field =
           LOAD_PROPERTIES.getOrDefault(violation.getPropertyPath().toString(), LOAD);

@@ -30,6 +30,7 @@ final class ScheduleMatcher {
           Map.entry("wayNumber", ImportField.WAY),
           Map.entry("position", ImportField.LINE),
           Map.entry("location", ImportField.LOCATION),
+          Map.entry("deviceFaultInterrupter", ImportField.FAULT_INTERRUPTER),
           Map.entry("description", ImportField.CIRCUIT),
           Map.entry("status", ImportField.STATE),
           Map.entry("lockedForBalancing", ImportField.KEEP_LINE),
@@ -64,7 +65,8 @@ final class ScheduleMatcher {
           "powerFactor", ImportField.POWER_FACTOR,
           "startUpSurgeMultiple", ImportField.SURGE_MULTIPLE,
           "startUpSurgeMillis", ImportField.SURGE_MILLIS,
-          "continuous", ImportField.CONTINUOUS);
+          "continuous", ImportField.CONTINUOUS,
+          "motorHorsepower", ImportField.MOTOR_HP);
 
   private ScheduleMatcher() {}
 
