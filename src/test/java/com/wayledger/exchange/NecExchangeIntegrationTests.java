@@ -132,6 +132,10 @@ class NecExchangeIntegrationTests {
                 .query(String.class)
                 .single());
     assertSameDemand(apartment, copy);
+    assertThat(faultInterrupters(copy))
+        .as("the demo apartment's GFCI/AFCI breakers come back with their panel")
+        .isNotEmpty()
+        .isEqualTo(faultInterrupters(apartment));
     SiteAnalysis results = analysis.ofSite(site.getId());
     assertThat(results.dwellingWorksheets(copy).get(0).resultVoltAmperes())
         .as("standard method of the copy")
@@ -355,6 +359,16 @@ class NecExchangeIntegrationTests {
     assertThat(after.neutralCurrentAmps())
         .as("neutral")
         .isCloseTo(before.neutralCurrentAmps(), within(1e-6));
+  }
+
+  /** Each space's breaker function ("3:GFCI"), in space order; spaces without one left out. */
+  private java.util.List<String> faultInterrupters(long boardId) {
+    return jdbc.sql(
+            "SELECT way_number || ':' || device_fault_interrupter FROM circuit WHERE board_id = ?"
+                + " AND device_fault_interrupter IS NOT NULL ORDER BY way_number")
+        .param(boardId)
+        .query(String.class)
+        .list();
   }
 
   private long boardId(String reference) {
