@@ -47,7 +47,17 @@ public final class RowReader {
 
   /** The board the rows go into. */
   public record BoardContext(
-      int phases, int wayCount, Set<String> occupied, List<PhasePosition> positions) {
+      int phases,
+      int wayCount,
+      Set<String> occupied,
+      List<PhasePosition> positions,
+      List<String> lineNames) {
+
+    /** A board whose lines are named L1, L2, L3 in messages. */
+    public BoardContext(
+        int phases, int wayCount, Set<String> occupied, List<PhasePosition> positions) {
+      this(phases, wayCount, occupied, positions, List.of());
+    }
 
     /**
      * A board known by its phases only: L1 on a single-phase board; every single-pole, two-pole and
@@ -60,6 +70,12 @@ public final class RowReader {
 
     public BoardContext {
       positions = List.copyOf(positions);
+      lineNames = lineNames == null ? List.of() : List.copyOf(lineNames);
+    }
+
+    /** A line as the board names it in messages ("B" on a North American panel, else "L2"). */
+    String lineName(Phase line) {
+      return line.ordinal() < lineNames.size() ? lineNames.get(line.ordinal()) : line.name();
     }
 
     boolean isThreePhase() {
@@ -209,7 +225,9 @@ public final class RowReader {
             if (board.occupied().contains(slot)) {
               problems.add(
                   new ImportPlan.Problem(
-                      LINE, "import.cell.taken", new Object[] {circuit.wayNumber(), phase.name()}));
+                      LINE,
+                      "import.cell.taken",
+                      new Object[] {circuit.wayNumber(), board.lineName(phase)}));
               break;
             }
           }
@@ -331,7 +349,9 @@ public final class RowReader {
       } else {
         problems.add(
             new ImportPlan.Problem(
-                LINE, "import.cell.positionNotOnBoard", new Object[] {position.label()}));
+                LINE,
+                "import.cell.positionNotOnBoard",
+                new Object[] {Codes.line(position, board::lineName)}));
       }
       return null;
     }
