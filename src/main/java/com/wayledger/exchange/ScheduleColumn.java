@@ -64,7 +64,14 @@ public enum ScheduleColumn {
    * three-phase; the Line column already says it, this column says it in words and lets a sheet
    * that names only one line per row ("A" + "240 V") mark a two-pole circuit.
    */
-  CONNECTION("Connection", true);
+  CONNECTION("Connection", true),
+  /**
+   * The breaker's ground-fault or arc-fault function (GFCI, AFCI, …) as the NEC checks read it;
+   * blank when none is recorded.
+   */
+  FAULT_INTERRUPTER("Fault interrupter", true),
+  /** A motor load's nameplate horsepower (NEC Tables 430.248/430.250); blank for other loads. */
+  MOTOR_HP("Motor hp", true);
 
   /** How a three-pole position is written in the Line column. */
   public static final String THREE_POLE_CODE = "3P";
