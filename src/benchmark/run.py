@@ -218,6 +218,8 @@ def idle_memory(app, nmt):
     jcmd(pid, "GC.run")
     time.sleep(2)
     out["rss_after_gc_mb"] = app.rss_mb()
+    with open(os.path.join(OUT, f"histogram-{app.name}.txt"), "w") as f:  # the last start's live objects by class
+        f.write("\n".join(jcmd(pid, "GC.class_histogram").splitlines()[:60]))
     info = jcmd(pid, "GC.heap_info")
     heap = [(int(t), int(u)) for t, u in re.findall(r"total (\d+)K, used (\d+)K", info.split("Metaspace")[0])]
     out["heap_committed_mb"] = sum(t for t, _ in heap) / 1024
@@ -239,33 +241,42 @@ def idle_memory(app, nmt):
 
 
 def startup_only(args, wl_jar, bare_jar):
-    """Starts each app args.starts times, interleaved (bare, Wayledger, Wayledger, bare, ...), each time on a fresh
+    """Starts each app args.starts times, interleaved (the order rotates every round), each time on a fresh
     database, one app at a time; times its first page (Wayledger's must already find the demo site), then reads
-    its idle memory. Writes target/benchmark/startup.md."""
+    its idle memory. --variant adds Wayledger started with other arguments (or another jar) to the same rounds.
+    Writes target/benchmark/startup.md."""
     jvm = list(args.jvm) + (["-XX:NativeMemoryTracking=summary"] if args.nmt else [])
     demo = ["--spring.profiles.active=demo"]
+    apps = {"bare": (bare_jar, []), "wayledger": (wl_jar, [])}
+    for v in args.variant:  # name=jar-or-nothing|arg arg ...
+        name, _, rest = v.partition("=")
+        jar, _, extra = rest.partition("|") if "|" in rest else ("", "", rest)
+        apps[name] = (jar or wl_jar, extra.split())
     launches = {}
     if args.cds:
-        launches["wayledger"] = prepare_cds(wl_jar, "wayledger", demo + [
-            "--spring.datasource.url=jdbc:h2:mem:cds;MODE=PostgreSQL;DATABASE_TO_LOWER=TRUE;DEFAULT_NULL_ORDERING=HIGH"],
-            jvm)
-        launches["bare"] = prepare_cds(bare_jar, "bare", [], jvm)
-    runs = {"wayledger": [], "bare": []}
+        for name, (jar, extra) in apps.items():
+            launches[name] = prepare_cds(jar, name, [] if name == "bare" else demo + extra + [
+                "--spring.datasource.url=jdbc:h2:mem:cds;MODE=PostgreSQL;DATABASE_TO_LOWER=TRUE;DEFAULT_NULL_ORDERING=HIGH"],
+                jvm)
+    runs = {name: [] for name in apps}
+    names = list(apps)
     for i in range(args.starts):
-        for name in (["bare", "wayledger"] if i % 2 == 0 else ["wayledger", "bare"]):
+        order = names[i % len(names):] + names[:i % len(names)]
+        for name in (order if i % 2 == 0 else order[::-1]):
             work = tempfile.mkdtemp(prefix="wayledger-start-")
-            if name == "wayledger":
-                app = App(name, wl_jar, args.port, demo + [
+            jar, extra = apps[name]
+            if name == "bare":
+                app = App(name, jar, args.port + 1, [], "/login")
+            else:
+                app = App(name, jar, args.port, demo + extra + [
                     f"--spring.datasource.url=jdbc:h2:file:{work}/db;MODE=PostgreSQL;DATABASE_TO_LOWER=TRUE;DEFAULT_NULL_ORDERING=HIGH"],
                     "/login")
-            else:
-                app = App(name, bare_jar, args.port + 1, [], "/login")
             if name in launches:
                 app.launch = launches[name]
             load_before = load()
             try:
                 secs = app.start(work, args.heap, jvm)
-                if name == "wayledger":
+                if name != "bare":
                     # the first page a user opens must already show the demo sites
                     status, body = app.get("/api/sites", {"Authorization": basic("demo", "wayledger-demo")})
                     if status != 200 or "Tallow Lane Works" not in body:
@@ -280,18 +291,23 @@ def startup_only(args, wl_jar, bare_jar):
             print(f"start {i + 1} {name}: first page after {secs:.1f} s (load {load_before:.1f}), RSS {mem['rss_mb']:.0f} MB,"
                   f" after GC {mem['rss_after_gc_mb']:.0f} MB, heap used {mem['heap_used_mb']:.0f} MB,"
                   f" metaspace {mem['metaspace_used_mb']:.0f} MB, {mem['classes']} classes", flush=True)
-    write_startup_report(args, jvm, runs)
+    write_startup_report(args, jvm, apps, runs)
 
 
-def write_startup_report(args, jvm, runs):
-    w, b = runs["wayledger"], runs["bare"]
-    flags = " ".join([f"-Xmx{args.heap}", *jvm]) + (" + class-data sharing archive (both)" if args.cds else "")
+def write_startup_report(args, jvm, apps, runs):
+    b = runs["bare"]
+    mine = [n for n in runs if n != "bare"]
+    flags = " ".join([f"-Xmx{args.heap}", *jvm]) + (" + class-data sharing archive (each app its own)" if args.cds else "")
     lines = [f"# Start-up run {time.strftime('%Y-%m-%d %H:%M UTC', time.gmtime())}", "",
              f"`python3 src/benchmark/run.py --only startup --starts {args.starts}{' --cds' if args.cds else ''}"
-             f"{' --nmt' if args.nmt else ''}{''.join(' --jvm=' + j for j in args.jvm)}` — JVM flags for both apps: `{flags}`;"
-             " interleaved, one app at a time, each start on a fresh database. Medians; load = 1-minute load average"
-             " just before each start (min–max).", "",
-             "| start-up | Wayledger | bare | ratio |", "|---|---|---|---|"]
+             f"{' --nmt' if args.nmt else ''}{''.join(' --jvm=' + j for j in args.jvm)}"
+             f"{''.join(' --variant ' + repr(v) for v in args.variant)}` — JVM flags for every app: `{flags}`;"
+             " interleaved, one app at a time, each start on a fresh database. Medians; ratio = Wayledger ÷ bare.", ""]
+    for n in mine:
+        if apps[n][1] or apps[n][0] != apps["wayledger"][0]:
+            lines.append(f"- {n}: `{os.path.basename(apps[n][0])}` {' '.join(apps[n][1])}")
+    lines += ["", "| start-up | " + " | ".join(f"{n} | ratio" for n in mine) + " | bare |",
+              "|---|" + "---|---|" * len(mine) + "---|"]
     rows = [("time to first page (s)", "seconds", 1), ("idle RSS 10 s after the first page (MB)", "rss_mb", 0),
             ("RSS after a forced full GC (MB)", "rss_after_gc_mb", 0), ("heap used after GC (MB)", "heap_used_mb", 1),
             ("heap committed after GC (MB)", "heap_committed_mb", 0), ("metaspace used (MB)", "metaspace_used_mb", 1),
@@ -299,24 +315,29 @@ def write_startup_report(args, jvm, runs):
     if args.nmt:
         rows.append(("NMT committed total (MB)", "nmt_total_mb", 0))
     for label, key, digits in rows:
-        mw, mb = median(w, key), median(b, key)
-        lines.append(f"| {label} | {mw:.{digits}f} | {mb:.{digits}f} | {mw / mb if mb else float('nan'):.2f} |")
+        mb = median(b, key)
+        cells = []
+        for n in mine:
+            mw = median(runs[n], key)
+            cells.append(f"{mw:.{digits}f} | {mw / mb if mb else float('nan'):.2f}")
+        lines.append(f"| {label} | " + " | ".join(cells) + f" | {mb:.{digits}f} |")
     if args.nmt:
-        cats = sorted(set(w[0]["nmt"]) | set(b[0]["nmt"]), key=lambda c: -statistics.median(x["nmt"].get(c, 0) for x in w))
-        lines += ["", "| NMT committed by category (MB, median) | Wayledger | bare | difference |", "|---|---|---|---|"]
+        cats = sorted(set().union(*(x["nmt"] for xs in runs.values() for x in xs)),
+                      key=lambda c: -statistics.median(x["nmt"].get(c, 0) for x in runs[mine[0]]))
+        lines += ["", "| NMT committed by category (MB, median) | " + " | ".join(mine) + " | bare |",
+                  "|---|" + "---|" * (len(mine) + 1)]
         for c in cats:
-            mw = statistics.median(x["nmt"].get(c, 0) for x in w)
-            mb = statistics.median(x["nmt"].get(c, 0) for x in b)
-            if max(mw, mb) >= 1:
-                lines.append(f"| {c} | {mw:.0f} | {mb:.0f} | {mw - mb:+.0f} |")
+            values = [statistics.median(x["nmt"].get(c, 0) for x in runs[n]) for n in mine + ["bare"]]
+            if max(values) >= 1:
+                lines.append(f"| {c} | " + " | ".join(f"{v:.0f}" for v in values) + " |")
     lines += ["", "| start | app | first page (s) | load | RSS (MB) | RSS after GC | heap used | metaspace | classes |",
               "|---|---|---|---|---|---|---|---|---|"]
     for name, xs in runs.items():
         for i, x in enumerate(xs):
             lines.append(f"| {i + 1} | {name} | {x['seconds']:.1f} | {x['load']:.1f} | {x['rss_mb']:.0f} | "
                          f"{x['rss_after_gc_mb']:.0f} | {x['heap_used_mb']:.1f} | {x['metaspace_used_mb']:.1f} | {x['classes']} |")
-    loads = [x["load"] for x in w + b]
-    lines += ["", f"Load before the starts: {min(loads):.1f}–{max(loads):.1f}."]
+    loads = [x["load"] for xs in runs.values() for x in xs]
+    lines += ["", f"Load (1-minute average) just before the starts: {min(loads):.1f}–{max(loads):.1f}."]
     text = "\n".join(lines) + "\n"
     with open(os.path.join(OUT, "startup.md"), "w") as f:
         f.write(text)
@@ -345,6 +366,9 @@ def main():
                    help="with --only startup: native memory tracking on in both apps, its summary in the report")
     p.add_argument("--jvm", action="append", default=[],
                    help="with --only startup: an extra JVM flag for both apps (repeatable, e.g. --jvm=-XX:+UseSerialGC)")
+    p.add_argument("--variant", action="append", default=[],
+                   help="with --only startup: another Wayledger start in the same rounds, NAME=ARGS or NAME=JAR|ARGS"
+                        " (e.g. 'deferred=--spring.data.jpa.repositories.bootstrap-mode=deferred')")
     p.add_argument("--jar", help="with --skip-build: the Wayledger jar to measure (default: the one in target/)")
     p.add_argument("--board", help="reference of the demo board to measure (default: the one with most circuits)")
     args = p.parse_args()
