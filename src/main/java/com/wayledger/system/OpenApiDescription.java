@@ -7,17 +7,12 @@ import io.swagger.v3.oas.models.security.SecurityRequirement;
 import io.swagger.v3.oas.models.security.SecurityScheme;
 import org.springframework.context.annotation.Bean;
 import org.springframework.context.annotation.Configuration;
-import org.springframework.context.annotation.Lazy;
 
-/**
- * Title, caution and sign-in scheme of the JSON API's OpenAPI description; built on the first
- * request for the description, like the rest of it ({@link LazyApiDescription}).
- */
+/** Title, caution and sign-in scheme of the JSON API's OpenAPI description. */
 @Configuration
 class OpenApiDescription {
 
   @Bean
-  @Lazy
   OpenAPI wayledgerApi() {
     return new OpenAPI()
         .info(
