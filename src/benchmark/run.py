@@ -8,6 +8,7 @@ the load average beside each figure, to target/benchmark/results.md (and prints 
 
     python3 src/benchmark/run.py                # defaults: 3 rounds of 10 s per endpoint
     python3 src/benchmark/run.py --rounds 5 --seconds 20 --skip-build
+    python3 src/benchmark/run.py --only startup --starts 5   # start-up and idle memory only, interleaved
 
 Only loopback, bounded in time (rounds x pairs x 2 x seconds). Requires wrk and curl on PATH and Java 17.
 Nothing here runs inside `./mvnw verify`.
@@ -63,6 +64,13 @@ class App:
     def start(self, log_dir, heap, jvm=()):
         log = open(os.path.join(log_dir, f"{self.name}.log"), "w")
         launch = getattr(self, "launch", None) or ["-jar", self.jar]
+        try:  # another program on this port would answer for us and make the timing meaningless
+            urllib.request.urlopen(self.url("/"), timeout=2)
+            raise SystemExit(f"port {self.port} is already in use; choose another with --port")
+        except urllib.error.HTTPError:
+            raise SystemExit(f"port {self.port} is already in use; choose another with --port")
+        except (urllib.error.URLError, OSError):
+            pass
         cmd = ["java", f"-Xmx{heap}", *jvm, *launch, f"--server.port={self.port}",
                "--server.address=127.0.0.1"] + self.args
         started = time.monotonic()
@@ -144,7 +152,7 @@ class NoRedirect(urllib.request.HTTPRedirectHandler):
         return None
 
 
-def prepare_cds(jar, name, args):
+def prepare_cds(jar, name, args, jvm=()):
     """Class-data sharing for one app: extracts its jar (Spring Boot's tools jar mode; classes cannot be
     archived from inside nested jars), then records the classes a start loads in a training run that
     stops right after the context refresh, on a throwaway in-memory database. Returns the launch arguments."""
@@ -153,7 +161,7 @@ def prepare_cds(jar, name, args):
     sh(["java", "-Djarmode=tools", "-jar", jar, "extract", "--destination", dest])
     app_jar = os.path.join(dest, os.path.basename(jar))
     archive = os.path.join(dest, f"{name}.jsa")
-    sh(["java", f"-XX:ArchiveClassesAtExit={archive}", "-Dspring.context.exit=onRefresh", "-jar", app_jar,
+    sh(["java", *jvm, f"-XX:ArchiveClassesAtExit={archive}", "-Dspring.context.exit=onRefresh", "-jar", app_jar,
         "--server.port=0", "--server.address=127.0.0.1"] + args, stdout=subprocess.DEVNULL)
     return [f"-XX:SharedArchiveFile={archive}", "-jar", app_jar]
 
@@ -198,6 +206,144 @@ def timed_get(app, path, headers, times):
     return seconds
 
 
+def jcmd(pid, *command):
+    return subprocess.run(["jcmd", str(pid), *command], capture_output=True, text=True, timeout=120).stdout
+
+
+def idle_memory(app, nmt):
+    """Idle memory of a started app: RSS as it stands, then a forced full GC and what is left — heap used and
+    committed, metaspace, loaded classes, threads and (with NMT on) the JVM's own account by category."""
+    pid = app.proc.pid
+    out = {"rss_mb": app.rss_mb()}
+    jcmd(pid, "GC.run")
+    time.sleep(2)
+    out["rss_after_gc_mb"] = app.rss_mb()
+    with open(os.path.join(OUT, f"histogram-{app.name}.txt"), "w") as f:  # the last start's live objects by class
+        f.write("\n".join(jcmd(pid, "GC.class_histogram").splitlines()[:60]))
+    info = jcmd(pid, "GC.heap_info")
+    heap = [(int(t), int(u)) for t, u in re.findall(r"total (\d+)K, used (\d+)K", info.split("Metaspace")[0])]
+    out["heap_committed_mb"] = sum(t for t, _ in heap) / 1024
+    out["heap_used_mb"] = sum(u for _, u in heap) / 1024
+    meta = re.search(r"Metaspace\s+used (\d+)K, committed (\d+)K", info)
+    out["metaspace_used_mb"] = int(meta.group(1)) / 1024 if meta else float("nan")
+    counters = dict(re.findall(r"^([\w.]+)=(\S+)$", jcmd(pid, "PerfCounter.print"), re.M))
+    out["classes"] = int(counters.get("java.cls.loadedClasses", 0)) - int(counters.get("java.cls.unloadedClasses", 0))
+    out["shared_classes"] = int(counters.get("sun.cls.sharedLoadedClasses", 0))
+    with open(f"/proc/{pid}/status") as f:
+        out["threads"] = int(next(line.split()[1] for line in f if line.startswith("Threads:")))
+    if nmt:
+        summary = jcmd(pid, "VM.native_memory", "summary", "scale=KB")
+        total = re.search(r"Total: reserved=\d+KB, committed=(\d+)KB", summary)
+        out["nmt_total_mb"] = int(total.group(1)) / 1024 if total else float("nan")
+        out["nmt"] = {name.strip(): int(committed) / 1024 for name, committed in
+                      re.findall(r"-\s+([A-Za-z][\w ]*?) \(reserved=\d+KB, committed=(\d+)KB\)", summary)}
+    return out
+
+
+def startup_only(args, wl_jar, bare_jar):
+    """Starts each app args.starts times, interleaved (the order rotates every round), each time on a fresh
+    database, one app at a time; times its first page (Wayledger's must already find the demo site), then reads
+    its idle memory. --variant adds Wayledger started with other arguments (or another jar) to the same rounds.
+    Writes target/benchmark/startup.md."""
+    jvm = list(args.jvm) + (["-XX:NativeMemoryTracking=summary"] if args.nmt else [])
+    demo = ["--spring.profiles.active=demo"]
+    apps = {"bare": (bare_jar, []), "wayledger": (wl_jar, [])}
+    for v in args.variant:  # name=jar-or-nothing|arg arg ...
+        name, _, rest = v.partition("=")
+        jar, _, extra = rest.partition("|") if "|" in rest else ("", "", rest)
+        apps[name] = (jar or wl_jar, extra.split())
+    launches = {}
+    if args.cds:
+        for name, (jar, extra) in apps.items():
+            launches[name] = prepare_cds(jar, name, [] if name == "bare" else demo + extra + [
+                "--spring.datasource.url=jdbc:h2:mem:cds;MODE=PostgreSQL;DATABASE_TO_LOWER=TRUE;DEFAULT_NULL_ORDERING=HIGH"],
+                jvm)
+    runs = {name: [] for name in apps}
+    names = list(apps)
+    for i in range(args.starts):
+        order = names[i % len(names):] + names[:i % len(names)]
+        for name in (order if i % 2 == 0 else order[::-1]):
+            work = tempfile.mkdtemp(prefix="wayledger-start-")
+            jar, extra = apps[name]
+            if name == "bare":
+                app = App(name, jar, args.port + 1, [], "/login")
+            else:
+                app = App(name, jar, args.port, demo + extra + [
+                    f"--spring.datasource.url=jdbc:h2:file:{work}/db;MODE=PostgreSQL;DATABASE_TO_LOWER=TRUE;DEFAULT_NULL_ORDERING=HIGH"],
+                    "/login")
+            if name in launches:
+                app.launch = launches[name]
+            load_before = load()
+            try:
+                secs = app.start(work, args.heap, jvm)
+                if name != "bare":
+                    # the first page a user opens must already show the demo sites
+                    status, body = app.get("/api/sites", {"Authorization": basic("demo", "wayledger-demo")})
+                    if status != 200 or "Tallow Lane Works" not in body:
+                        raise SystemExit(f"demo site not there when the first page answered (HTTP {status})")
+                time.sleep(10)
+                mem = idle_memory(app, args.nmt)
+            finally:
+                app.stop()
+                shutil.rmtree(work, ignore_errors=True)
+            mem.update(seconds=secs, load=load_before)
+            runs[name].append(mem)
+            print(f"start {i + 1} {name}: first page after {secs:.1f} s (load {load_before:.1f}), RSS {mem['rss_mb']:.0f} MB,"
+                  f" after GC {mem['rss_after_gc_mb']:.0f} MB, heap used {mem['heap_used_mb']:.0f} MB,"
+                  f" metaspace {mem['metaspace_used_mb']:.0f} MB, {mem['classes']} classes", flush=True)
+    write_startup_report(args, jvm, apps, runs)
+
+
+def write_startup_report(args, jvm, apps, runs):
+    b = runs["bare"]
+    mine = [n for n in runs if n != "bare"]
+    flags = " ".join([f"-Xmx{args.heap}", *jvm]) + (" + class-data sharing archive (each app its own)" if args.cds else "")
+    lines = [f"# Start-up run {time.strftime('%Y-%m-%d %H:%M UTC', time.gmtime())}", "",
+             f"`python3 src/benchmark/run.py --only startup --starts {args.starts}{' --cds' if args.cds else ''}"
+             f"{' --nmt' if args.nmt else ''}{''.join(' --jvm=' + j for j in args.jvm)}"
+             f"{''.join(' --variant ' + repr(v) for v in args.variant)}` — JVM flags for every app: `{flags}`;"
+             " interleaved, one app at a time, each start on a fresh database. Medians; ratio = Wayledger ÷ bare.", ""]
+    for n in mine:
+        if apps[n][1] or apps[n][0] != apps["wayledger"][0]:
+            lines.append(f"- {n}: `{os.path.basename(apps[n][0])}` {' '.join(apps[n][1])}")
+    lines += ["", "| start-up | " + " | ".join(f"{n} | ratio" for n in mine) + " | bare |",
+              "|---|" + "---|---|" * len(mine) + "---|"]
+    rows = [("time to first page (s)", "seconds", 1), ("idle RSS 10 s after the first page (MB)", "rss_mb", 0),
+            ("RSS after a forced full GC (MB)", "rss_after_gc_mb", 0), ("heap used after GC (MB)", "heap_used_mb", 1),
+            ("heap committed after GC (MB)", "heap_committed_mb", 0), ("metaspace used (MB)", "metaspace_used_mb", 1),
+            ("loaded classes", "classes", 0), ("threads", "threads", 0)]
+    if args.nmt:
+        rows.append(("NMT committed total (MB)", "nmt_total_mb", 0))
+    for label, key, digits in rows:
+        mb = median(b, key)
+        cells = []
+        for n in mine:
+            mw = median(runs[n], key)
+            cells.append(f"{mw:.{digits}f} | {mw / mb if mb else float('nan'):.2f}")
+        lines.append(f"| {label} | " + " | ".join(cells) + f" | {mb:.{digits}f} |")
+    if args.nmt:
+        cats = sorted(set().union(*(x["nmt"] for xs in runs.values() for x in xs)),
+                      key=lambda c: -statistics.median(x["nmt"].get(c, 0) for x in runs[mine[0]]))
+        lines += ["", "| NMT committed by category (MB, median) | " + " | ".join(mine) + " | bare |",
+                  "|---|" + "---|" * (len(mine) + 1)]
+        for c in cats:
+            values = [statistics.median(x["nmt"].get(c, 0) for x in runs[n]) for n in mine + ["bare"]]
+            if max(values) >= 1:
+                lines.append(f"| {c} | " + " | ".join(f"{v:.0f}" for v in values) + " |")
+    lines += ["", "| start | app | first page (s) | load | RSS (MB) | RSS after GC | heap used | metaspace | classes |",
+              "|---|---|---|---|---|---|---|---|---|"]
+    for name, xs in runs.items():
+        for i, x in enumerate(xs):
+            lines.append(f"| {i + 1} | {name} | {x['seconds']:.1f} | {x['load']:.1f} | {x['rss_mb']:.0f} | "
+                         f"{x['rss_after_gc_mb']:.0f} | {x['heap_used_mb']:.1f} | {x['metaspace_used_mb']:.1f} | {x['classes']} |")
+    loads = [x["load"] for xs in runs.values() for x in xs]
+    lines += ["", f"Load (1-minute average) just before the starts: {min(loads):.1f}–{max(loads):.1f}."]
+    text = "\n".join(lines) + "\n"
+    with open(os.path.join(OUT, "startup.md"), "w") as f:
+        f.write(text)
+    print(text)
+
+
 def main():
     p = argparse.ArgumentParser(description=__doc__, formatter_class=argparse.RawDescriptionHelpFormatter)
     p.add_argument("--rounds", type=int, default=3)
@@ -213,6 +359,17 @@ def main():
     p.add_argument("--cds", action="store_true",
                    help="start Wayledger from its extracted jar with a class-data sharing archive (training run"
                         " first); the bare app still starts as a plain jar")
+    p.add_argument("--only", choices=("all", "startup"), default="all",
+                   help="startup: only time to first page and idle memory, --starts times each, interleaved")
+    p.add_argument("--starts", type=int, default=3, help="with --only startup: starts of each app")
+    p.add_argument("--nmt", action="store_true",
+                   help="with --only startup: native memory tracking on in both apps, its summary in the report")
+    p.add_argument("--jvm", action="append", default=[],
+                   help="with --only startup: an extra JVM flag for both apps (repeatable, e.g. --jvm=-XX:+UseSerialGC)")
+    p.add_argument("--variant", action="append", default=[],
+                   help="with --only startup: another Wayledger start in the same rounds, NAME=ARGS or NAME=JAR|ARGS"
+                        " (e.g. 'deferred=--spring.data.jpa.repositories.bootstrap-mode=deferred')")
+    p.add_argument("--jar", help="with --skip-build: the Wayledger jar to measure (default: the one in target/)")
     p.add_argument("--board", help="reference of the demo board to measure (default: the one with most circuits)")
     args = p.parse_args()
     for tool in ("wrk", "java"):
@@ -221,9 +378,12 @@ def main():
     os.makedirs(OUT, exist_ok=True)
     if args.skip_build:
         jar = sorted(f for f in os.listdir(os.path.join(ROOT, "target")) if f.startswith("wayledger") and f.endswith(".jar"))[0]
-        wl_jar, bare_jar = os.path.join(ROOT, "target", jar), os.path.join(BARE, "target", "bare.jar")
+        wl_jar, bare_jar = args.jar or os.path.join(ROOT, "target", jar), os.path.join(BARE, "target", "bare.jar")
     else:
         wl_jar, bare_jar = build(not args.online)
+    if args.only == "startup":
+        startup_only(args, wl_jar, bare_jar)
+        return
 
     work = tempfile.mkdtemp(prefix="wayledger-bench-")
     jfr_file = os.path.join(OUT, "wayledger.jfr")

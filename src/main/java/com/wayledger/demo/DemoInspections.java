@@ -20,10 +20,7 @@ import java.util.List;
 import java.util.Map;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
-import org.springframework.boot.ApplicationArguments;
-import org.springframework.boot.ApplicationRunner;
 import org.springframework.context.annotation.Profile;
-import org.springframework.core.annotation.Order;
 import org.springframework.stereotype.Component;
 
 /**
@@ -34,8 +31,7 @@ import org.springframework.stereotype.Component;
  */
 @Component
 @Profile("demo")
-@Order(6)
-class DemoInspections implements ApplicationRunner {
+class DemoInspections {
 
   static final String BOARD = "FLAT-1";
   static final String EARLIER = "2022-05-12";
@@ -64,8 +60,11 @@ class DemoInspections implements ApplicationRunner {
     this.inspections = inspections;
   }
 
-  @Override
-  public void run(ApplicationArguments args) {
+  /**
+   * Called by {@link DemoSite} while the app starts, before the web server answers: the first page
+   * served already finds both inspections.
+   */
+  void loadOnce() {
     Site site =
         sites.all().stream()
             .filter(s -> s.getName().equals(DemoSite.SITE_NAME))

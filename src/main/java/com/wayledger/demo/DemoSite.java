@@ -71,6 +71,7 @@ class DemoSite implements SmartLifecycle {
   private final AccountService accounts;
   private final TransactionTemplate transaction;
   private final NecDemoSite necDemo;
+  private final DemoInspections inspections;
   private final String adminUsername;
   private final String adminPassword;
 
@@ -81,6 +82,7 @@ class DemoSite implements SmartLifecycle {
       AccountService accounts,
       TransactionTemplate transaction,
       NecDemoSite necDemo,
+      DemoInspections inspections,
       @Value("${wayledger.admin.username:}") String adminUsername,
       @Value("${wayledger.admin.password:}") String adminPassword) {
     this.adminUsername = adminUsername;
@@ -91,13 +93,15 @@ class DemoSite implements SmartLifecycle {
     this.accounts = accounts;
     this.transaction = transaction;
     this.necDemo = necDemo;
+    this.inspections = inspections;
   }
 
   private volatile boolean running;
 
   /**
    * Loads before the web server starts (the server's own phase is just below Integer.MAX_VALUE), so
-   * the first page served already finds the demo accounts and site: an early sign-in never fails.
+   * the first page served already finds the demo accounts, both sites and the inspections: an early
+   * sign-in never fails, and no page shows half the demo.
    */
   @Override
   public int getPhase() {
@@ -108,6 +112,7 @@ class DemoSite implements SmartLifecycle {
   public void start() {
     loadOnce();
     necDemo.loadOnce();
+    inspections.loadOnce();
     running = true;
   }
 
