@@ -278,6 +278,37 @@ public class BoardService {
     }
   }
 
+  /**
+   * A board's system may change (120/240 V ↔ 120/208 V, or a second service's) while its circuits
+   * keep lines it still has and no board is fed from it (what a sub-board may be follows from its
+   * feed's system).
+   */
+  private void checkCanChangeSystem(Board board, int linesAfter) {
+    List<String> ways =
+        circuits.findByBoard(board.getId()).stream()
+            .filter(
+                circuit ->
+                    circuit.getPosition().phases().stream()
+                        .anyMatch(l -> l.ordinal() >= linesAfter))
+            .map(circuit -> circuit.getWayNumber() + " " + circuit.getPosition().label())
+            .distinct()
+            .toList();
+    if (!ways.isEmpty()) {
+      throw new RuleViolation(
+          "supplySystem", "board.supplySystem.circuitsBeyondLines", String.join(", ", ways));
+    }
+    List<String> children =
+        boards.findBySite(board.getSite().getId()).stream()
+            .filter(c -> c.getParent() != null && c.getParent().getId().equals(board.getId()))
+            .map(Board::getReference)
+            .sorted()
+            .toList();
+    if (!children.isEmpty()) {
+      throw new RuleViolation(
+          "supplySystem", "board.supplySystem.feedsBoards", String.join(", ", children));
+    }
+  }
+
   /** The lowest space of a panelboard a breaker reaches down to (0 when it holds none). */
   private int lowestSpaceTaken(Board board) {
     int lowest = 0;
@@ -318,8 +349,14 @@ public class BoardService {
     if (taken) {
       throw new RuleViolation("reference", "board.reference.taken");
     }
-    if (existing != null && form.phases() == 1 && existing.isThreePhase()) {
+    if (existing != null
+        && form.phases() == 1
+        && existing.isThreePhase()
+        && !system.hasTwoLines()) {
       checkCanBecomeSinglePhase(existing);
+    }
+    if (existing != null && system != existing.system()) {
+      checkCanChangeSystem(existing, system.lineCount(form.phases()));
     }
     boolean panelboard =
         !com.wayledger.engine.SiteSpec.DEFAULT_RULE_SET_KEY.equals(site.getRuleSet())

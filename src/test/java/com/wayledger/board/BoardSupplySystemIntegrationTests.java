@@ -167,6 +167,34 @@ class BoardSupplySystemIntegrationTests {
   }
 
   @Test
+  void aPanelWithBreakersOnLineCCannotBecomeA120208Panel() throws Exception {
+    Board before = boardRepository.findById(house.getId()).orElseThrow();
+
+    mvc.perform(
+            post("/boards/{id}", house.getId())
+                .with(EDITOR)
+                .with(csrf())
+                .param("reference", "HP")
+                .param("phases", "1")
+                .param("wayCount", "42")
+                .param("incomerKind", "MCCB")
+                .param("incomerRatingAmps", "200")
+                .param("incomerPoles", "2")
+                .param("unbalanceLimitPercent", "10")
+                .param("coincidenceFactor", "1")
+                .param("version", String.valueOf(before.getVersion()))
+                .param("supplySystem", "SINGLE_PHASE_120_208"))
+        .andExpect(status().isUnprocessableEntity())
+        .andExpect(
+            org.springframework.test.web.servlet.result.MockMvcResultMatchers.content()
+                .string(Matchers.containsString("lines the new supply system does not have")));
+
+    Board after = boardRepository.findById(house.getId()).orElseThrow();
+    assertThat(after.getSupplySystem()).as("nothing saved").isNull();
+    assertThat(after.getVersion()).isEqualTo(before.getVersion());
+  }
+
+  @Test
   void theApiTakesAndShowsTheBoardsOwnSystem() throws Exception {
     String body =
         """
