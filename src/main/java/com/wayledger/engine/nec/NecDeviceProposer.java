@@ -132,7 +132,9 @@ public final class NecDeviceProposer {
                 null,
                 null);
         CircuitSpec trial = with(circuit, device, cable);
-        device = device.withFaultInterrupter(DwellingProtection.needed(trial, context.u0()));
+        device =
+            device.withFaultInterrupter(
+                DwellingProtection.needed(trial, context.u0(), context.dwelling()));
         trial = with(circuit, device, cable);
         List<Finding> findings = NecCircuitChecks.assess(context, trial, designCurrentAmps);
         List<Finding> problems = problems(findings);
