@@ -105,6 +105,7 @@ public final class CsvWriter {
     cells[MEASURED_ZS.ordinal()] = num(c.measuredLoopImpedanceOhms());
     cells[LOCATION.ordinal()] = name(c.location());
     cells[CONNECTION.ordinal()] = Codes.connection(c.position());
+    cells[CONDUIT.ordinal()] = name(c.cableConduit());
     if (l != null) {
       cells[LOAD.ordinal()] = CellText.forCsv(l.description());
       cells[CATEGORY.ordinal()] = name(l.category());

@@ -224,6 +224,9 @@ public enum ImportField {
           "circuit voltage",
           "240 v",
           "wiring")),
+  CONDUIT(
+      ScheduleColumn.CONDUIT,
+      List.of("conduit", "conduit type", "raceway", "raceway type", "conduit material")),
   DEVICE_SUMMARY(
       null,
       List.of(

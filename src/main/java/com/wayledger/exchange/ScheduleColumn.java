@@ -64,7 +64,9 @@ public enum ScheduleColumn {
    * three-phase; the Line column already says it, this column says it in words and lets a sheet
    * that names only one line per row ("A" + "240 V") mark a two-pole circuit.
    */
-  CONNECTION("Connection", true);
+  CONNECTION("Connection", true),
+  /** The conduit an NEC circuit's conductors run in (Chapter 9 Table 9 voltage drop). */
+  CONDUIT("Conduit", true);
 
   /** How a three-pole position is written in the Line column. */
   public static final String THREE_POLE_CODE = "3P";

@@ -30,6 +30,7 @@ final class ScheduleMatcher {
           Map.entry("wayNumber", ImportField.WAY),
           Map.entry("position", ImportField.LINE),
           Map.entry("location", ImportField.LOCATION),
+          Map.entry("cableConduit", ImportField.CONDUIT),
           Map.entry("description", ImportField.CIRCUIT),
           Map.entry("status", ImportField.STATE),
           Map.entry("lockedForBalancing", ImportField.KEEP_LINE),

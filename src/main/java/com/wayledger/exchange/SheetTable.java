@@ -48,8 +48,10 @@ public record SheetTable(
       }
     }
     // exports written before the circuit key and record version columns end at Findings; those
-    // written before the connection column at the record version
+    // written before the connection column at the record version, before the conduit column at the
+    // connection
     return headers.size() == ScheduleColumn.values().length
+        || headers.size() == ScheduleColumn.CONDUIT.ordinal()
         || headers.size() == ScheduleColumn.CONNECTION.ordinal()
         || headers.size() == ScheduleColumn.CIRCUIT_KEY.ordinal();
   }

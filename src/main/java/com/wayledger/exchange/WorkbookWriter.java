@@ -463,6 +463,7 @@ public final class WorkbookWriter {
     number(row, MEASURED_ZS.ordinal(), c.measuredLoopImpedanceOhms(), s.ohms, w);
     text(row, LOCATION.ordinal(), name(c.location()), s.text, w);
     text(row, CONNECTION.ordinal(), Codes.connection(c.position()), s.text, w);
+    text(row, CONDUIT.ordinal(), name(c.cableConduit()), s.text, w);
   }
 
   /**

@@ -118,7 +118,8 @@ public final class NecDeviceProposer {
                 recorded.installationMethod(),
                 recorded.ambientCelsius(),
                 recorded.groupedCircuits(),
-                recorded.thermalInsulationMillimetres());
+                recorded.thermalInsulationMillimetres(),
+                recorded.conduit());
         DeviceSpec device =
             new DeviceSpec(
                 circuit.device() != null && circuit.device().kind() == DeviceKind.FUSE
