@@ -131,8 +131,9 @@ public class BalanceService {
   /**
    * The balancing problem of a board; on a panelboard ({@code panel} not null) the free positions
    * are its free spaces, each on the line of its row, so a move is from one space to another and a
-   * multi-pole breaker keeps its adjacent spaces. A split-phase panelboard is solved as three lines
-   * with none free on the third.
+   * multi-pole breaker keeps its adjacent spaces. A split-phase (120/240 V) panelboard is solved
+   * over its two lines A and B: no position on a third, and the mean, the unbalance and the limit
+   * taken over two lines.
    */
   public static BalanceProblem problemOf(
       BoardSpec board, BoardDemand demand, Basis basis, PanelSpaces panel) {
@@ -141,6 +142,8 @@ public class BalanceService {
       demand.circuits().forEach(c -> byCircuit.put(c.circuitId(), c));
     }
     double u0 = demand == null ? 230.0 : demand.nominalVoltageVolts();
+    // the board's lines as its panel lays them out (2 on a 120/240 V panel), else its phases
+    int lines = panel != null ? panel.lines() : board.isThreePhase() ? 3 : 1;
     List<BalanceItem> items = new ArrayList<>();
     Map<Phase, Double> fixed = new EnumMap<>(Phase.class);
     for (Phase phase : Phase.values()) {
@@ -165,9 +168,10 @@ public class BalanceService {
       Double amps = result == null || !result.isAssessed() ? null : amps(result, basis, u0);
       if (circuit.position().isLineToLine()) {
         // a two-pole, line-to-line circuit occupies its pair of lines and never moves: its line
-        // current |S|/U_LL (U_LL = 2·U0 split-phase, √3·U0 wye) is fixed load on both
+        // current |S|/U_LL (U_LL = 2·U0 split-phase, √3·U0 on a wye and on
+        // 120/208 V) is fixed load on both
         if (amps != null) {
-          double lineToLine = demand != null && demand.lines() == 2 ? 2.0 : Math.sqrt(3.0);
+          double lineToLine = demand != null ? demand.system().lineToLineFactor() : Math.sqrt(3.0);
           for (Phase phase : circuit.position().phases()) {
             fixed.merge(phase, amps / lineToLine, Double::sum);
           }
@@ -198,7 +202,7 @@ public class BalanceService {
               circuit.wayNumber(),
               !circuit.lockedForBalancing()));
     }
-    if (basis == Basis.DEMAND && demand != null && board.isThreePhase()) {
+    if (basis == Basis.DEMAND && demand != null && lines >= 2) {
       // the fixed share of each line is what the demand engine puts there beyond the single-pole
       // circuits: three-pole ways at their own per-line figures (a feeder to an unbalanced
       // sub-board is not spread evenly), allowances carried by no circuit. "As it stands" then
@@ -233,7 +237,8 @@ public class BalanceService {
         null,
         freeWays,
         board.unbalanceLimitPercent(),
-        board.isThreePhase() || panel != null);
+        lines >= 2,
+        lines >= 2 ? lines : null);
   }
 
   /** A circuit's weight in amps: its share of demand on its line, or its connected current. */

@@ -92,6 +92,10 @@ public class Board {
   })
   private CableDetails submain;
 
+  /** The board's own supply system; null when it is its site's (V24). */
+  @jakarta.persistence.Enumerated(jakarta.persistence.EnumType.STRING)
+  private com.wayledger.engine.SupplySystem supplySystem;
+
   private double unbalanceLimitPercent;
   private double coincidenceFactor;
   private String diversityMethod;
@@ -177,14 +181,25 @@ public class Board {
             : form.diversityMethod();
     measuredExternalLoopImpedanceOhms = form.measuredExternalLoopImpedanceOhms();
     measuredFaultCurrentKiloAmps = form.measuredFaultCurrentKiloAmps();
+    supplySystem = form.supplySystem();
   }
 
   /**
-   * Number of lines of this board on its site's supply: 2 on a split-phase (120/240 V) site, else 1
-   * or 3 as its phases.
+   * Number of lines of this board on its supply system: 2 on a single-phase three-wire system
+   * (120/240 V or 120/208 V), else 1 or 3 as its phases.
    */
   public int lineCount() {
-    return site.getSupplySystem().lineCount(phases);
+    return system().lineCount(phases);
+  }
+
+  /** The supply system this board is on: its own when recorded, else its site's. */
+  public com.wayledger.engine.SupplySystem system() {
+    return supplySystem != null ? supplySystem : site.getSupplySystem();
+  }
+
+  /** The board's own supply system; null when it is its site's. */
+  public com.wayledger.engine.SupplySystem getSupplySystem() {
+    return supplySystem;
   }
 
   /** The positions a circuit on this board may take (two-pole ones on NEC sites only). */
@@ -242,7 +257,7 @@ public class Board {
 
   /** A line's name for people on this board: A, B, C on a North American supply, else L1…L3. */
   public String lineName(com.wayledger.engine.Phase line) {
-    return site.getSupplySystem().lineName(line);
+    return system().lineName(line);
   }
 
   public Long getId() {

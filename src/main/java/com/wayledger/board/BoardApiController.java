@@ -43,6 +43,14 @@ public class BoardApiController {
     this.sites = sites;
   }
 
+  /**
+   * A board in a list.
+   *
+   * @param supplySystem the system the board is on: its own ({@code fields.supplySystem}) or, when
+   *     it records none, its site's
+   * @param lineNames its lines as people name them, in the order of the codes L1, L2, L3 the API
+   *     uses elsewhere ("A", "B" on a 120/240 V panel; "L1", "L2", "L3" on an IEC board)
+   */
   public record BoardSummary(
       long id,
       String reference,
@@ -51,7 +59,9 @@ public class BoardApiController {
       int wayCount,
       Long parentBoardId,
       Double incomerRatingAmps,
-      long version) {
+      long version,
+      com.wayledger.engine.SupplySystem supplySystem,
+      List<String> lineNames) {
 
     static BoardSummary of(Board board) {
       return new BoardSummary(
@@ -62,7 +72,12 @@ public class BoardApiController {
           board.getWayCount(),
           board.getParent() == null ? null : board.getParent().getId(),
           board.getIncomer() == null ? null : board.getIncomer().getRatingAmps(),
-          board.getVersion());
+          board.getVersion(),
+          board.system(),
+          java.util.Arrays.stream(com.wayledger.engine.Phase.values())
+              .limit(board.lineCount())
+              .map(board::lineName)
+              .toList());
     }
   }
 
@@ -98,10 +113,18 @@ public class BoardApiController {
   /** A load line's new values with the version they were read at. */
   public record LoadChange(@NotNull Long version, @Valid @NotNull LoadForm load) {}
 
+  /**
+   * A circuit as stored.
+   *
+   * @param position its lines as a code (L1, L1_L2, THREE_POLE), the API's contract
+   * @param lines the same lines as people name them on its board: "B", "A–B" on a panelboard (in
+   *     the order of its spaces), "L2", "L1–L2" on an IEC board
+   */
   public record CircuitView(
       long id,
       int wayNumber,
       PhasePosition position,
+      String lines,
       String description,
       WayStatus status,
       boolean lockedForBalancing,
@@ -115,6 +138,7 @@ public class BoardApiController {
           circuit.getId(),
           circuit.getWayNumber(),
           circuit.getPosition(),
+          circuit.linesLabel(),
           circuit.getDescription(),
           circuit.getStatus(),
           circuit.isLockedForBalancing(),

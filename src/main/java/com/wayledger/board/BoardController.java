@@ -64,6 +64,7 @@ public class BoardController {
   public String newBoard(@PathVariable long siteId, Model model) {
     Site site = sites.get(siteId);
     model.addAttribute("site", site);
+    model.addAttribute("boardSupplySystems", supplySystemsOf(site));
     model.addAttribute("parents", boards.onSite(siteId));
     model.addAttribute("feeds", boards.feedOptions(siteId));
     model.addAttribute(
@@ -82,6 +83,7 @@ public class BoardController {
       HttpServletResponse response) {
     form = FormRecovery.ensure(form, errors, model, "form", BoardForm.class, request);
     model.addAttribute("site", sites.get(siteId));
+    model.addAttribute("boardSupplySystems", supplySystemsOf(sites.get(siteId)));
     model.addAttribute("parents", boards.onSite(siteId));
     model.addAttribute("feeds", boards.feedOptions(siteId));
     if (errors.hasErrors()) {
@@ -107,6 +109,7 @@ public class BoardController {
     Board board = boards.get(id);
     model.addAttribute("board", board);
     model.addAttribute("site", board.getSite());
+    model.addAttribute("boardSupplySystems", supplySystemsOf(board.getSite()));
     model.addAttribute("parents", parentsFor(board));
     model.addAttribute("feeds", feedsFor(board));
     model.addAttribute("form", CableUnitsOfForms.shown(BoardForm.of(board), board.cableUnits()));
@@ -126,6 +129,7 @@ public class BoardController {
     Board board = boards.get(id);
     model.addAttribute("board", board);
     model.addAttribute("site", board.getSite());
+    model.addAttribute("boardSupplySystems", supplySystemsOf(board.getSite()));
     model.addAttribute("parents", parentsFor(board));
     model.addAttribute("feeds", feedsFor(board));
     if (errors.hasErrors()) {
@@ -163,5 +167,10 @@ public class BoardController {
     return boards.onSite(board.getSite().getId()).stream()
         .filter(candidate -> !candidate.getId().equals(board.getId()))
         .toList();
+  }
+
+  /** The systems a board of the site may record as its own: those of the site's rule set. */
+  private static java.util.List<com.wayledger.engine.SupplySystem> supplySystemsOf(Site site) {
+    return com.wayledger.engine.rules.RuleSets.of(site.getRuleSet()).supplySystems();
   }
 }

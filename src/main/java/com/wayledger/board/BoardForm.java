@@ -5,6 +5,7 @@ import com.wayledger.engine.DeviceKind;
 import com.wayledger.engine.InstallationMethod;
 import com.wayledger.engine.Insulation;
 import com.wayledger.engine.RcdType;
+import com.wayledger.engine.SupplySystem;
 import com.wayledger.engine.TripCurve;
 import com.wayledger.system.CleanText;
 import com.wayledger.system.TextInput.Kind;
@@ -53,7 +54,82 @@ public record BoardForm(
     @Positive @DecimalMax("63000") Double incomerInstantaneousSettingAmps,
     @Size(max = 40) String submainLineSize,
     @Size(max = 40) String submainCpcSize,
-    @Positive @DecimalMax("16405") Double submainLengthFeet) {
+    @Positive @DecimalMax("16405") Double submainLengthFeet,
+    SupplySystem supplySystem) {
+
+  /** A board on its site's supply system: the argument list from before boards had their own. */
+  public BoardForm(
+      String reference,
+      String location,
+      Integer phases,
+      Integer wayCount,
+      Double busbarRatingAmps,
+      DeviceKind incomerKind,
+      TripCurve incomerCurve,
+      Double incomerRatingAmps,
+      Integer incomerPoles,
+      Double incomerBreakingCapacityKiloAmps,
+      Double incomerResidualMilliAmps,
+      RcdType incomerRcdType,
+      Long parentBoardId,
+      Long fedFromCircuitId,
+      Double submainLineCsa,
+      Double submainCpcCsa,
+      ConductorMaterial submainMaterial,
+      Insulation submainInsulation,
+      Double submainLengthMetres,
+      InstallationMethod submainInstallationMethod,
+      Double submainAmbientCelsius,
+      Integer submainGroupedCircuits,
+      Integer submainThermalInsulationMm,
+      Double unbalanceLimitPercent,
+      Double coincidenceFactor,
+      String diversityMethod,
+      Double measuredExternalLoopImpedanceOhms,
+      Double measuredFaultCurrentKiloAmps,
+      Long version,
+      Double incomerOverloadSettingAmps,
+      Double incomerInstantaneousSettingAmps,
+      String submainLineSize,
+      String submainCpcSize,
+      Double submainLengthFeet) {
+    this(
+        reference,
+        location,
+        phases,
+        wayCount,
+        busbarRatingAmps,
+        incomerKind,
+        incomerCurve,
+        incomerRatingAmps,
+        incomerPoles,
+        incomerBreakingCapacityKiloAmps,
+        incomerResidualMilliAmps,
+        incomerRcdType,
+        parentBoardId,
+        fedFromCircuitId,
+        submainLineCsa,
+        submainCpcCsa,
+        submainMaterial,
+        submainInsulation,
+        submainLengthMetres,
+        submainInstallationMethod,
+        submainAmbientCelsius,
+        submainGroupedCircuits,
+        submainThermalInsulationMm,
+        unbalanceLimitPercent,
+        coincidenceFactor,
+        diversityMethod,
+        measuredExternalLoopImpedanceOhms,
+        measuredFaultCurrentKiloAmps,
+        version,
+        incomerOverloadSettingAmps,
+        incomerInstantaneousSettingAmps,
+        submainLineSize,
+        submainCpcSize,
+        submainLengthFeet,
+        null);
+  }
 
   /**
    * A board in stored units only (mm², metres). {@code submainLineSize}, {@code submainCpcSize}
@@ -171,7 +247,48 @@ public record BoardForm(
         incomerInstantaneousSettingAmps,
         lineSize,
         cpcSize,
-        lengthFeet);
+        lengthFeet,
+        supplySystem);
+  }
+
+  /** The same board on its own supply system (null: the site's). */
+  public BoardForm withSupplySystem(SupplySystem system) {
+    return new BoardForm(
+        reference,
+        location,
+        phases,
+        wayCount,
+        busbarRatingAmps,
+        incomerKind,
+        incomerCurve,
+        incomerRatingAmps,
+        incomerPoles,
+        incomerBreakingCapacityKiloAmps,
+        incomerResidualMilliAmps,
+        incomerRcdType,
+        parentBoardId,
+        fedFromCircuitId,
+        submainLineCsa,
+        submainCpcCsa,
+        submainMaterial,
+        submainInsulation,
+        submainLengthMetres,
+        submainInstallationMethod,
+        submainAmbientCelsius,
+        submainGroupedCircuits,
+        submainThermalInsulationMm,
+        unbalanceLimitPercent,
+        coincidenceFactor,
+        diversityMethod,
+        measuredExternalLoopImpedanceOhms,
+        measuredFaultCurrentKiloAmps,
+        version,
+        incomerOverloadSettingAmps,
+        incomerInstantaneousSettingAmps,
+        submainLineSize,
+        submainCpcSize,
+        submainLengthFeet,
+        system);
   }
 
   /**
@@ -279,7 +396,11 @@ public record BoardForm(
         measuredFaultCurrentKiloAmps,
         version,
         overloadSettingAmps,
-        instantaneousSettingAmps);
+        instantaneousSettingAmps,
+        submainLineSize,
+        submainCpcSize,
+        submainLengthFeet,
+        supplySystem);
   }
 
   /**
@@ -356,7 +477,11 @@ public record BoardForm(
         board.getMeasuredFaultCurrentKiloAmps(),
         board.getVersion(),
         hasIncomer ? incomer.getOverloadSettingAmps() : null,
-        hasIncomer ? incomer.getInstantaneousSettingAmps() : null);
+        hasIncomer ? incomer.getInstantaneousSettingAmps() : null,
+        null,
+        null,
+        null,
+        board.getSupplySystem());
   }
 
   DeviceDetails incomerDevice() {

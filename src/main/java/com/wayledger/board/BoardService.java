@@ -291,9 +291,12 @@ public class BoardService {
     if (form.phases() != 1 && form.phases() != 3) {
       throw new RuleViolation("phases", "board.phases.invalid");
     }
-    if (form.phases() == 3 && site.getPhases() == 1) {
+    com.wayledger.engine.SupplySystem system =
+        form.supplySystem() != null ? form.supplySystem() : site.getSupplySystem();
+    if (form.phases() == 3 && site.getPhases() == 1 && form.supplySystem() == null) {
       throw new RuleViolation("phases", "board.phases.beyondSupply");
     }
+    checkOwnSupplySystem(site, form, system);
     if (form.diversityMethod() != null
         && !form.diversityMethod().isBlank()
         && methods.catalog().find(form.diversityMethod()).isEmpty()) {
@@ -320,7 +323,7 @@ public class BoardService {
     }
     boolean panelboard =
         !com.wayledger.engine.SiteSpec.DEFAULT_RULE_SET_KEY.equals(site.getRuleSet())
-            && site.getSupplySystem().lineCount(form.phases()) >= 2;
+            && system.lineCount(form.phases()) >= 2;
     if (panelboard && form.wayCount() % 2 != 0) {
       // two spaces to a row: a panelboard's space count is even (common practice: 24, 30, 42)
       throw new RuleViolation("wayCount", "board.spaceCount.even");
@@ -340,6 +343,8 @@ public class BoardService {
       if (form.fedFromCircuitId() != null) {
         throw new RuleViolation("fedFromCircuitId", "board.fedFrom.withoutParent");
       }
+      // a board fed from the origin is a service of its own: any system of the site's rule set
+      // (checked above)
       return null;
     }
     Board parent =
@@ -365,6 +370,46 @@ public class BoardService {
         throw new RuleViolation("fedFromCircuitId", "board.fedFrom.notOnParent");
       }
     }
+    com.wayledger.engine.PhasePosition feed =
+        form.fedFromCircuitId() == null
+            ? null
+            : circuits.findById(form.fedFromCircuitId()).map(Circuit::getPosition).orElse(null);
+    java.util.List<com.wayledger.engine.SupplySystem> suppliable =
+        parent.system().suppliesThrough(feed);
+    if (!suppliable.contains(system)) {
+      throw new RuleViolation(
+          "supplySystem",
+          "board.supplySystem.notFromFeed",
+          suppliable.stream()
+              .map(s -> com.wayledger.system.EnumWords.standard().of(s))
+              .collect(java.util.stream.Collectors.joining(" or ")));
+    }
     return parent;
+  }
+
+  /**
+   * A board's own supply system belongs to the site's rule set and has the site's voltage to
+   * neutral (the checks and the demand take U0 from the site), and a single-phase three-wire system
+   * has no third line.
+   */
+  private static void checkOwnSupplySystem(
+      Site site, BoardForm form, com.wayledger.engine.SupplySystem system) {
+    if (form.supplySystem() != null) {
+      boolean ofRuleSet =
+          com.wayledger.engine.rules.RuleSets.of(site.getRuleSet())
+              .supplySystems()
+              .contains(form.supplySystem());
+      if (!ofRuleSet) {
+        throw new RuleViolation("supplySystem", "board.supplySystem.notOfRuleSet");
+      }
+      Double volts = form.supplySystem().lineToNeutralVolts();
+      if (volts != null && Math.abs(volts - site.getNominalVoltageVolts()) > 0.5) {
+        throw new RuleViolation(
+            "supplySystem", "board.supplySystem.otherVoltage", site.getNominalVoltageVolts());
+      }
+    }
+    if (system.hasTwoLines() && form.phases() == 3) {
+      throw new RuleViolation("phases", "board.phases.twoLineSystem");
+    }
   }
 }

@@ -59,7 +59,7 @@ public record PhaseChart(
       double[] watts = new double[3];
       double[] vars = new double[3];
       com.wayledger.engine.LinePhasors.add(
-          com.wayledger.engine.LinePhasors.geometryOf(demand.lines()),
+          demand.system(),
           circuit.position(),
           circuit.connectedWatts(),
           circuit.connectedVars(),

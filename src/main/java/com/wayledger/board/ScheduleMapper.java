@@ -143,7 +143,8 @@ public final class ScheduleMapper {
         board.getMeasuredExternalLoopImpedanceOhms(),
         board.getMeasuredFaultCurrentKiloAmps(),
         List.of(),
-        incomerIr(board));
+        incomerIr(board),
+        board.getSupplySystem());
   }
 
   /**
@@ -180,7 +181,8 @@ public final class ScheduleMapper {
         board.getMeasuredExternalLoopImpedanceOhms(),
         board.getMeasuredFaultCurrentKiloAmps(),
         circuits,
-        incomerIr(board));
+        incomerIr(board),
+        board.getSupplySystem());
   }
 
   private static Double incomerIr(Board board) {

@@ -4,25 +4,18 @@ import com.wayledger.board.Board;
 import com.wayledger.board.BoardForm;
 import com.wayledger.board.BoardService;
 import com.wayledger.board.Circuit;
-import com.wayledger.board.CircuitForm;
 import com.wayledger.board.DwellingForm;
 import com.wayledger.board.DwellingService;
-import com.wayledger.board.LoadForm;
 import com.wayledger.board.MeasuredDemand;
 import com.wayledger.board.MeasuredDemandForm;
 import com.wayledger.board.ScheduleService;
-import com.wayledger.engine.CircuitLocation;
 import com.wayledger.engine.ConductorMaterial;
 import com.wayledger.engine.DeviceKind;
 import com.wayledger.engine.EarthingSystem;
 import com.wayledger.engine.InstallationMethod;
 import com.wayledger.engine.Insulation;
-import com.wayledger.engine.LoadCategory;
-import com.wayledger.engine.PhasePosition;
-import com.wayledger.engine.RatingUnit;
+import com.wayledger.engine.PanelSpaces;
 import com.wayledger.engine.SupplySystem;
-import com.wayledger.engine.TripCurve;
-import com.wayledger.engine.WayStatus;
 import com.wayledger.engine.demand.DiversityMethods;
 import com.wayledger.engine.dwelling.DwellingAddition;
 import com.wayledger.engine.nec.ConductorSize;
@@ -32,21 +25,26 @@ import com.wayledger.site.SiteService;
 import com.wayledger.system.EffectiveDate;
 import java.time.LocalDate;
 import java.time.YearMonth;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
 import org.springframework.context.annotation.Profile;
 import org.springframework.stereotype.Component;
 import org.springframework.transaction.support.TransactionTemplate;
 
 /**
  * The second demo site, under the NEC rule set: "Wrenfield Court", an invented three-unit apartment
- * building on a 120/240 V single-phase three-wire service. A house panel feeds three 200 A dwelling
- * panels and a common-area panel. Wrong on purpose: the common-area panel's line A is overloaded
- * (washers added later, all on A), apartment 2 has a 20 A breaker on 14 AWG, the house panel's
- * outdoor receptacles have no GFCI, and apartment 1's dryer is entered at 4.5 kW, below the 5 kW
+ * building on a 208Y/120 V service. A 42-space 208Y/120 V house panel feeds each apartment's
+ * 120/208 V single-phase three-wire panel through a two-pole breaker (each on another pair of
+ * lines) and a common-area panel the same way; the caretaker's cottage has its own 120/240 V
+ * service and a 200 A, 42-space dwelling panel. Wrong on purpose: the common-area panel's line A is
+ * overloaded (washers added later, all on A), apartment 2 has a 20 A breaker on 14 AWG, apartment
+ * 3's balcony receptacle has no GFCI, and apartment 1's dryer is entered at 4.5 kW, below the 5 kW
  * minimum of NEC 220.54. Every name, address, rating, length, area and recorded demand is invented.
- *
- * <p>The supply system is one per site in this version, so the house panel is a 120/240 V panel
- * like the apartments' (a 208Y/120 V house panel feeding 120/240 V apartment panels would need a
- * system per board).
+ * The circuits are tables in {@link NecDemoCircuits}.
  */
 @Component
 @Profile("demo")
@@ -66,14 +64,12 @@ class NecDemoSite {
     41.2, 39.8, 36.5, 31.0, 33.4, 44.9, 52.6, 51.3, 42.0, 33.8, 37.1, 42.5
   };
 
-  private static final double FEET = 0.3048;
-
   private final SiteService sites;
   private final BoardService boards;
   private final ScheduleService schedule;
   private final DwellingService dwellings;
   private final TransactionTemplate transaction;
-  private final java.util.Map<Long, java.util.Set<Integer>> takenSpaces = new java.util.HashMap<>();
+  private final Map<Long, Set<Integer>> takenSpaces = new HashMap<>();
 
   NecDemoSite(
       SiteService sites,
@@ -109,352 +105,67 @@ class NecDemoSite {
                 "418 Thistlewick Lane, Fennimore Falls (invented address)",
                 EarthingSystem.TN_C_S,
                 120.0,
-                1,
+                3,
                 60.0,
                 null,
                 22.0,
                 null,
                 DiversityMethods.NEC_STANDARD_DWELLING,
-                "Three apartments over a shared laundry room. All names and figures are invented.",
+                "Three apartments over a shared laundry room, and the caretaker's cottage on its own"
+                    + " service. All names and figures are invented.",
                 null,
                 null,
                 "NEC",
-                SupplySystem.SPLIT_PHASE_120_240));
+                SupplySystem.WYE_208Y_120));
     long siteId = site.getId();
 
     Board house =
-        boards.create(siteId, panel("HP", "Basement electrical room", 24, 400, null, null));
-    Circuit[] feeders = new Circuit[3];
-    for (int unit = 1; unit <= 3; unit++) {
-      feeders[unit - 1] =
-          add(
-              house,
-              circuit(
-                  unit,
-                  PhasePosition.L1_L2,
-                  "Feeder to apartment " + unit + " panel",
-                  DeviceKind.MCCB,
-                  200,
-                  ConductorSize.AWG_3_0,
-                  45 + 15 * unit));
-    }
-    Circuit commonFeeder =
-        add(
-            house,
-            circuit(
-                4,
-                PhasePosition.L1_L2,
-                "Feeder to common-area panel",
-                DeviceKind.MCCB,
-                100,
-                ConductorSize.AWG_3,
-                30));
-    // deliberate: an outdoor receptacle circuit on a plain breaker, no GFCI (NEC 210.8(A)(3))
-    add(
-        house,
-        circuit(
-                5,
-                PhasePosition.L1,
-                "Front walk receptacles",
-                DeviceKind.MCB,
-                20,
-                ConductorSize.AWG_12,
-                70)
-            .at(CircuitLocation.OUTDOORS),
-        load("Front walk receptacles", LoadCategory.SOCKET_OUTLETS, 2, 180, RatingUnit.VA));
-    add(
-        house,
-        circuit(
-                5,
-                PhasePosition.L2,
-                "Parking lot lighting",
-                DeviceKind.MCB,
-                15,
-                ConductorSize.AWG_14,
-                110)
-            .at(CircuitLocation.OUTDOORS),
-        load("Pole lights", LoadCategory.LIGHTING, 4, 150, RatingUnit.W));
+        boards.create(
+            siteId, Panel.service("HP", "Basement electrical room", 3, 400).form(null, null));
+    List<Circuit> feeders = fill(house, NecDemoCircuits.HOUSE);
 
     Board common =
         boards.create(
             siteId,
-            panel(
-                "CP",
-                "Ground floor laundry room",
-                16,
-                100,
-                house,
-                commonFeeder,
-                DiversityMethods.NONE));
-    commonCircuits(common);
+            Panel.fed("CP", "Ground floor laundry room", 16, 100, ConductorSize.AWG_3)
+                .form(house, feeders.get(3))
+                .withSupplySystem(SupplySystem.SINGLE_PHASE_120_208));
+    fill(common, NecDemoCircuits.COMMON);
 
+    String[] plans = {
+      NecDemoCircuits.APARTMENT_ONE, NecDemoCircuits.APARTMENT_TWO, NecDemoCircuits.APARTMENT_THREE
+    };
+    double[] squareFeet = {1_150, 950, 1_150};
     Board[] units = new Board[3];
     for (int unit = 1; unit <= 3; unit++) {
       units[unit - 1] =
           boards.create(
               siteId,
-              panel(
-                  "APT-" + unit,
-                  "Apartment " + unit + " kitchen hallway",
-                  30,
-                  200,
-                  house,
-                  feeders[unit - 1]));
+              Panel.fed(
+                      "APT-" + unit,
+                      "Apartment " + unit + " kitchen hallway",
+                      30,
+                      200,
+                      ConductorSize.AWG_3_0)
+                  .form(house, feeders.get(unit - 1))
+                  .withSupplySystem(SupplySystem.SINGLE_PHASE_120_208));
+      fill(units[unit - 1], NecDemoCircuits.DWELLING_BASICS);
+      fill(units[unit - 1], plans[unit - 1]);
+      dwellings.save(units[unit - 1].getId(), dwelling(squareFeet[unit - 1], unit == 1));
     }
-    apartmentOne(units[0]);
-    apartmentTwo(units[1]);
-    apartmentThree(units[2]);
-    dwellings.save(units[0].getId(), dwelling(1_150, true));
-    dwellings.save(units[1].getId(), dwelling(950, false));
-    dwellings.save(units[2].getId(), dwelling(1_150, false));
+
+    Board cottage =
+        boards.create(
+            siteId,
+            Panel.service("COTTAGE", "Caretaker's cottage, utility room", 1, 200)
+                .form(null, null)
+                .withSupplySystem(SupplySystem.SPLIT_PHASE_120_240));
+    fill(cottage, NecDemoCircuits.DWELLING_BASICS);
+    fill(cottage, NecDemoCircuits.COTTAGE);
+    dwellings.save(cottage.getId(), dwelling(1_400, false));
 
     laterYears(units, common);
     measuredDemands(house);
-  }
-
-  /** Apartment 1: fully populated, the dryer entered below the 220.54 minimum on purpose. */
-  private void apartmentOne(Board apt) {
-    commonDwellingCircuits(apt);
-    add(
-        apt,
-        circuit(4, PhasePosition.L1_L2, "Range", DeviceKind.MCB, 50, ConductorSize.AWG_6, 35),
-        load("Range", LoadCategory.COOKING, 1, 12_000, RatingUnit.W));
-    // deliberate: 4.5 kW dryer, below the 5 kW that NEC 220.54 takes as the least per dryer
-    add(
-        apt,
-        circuit(
-            5, PhasePosition.L1_L2, "Clothes dryer", DeviceKind.MCB, 30, ConductorSize.AWG_10, 40),
-        load("Clothes dryer", LoadCategory.CLOTHES_DRYER, 1, 4_500, RatingUnit.W));
-    add(
-        apt,
-        circuit(
-            6, PhasePosition.L1_L2, "Water heater", DeviceKind.MCB, 30, ConductorSize.AWG_10, 30),
-        load("Water heater", LoadCategory.WATER_HEATING_STORAGE, 1, 4_500, RatingUnit.W));
-    add(
-        apt,
-        circuit(
-            7, PhasePosition.L1_L2, "Baseboard heat", DeviceKind.MCB, 40, ConductorSize.AWG_8, 60),
-        load("Baseboard heaters", LoadCategory.SPACE_HEATING, 4, 1_500, RatingUnit.W));
-    add(
-        apt,
-        circuit(8, PhasePosition.L1, "Dishwasher", DeviceKind.MCB, 20, ConductorSize.AWG_12, 25),
-        load("Dishwasher", LoadCategory.FIXED_APPLIANCE, 1, 1_200, RatingUnit.VA));
-    add(
-        apt,
-        circuit(
-            8, PhasePosition.L2, "Waste disposer", DeviceKind.MCB, 20, ConductorSize.AWG_12, 25),
-        load("Waste disposer", LoadCategory.FIXED_APPLIANCE, 1, 900, RatingUnit.VA));
-    add(
-        apt,
-        circuit(
-            9,
-            PhasePosition.L1,
-            "Over-range microwave",
-            DeviceKind.MCB,
-            20,
-            ConductorSize.AWG_12,
-            30),
-        load("Microwave", LoadCategory.FIXED_APPLIANCE, 1, 1_500, RatingUnit.VA));
-    add(
-        apt,
-        circuit(
-                9,
-                PhasePosition.L2,
-                "Balcony receptacle",
-                DeviceKind.RCBO,
-                20,
-                ConductorSize.AWG_12,
-                35)
-            .at(CircuitLocation.OUTDOORS),
-        load("Balcony receptacle", LoadCategory.SOCKET_OUTLETS, 1, 180, RatingUnit.VA));
-  }
-
-  /** Apartment 2: smaller, gas cooking elsewhere in the block is not modelled. */
-  private void apartmentTwo(Board apt) {
-    commonDwellingCircuits(apt);
-    add(
-        apt,
-        circuit(4, PhasePosition.L1_L2, "Range", DeviceKind.MCB, 40, ConductorSize.AWG_8, 30),
-        load("Range", LoadCategory.COOKING, 1, 8_000, RatingUnit.W));
-    add(
-        apt,
-        circuit(
-            5, PhasePosition.L1_L2, "Clothes dryer", DeviceKind.MCB, 30, ConductorSize.AWG_10, 40),
-        load("Clothes dryer", LoadCategory.CLOTHES_DRYER, 1, 5_500, RatingUnit.W));
-    add(
-        apt,
-        circuit(
-            6, PhasePosition.L1_L2, "Water heater", DeviceKind.MCB, 30, ConductorSize.AWG_10, 30),
-        load("Water heater", LoadCategory.WATER_HEATING_STORAGE, 1, 4_500, RatingUnit.W));
-    add(
-        apt,
-        circuit(8, PhasePosition.L1, "Dishwasher", DeviceKind.MCB, 20, ConductorSize.AWG_12, 25),
-        load("Dishwasher", LoadCategory.FIXED_APPLIANCE, 1, 1_200, RatingUnit.VA));
-  }
-
-  /** Apartment 3: the same plan as apartment 1 with a lighter range and a proper dryer. */
-  private void apartmentThree(Board apt) {
-    commonDwellingCircuits(apt);
-    add(
-        apt,
-        circuit(4, PhasePosition.L1_L2, "Range", DeviceKind.MCB, 40, ConductorSize.AWG_8, 35),
-        load("Range", LoadCategory.COOKING, 1, 9_600, RatingUnit.W));
-    add(
-        apt,
-        circuit(
-            5, PhasePosition.L1_L2, "Clothes dryer", DeviceKind.MCB, 30, ConductorSize.AWG_10, 40),
-        load("Clothes dryer", LoadCategory.CLOTHES_DRYER, 1, 5_000, RatingUnit.W));
-    add(
-        apt,
-        circuit(
-            6, PhasePosition.L1_L2, "Water heater", DeviceKind.MCB, 30, ConductorSize.AWG_10, 30),
-        load("Water heater", LoadCategory.WATER_HEATING_STORAGE, 1, 4_500, RatingUnit.W));
-    add(
-        apt,
-        circuit(8, PhasePosition.L1, "Dishwasher", DeviceKind.MCB, 20, ConductorSize.AWG_12, 25),
-        load("Dishwasher", LoadCategory.FIXED_APPLIANCE, 1, 1_200, RatingUnit.VA));
-    add(
-        apt,
-        circuit(
-            8, PhasePosition.L2, "Waste disposer", DeviceKind.MCB, 20, ConductorSize.AWG_12, 25),
-        load("Waste disposer", LoadCategory.FIXED_APPLIANCE, 1, 900, RatingUnit.VA));
-    // deliberate: a balcony receptacle on a plain breaker, no GFCI (NEC 210.8(A)(3) outdoors)
-    add(
-        apt,
-        circuit(
-                9,
-                PhasePosition.L1,
-                "Balcony receptacle",
-                DeviceKind.MCB,
-                20,
-                ConductorSize.AWG_12,
-                35)
-            .at(CircuitLocation.OUTDOORS),
-        load("Balcony receptacle", LoadCategory.SOCKET_OUTLETS, 1, 180, RatingUnit.VA));
-  }
-
-  /** Lighting, two small-appliance circuits, laundry and a GFCI bathroom receptacle. */
-  private void commonDwellingCircuits(Board apt) {
-    add(
-        apt,
-        circuit(
-            1,
-            PhasePosition.L1,
-            "Lighting, living room and hall",
-            DeviceKind.MCB,
-            15,
-            ConductorSize.AWG_14,
-            45),
-        load("Luminaires", LoadCategory.LIGHTING, 8, 60, RatingUnit.W));
-    add(
-        apt,
-        circuit(
-            1,
-            PhasePosition.L2,
-            "Lighting and receptacles, bedrooms",
-            DeviceKind.MCB,
-            15,
-            ConductorSize.AWG_14,
-            55),
-        load("Luminaires", LoadCategory.LIGHTING, 6, 60, RatingUnit.W));
-    add(
-        apt,
-        circuit(
-            2,
-            PhasePosition.L1,
-            "Kitchen small-appliance circuit 1",
-            DeviceKind.RCBO,
-            20,
-            ConductorSize.AWG_12,
-            30),
-        load("Countertop receptacles", LoadCategory.SOCKET_OUTLETS, 1, 1_500, RatingUnit.VA));
-    add(
-        apt,
-        circuit(
-            2,
-            PhasePosition.L2,
-            "Kitchen small-appliance circuit 2",
-            DeviceKind.RCBO,
-            20,
-            ConductorSize.AWG_12,
-            30),
-        load("Countertop receptacles", LoadCategory.SOCKET_OUTLETS, 1, 1_500, RatingUnit.VA));
-    add(
-        apt,
-        circuit(
-            3,
-            PhasePosition.L1,
-            "Laundry receptacle",
-            DeviceKind.RCBO,
-            20,
-            ConductorSize.AWG_12,
-            20),
-        load("Washer", LoadCategory.SOCKET_OUTLETS, 1, 1_500, RatingUnit.VA));
-    add(
-        apt,
-        circuit(
-                3,
-                PhasePosition.L2,
-                "Bathroom receptacle",
-                DeviceKind.RCBO,
-                20,
-                ConductorSize.AWG_12,
-                25)
-            .at(CircuitLocation.BATHROOM),
-        load("Bathroom receptacle", LoadCategory.SOCKET_OUTLETS, 1, 1_500, RatingUnit.VA));
-  }
-
-  /** Common areas: hot water and corridor heat across both lines, the 120 V loads on line A. */
-  private void commonCircuits(Board cp) {
-    add(
-        cp,
-        circuit(
-            1,
-            PhasePosition.L1_L2,
-            "Domestic hot-water heater",
-            DeviceKind.MCB,
-            60,
-            ConductorSize.AWG_6,
-            20),
-        load("Storage water heater", LoadCategory.WATER_HEATING_STORAGE, 1, 11_500, RatingUnit.W));
-    add(
-        cp,
-        circuit(
-            2, PhasePosition.L1_L2, "Corridor heat", DeviceKind.MCB, 40, ConductorSize.AWG_8, 80),
-        load("Corridor heaters", LoadCategory.SPACE_HEATING, 3, 2_400, RatingUnit.W));
-    add(
-        cp,
-        circuit(
-            3,
-            PhasePosition.L1,
-            "Corridor lighting",
-            DeviceKind.MCB,
-            15,
-            ConductorSize.AWG_14,
-            120),
-        load("Corridor luminaires", LoadCategory.LIGHTING, 20, 60, RatingUnit.W));
-    add(
-        cp,
-        circuit(
-            3,
-            PhasePosition.L2,
-            "Laundry room lighting",
-            DeviceKind.MCB,
-            15,
-            ConductorSize.AWG_14,
-            20),
-        load("Laundry luminaires", LoadCategory.LIGHTING, 4, 75, RatingUnit.W));
-    add(
-        cp,
-        circuit(
-            4,
-            PhasePosition.L1,
-            "Boiler room receptacles",
-            DeviceKind.RCBO,
-            20,
-            ConductorSize.AWG_12,
-            25),
-        load("Pumps and controls", LoadCategory.FIXED_APPLIANCE, 1, 1_500, RatingUnit.VA));
   }
 
   /**
@@ -465,69 +176,13 @@ class NecDemoSite {
    */
   private void laterYears(Board[] units, Board common) {
     EffectiveDate.set(COOLING_ADDED);
-    add(
-        units[0],
-        circuit(
-            10,
-            PhasePosition.L1_L2,
-            "Air-conditioning condenser",
-            DeviceKind.MCB,
-            30,
-            ConductorSize.AWG_10,
-            50),
-        load("Condensing unit", LoadCategory.AIR_CONDITIONING, 1, 5_000, RatingUnit.VA));
-    add(
-        units[2],
-        circuit(
-            10,
-            PhasePosition.L1_L2,
-            "Air-conditioning condenser",
-            DeviceKind.MCB,
-            25,
-            ConductorSize.AWG_10,
-            50),
-        load("Condensing unit", LoadCategory.AIR_CONDITIONING, 1, 4_200, RatingUnit.VA));
-    add(
-        units[1],
-        circuit(
-            10,
-            PhasePosition.L1_L2,
-            "Through-wall air conditioner",
-            DeviceKind.MCB,
-            20,
-            ConductorSize.AWG_12,
-            20),
-        load("Air conditioner", LoadCategory.AIR_CONDITIONING, 1, 3_500, RatingUnit.VA));
+    for (int unit = 0; unit < units.length; unit++) {
+      fill(units[unit], NecDemoCircuits.COOLING[unit]);
+    }
     EffectiveDate.set(WASHERS_ADDED);
-    add(
-        common,
-        circuit(
-            5, PhasePosition.L1, "Shared washers", DeviceKind.RCBO, 20, ConductorSize.AWG_12, 15),
-        load("Washers", LoadCategory.FIXED_APPLIANCE, 2, 1_000, RatingUnit.VA));
-    add(
-        common,
-        circuit(
-            6,
-            PhasePosition.L1,
-            "Laundry room receptacles",
-            DeviceKind.RCBO,
-            20,
-            ConductorSize.AWG_12,
-            15),
-        load("Folding-table receptacles", LoadCategory.SOCKET_OUTLETS, 1, 1_440, RatingUnit.VA));
+    fill(common, NecDemoCircuits.COMMON_WASHERS);
     EffectiveDate.set(BEDROOM_EXTENDED);
-    // deliberate: a 20 A breaker on 14 AWG (NEC 240.4(D)(3) allows 15 A)
-    add(
-        units[1],
-        circuit(
-            9,
-            PhasePosition.L2,
-            "Bedroom receptacles",
-            DeviceKind.MCB,
-            20,
-            ConductorSize.AWG_14,
-            40),
-        load("Bedroom receptacles", LoadCategory.SOCKET_OUTLETS, 6, 180, RatingUnit.VA));
+    fill(units[1], NecDemoCircuits.BEDROOM_EXTENSION);
     EffectiveDate.set(COMPLETED);
   }
 
@@ -566,150 +221,102 @@ class NecDemoSite {
         squareFeet, DwellingForm.SQUARE_FEET, 2, 1, optional, DwellingAddition.NONE, null, null);
   }
 
-  /** A 120/240 V panel with a two-pole main breaker; fed from {@code feed} of {@code parent}. */
-  private static BoardForm panel(
-      String reference, String location, int ways, double amps, Board parent, Circuit feed) {
-    return panel(reference, location, ways, amps, parent, feed, null);
-  }
-
-  /** The same with its own diversity method (null: the site's). */
-  private static BoardForm panel(
-      String reference,
-      String location,
-      int ways,
-      double amps,
-      Board parent,
-      Circuit feed,
-      String method) {
-    return new BoardForm(
-        reference,
-        location,
-        1,
-        ways,
-        amps,
-        DeviceKind.MCCB,
-        null,
-        amps,
-        2,
-        22.0,
-        null,
-        null,
-        parent == null ? null : parent.getId(),
-        feed == null ? null : feed.getId(),
-        parent == null ? null : ConductorSize.AWG_3_0.squareMillimetres(),
-        parent == null ? null : ConductorSize.AWG_6.squareMillimetres(),
-        parent == null ? null : ConductorMaterial.COPPER,
-        parent == null ? null : Insulation.THERMOSETTING_90,
-        parent == null ? null : 60 * FEET,
-        parent == null ? null : InstallationMethod.C,
-        parent == null ? null : 30.0,
-        parent == null ? null : 1,
-        parent == null ? null : 0,
-        BoardForm.DEFAULT_UNBALANCE_LIMIT_PERCENT,
-        1.0,
-        method,
-        null,
-        null,
-        null,
-        null,
-        null);
-  }
-
   /**
-   * A branch circuit: copper 90 °C insulation (THHN-like, in the 90 °C column with 60/75 °C
-   * terminations) at 30 °C, length in feet stored in metres, AWG stored as its area in mm². A
-   * residual-current breaker stands for a GFCI breaker (Class A, 5 mA: common practice).
+   * Adds a table's circuits to a panel, each on the first free space (top down) whose line(s) are
+   * the ones its row names: on a panelboard the lines follow from the space.
    */
-  private static CircuitForm circuit(
-      int space,
-      PhasePosition position,
-      String description,
-      DeviceKind kind,
-      double amps,
-      ConductorSize size,
-      double feet) {
-    // a breaker with a GFCI function is written RCBO in this demo's lists; it is stored as what it
-    // is under the NEC set: a breaker (MCB) recording the ground-fault function, no 30 mA rating
-    boolean gfci = kind == DeviceKind.RCBO;
-    DeviceKind breaker = gfci ? DeviceKind.MCB : kind;
-    ConductorSize ground =
-        size.ordinal() <= ConductorSize.AWG_10.ordinal() ? size : ConductorSize.AWG_10;
-    return new CircuitForm(
-        space,
-        position,
-        description,
-        WayStatus.IN_USE,
-        false,
-        breaker,
-        breaker == DeviceKind.MCCB ? null : TripCurve.C,
-        amps,
-        position.poles(),
-        10.0,
-        null,
-        null,
-        size.squareMillimetres(),
-        ground.squareMillimetres(),
-        ConductorMaterial.COPPER,
-        Insulation.THERMOSETTING_90,
-        feet * FEET,
-        InstallationMethod.C,
-        30.0,
-        1,
-        0,
-        null,
-        null,
-        null,
-        null,
-        null,
-        null,
-        null,
-        null,
-        null,
-        null,
-        null,
-        null,
-        CircuitLocation.INDOORS,
-        gfci ? com.wayledger.engine.FaultInterrupter.GFCI : null);
-  }
-
-  private static LoadForm load(
-      String description, LoadCategory category, int quantity, double rating, RatingUnit unit) {
-    return new LoadForm(description, category, quantity, rating, unit, 1.0, null, null, false);
-  }
-
-  /**
-   * The demo's circuits are written by the line(s) they should take; on a panelboard the lines
-   * follow from the space, so each goes on the first free space (top down) whose line(s) are the
-   * ones written, and its way number is that space.
-   */
-  private int spaceFor(Board board, CircuitForm circuit) {
-    com.wayledger.engine.PanelSpaces panel = board.panelSpaces();
-    if (panel == null) {
-      return circuit.wayNumber();
+  private List<Circuit> fill(Board board, String table) {
+    List<Circuit> added = new ArrayList<>();
+    for (NecDemoRow row : NecDemoRow.of(table)) {
+      Circuit saved = schedule.addCircuit(board.getId(), row.circuit().onWay(spaceFor(board, row)));
+      if (row.load() != null) {
+        schedule.addLoad(saved.getId(), row.load());
+      }
+      added.add(saved);
     }
-    int poles = circuit.position().poles();
-    java.util.Set<Integer> taken =
-        takenSpaces.computeIfAbsent(board.getId(), id -> new java.util.HashSet<>());
+    return added;
+  }
+
+  private int spaceFor(Board board, NecDemoRow row) {
+    PanelSpaces panel = board.panelSpaces();
+    int poles = row.circuit().position().poles();
+    Set<Integer> taken = takenSpaces.computeIfAbsent(board.getId(), id -> new HashSet<>());
     for (int space = 1; space <= panel.spaceCount(); space++) {
-      if (panel.fitOf(space, poles) != com.wayledger.engine.PanelSpaces.Fit.FITS
-          || panel.positionOf(space, poles) != circuit.position()) {
+      if (panel.fitOf(space, poles) != PanelSpaces.Fit.FITS
+          || panel.positionOf(space, poles) != row.circuit().position()) {
         continue;
       }
-      java.util.List<Integer> spaces = panel.spacesOf(space, poles);
+      List<Integer> spaces = panel.spacesOf(space, poles);
       if (spaces.stream().noneMatch(taken::contains)) {
         taken.addAll(spaces);
         return space;
       }
     }
     throw new IllegalStateException(
-        "demo panel " + board.getReference() + " has no free space for " + circuit.description());
+        "demo panel " + board.getReference() + " has no free space for " + row.circuit());
   }
 
-  private Circuit add(Board board, CircuitForm circuit, LoadForm... loads) {
-    Circuit saved = schedule.addCircuit(board.getId(), circuit.onWay(spaceFor(board, circuit)));
-    for (LoadForm load : loads) {
-      schedule.addLoad(saved.getId(), load);
+  /**
+   * A panel with a moulded-case main breaker of as many poles as its lines need (three on the
+   * 208Y/120 V house panel, two on a single-phase three-wire one) and 22 kA interrupting rating; a
+   * fed panel's feeder is copper, 90 °C insulation, with the equipment grounding conductor of NEC
+   * Table 250.122 for its breaker (from memory: 6 AWG Cu for 200 A, 8 AWG for 100 A).
+   */
+  private record Panel(
+      String reference,
+      String location,
+      int phases,
+      int spaces,
+      double amps,
+      ConductorSize feeder,
+      String method) {
+
+    static Panel service(String reference, String location, int phases, double amps) {
+      return new Panel(reference, location, phases, 42, amps, null, null);
     }
-    return saved;
+
+    static Panel fed(
+        String reference, String location, int spaces, double amps, ConductorSize feeder) {
+      boolean common = feeder == ConductorSize.AWG_3;
+      return new Panel(
+          reference, location, 1, spaces, amps, feeder, common ? DiversityMethods.NONE : null);
+    }
+
+    BoardForm form(Board parent, Circuit feed) {
+      boolean fed = parent != null;
+      ConductorSize ground = amps > 100 ? ConductorSize.AWG_6 : ConductorSize.AWG_8;
+      return new BoardForm(
+          reference,
+          location,
+          phases,
+          spaces,
+          amps,
+          DeviceKind.MCCB,
+          null,
+          amps,
+          phases == 3 ? 3 : 2,
+          22.0,
+          null,
+          null,
+          fed ? parent.getId() : null,
+          fed ? feed.getId() : null,
+          fed ? feeder.squareMillimetres() : null,
+          fed ? ground.squareMillimetres() : null,
+          fed ? ConductorMaterial.COPPER : null,
+          fed ? Insulation.THERMOSETTING_90 : null,
+          fed ? feed.getCable().getLengthMetres() : null,
+          fed ? InstallationMethod.C : null,
+          fed ? 30.0 : null,
+          fed ? 1 : null,
+          fed ? 0 : null,
+          BoardForm.DEFAULT_UNBALANCE_LIMIT_PERCENT,
+          1.0,
+          method,
+          null,
+          null,
+          null,
+          null,
+          null);
+    }
   }
 }

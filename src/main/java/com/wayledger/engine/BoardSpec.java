@@ -22,6 +22,9 @@ import java.util.List;
  * @param circuits the board's positions that hold a circuit, spare device or empty space record
  * @param incomerOverloadSettingAmps Ir of a moulded-case incomer when recorded; null otherwise (the
  *     incomer then trips on its In)
+ * @param supplySystem the board's own supply system (a second service, or a 120/208 V panel fed
+ *     from two poles of a 208Y/120 V one); null when it is the site's ({@link
+ *     SiteSpec#systemOf(BoardSpec)})
  */
 public record BoardSpec(
     long id,
@@ -38,10 +41,47 @@ public record BoardSpec(
     Double measuredExternalLoopImpedanceOhms,
     Double measuredFaultCurrentKiloAmps,
     List<CircuitSpec> circuits,
-    Double incomerOverloadSettingAmps) {
+    Double incomerOverloadSettingAmps,
+    SupplySystem supplySystem) {
 
   public BoardSpec {
     circuits = List.copyOf(circuits);
+  }
+
+  /** A board on its site's supply system: the argument list from before boards had their own. */
+  public BoardSpec(
+      long id,
+      String reference,
+      int phases,
+      int wayCount,
+      Double busbarRatingAmps,
+      DeviceSpec incomer,
+      Long parentBoardId,
+      CableSpec submainCable,
+      double unbalanceLimitPercent,
+      double coincidenceFactor,
+      String diversityMethodKey,
+      Double measuredExternalLoopImpedanceOhms,
+      Double measuredFaultCurrentKiloAmps,
+      List<CircuitSpec> circuits,
+      Double incomerOverloadSettingAmps) {
+    this(
+        id,
+        reference,
+        phases,
+        wayCount,
+        busbarRatingAmps,
+        incomer,
+        parentBoardId,
+        submainCable,
+        unbalanceLimitPercent,
+        coincidenceFactor,
+        diversityMethodKey,
+        measuredExternalLoopImpedanceOhms,
+        measuredFaultCurrentKiloAmps,
+        circuits,
+        incomerOverloadSettingAmps,
+        null);
   }
 
   /** A board whose incomer, if any, trips on its In (no MCCB setting recorded). */
@@ -75,6 +115,7 @@ public record BoardSpec(
         measuredExternalLoopImpedanceOhms,
         measuredFaultCurrentKiloAmps,
         circuits,
+        null,
         null);
   }
 
@@ -95,7 +136,34 @@ public record BoardSpec(
         measuredExternalLoopImpedanceOhms,
         measuredFaultCurrentKiloAmps,
         other,
-        incomerOverloadSettingAmps);
+        incomerOverloadSettingAmps,
+        supplySystem);
+  }
+
+  /** The same board on its own supply system (null: the site's). */
+  public BoardSpec withSupplySystem(SupplySystem system) {
+    return new BoardSpec(
+        id,
+        reference,
+        phases,
+        wayCount,
+        busbarRatingAmps,
+        incomer,
+        parentBoardId,
+        submainCable,
+        unbalanceLimitPercent,
+        coincidenceFactor,
+        diversityMethodKey,
+        measuredExternalLoopImpedanceOhms,
+        measuredFaultCurrentKiloAmps,
+        circuits,
+        incomerOverloadSettingAmps,
+        system);
+  }
+
+  /** The supply system this board is on: its own, else {@code siteSystem}. */
+  public SupplySystem systemOn(SupplySystem siteSystem) {
+    return supplySystem != null ? supplySystem : siteSystem;
   }
 
   /**

@@ -45,7 +45,12 @@ public record SiteSpec(
   /** The spaces of a board of this site when it is laid out as a panelboard, else null. */
   public PanelSpaces panelSpacesOf(BoardSpec board) {
     return PanelSpaces.ofBoard(
-        ruleSetKey, supply.system().lineCount(board.phases()), board.wayCount());
+        ruleSetKey, systemOf(board).lineCount(board.phases()), board.wayCount());
+  }
+
+  /** The supply system a board of this site is on: its own when it records one, else the site's. */
+  public SupplySystem systemOf(BoardSpec board) {
+    return board.systemOn(supply.system());
   }
 
   /** The same site holding other boards. */

@@ -14,10 +14,24 @@ final class Codes {
   private Codes() {}
 
   static String line(PhasePosition position) {
+    return line(position, com.wayledger.engine.Phase::name);
+  }
+
+  /**
+   * The Line cell of a position, its lines named as on the board: "A", "B-C" on a North American
+   * panel, "L1", "L1-L2" otherwise; "3P" for three poles. Import reads either spelling on any board
+   * ({@link #parseLine}).
+   */
+  static String line(
+      PhasePosition position,
+      java.util.function.Function<com.wayledger.engine.Phase, String> lineName) {
     if (position.isLineToLine()) {
-      return position.fromLine().name() + "-" + position.toLine().name();
+      return lineName.apply(position.fromLine()) + "-" + lineName.apply(position.toLine());
     }
-    return position == PhasePosition.THREE_POLE ? ScheduleColumn.THREE_POLE_CODE : position.name();
+    if (position == PhasePosition.THREE_POLE) {
+      return ScheduleColumn.THREE_POLE_CODE;
+    }
+    return lineName.apply(position.phases().iterator().next());
   }
 
   /** L1, L2, L3, or a three-pole position in the usual spellings; null when unrecognised. */

@@ -54,7 +54,7 @@ public final class CsvWriter {
             entry.loads().isEmpty() ? Collections.singletonList(null) : entry.loads();
         boolean first = true;
         for (LoadForm load : loads) {
-          List<String> cells = row(entry.circuit(), load, f, first, data.cableUnits());
+          List<String> cells = row(board, entry.circuit(), load, f, first, data.cableUnits());
           cells.set(CIRCUIT_KEY.ordinal(), num(entry.circuitId()));
           cells.set(
               RECORD_VERSION.ordinal(), entry.recordVersion() == null ? "" : entry.recordVersion());
@@ -70,6 +70,7 @@ public final class CsvWriter {
   }
 
   private static List<String> row(
+      BoardEntry board,
       CircuitForm c,
       LoadForm l,
       BoardFigures.CircuitFigures f,
@@ -77,7 +78,7 @@ public final class CsvWriter {
       com.wayledger.engine.rules.CableUnits units) {
     String[] cells = new String[ScheduleColumn.values().length];
     cells[WAY.ordinal()] = num(c.wayNumber());
-    cells[LINE.ordinal()] = Codes.line(c.position());
+    cells[LINE.ordinal()] = Codes.line(c.position(), board::lineName);
     cells[CIRCUIT.ordinal()] = CellText.forCsv(c.description());
     cells[STATE.ordinal()] = Codes.state(c.status());
     cells[KEEP_LINE.ordinal()] = Codes.yes(Boolean.TRUE.equals(c.lockedForBalancing()));
@@ -105,6 +106,7 @@ public final class CsvWriter {
     cells[MEASURED_ZS.ordinal()] = num(c.measuredLoopImpedanceOhms());
     cells[LOCATION.ordinal()] = name(c.location());
     cells[CONNECTION.ordinal()] = Codes.connection(c.position());
+    cells[FAULT_INTERRUPTER.ordinal()] = name(c.deviceFaultInterrupter());
     cells[CONDUIT.ordinal()] = name(c.cableConduit());
     if (l != null) {
       cells[LOAD.ordinal()] = CellText.forCsv(l.description());

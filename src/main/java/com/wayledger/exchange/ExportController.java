@@ -99,16 +99,14 @@ public class ExportController {
     List<DoorChartRow> rows = DoorChartRow.of(board);
     model.addAttribute("rows", rows);
     var results = analysis.ofBoard(boardId);
+    var boardSpec =
+        results.spec().boards().stream().filter(spec -> spec.id() == boardId).findFirst();
     com.wayledger.engine.PanelSpaces panel =
-        results.spec().boards().stream()
-            .filter(spec -> spec.id() == boardId)
-            .findFirst()
-            .map(spec -> results.spec().panelSpacesOf(spec))
-            .orElse(null);
+        boardSpec.map(spec -> results.spec().panelSpacesOf(spec)).orElse(null);
     model.addAttribute("panelboard", panel != null);
     if (panel != null) {
       // a panelboard's chart is the panel itself: odd spaces left, even right, row by row
-      var system = results.spec().supply().system();
+      var system = results.spec().systemOf(boardSpec.get());
       List<List<DoorChartRow>> columns = DoorChartRow.ofPanel(board, panel, system::lineName);
       model.addAttribute("halves", columns);
       List<String> free = new java.util.ArrayList<>();

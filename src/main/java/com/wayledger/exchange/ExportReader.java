@@ -74,6 +74,20 @@ public class ExportReader {
         site.cableUnits());
   }
 
+  /** The rule set a board is checked against, as the workbook's facts row names it. */
+  static String ruleSetTitleOf(Board board) {
+    return com.wayledger.engine.rules.RuleSets.of(board.getSite().getRuleSet()).title();
+  }
+
+  /**
+   * The board's supply system in the words the workbook's facts row writes ("" when none): its
+   * site's system, the one every board of the site is on.
+   */
+  static String supplySystemWordsOf(Board board) {
+    var system = board.system();
+    return system == null ? "" : EnumWords.standard().of(system);
+  }
+
   static BoardEntry entry(Board board, int depth) {
     List<CircuitEntry> circuits =
         board.getCircuits().stream()
@@ -94,6 +108,7 @@ public class ExportReader {
         board.getParent() == null ? null : board.getParent().getReference(),
         board.getIncomer() == null ? "" : board.getIncomer().label(),
         depth,
-        circuits);
+        circuits,
+        java.util.Arrays.stream(com.wayledger.engine.Phase.values()).map(board::lineName).toList());
   }
 }

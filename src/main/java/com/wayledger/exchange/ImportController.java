@@ -170,6 +170,12 @@ public class ImportController {
       RedirectAttributes redirect) {
     UploadStore.Upload upload = upload(token, boardId, principal);
     ImportPlan plan = fillPreview(boardId, upload, removeMissing, model);
+    if (model.getAttribute("otherSystem") instanceof ImportRefused otherSystem) {
+      // another rule set or supply system: nothing of the file is stored
+      response.setStatus(FormStatus.UNPROCESSABLE);
+      model.addAttribute("refusal", otherSystem);
+      return "exchange/preview";
+    }
     boolean validOnly = "valid".equals(mode);
     if (!plan.isAllValid() && !validOnly) {
       response.setStatus(FormStatus.UNPROCESSABLE);
@@ -248,7 +254,25 @@ public class ImportController {
     model.addAttribute(
         "dwellingInputs",
         DwellingInputsInFile.read(uploads.bytes(upload), upload.fileName()).orElse(null));
-    model.addAttribute("board", boards.get(boardId));
+    var board = boards.get(boardId);
+    model.addAttribute("board", board);
+    SystemInFile.of(table)
+        .filter(
+            inFile ->
+                !inFile.fits(
+                    ExportReader.ruleSetTitleOf(board), ExportReader.supplySystemWordsOf(board)))
+        .ifPresent(
+            inFile -> {
+              ImportRefused otherSystem =
+                  new ImportRefused(
+                      "import.refused.otherSystem",
+                      inFile.ruleSetTitle(),
+                      inFile.supplySystemWords(),
+                      ExportReader.ruleSetTitleOf(board),
+                      ExportReader.supplySystemWordsOf(board));
+              model.addAttribute("otherSystem", otherSystem);
+              model.addAttribute("refusal", otherSystem);
+            });
     model.addAttribute("upload", upload);
     model.addAttribute("table", table);
     model.addAttribute("plan", plan);

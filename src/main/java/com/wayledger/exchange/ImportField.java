@@ -224,6 +224,21 @@ public enum ImportField {
           "circuit voltage",
           "240 v",
           "wiring")),
+  FAULT_INTERRUPTER(
+      ScheduleColumn.FAULT_INTERRUPTER,
+      List.of(
+          "fault interrupter",
+          "gfci afci",
+          "afci gfci",
+          "gfci",
+          "afci",
+          "ground fault",
+          "arc fault",
+          "gfci protection",
+          "afci protection")),
+  MOTOR_HP(
+      ScheduleColumn.MOTOR_HP,
+      List.of("motor hp", "hp", "horsepower", "motor horsepower", "motor size hp")),
   CONDUIT(
       ScheduleColumn.CONDUIT,
       List.of("conduit", "conduit type", "raceway", "raceway type", "conduit material")),

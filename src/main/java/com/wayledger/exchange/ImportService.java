@@ -57,9 +57,16 @@ public class ImportService {
             table,
             mapping,
             new RowReader.BoardContext(
-                board.getPhases(), board.getWayCount(), Set.of(), board.getPositions()));
+                board.getPhases(),
+                board.getWayCount(),
+                Set.of(),
+                board.getPositions(),
+                java.util.Arrays.stream(com.wayledger.engine.Phase.values())
+                    .map(board::lineName)
+                    .toList()));
     List<CircuitEntry> stored = ExportReader.entry(board, 0).circuits();
-    ScheduleMatcher.Result matched = ScheduleMatcher.match(read.circuits(), stored, removeMissing);
+    ScheduleMatcher.Result matched =
+        ScheduleMatcher.match(read.circuits(), stored, removeMissing, board::lineName);
     Map<Integer, ImportPlan.Problem> taken = new HashMap<>();
     matched
         .blocked()
@@ -80,7 +87,7 @@ public class ImportService {
                     new ImportPlan.Problem(
                         ImportField.LINE,
                         "import.cell.takenKept",
-                        new Object[] {where.wayNumber(), where.phase().name(), holder}));
+                        new Object[] {where.wayNumber(), board.lineName(where.phase()), holder}));
               }
             });
     List<ImportPlan.PreviewRow> previewRows = new ArrayList<>();

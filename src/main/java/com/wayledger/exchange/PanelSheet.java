@@ -71,7 +71,6 @@ public class PanelSheet implements WorkbookSheet {
   @Override
   public void write(Sheet sheet, ExportData data, String caution) {
     SiteAnalysis results = analysis.ofSite(data.siteId());
-    SupplySystem system = results.spec().supply().system();
     CellStyle bold = sheet.getWorkbook().createCellStyle();
     Font font = sheet.getWorkbook().createFont();
     font.setBold(true);
@@ -88,6 +87,7 @@ public class PanelSheet implements WorkbookSheet {
         continue;
       }
       BoardSpec spec = specOf(results, board.id());
+      SupplySystem system = results.spec().systemOf(spec);
       r++;
       text(
           sheet.createRow(r++), 0, spec.reference() + " — " + panel.spaceCount() + " spaces", bold);

@@ -7,6 +7,7 @@ import com.wayledger.board.LoadForm;
 import com.wayledger.engine.CircuitLocation;
 import com.wayledger.engine.ConductorMaterial;
 import com.wayledger.engine.DeviceKind;
+import com.wayledger.engine.FaultInterrupter;
 import com.wayledger.engine.InstallationMethod;
 import com.wayledger.engine.Insulation;
 import com.wayledger.engine.LoadCategory;
@@ -46,7 +47,17 @@ public final class RowReader {
 
   /** The board the rows go into. */
   public record BoardContext(
-      int phases, int wayCount, Set<String> occupied, List<PhasePosition> positions) {
+      int phases,
+      int wayCount,
+      Set<String> occupied,
+      List<PhasePosition> positions,
+      List<String> lineNames) {
+
+    /** A board whose lines are named L1, L2, L3 in messages. */
+    public BoardContext(
+        int phases, int wayCount, Set<String> occupied, List<PhasePosition> positions) {
+      this(phases, wayCount, occupied, positions, List.of());
+    }
 
     /**
      * A board known by its phases only: L1 on a single-phase board; every single-pole, two-pole and
@@ -59,6 +70,12 @@ public final class RowReader {
 
     public BoardContext {
       positions = List.copyOf(positions);
+      lineNames = lineNames == null ? List.of() : List.copyOf(lineNames);
+    }
+
+    /** A line as the board names it in messages ("B" on a North American panel, else "L2"). */
+    String lineName(Phase line) {
+      return line.ordinal() < lineNames.size() ? lineNames.get(line.ordinal()) : line.name();
     }
 
     boolean isThreePhase() {
@@ -99,7 +116,8 @@ public final class RowReader {
           Map.entry("cableAmbientCelsius", AMBIENT_CELSIUS),
           Map.entry("cableGroupedCircuits", GROUPED),
           Map.entry("cableThermalInsulationMm", THERMAL_INSULATION_MM),
-          Map.entry("measuredLoopImpedanceOhms", MEASURED_ZS));
+          Map.entry("measuredLoopImpedanceOhms", MEASURED_ZS),
+          Map.entry("deviceFaultInterrupter", FAULT_INTERRUPTER));
 
   private static final Map<String, ImportField> LOAD_PROPERTIES =
       Map.of(
@@ -118,7 +136,9 @@ public final class RowReader {
           "startUpSurgeMultiple",
           SURGE_MULTIPLE,
           "startUpSurgeMillis",
-          SURGE_MILLIS);
+          SURGE_MILLIS,
+          "motorHorsepower",
+          MOTOR_HP);
 
   private final Validator validator;
 
@@ -205,7 +225,9 @@ public final class RowReader {
             if (board.occupied().contains(slot)) {
               problems.add(
                   new ImportPlan.Problem(
-                      LINE, "import.cell.taken", new Object[] {circuit.wayNumber(), phase.name()}));
+                      LINE,
+                      "import.cell.taken",
+                      new Object[] {circuit.wayNumber(), board.lineName(phase)}));
               break;
             }
           }
@@ -327,7 +349,9 @@ public final class RowReader {
       } else {
         problems.add(
             new ImportPlan.Problem(
-                LINE, "import.cell.positionNotOnBoard", new Object[] {position.label()}));
+                LINE,
+                "import.cell.positionNotOnBoard",
+                new Object[] {Codes.line(position, board::lineName)}));
       }
       return null;
     }
@@ -467,7 +491,8 @@ public final class RowReader {
             overload,
             instantaneous,
             null,
-            cells.choice(LOCATION, CircuitLocation.class, problems));
+            cells.choice(LOCATION, CircuitLocation.class, problems),
+            cells.choice(FAULT_INTERRUPTER, FaultInterrupter.class, problems));
     form = form.withCableConduit(cells.conduit(problems));
     for (ConstraintViolation<CircuitForm> violation : validator.validate(form)) {
       ImportField field =
@@ -550,7 +575,8 @@ public final class RowReader {
             powerFactor,
             cells.number(SURGE_MULTIPLE, problems),
             cells.number(SURGE_MILLIS, problems),
-            Boolean.TRUE.equals(continuous));
+            Boolean.TRUE.equals(continuous),
+            cells.number(MOTOR_HP, problems));
     for (ConstraintViolation<LoadForm> violation : validator.validate(form)) {
       ImportField field =
           LOAD_PROPERTIES.getOrDefault(violation.getPropertyPath().toString(), LOAD);

@@ -65,6 +65,13 @@ public enum ScheduleColumn {
    * that names only one line per row ("A" + "240 V") mark a two-pole circuit.
    */
   CONNECTION("Connection", true),
+  /**
+   * The breaker's ground-fault or arc-fault function (GFCI, AFCI, …) as the NEC checks read it;
+   * blank when none is recorded.
+   */
+  FAULT_INTERRUPTER("Fault interrupter", true),
+  /** A motor load's nameplate horsepower (NEC Tables 430.248/430.250); blank for other loads. */
+  MOTOR_HP("Motor hp", true),
   /** The conduit an NEC circuit's conductors run in (Chapter 9 Table 9 voltage drop). */
   CONDUIT("Conduit", true);
 

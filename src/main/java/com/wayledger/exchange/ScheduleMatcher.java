@@ -30,6 +30,7 @@ final class ScheduleMatcher {
           Map.entry("wayNumber", ImportField.WAY),
           Map.entry("position", ImportField.LINE),
           Map.entry("location", ImportField.LOCATION),
+          Map.entry("deviceFaultInterrupter", ImportField.FAULT_INTERRUPTER),
           Map.entry("cableConduit", ImportField.CONDUIT),
           Map.entry("description", ImportField.CIRCUIT),
           Map.entry("status", ImportField.STATE),
@@ -65,7 +66,8 @@ final class ScheduleMatcher {
           "powerFactor", ImportField.POWER_FACTOR,
           "startUpSurgeMultiple", ImportField.SURGE_MULTIPLE,
           "startUpSurgeMillis", ImportField.SURGE_MILLIS,
-          "continuous", ImportField.CONTINUOUS);
+          "continuous", ImportField.CONTINUOUS,
+          "motorHorsepower", ImportField.MOTOR_HP);
 
   private ScheduleMatcher() {}
 
@@ -84,6 +86,18 @@ final class ScheduleMatcher {
 
   static Result match(
       List<ImportPlan.PlannedCircuit> planned, List<CircuitEntry> stored, boolean removeMissing) {
+    return match(planned, stored, removeMissing, Phase::name);
+  }
+
+  /**
+   * As {@link #match(List, List, boolean)}, naming lines in the preview as the board does ("3 B",
+   * "1 A-B" on a North American panel).
+   */
+  static Result match(
+      List<ImportPlan.PlannedCircuit> planned,
+      List<CircuitEntry> stored,
+      boolean removeMissing,
+      java.util.function.Function<Phase, String> lineName) {
     Map<Long, CircuitEntry> byId = new HashMap<>();
     Map<String, CircuitEntry> byPosition = new HashMap<>();
     for (CircuitEntry entry : stored) {
@@ -138,17 +152,20 @@ final class ScheduleMatcher {
                 null,
                 circuit,
                 List.of(),
-                CircuitEdit.add(circuit.circuit(), loadsOf(circuit))));
+                CircuitEdit.add(circuit.circuit(), loadsOf(circuit)),
+                lineName));
         continue;
       }
-      List<ImportOutcome.Change> changes = changes(entry, circuit);
+      List<ImportOutcome.Change> changes = changes(entry, circuit, lineName);
       if (changes.isEmpty()) {
         outcomes.add(
-            outcome(ImportOutcome.Kind.UNCHANGED, entry.circuitId(), circuit, changes, null));
+            outcome(
+                ImportOutcome.Kind.UNCHANGED, entry.circuitId(), circuit, changes, null, lineName));
       } else if (circuit.recordVersion() != null
           && !circuit.recordVersion().equals(entry.recordVersion())) {
         outcomes.add(
-            outcome(ImportOutcome.Kind.CONFLICT, entry.circuitId(), circuit, changes, null));
+            outcome(
+                ImportOutcome.Kind.CONFLICT, entry.circuitId(), circuit, changes, null, lineName));
       } else {
         outcomes.add(
             outcome(
@@ -157,10 +174,8 @@ final class ScheduleMatcher {
                 circuit,
                 changes,
                 CircuitEdit.change(
-                    entry.circuitId(),
-                    entry.recordVersion(),
-                    circuit.circuit(),
-                    loadsOf(circuit))));
+                    entry.circuitId(), entry.recordVersion(), circuit.circuit(), loadsOf(circuit)),
+                lineName));
       }
     }
     for (CircuitEntry entry : left) {
@@ -168,7 +183,7 @@ final class ScheduleMatcher {
           new ImportOutcome(
               removeMissing ? ImportOutcome.Kind.REMOVED : ImportOutcome.Kind.KEPT,
               entry.circuitId(),
-              label(entry.circuit()),
+              label(entry.circuit(), lineName),
               entry.circuit().description(),
               List.of(),
               List.of(),
@@ -186,11 +201,12 @@ final class ScheduleMatcher {
       Long circuitId,
       ImportPlan.PlannedCircuit circuit,
       List<ImportOutcome.Change> changes,
-      CircuitEdit edit) {
+      CircuitEdit edit,
+      java.util.function.Function<Phase, String> lineName) {
     return new ImportOutcome(
         kind,
         circuitId,
-        label(circuit.circuit()),
+        label(circuit.circuit(), lineName),
         circuit.circuit().description(),
         circuit.rowNumbers(),
         changes,
@@ -207,15 +223,18 @@ final class ScheduleMatcher {
   }
 
   /** The fields in which the file's circuit differs from the stored one, old → new. */
-  static List<ImportOutcome.Change> changes(CircuitEntry stored, ImportPlan.PlannedCircuit read) {
+  static List<ImportOutcome.Change> changes(
+      CircuitEntry stored,
+      ImportPlan.PlannedCircuit read,
+      java.util.function.Function<Phase, String> lineName) {
     List<ImportOutcome.Change> changes = new ArrayList<>();
     for (RecordDiff.FieldChange change : stored.circuit().changedFields(read.circuit())) {
       changes.add(
           new ImportOutcome.Change(
               CIRCUIT_FIELDS.getOrDefault(change.field(), ImportField.CIRCUIT),
               0,
-              text(change.theirs()),
-              text(change.yours())));
+              text(change.theirs(), lineName),
+              text(change.yours(), lineName)));
     }
     List<LoadForm> before = stored.loads();
     List<LoadForm> after = loadsOf(read);
@@ -252,6 +271,11 @@ final class ScheduleMatcher {
 
   /** A value as the sheet writes it. */
   static String text(Object value) {
+    return text(value, Phase::name);
+  }
+
+  /** A value as the preview shows it, a position's lines named as on the board. */
+  static String text(Object value, java.util.function.Function<Phase, String> lineName) {
     if (value == null) {
       return "";
     }
@@ -262,7 +286,7 @@ final class ScheduleMatcher {
       return Codes.yes(flag);
     }
     if (value instanceof PhasePosition position) {
-      return Codes.line(position);
+      return Codes.line(position, lineName);
     }
     if (value instanceof WayStatus status) {
       return Codes.state(status);
@@ -277,7 +301,8 @@ final class ScheduleMatcher {
     return circuit.wayNumber() + ":" + circuit.position();
   }
 
-  private static String label(CircuitForm circuit) {
-    return circuit.wayNumber() + " " + Codes.line(circuit.position());
+  private static String label(
+      CircuitForm circuit, java.util.function.Function<Phase, String> lineName) {
+    return circuit.wayNumber() + " " + Codes.line(circuit.position(), lineName);
   }
 }

@@ -11,13 +11,15 @@ import java.util.List;
  * @param headerRowNumber the header's row number as a spreadsheet shows it (from 1)
  * @param headers the header cells, one per column
  * @param rows the non-blank rows below the header
+ * @param above the non-blank rows above the header (our export's title and facts rows)
  */
 public record SheetTable(
     List<String> sheetNames,
     int sheetIndex,
     int headerRowNumber,
     List<String> headers,
-    List<Row> rows) {
+    List<Row> rows,
+    List<Row> above) {
 
   /**
    * One row: its number as the spreadsheet shows it, and its cells (blank as ""), as wide as the
@@ -34,6 +36,22 @@ public record SheetTable(
     sheetNames = List.copyOf(sheetNames);
     headers = List.copyOf(headers);
     rows = List.copyOf(rows);
+    above = above == null ? List.of() : List.copyOf(above);
+  }
+
+  /** A table with nothing recorded above its header. */
+  public SheetTable(
+      List<String> sheetNames,
+      int sheetIndex,
+      int headerRowNumber,
+      List<String> headers,
+      List<Row> rows) {
+    this(sheetNames, sheetIndex, headerRowNumber, headers, rows, List.of());
+  }
+
+  /** The row above the header with this spreadsheet row number, or null. */
+  public Row aboveRow(int number) {
+    return above.stream().filter(row -> row.number() == number).findFirst().orElse(null);
   }
 
   /** Whether every header is one of ours, written as our export writes it. */
@@ -48,10 +66,12 @@ public record SheetTable(
       }
     }
     // exports written before the circuit key and record version columns end at Findings; those
-    // written before the connection column at the record version, before the conduit column at the
-    // connection
+    // written before the connection column at the record version; those written before the fault
+    // interrupter and motor horsepower columns at the connection; those written before the conduit
+    // column at the motor horsepower
     return headers.size() == ScheduleColumn.values().length
         || headers.size() == ScheduleColumn.CONDUIT.ordinal()
+        || headers.size() == ScheduleColumn.FAULT_INTERRUPTER.ordinal()
         || headers.size() == ScheduleColumn.CONNECTION.ordinal()
         || headers.size() == ScheduleColumn.CIRCUIT_KEY.ordinal();
   }

@@ -242,7 +242,7 @@ public final class SpreadsheetReader {
       }
       padded.add(new SheetTable.Row(row.number(), cells));
     }
-    return new SheetTable(names, index, header.number(), headers, padded);
+    return new SheetTable(names, index, header.number(), headers, padded, raw.subList(0, best));
   }
 
   private static boolean ownHeaders(List<String> headers) {

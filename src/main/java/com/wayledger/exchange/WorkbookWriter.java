@@ -302,7 +302,15 @@ public final class WorkbookWriter {
     text(facts, 13, words.of("workbook.fact.ruleSet"), styles.label, null);
     text(facts, 14, data.ruleSetTitle(), styles.text, null);
     text(facts, 15, words.of("workbook.fact.supplySystem"), styles.label, null);
-    text(facts, 16, data.supplySystemWords(), styles.text, null);
+    // the board's own supply system (a second service, a 120/208 V panel) where it has one
+    text(
+        facts,
+        16,
+        demand != null && demand.system() != null
+            ? com.wayledger.system.EnumWords.standard().of(demand.system())
+            : data.supplySystemWords(),
+        styles.text,
+        null);
     text(facts, 11, words.of("workbook.fact.fedFrom"), styles.label, null);
     text(
         facts,
@@ -350,7 +358,7 @@ public final class WorkbookWriter {
       boolean first = true;
       for (LoadForm load : loads) {
         Row row = sheet.createRow(rowIndex);
-        writeCircuitCells(row, entry.circuit(), data.cableUnits(), styles, widths);
+        writeCircuitCells(row, board, entry.circuit(), data.cableUnits(), styles, widths);
         writeRecordCells(row, entry, styles, widths);
         if (load != null) {
           writeLoadCells(row, load, styles, widths);
@@ -421,12 +429,13 @@ public final class WorkbookWriter {
 
   private static void writeCircuitCells(
       Row row,
+      BoardEntry board,
       CircuitForm c,
       com.wayledger.engine.rules.CableUnits units,
       WorkbookStyles s,
       Widths w) {
     number(row, WAY.ordinal(), c.wayNumber(), s.integer, w);
-    text(row, LINE.ordinal(), Codes.line(c.position()), s.text, w);
+    text(row, LINE.ordinal(), Codes.line(c.position(), board::lineName), s.text, w);
     text(row, CIRCUIT.ordinal(), c.description(), s.text, w);
     text(row, STATE.ordinal(), Codes.state(c.status()), s.text, w);
     text(
@@ -463,6 +472,7 @@ public final class WorkbookWriter {
     number(row, MEASURED_ZS.ordinal(), c.measuredLoopImpedanceOhms(), s.ohms, w);
     text(row, LOCATION.ordinal(), name(c.location()), s.text, w);
     text(row, CONNECTION.ordinal(), Codes.connection(c.position()), s.text, w);
+    text(row, FAULT_INTERRUPTER.ordinal(), name(c.deviceFaultInterrupter()), s.text, w);
     text(row, CONDUIT.ordinal(), name(c.cableConduit()), s.text, w);
   }
 
@@ -487,6 +497,7 @@ public final class WorkbookWriter {
     number(row, SURGE_MULTIPLE.ordinal(), l.startUpSurgeMultiple(), s.number, w);
     number(row, SURGE_MILLIS.ordinal(), l.startUpSurgeMillis(), s.number, w);
     text(row, CONTINUOUS.ordinal(), Codes.yes(l.continuous()), s.text, w);
+    number(row, MOTOR_HP.ordinal(), l.motorHorsepower(), s.number, w);
   }
 
   /** Writes a row's computed cells; returns the diversity factors written (active, reactive). */
@@ -706,7 +717,7 @@ public final class WorkbookWriter {
     List<Double> lineAmps = new java.util.ArrayList<>();
     for (Phase phase : lines) {
       Row row = sheet.createRow(r - 1);
-      text(row, 0, board.isThreePhase() ? phase.name() : "L–N", s.label, null);
+      text(row, 0, board.isThreePhase() ? board.lineName(phase) : "L–N", s.label, null);
       // feeder rows carry their sub-boards' load (a three-pole way a third on each line); a
       // three-line sub-board on a three-pole way carries its lines as they are, hence the shares
       double connectedKw = cache.connectedKilowatts(phase);
@@ -865,7 +876,7 @@ public final class WorkbookWriter {
         + ","
         + range(LINE, from, to)
         + ",\""
-        + phase.name()
+        + board.lineName(phase)
         + "\")+SUMIFS("
         + range(column, from, to)
         + ","

@@ -85,7 +85,7 @@ public record SiteForm(
     }
     Double volts =
         system.lineToNeutralVolts() == null ? nominalVoltageVolts : system.lineToNeutralVolts();
-    Integer lines = system == SupplySystem.IEC_WYE ? phases : system.isSplitPhase() ? 1 : 3;
+    Integer lines = system == SupplySystem.IEC_WYE ? phases : system.hasTwoLines() ? 1 : 3;
     return new SiteForm(
         name,
         address,

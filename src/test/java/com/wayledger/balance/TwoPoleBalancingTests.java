@@ -10,6 +10,7 @@ import com.wayledger.engine.DeviceSpec;
 import com.wayledger.engine.EarthingSystem;
 import com.wayledger.engine.LoadCategory;
 import com.wayledger.engine.LoadSpec;
+import com.wayledger.engine.PanelSpaces;
 import com.wayledger.engine.Phase;
 import com.wayledger.engine.PhasePosition;
 import com.wayledger.engine.RatingUnit;
@@ -18,6 +19,8 @@ import com.wayledger.engine.SupplySystem;
 import com.wayledger.engine.WayStatus;
 import com.wayledger.engine.balance.BalanceItem;
 import com.wayledger.engine.balance.BalanceProblem;
+import com.wayledger.engine.balance.FewestMovesResult;
+import com.wayledger.engine.balance.PhaseBalancer;
 import com.wayledger.engine.demand.BoardDemand;
 import com.wayledger.engine.demand.DemandEngine;
 import com.wayledger.engine.demand.DiversityMethods;
@@ -85,5 +88,76 @@ class TwoPoleBalancingTests {
         .as("only the single-pole circuit can move")
         .extracting(BalanceItem::circuitId)
         .containsExactly(2L);
+  }
+
+  /**
+   * A 120/240 V panel: a 4800 W water heater on A–B (spaces 1 and 3), 1200 W and 600 W on A (spaces
+   * 5 and 9), nothing else on B. Hand calculation at unity power factor: the heater draws 4800 /
+   * 240 = 20 A on A and on B; 1200 / 120 = 10 A and 600 / 120 = 5 A on A. A = 35 A, B = 20 A;
+   * unbalance over two lines |35 − 20| / 55 = 27.3 %. One move (either single-pole circuit to B)
+   * gives a largest line of 30 A and 9.1 %; the water heater never moves.
+   */
+  @Test
+  void aSplitPhasePanelIsBalancedOverItsTwoLines() {
+    BoardSpec board =
+        new BoardSpec(
+            1,
+            "Apt 1",
+            1,
+            42,
+            null,
+            null,
+            null,
+            null,
+            10.0,
+            1.0,
+            DiversityMethods.NONE,
+            null,
+            null,
+            List.of(
+                circuit(1, 1, PhasePosition.L1_L2, 4800.0),
+                circuit(2, 5, PhasePosition.L1, 1200.0),
+                circuit(3, 9, PhasePosition.L1, 600.0)));
+    SupplySpec supply =
+        new SupplySpec(
+            EarthingSystem.TN_C_S,
+            120.0,
+            1,
+            60.0,
+            null,
+            null,
+            null,
+            SupplySystem.SPLIT_PHASE_120_240);
+    BoardDemand demand =
+        DemandEngine.evaluateBoard(board, supply, DiversityMethods.builtIn(), null);
+
+    BalanceProblem problem =
+        BalanceService.problemOf(
+            board, demand, BalancePlans.Basis.CONNECTED, new PanelSpaces(42, 2));
+    FewestMovesResult result = new PhaseBalancer().fewestMoves(problem);
+
+    assertThat(problem.lines()).as("two lines").isEqualTo(2);
+    assertThat(problem.items())
+        .as("the two-pole water heater is not a movable item")
+        .extracting(BalanceItem::circuitId)
+        .containsExactlyInAnyOrder(2L, 3L);
+    assertThat(result.before().l1Amps()).as("line A").isCloseTo(35.0, within(1e-9));
+    assertThat(result.before().l2Amps()).as("line B").isCloseTo(20.0, within(1e-9));
+    assertThat(result.before().unbalancePercent())
+        .as("unbalance as it stands, over two lines")
+        .isCloseTo(100.0 * 15.0 / 55.0, within(1e-9));
+    assertThat(result.before().unbalancePercent())
+        .as("the balancer and the demand engine give one figure")
+        .isCloseTo(demand.unbalancePercent(), within(0.01));
+    var last = result.steps().get(result.steps().size() - 1);
+    assertThat(last.moves()).as("moves").isEqualTo(1);
+    assertThat(last.largestAmps()).as("largest line after").isCloseTo(30.0, within(1e-9));
+    assertThat(last.unbalancePercent())
+        .as("unbalance after")
+        .isCloseTo(100.0 * 5.0 / 55.0, within(1e-9));
+    assertThat(last.plan().get(0).toPhase()).as("the move is to B").isEqualTo(Phase.L2);
+    assertThat(last.plan().get(0).toWay() % 4)
+        .as("to a space on line B (rows 2, 4, …: spaces 3, 4, 7, 8, …)")
+        .isIn(0, 3);
   }
 }

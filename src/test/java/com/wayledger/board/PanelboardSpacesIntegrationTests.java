@@ -9,6 +9,8 @@ import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
 
 import java.util.UUID;
+import org.jsoup.Jsoup;
+import org.jsoup.nodes.Document;
 import org.junit.jupiter.api.Test;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.test.context.SpringBootTest;
@@ -268,5 +270,84 @@ class PanelboardSpacesIntegrationTests {
     // 3 × 10 A on A, none on B: the best plan puts one on B (20 A / 10 A), one move
     assertThat(page).containsPattern("space [125] \\(A\\) → space \\d+ \\(B\\), 10\\.0 A");
     assertThat(page).doesNotContain("single-phase board");
+  }
+
+  @Test
+  void balancingApiTakesTheUnbalanceOfASplitPhasePanelOverItsTwoLinesAsTheDemandApiDoes()
+      throws Exception {
+    long boardId = panel(necSite("SPLIT_PHASE_120_240"), 1, 42);
+    // 1,200 W at 120 V = 10 A each (hand calculation): spaces 1, 2, 5 on A, space 3 on B
+    for (int space : new int[] {1, 2, 3, 5}) {
+      mvc.perform(
+              breaker(boardId, space, "L1", "Receptacles " + space)
+                  .param("loadDescription", "Receptacles " + space)
+                  .param("loadCategory", "OTHER")
+                  .param("loadQuantity", "1")
+                  .param("loadRatingValue", "1200")
+                  .param("loadRatingUnit", "W")
+                  .param("loadPowerFactor", "1"))
+          .andExpect(status().is3xxRedirection());
+    }
+    var viewer = user("viewer").roles("VIEWER");
+
+    // A 30 A, B 10 A: unbalance over two lines |30 − 10| / 40 = 50 % (over three lines with an
+    // empty third it would read 200 %); one move gives 20 A and 20 A, within a 10 % limit
+    mvc.perform(get("/api/boards/{id}/balance", boardId).with(viewer))
+        .andExpect(status().isOk())
+        .andExpect(jsonPath("$.fewestMoves.before.l1Amps").value(30.0))
+        .andExpect(jsonPath("$.fewestMoves.before.l2Amps").value(10.0))
+        .andExpect(jsonPath("$.fewestMoves.before.lines").value(2))
+        .andExpect(jsonPath("$.optimal.unbalanceBeforePercent").value(50.0))
+        .andExpect(jsonPath("$.optimal.unbalanceAfterPercent").value(0.0))
+        .andExpect(jsonPath("$.fewestMoves.limitVerdict").value("REACHED"))
+        .andExpect(jsonPath("$.fewestMoves.movesToReachLimit").value(1))
+        .andExpect(jsonPath("$.fewestMoves.limitPlan[0].toPhase").value("L2"));
+    mvc.perform(get("/api/boards/{id}/demand", boardId).with(viewer))
+        .andExpect(status().isOk())
+        .andExpect(jsonPath("$.result.unbalancePercent").value(50.0));
+    // the API keeps its codes and names the lines as people do beside them
+    mvc.perform(get("/api/boards/{id}", boardId).with(viewer))
+        .andExpect(status().isOk())
+        .andExpect(jsonPath("$.board.lineNames[0]").value("A"))
+        .andExpect(jsonPath("$.board.lineNames[1]").value("B"))
+        .andExpect(jsonPath("$.board.lineNames.length()").value(2))
+        .andExpect(jsonPath("$.circuits[?(@.wayNumber == 3)].position").value("L2"))
+        .andExpect(jsonPath("$.circuits[?(@.wayNumber == 3)].lines").value("B"));
+  }
+
+  @Test
+  void eachBreakerOnThePanelShowsItsConductorInAwgAndFeetWithUsWords() throws Exception {
+    long boardId = panel(necSite("SPLIT_PHASE_120_240"), 1, 24);
+    mvc.perform(
+            breaker(boardId, 1, "L1", "Kitchen counter")
+                .param("cableLineSize", "12 AWG")
+                .param("cableCpcSize", "12 AWG")
+                .param("cableMaterial", "COPPER")
+                .param("cableLengthFeet", "40"))
+        .andExpect(status().is3xxRedirection());
+    mvc.perform(
+            breaker(boardId, 2, "L1_L2", "Range")
+                .param("cableLineSize", "6 AWG")
+                .param("cableCpcSize", "10 AWG")
+                .param("cableMaterial", "ALUMINIUM")
+                .param("cableLengthFeet", "25"))
+        .andExpect(status().is3xxRedirection());
+    mvc.perform(breaker(boardId, 5, "L1", "Spare circuit")).andExpect(status().is3xxRedirection());
+
+    Document page =
+        Jsoup.parse(
+            mvc.perform(get("/boards/{id}", boardId).with(user("ed").roles("EDITOR")))
+                .andExpect(status().isOk())
+                .andReturn()
+                .getResponse()
+                .getContentAsString());
+
+    // an NEC site's page is in en-US words (no interface language chosen): "Aluminum"
+    assertThat(page.select("#space-1 .conductor").text())
+        .isEqualTo("Conductor 12 AWG / 12 AWG 40 ft, Copper");
+    assertThat(page.select("#space-2 .conductor").text())
+        .isEqualTo("Conductor 6 AWG / 10 AWG 25 ft, Aluminum");
+    assertThat(page.select("#space-5 .conductor").text()).isEqualTo("No conductor recorded");
+    assertThat(page.select(".conductor").text()).doesNotContain("mm²").doesNotContain(" m,");
   }
 }

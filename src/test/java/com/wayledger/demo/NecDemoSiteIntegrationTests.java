@@ -60,24 +60,93 @@ class NecDemoSiteIntegrationTests {
   }
 
   @Test
-  void necDemoIsAThreeApartmentBuildingOnA120To240VoltService() {
+  void necDemoIsAThreeApartmentBuildingOnA208YServiceWithACottageOnItsOwn120To240Service() {
     assertThat(site.getRuleSet()).isEqualTo("NEC");
-    assertThat(site.getSupplySystem()).isEqualTo(SupplySystem.SPLIT_PHASE_120_240);
+    assertThat(site.getSupplySystem()).isEqualTo(SupplySystem.WYE_208Y_120);
     // other tests in this context import copies onto the site: the demo's own panels are these
     assertThat(results.spec().boards())
         .extracting(b -> b.reference())
-        .contains("HP", "CP", "APT-1", "APT-2", "APT-3");
+        .contains("HP", "CP", "APT-1", "APT-2", "APT-3", "COTTAGE");
+    assertThat(spec("HP").parentBoardId()).as("the house panel is fed from the origin").isNull();
+    assertThat(spec("HP").wayCount()).as("a 42-space house panel").isEqualTo(42);
+    assertThat(results.spec().systemOf(spec("HP"))).isEqualTo(SupplySystem.WYE_208Y_120);
+    for (String apartment : List.of("APT-1", "APT-2", "APT-3", "CP")) {
+      assertThat(spec(apartment).supplySystem())
+          .as("%s is fed from two poles of the 208Y/120 V panel", apartment)
+          .isEqualTo(SupplySystem.SINGLE_PHASE_120_208);
+      assertThat(board(apartment).lines()).as("%s has lines A and B", apartment).isEqualTo(2);
+    }
     assertThat(
-            results.spec().boards().stream()
-                .filter(b -> b.reference().equals("HP"))
+            List.of(
+                circuit("HP", "Feeder to apartment 1 panel").position(),
+                circuit("HP", "Feeder to apartment 2 panel").position(),
+                circuit("HP", "Feeder to apartment 3 panel").position()))
+        .as("each apartment on its own pair of lines")
+        .containsExactly(PhasePosition.L1_L2, PhasePosition.L2_L3, PhasePosition.L3_L1);
+    assertThat(spec("COTTAGE").parentBoardId()).as("a second service").isNull();
+    assertThat(spec("COTTAGE").supplySystem()).isEqualTo(SupplySystem.SPLIT_PHASE_120_240);
+    assertThat(spec("COTTAGE").incomer().ratedCurrentAmps()).isEqualTo(200.0);
+    assertThat(spec("COTTAGE").wayCount()).isEqualTo(42);
+    assertThat(circuit("APT-1", "Water heater").position())
+        .as("a 208 V water heater is connected line to line")
+        .isEqualTo(PhasePosition.L1_L2);
+  }
+
+  @Test
+  void eachPanelPageNamesItsOwnSupplySystem() throws Exception {
+    assertThat(page("APT-2")).contains("120/208 V single-phase three-wire");
+    assertThat(page("COTTAGE")).contains("120/240 V single-phase three-wire");
+    assertThat(page("HP")).contains("208Y/120 V three-phase four-wire");
+  }
+
+  @Test
+  void cottageTwoFortyVoltWaterHeaterPutsNothingOnItsNeutral() {
+    // NEC 220.61(A) (as published): only the unbalanced load between neutral and a line counts
+    Worksheet neutral = sheet(board("COTTAGE").boardId(), WorksheetMethod.NEUTRAL);
+    assertThat(neutral.lines())
+        .anyMatch(
+            line ->
+                line.description().startsWith("Water heater")
+                    && line.description().contains("line to line, no neutral current")
+                    && line.resultVoltAmperes() != null
+                    && line.resultVoltAmperes() == 0.0);
+    // 4500 W at 240 V = 18.75 A (the site's 120 V system would have none at 240 V)
+    assertThat(
+            board("COTTAGE").circuits().stream()
+                .filter(c -> c.description().equals("Water heater"))
                 .findFirst()
                 .orElseThrow()
-                .parentBoardId())
-        .as("the house panel is fed from the origin")
-        .isNull();
-    assertThat(circuit("APT-1", "Water heater").position())
-        .as("a 240 V water heater is connected line to line")
-        .isEqualTo(PhasePosition.L1_L2);
+                .designCurrentAmps())
+        .as("Ib = 4500 W / 240 V")
+        .isCloseTo(18.75, within());
+  }
+
+  @Test
+  void everyDwellingCircuitRecordsItsRoomSoGroundAndArcFaultAreAssessed() {
+    for (String panel : List.of("APT-1", "APT-2", "APT-3", "COTTAGE")) {
+      for (CircuitSpec circuit : spec(panel).circuits()) {
+        assertThat(circuit.location())
+            .as("%s %s records a room", panel, circuit.description())
+            .isNotEqualTo(CircuitLocation.INDOORS)
+            .isNotNull();
+        for (Finding f : circuitFindings(panel, circuit.description())) {
+          if (f.check() == CheckKind.GROUND_FAULT_PROTECTION
+              || f.check() == CheckKind.ARC_FAULT_PROTECTION) {
+            assertThat(f.verdict())
+                .as("%s %s: %s", panel, circuit.description(), f.summary())
+                .isNotEqualTo(Verdict.NOT_ASSESSED);
+          }
+        }
+      }
+    }
+    // NEC 210.12(A) (from memory): 120 V 15/20 A bedroom circuits of a dwelling need AFCI
+    Finding bedroom =
+        circuitFindings("APT-1", "Lighting and receptacles, bedrooms").stream()
+            .filter(f -> f.check() == CheckKind.ARC_FAULT_PROTECTION)
+            .findFirst()
+            .orElseThrow();
+    assertThat(bedroom.verdict()).as(bedroom.summary()).isEqualTo(Verdict.PASS);
+    assertThat(bedroom.reference()).contains("bedrooms");
   }
 
   @Test
@@ -93,10 +162,24 @@ class NecDemoSiteIntegrationTests {
   @Test
   void commonAreaPanelLineAIsOverloadedAndShownOnItsPage() throws Exception {
     BoardDemand common = board("CP");
-    // NEC 408.36 / 215.3 (as published): the load on a line must stay within the main's rating;
-    // invented demo figures put about 118 A on line A of a 100 A panel and about 80 A on line B
-    assertThat(common.onPhase(Phase.L1).currentAmps()).as("line A").isGreaterThan(100.0);
-    assertThat(common.onPhase(Phase.L2).currentAmps()).as("line B").isLessThan(100.0);
+    // NEC 408.36 / 215.3 (as published): the load on a line must stay within the main's rating.
+    // Hand calculation (invented loads, unity power factor, no diversity on CP), 120/208 V with
+    // V_A = 120∠0°, V_B = 120∠−120°, V_AB = 207.85∠30°:
+    //   208 V loads: 11,500 W + 3 × 2,400 W = 18,700 W → I_AB = 18,700 / 207.85 = 89.97 A ∠30°,
+    //     leaving on A and returning on B (I_B = 89.97 A ∠−150°);
+    //   120 V on A: 1,200 + 1,500 + 2 × 1,000 + 1,440 = 6,140 W → 51.17 A ∠0°;
+    //   120 V on B: 4 × 75 = 300 W → 2.50 A ∠−120°.
+    //   |I_A| = |51.17 + 89.97∠30°| = |129.08 + j44.99| = 136.70 A
+    //   |I_B| = |2.50∠−120° + 89.97∠−150°| = |−79.17 − j47.15| = 92.14 A
+    assertThat(common.onPhase(Phase.L1).currentAmps())
+        .as("line A")
+        .isCloseTo(136.70, org.assertj.core.data.Offset.offset(0.05));
+    assertThat(common.onPhase(Phase.L2).currentAmps())
+        .as("line B")
+        .isCloseTo(92.14, org.assertj.core.data.Offset.offset(0.05));
+    assertThat(common.onPhase(Phase.L1).currentAmps())
+        .as("above the 100 A main")
+        .isGreaterThan(100.0);
     Finding overload =
         boardFindings("CP").stream()
             .filter(f -> f.check() == CheckKind.INCOMER_OVERLOAD)
@@ -120,11 +203,18 @@ class NecDemoSiteIntegrationTests {
 
   @Test
   void outdoorReceptaclesOnTheHousePanelHaveNoGroundFaultProtection() {
-    // the house panel is not a dwelling panel: 210.8(B) for other occupancies is not built, so
-    // this stays a precondition; the dwelling case below is the finding
+    // the house panel is not a dwelling panel: NEC 210.8(B)(4) (2020, from memory) asks for GFCI on
+    // outdoor receptacles of other occupancies (120 V to ground, ≤ 50 A single-phase)
     CircuitSpec walk = circuit("HP", "Front walk receptacles");
     assertThat(walk.location()).isEqualTo(CircuitLocation.OUTDOORS);
     assertThat(walk.device().kind().isResidualCurrent()).as("no GFCI device").isFalse();
+    Finding gfci =
+        circuitFindings("HP", "Front walk receptacles").stream()
+            .filter(f -> f.check() == CheckKind.GROUND_FAULT_PROTECTION)
+            .findFirst()
+            .orElseThrow();
+    assertThat(gfci.verdict()).as(gfci.summary()).isEqualTo(Verdict.WARNING);
+    assertThat(gfci.reference()).contains("210.8(B)(4)");
   }
 
   @Test
@@ -256,6 +346,13 @@ class NecDemoSiteIntegrationTests {
 
   private BoardDemand board(String reference) {
     return results.demand().boards().stream()
+        .filter(b -> b.reference().equals(reference))
+        .findFirst()
+        .orElseThrow();
+  }
+
+  private com.wayledger.engine.BoardSpec spec(String reference) {
+    return results.spec().boards().stream()
         .filter(b -> b.reference().equals(reference))
         .findFirst()
         .orElseThrow();

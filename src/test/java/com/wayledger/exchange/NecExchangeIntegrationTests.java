@@ -72,14 +72,23 @@ class NecExchangeIntegrationTests {
       Sheet sheet = boardSheet(workbook);
       DataFormatter text = new DataFormatter();
       String facts = rowText(sheet.getRow(1), text);
-      assertThat(facts).contains("NEC").contains("120/240 V single-phase three-wire");
+      // the panel's own system (two poles of the 208Y/120 V house panel), not the site's
+      assertThat(facts).contains("NEC").contains("120/208 V single-phase three-wire");
       Row header = sheet.getRow(3);
       int line = column(header, "Line", text);
       int connection = column(header, "Connection", text);
       boolean twoPole = false;
       for (int r = 4; r <= sheet.getLastRowNum(); r++) {
         Row row = sheet.getRow(r);
-        if (row != null && "L1-L2".equals(text.formatCellValue(row.getCell(line)))) {
+        if (row == null) {
+          continue;
+        }
+        String lineCell = text.formatCellValue(row.getCell(line));
+        assertThat(lineCell)
+            .as("row %d: a panelboard's lines are A and B, not L1/L2", r + 1)
+            .doesNotStartWith("L1")
+            .doesNotStartWith("L2");
+        if ("A-B".equals(lineCell)) {
           assertThat(text.formatCellValue(row.getCell(connection))).isEqualTo("L-L");
           twoPole = true;
         }
@@ -151,6 +160,10 @@ class NecExchangeIntegrationTests {
                 .query(String.class)
                 .single());
     assertSameDemand(apartment, copy);
+    assertThat(faultInterrupters(copy))
+        .as("the demo apartment's GFCI/AFCI breakers come back with their panel")
+        .isNotEmpty()
+        .isEqualTo(faultInterrupters(apartment));
     SiteAnalysis results = analysis.ofSite(site.getId());
     assertThat(results.dwellingWorksheets(copy).get(0).resultVoltAmperes())
         .as("standard method of the copy")
@@ -216,7 +229,7 @@ class NecExchangeIntegrationTests {
     mvc.perform(get("/api/circuits/{id}", id.strip()).with(EDITOR))
         .andExpect(status().isOk())
         .andExpect(jsonPath("$..position", Matchers.hasItem("L1_L2")));
-    // a 120/240 V panel has lines A and B only: B–C is not one of its positions
+    // a single-phase three-wire panel has lines A and B only: B–C is not one of its positions
     mvc.perform(
             post("/api/boards/{id}/circuits", panel)
                 .with(EDITOR)
@@ -232,6 +245,130 @@ class NecExchangeIntegrationTests {
                 .single())
         .as("only the two-pole A–B circuit stored")
         .isEqualTo(1L);
+  }
+
+  @Test
+  void faultInterrupterAndMotorHorsepowerComeBackWithTheirPanel() throws Exception {
+    String suffix = UUID.randomUUID().toString().substring(0, 6);
+    long source = emptyPanel("HP source " + suffix, "none");
+    String circuit =
+        mvc.perform(
+                post("/api/boards/{id}/circuits", source)
+                    .with(EDITOR)
+                    .with(csrf())
+                    .contentType(MediaType.APPLICATION_JSON)
+                    .content(
+                        """
+                        {"wayNumber": 1, "position": "L1_L2", "description": "Well pump",
+                         "status": "IN_USE", "deviceKind": "MCB", "deviceCurve": "C",
+                         "deviceRatingAmps": 20, "devicePoles": 2,
+                         "deviceBreakingCapacityKiloAmps": 10, "deviceFaultInterrupter": "GFCI",
+                         "location": "OUTDOORS"}
+                        """))
+            .andExpect(status().isCreated())
+            .andReturn()
+            .getResponse()
+            .getContentAsString()
+            .strip();
+    mvc.perform(
+            post("/api/circuits/{id}/loads", circuit)
+                .with(EDITOR)
+                .with(csrf())
+                .contentType(MediaType.APPLICATION_JSON)
+                .content(
+                    """
+                    {"description": "Pump motor", "category": "MOTOR", "quantity": 1,
+                     "ratingValue": 9.8, "ratingUnit": "A", "powerFactor": 0.8,
+                     "continuous": false, "motorHorsepower": 1.5}
+                    """))
+        .andExpect(status().is2xxSuccessful());
+    long copy = emptyPanel("HP copy " + suffix, "none");
+
+    byte[] workbook = export(source);
+    try (XSSFWorkbook book = new XSSFWorkbook(new ByteArrayInputStream(workbook))) {
+      Sheet sheet = boardSheet(book);
+      DataFormatter text = new DataFormatter();
+      Row header = sheet.getRow(3);
+      Row first = sheet.getRow(4);
+      assertThat(text.formatCellValue(first.getCell(column(header, "Fault interrupter", text))))
+          .as("the breaker's function in words")
+          .isNotBlank()
+          .doesNotContain("GFCI_")
+          .containsIgnoringCase("GFCI");
+      assertThat(text.formatCellValue(first.getCell(column(header, "Motor hp", text))))
+          .isEqualTo("1.5");
+    }
+    importInto(copy, workbook);
+
+    assertThat(
+            jdbc.sql(
+                    "SELECT c.device_fault_interrupter || '|' || l.motor_horsepower FROM circuit c"
+                        + " JOIN load_item l ON l.circuit_id = c.id WHERE c.board_id = ?")
+                .param(copy)
+                .query(String.class)
+                .single())
+        .as("GFCI breaker and 1.5 hp motor stored on the copy")
+        .isEqualTo("GFCI|1.5");
+    assertSameDemand(source, copy);
+  }
+
+  @Test
+  void aWorkbookOfAnotherRuleSetIsRefusedNamingBothAndNothingIsStored() throws Exception {
+    long iecBoard =
+        jdbc.sql(
+                "SELECT b.id FROM board b JOIN site s ON s.id = b.site_id WHERE s.rule_set = 'IEC'"
+                    + " AND EXISTS (SELECT 1 FROM circuit c WHERE c.board_id = b.id)"
+                    + " ORDER BY b.id LIMIT 1")
+            .query(Long.class)
+            .single();
+    long panel = emptyPanel("Refuses IEC " + UUID.randomUUID().toString().substring(0, 6), null);
+    String location =
+        mvc.perform(
+                multipart("/boards/{id}/import", panel)
+                    .file(
+                        new MockMultipartFile(
+                            "file", "board.xlsx", "application/octet-stream", export(iecBoard)))
+                    .with(EDITOR)
+                    .with(csrf()))
+            .andExpect(status().is3xxRedirection())
+            .andReturn()
+            .getResponse()
+            .getRedirectedUrl();
+    String token = location.split("/")[4];
+
+    String preview =
+        mvc.perform(get(location).with(EDITOR))
+            .andExpect(status().isOk())
+            .andReturn()
+            .getResponse()
+            .getContentAsString();
+    String refused =
+        mvc.perform(
+                post("/boards/{id}/import/{t}", panel, token)
+                    .param("mode", "valid")
+                    .param("reason", "wrong file")
+                    .with(EDITOR)
+                    .with(csrf()))
+            .andExpect(status().isUnprocessableContent())
+            .andReturn()
+            .getResponse()
+            .getContentAsString();
+
+    String iec = com.wayledger.engine.rules.RuleSets.IEC.title();
+    String nec = com.wayledger.engine.rules.RuleSets.of("NEC").title();
+    for (String page : new String[] {preview, refused}) {
+      assertThat(org.springframework.web.util.HtmlUtils.htmlUnescape(page))
+          .as("the refusal names the file's rule set and the board's")
+          .contains("exported under " + iec)
+          .contains("checked against " + nec);
+    }
+    assertThat(
+            jdbc.sql("SELECT COUNT(*) FROM circuit WHERE board_id = ?")
+                .param(panel)
+                .query(Long.class)
+                .single())
+        .as("nothing stored")
+        .isZero();
   }
 
   private void assertSameDemand(long original, long copy) {
@@ -252,6 +389,16 @@ class NecExchangeIntegrationTests {
         .isCloseTo(before.neutralCurrentAmps(), within(1e-6));
   }
 
+  /** Each space's breaker function ("3:GFCI"), in space order; spaces without one left out. */
+  private java.util.List<String> faultInterrupters(long boardId) {
+    return jdbc.sql(
+            "SELECT way_number || ':' || device_fault_interrupter FROM circuit WHERE board_id = ?"
+                + " AND device_fault_interrupter IS NOT NULL ORDER BY way_number")
+        .param(boardId)
+        .query(String.class)
+        .list();
+  }
+
   private long boardId(String reference) {
     return jdbc.sql("SELECT id FROM board WHERE site_id = ? AND reference = ?")
         .param(site.getId())
@@ -267,6 +414,8 @@ class NecExchangeIntegrationTests {
             .with(csrf())
             .param("reference", reference)
             .param("phases", "1")
+            // the demo's apartment and common-area panels are 120/208 V single-phase three-wire
+            .param("supplySystem", "SINGLE_PHASE_120_208")
             .param("wayCount", "30") // as many spaces as the demo's apartment panels
             .param("busbarRatingAmps", "200")
             .param("incomerKind", "MCCB")

@@ -161,4 +161,26 @@ class NecImportReadingTests {
     assertThat(Codes.connection(PhasePosition.L2)).isEqualTo("L-N");
     assertThat(Codes.connection(PhasePosition.THREE_POLE)).isEqualTo("3-phase");
   }
+
+  @Test
+  void lineCellsNameTheLinesAsTheBoardDoesAndReadBackInEitherSpelling() {
+    java.util.function.Function<com.wayledger.engine.Phase, String> letters =
+        com.wayledger.engine.SupplySystem.WYE_208Y_120::lineName;
+    java.util.function.Function<com.wayledger.engine.Phase, String> iec =
+        com.wayledger.engine.SupplySystem.IEC_WYE::lineName;
+
+    assertThat(Codes.line(PhasePosition.L2, letters)).isEqualTo("B");
+    assertThat(Codes.line(PhasePosition.L3_L1, letters)).isEqualTo("C-A");
+    assertThat(Codes.line(PhasePosition.THREE_POLE, letters)).isEqualTo("3P");
+    assertThat(Codes.line(PhasePosition.L2, iec)).isEqualTo("L2");
+    assertThat(Codes.line(PhasePosition.L1_L2, iec)).isEqualTo("L1-L2");
+    for (PhasePosition position : PhasePosition.values()) {
+      assertThat(Codes.parseLine(Codes.line(position, letters)))
+          .as("%s written as letters reads back", position)
+          .isEqualTo(position);
+      assertThat(Codes.parseLine(Codes.line(position, iec)))
+          .as("%s written as L1/L2/L3 reads back", position)
+          .isEqualTo(position);
+    }
+  }
 }

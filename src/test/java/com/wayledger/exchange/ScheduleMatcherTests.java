@@ -166,4 +166,23 @@ class ScheduleMatcherTests {
     assertThat(result.outcomes().get(2).edit().isAdded()).isTrue();
     assertThat(result.blocked()).isEmpty();
   }
+
+  @Test
+  void onANorthAmericanPanelThePreviewNamesTheLinesAsThePanelDoes() {
+    CircuitForm moved =
+        ExchangeFixtures.circuit(
+            2, PhasePosition.L1, "Heater", DeviceKind.MCB, TripCurve.B, 16, null, 2.5, 15.0);
+    var result =
+        ScheduleMatcher.match(
+            List.of(read(moved, PANEL, 12L, "5-bbbbbb")),
+            STORED,
+            false,
+            com.wayledger.engine.SupplySystem.SPLIT_PHASE_120_240::lineName);
+
+    ImportOutcome heater = result.outcomes().get(0);
+    assertThat(heater.position()).as("way and line as the panel names it").isEqualTo("2 A");
+    assertThat(heater.changes())
+        .as("the line change in letters, not L2 → L1")
+        .contains(new ImportOutcome.Change(ImportField.LINE, 0, "B", "A"));
+  }
 }

@@ -129,4 +129,42 @@ public final class NecPanels {
         null,
         null);
   }
+
+  /** A breaker with no load of its own (a feeder to another panel). */
+  public static CircuitForm feeder(int space, PhasePosition poles, String description) {
+    return new CircuitForm(
+        space,
+        poles,
+        description,
+        WayStatus.IN_USE,
+        false,
+        DeviceKind.MCB,
+        null,
+        poles.poles() == 1 ? 20.0 : 100.0,
+        poles.poles(),
+        10.0,
+        null,
+        null,
+        null,
+        null,
+        ConductorMaterial.COPPER,
+        Insulation.THERMOSETTING_90,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null);
+  }
 }

@@ -169,7 +169,7 @@ final class AssignmentSearch {
 
   private void settleLeaf() {
     if (feasibility) {
-      if (inBand(loads[0]) && inBand(loads[1]) && inBand(loads[2])) {
+      if (PhaseBalancer.within(loads, board.lines, bandLowest, bandHighest)) {
         bestPhaseOf = phaseOf.clone();
         finished = true;
       }
@@ -181,10 +181,6 @@ final class AssignmentSearch {
       bestPhaseOf = phaseOf.clone();
       finished = key <= stopKey;
     }
-  }
-
-  private boolean inBand(long load) {
-    return load >= bandLowest && load <= bandHighest;
   }
 
   private void phasesByLoad(int[] order) {
@@ -323,7 +319,7 @@ final class AssignmentSearch {
     long[] least = leastLoads;
     mandatoryLoads(index, least);
     long shortfall = 0;
-    for (int p = 0; p < 3; p++) {
+    for (int p = 0; p < board.lines; p++) {
       if (least[p] > bandHighest) {
         return true;
       }

@@ -21,6 +21,9 @@ import java.util.Map;
  * @param unbalanceLimitPercent the board's unbalance limit, percent of the mean phase current;
  *     {@code null} leaves the "reach the limit" answer not assessed
  * @param threePhase {@code false} for a single-phase board, which has nothing to balance
+ * @param lineCount the lines the board has: 3 (L1, L2, L3), or 2 for a 120/240 V split-phase board
+ *     (lines A and B as L1 and L2, nothing on L3): the mean, the unbalance and the limit are taken
+ *     over these lines only; {@code null} means 3
  */
 public record BalanceProblem(
     List<BalanceItem> items,
@@ -28,4 +31,29 @@ public record BalanceProblem(
     Map<Phase, Integer> positionsAvailable,
     Map<Phase, List<Integer>> freeWays,
     Double unbalanceLimitPercent,
-    boolean threePhase) {}
+    boolean threePhase,
+    Integer lineCount) {
+
+  /** A three-line board (or a single-phase one, with {@code threePhase} false). */
+  public BalanceProblem(
+      List<BalanceItem> items,
+      Map<Phase, Double> fixedLoadAmps,
+      Map<Phase, Integer> positionsAvailable,
+      Map<Phase, List<Integer>> freeWays,
+      Double unbalanceLimitPercent,
+      boolean threePhase) {
+    this(
+        items,
+        fixedLoadAmps,
+        positionsAvailable,
+        freeWays,
+        unbalanceLimitPercent,
+        threePhase,
+        null);
+  }
+
+  /** The lines balanced over: {@link #lineCount()}, 3 when not given. */
+  public int lines() {
+    return lineCount == null ? 3 : lineCount;
+  }
+}

@@ -147,7 +147,7 @@ final class MoveSearch {
       return;
     }
     if (bandMode) {
-      if (inBand(loads[0]) && inBand(loads[1]) && inBand(loads[2])) {
+      if (PhaseBalancer.within(loads, board.lines, bandLowest, bandHighest)) {
         found = target.clone();
         finished = true;
       }
@@ -159,10 +159,6 @@ final class MoveSearch {
       bestTarget = target.clone();
       finished = key <= stopKey;
     }
-  }
-
-  private boolean inBand(long load) {
-    return load >= bandLowest && load <= bandHighest;
   }
 
   private boolean cannotImprove(int from, int movesLeft) {
@@ -177,7 +173,7 @@ final class MoveSearch {
       }
     }
     if (bandMode) {
-      for (int p = 0; p < 3; p++) {
+      for (int p = 0; p < board.lines; p++) {
         if (least[p] > bandHighest) {
           return true;
         }
@@ -190,7 +186,7 @@ final class MoveSearch {
       return false;
     }
     long lbMax = Math.max(least[0], Math.max(least[1], least[2]));
-    lbMax = Math.max(lbMax, (board.total + 2) / 3);
+    lbMax = Math.max(lbMax, (board.total + board.lines - 1) / board.lines);
     long mid =
         least[0]
             + least[1]

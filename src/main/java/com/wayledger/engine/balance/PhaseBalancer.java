@@ -92,7 +92,7 @@ public final class PhaseBalancer {
           "Not assessed: counting moves needs the current phase of every movable circuit.",
           null);
     }
-    PhaseCurrents before = PhaseCurrents.ofCentiamps(board.loadsOf(board.currentPhase));
+    PhaseCurrents before = board.currentsOf(board.loadsOf(board.currentPhase));
     if (!board.withinCapacity(board.currentPhase)) {
       return movesRefused(
           BalanceOutcome.INVALID_INPUT,
@@ -187,12 +187,12 @@ public final class PhaseBalancer {
       PreparedBoard board, double limitPercent, List<MovesStep> rows, SearchBudget budget) {
     // Unbalance ≤ limit ⇔ every line within mean·(1 ± limit/100); the tolerance absorbs the decimal
     // limit.
-    double mean = board.total / 3.0;
+    double mean = board.total / (double) board.lines;
     double allowed = mean * limitPercent / 100.0;
     long lowest = (long) Math.ceil(mean - allowed - 1e-9);
     long highest = (long) Math.floor(mean + allowed + 1e-9);
     long[] now = board.loadsOf(board.currentPhase);
-    if (within(now, lowest, highest)) {
+    if (within(now, board.lines, lowest, highest)) {
       return new LimitAnswer(LimitVerdict.ALREADY_WITHIN, 0, board.currentPhase.clone());
     }
     int[] known = null;
@@ -241,9 +241,10 @@ public final class PhaseBalancer {
     return arrangement;
   }
 
-  private static boolean within(long[] loads, long lowest, long highest) {
-    for (long load : loads) {
-      if (load < lowest || load > highest) {
+  /** Whether each of the board's lines (the first {@code lines} loads) lies in the band. */
+  static boolean within(long[] loads, int lines, long lowest, long highest) {
+    for (int p = 0; p < lines; p++) {
+      if (loads[p] < lowest || loads[p] > highest) {
         return false;
       }
     }
@@ -283,7 +284,7 @@ public final class PhaseBalancer {
   }
 
   private MovesStep step(PreparedBoard board, int moves, int[] arrangement, boolean proved) {
-    PhaseCurrents after = PhaseCurrents.ofCentiamps(board.loadsOf(arrangement));
+    PhaseCurrents after = board.currentsOf(board.loadsOf(arrangement));
     return new MovesStep(
         MoveReducer.moves(board, arrangement),
         after,
@@ -319,8 +320,8 @@ public final class PhaseBalancer {
       long nodes,
       String heading) {
     PhaseCurrents before =
-        board.allPlaced() ? PhaseCurrents.ofCentiamps(board.loadsOf(board.currentPhase)) : null;
-    PhaseCurrents after = PhaseCurrents.ofCentiamps(board.loadsOf(arrangement));
+        board.allPlaced() ? board.currentsOf(board.loadsOf(board.currentPhase)) : null;
+    PhaseCurrents after = board.currentsOf(board.loadsOf(arrangement));
     List<CircuitMove> moves = PositionPlanner.plan(board, arrangement);
     double gapAmps = Math.max(0, PreparedBoard.centiamps(after.largestAmps()) - lowerBound) / 100.0;
     StringBuilder message = new StringBuilder();
@@ -377,7 +378,7 @@ public final class PhaseBalancer {
   }
 
   private BalanceResult nothingToMove(PreparedBoard board) {
-    PhaseCurrents now = PhaseCurrents.ofCentiamps(board.fixed);
+    PhaseCurrents now = board.currentsOf(board.fixed);
     return new BalanceResult(
         BalanceOutcome.NOTHING_TO_MOVE,
         board.problem.items().isEmpty()

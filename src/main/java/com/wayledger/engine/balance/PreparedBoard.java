@@ -48,6 +48,12 @@ final class PreparedBoard {
   final long total;
   final List<String> notes;
 
+  /**
+   * The lines balanced over: 3, or 2 on a split-phase board, whose third slot stays empty (no
+   * positions, no load) and takes no part in the mean.
+   */
+  final int lines;
+
   private PreparedBoard(
       BalanceProblem problem,
       BalanceItem[] movable,
@@ -61,6 +67,7 @@ final class PreparedBoard {
     this.fixed = fixed;
     this.capacity = capacity;
     this.notes = notes;
+    this.lines = problem.lines();
     this.demand = new long[movable.length];
     this.currentPhase = new int[movable.length];
     long sum = fixed[0] + fixed[1] + fixed[2];
@@ -79,6 +86,11 @@ final class PreparedBoard {
 
   int size() {
     return movable.length;
+  }
+
+  /** The currents of an arrangement's line loads, over the board's lines. */
+  PhaseCurrents currentsOf(long[] loads) {
+    return PhaseCurrents.ofCentiamps(loads, lines);
   }
 
   /** Every movable circuit has a current line, so "the board as it is now" exists. */
@@ -117,6 +129,11 @@ final class PreparedBoard {
   }
 
   long key(long a, long b, long c) {
+    if (lines == 2) {
+      // two lines: the deviation from the mean is |a − b| / 2, kept as |2a − total| = |a − b|
+      long max = Math.max(a, b);
+      return max * keyBase() + Math.abs(a - b);
+    }
     long max = Math.max(a, Math.max(b, c));
     long min = Math.min(a, Math.min(b, c));
     return max * keyBase() + Math.max(3 * max - total, total - 3 * min);
@@ -127,6 +144,10 @@ final class PreparedBoard {
    * least {@code mid}.
    */
   long keyBound(long max, long mid) {
+    if (lines == 2) {
+      // the other line carries the rest: total − max
+      return max * keyBase() + Math.max(0, 2 * max - total);
+    }
     long smallestUpper = total - max - mid;
     return max * keyBase() + Math.max(3 * max - total, Math.max(0, total - 3 * smallestUpper));
   }
@@ -147,6 +168,13 @@ final class PreparedBoard {
       return failed(
           BalanceOutcome.NOT_THREE_PHASE,
           "This is a single-phase board: every circuit is on the one line, so there is nothing to balance.");
+    }
+    if (problem.lines() != 2 && problem.lines() != 3) {
+      return failed(
+          BalanceOutcome.INVALID_INPUT,
+          "A board to balance has 2 lines (120/240 V split-phase) or 3; "
+              + problem.lines()
+              + " given.");
     }
     List<String> missingDemand = new ArrayList<>();
     List<String> unplacedLocked = new ArrayList<>();
@@ -175,6 +203,13 @@ final class PreparedBoard {
       }
       if (!item.movable() && item.currentPhase() == null) {
         unplacedLocked.add("'" + item.label() + "'");
+      }
+      if (problem.lines() == 2 && item.currentPhase() == Phase.L3) {
+        return failed(
+            BalanceOutcome.INVALID_INPUT,
+            "Circuit '"
+                + item.label()
+                + "' is on L3, which a two-line (split-phase) board does not have.");
       }
     }
     if (!missingDemand.isEmpty()) {
@@ -205,6 +240,13 @@ final class PreparedBoard {
                   + " of "
                   + amps
                   + " A is impossible; it must be zero or more.");
+        }
+        if (problem.lines() == 2 && entry.getKey() == Phase.L3 && amps > 0.0) {
+          return failed(
+              BalanceOutcome.INVALID_INPUT,
+              "Fixed load of "
+                  + amps
+                  + " A on L3, which a two-line (split-phase) board does not have.");
         }
         fixed[entry.getKey().ordinal()] += centiamps(amps);
       }
@@ -239,6 +281,10 @@ final class PreparedBoard {
     List<String> notes = new ArrayList<>();
     int[] capacity = new int[3];
     for (Phase phase : PHASES) {
+      if (phase.ordinal() >= problem.lines()) {
+        capacity[phase.ordinal()] = 0; // a split-phase board has no third line
+        continue;
+      }
       Integer given =
           problem.positionsAvailable() == null ? null : problem.positionsAvailable().get(phase);
       if (given != null) {

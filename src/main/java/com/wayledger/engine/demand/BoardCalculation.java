@@ -42,8 +42,7 @@ final class BoardCalculation {
   static BoardDemand evaluate(BoardSpec board, Context context) {
     double u0 = context.nominalVoltageVolts();
     DiversityMethod method = context.method();
-    SupplySystem system =
-        context.supply() == null ? SupplySystem.IEC_WYE : context.supply().system();
+    SupplySystem system = systemOf(board, context);
     int boardLines = system.lineCount(board.phases());
     List<String> notAssessed = new ArrayList<>();
     List<String> notes = new ArrayList<>(context.notes());
@@ -287,7 +286,6 @@ final class BoardCalculation {
                 0));
         continue;
       }
-      boolean threePole = position[c] == PhasePosition.THREE_POLE;
       double ownWatts = 0.0;
       double ownVars = 0.0;
       double demandWatts = 0.0;
@@ -303,14 +301,33 @@ final class BoardCalculation {
       double subBoardApparent = 0.0;
       BoardDemand child = subBoard[c];
       double perLineVolts = LinePhasors.voltAmperesPerAmp(system, position[c], u0);
-      // a three-pole feeder's Ib is its heaviest line, not the average of the three
+      // the sub-board's lines land on the lines the feeding position connects them to, in order
+      // (a 120/208 V panel on B–C of a 208Y/120 V one loads B and C), each with its own current
+      List<Phase> fed = position[c] == null ? List.of() : linesOf(position[c]);
+      boolean lineByLine = child != null && fed.size() > 1 && child.phases().size() == fed.size();
+      if (child != null && fed.size() > 1 && !lineByLine) {
+        notes.add(
+            "way "
+                + circuit.wayNumber()
+                + " feeds a board of "
+                + child.phases().size()
+                + " line(s) from "
+                + fed.size()
+                + " poles; its demand is taken as one load in that position, not line by line");
+      }
+      // a multi-pole feeder's Ib is its heaviest line, not the average of its lines
       Double heaviestLineAmps = null;
-      if (child != null && threePole && child.phases().size() == 3) {
+      if (lineByLine) {
         double k = child.coincidenceFactor();
+        double[] ownWatts3 = new double[3];
+        double[] ownVars3 = new double[3];
+        LinePhasors.add(system, position[c], designWatts[c], designVars[c], ownWatts3, ownVars3);
         double heaviest = 0.0;
-        for (PhaseDemand phase : child.phases()) {
-          double lineWatts = designWatts[c] / 3.0 + phase.demandWatts() * k;
-          double lineVars = designVars[c] / 3.0 + phase.demandVars() * k;
+        for (int j = 0; j < fed.size(); j++) {
+          PhaseDemand line = child.phases().get(j);
+          int to = fed.get(j).ordinal();
+          double lineWatts = ownWatts3[to] + line.demandWatts() * k;
+          double lineVars = ownVars3[to] + line.demandVars() * k;
           heaviest = Math.max(heaviest, Math.hypot(lineWatts, lineVars) / u0);
         }
         heaviestLineAmps = heaviest;
@@ -326,10 +343,11 @@ final class BoardCalculation {
         demandVars += childVars;
         designWatts[c] += childWatts;
         designVars[c] += childVars;
-        if (threePole && child.phases().size() == 3) {
-          for (PhaseDemand phase : child.phases()) {
-            phaseWatts[phase.phase().ordinal()] += phase.demandWatts() * k;
-            phaseVars[phase.phase().ordinal()] += phase.demandVars() * k;
+        if (lineByLine) {
+          for (int j = 0; j < fed.size(); j++) {
+            PhaseDemand line = child.phases().get(j);
+            phaseWatts[fed.get(j).ordinal()] += line.demandWatts() * k;
+            phaseVars[fed.get(j).ordinal()] += line.demandVars() * k;
           }
         } else {
           LinePhasors.add(system, position[c], childWatts, childVars, phaseWatts, phaseVars);
@@ -458,8 +476,7 @@ final class BoardCalculation {
               loadingPercent,
               Math.hypot(connectedLineWatts[k], connectedLineVars[k]) / u0));
     }
-    SupplySystem system =
-        context.supply() == null ? SupplySystem.IEC_WYE : context.supply().system();
+    SupplySystem system = systemOf(board, context);
     double neutral =
         boardLines >= 2
             ? LinePhasors.neutralCurrentAmps(system, boardLines, phaseWatts, phaseVars, u0)
@@ -528,7 +545,29 @@ final class BoardCalculation {
         busbar,
         supplyFuse,
         notAssessed,
-        notes);
+        notes,
+        system);
+  }
+
+  /** The board's own supply system, else the site's (the IEC wye when no supply is known). */
+  private static SupplySystem systemOf(BoardSpec board, Context context) {
+    return board.systemOn(
+        context.supply() == null ? SupplySystem.IEC_WYE : context.supply().system());
+  }
+
+  /**
+   * The parent's lines a position connects a sub-board's lines to, in the sub-board's line order: a
+   * three-pole position L1, L2, L3; a two-pole one its first line then its second; a single-pole
+   * one its line.
+   */
+  private static List<Phase> linesOf(PhasePosition position) {
+    if (position == PhasePosition.THREE_POLE) {
+      return List.of(Phase.values());
+    }
+    if (position.isLineToLine()) {
+      return List.of(position.fromLine(), position.toLine());
+    }
+    return List.of(position.phases().iterator().next());
   }
 
   private static PhasePosition effectivePosition(PhasePosition position, int boardLines) {

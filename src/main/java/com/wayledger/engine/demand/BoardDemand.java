@@ -1,6 +1,7 @@
 package com.wayledger.engine.demand;
 
 import com.wayledger.engine.Phase;
+import com.wayledger.engine.SupplySystem;
 import java.util.List;
 
 /**
@@ -34,6 +35,7 @@ import java.util.List;
  * @param notAssessed inputs missing, each saying what was left out of the figures; empty when
  *     complete
  * @param notes other facts about how the figures were made
+ * @param system the supply system the board is on (its line angles and line-to-line voltage)
  */
 public record BoardDemand(
     long boardId,
@@ -59,7 +61,8 @@ public record BoardDemand(
     RatingLoading busbar,
     RatingLoading supplyFuse,
     List<String> notAssessed,
-    List<String> notes) {
+    List<String> notes,
+    SupplySystem system) {
 
   public BoardDemand {
     circuits = List.copyOf(circuits);

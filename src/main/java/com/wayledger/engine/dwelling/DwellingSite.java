@@ -146,9 +146,11 @@ public final class DwellingSite {
    * neutral current, NEC 220.61). A rating in A is turned into VA at the voltage of its position:
    * U0 line to neutral, the line-to-line voltage for two poles, 3 × U0 for three. A circuit whose
    * position is not recorded is taken at the line-to-line voltage (the larger VA, the safe side)
-   * and counted on the neutral.
+   * and counted on the neutral. The board's own supply system, when it records one, gives the
+   * line-to-line voltage (208 V on a 120/208 V panel).
    */
-  static List<ApplianceLoad> loadsOf(BoardSpec board, double u0, SupplySystem system) {
+  static List<ApplianceLoad> loadsOf(BoardSpec board, double u0, SupplySystem siteSystem) {
+    SupplySystem system = board.systemOn(siteSystem);
     List<ApplianceLoad> loads = new ArrayList<>();
     double lineVolts = u0 <= NORTH_AMERICAN_U0_LIMIT_VOLTS ? 2.0 * u0 : u0;
     for (CircuitSpec circuit : board.circuits()) {

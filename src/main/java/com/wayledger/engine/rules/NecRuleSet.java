@@ -63,7 +63,10 @@ final class NecRuleSet implements RuleSet {
   @Override
   public List<SupplySystem> supplySystems() {
     return List.of(
-        SupplySystem.SPLIT_PHASE_120_240, SupplySystem.WYE_208Y_120, SupplySystem.WYE_480Y_277);
+        SupplySystem.SPLIT_PHASE_120_240,
+        SupplySystem.WYE_208Y_120,
+        SupplySystem.WYE_480Y_277,
+        SupplySystem.SINGLE_PHASE_120_208);
   }
 
   @Override
@@ -201,7 +204,8 @@ final class NecRuleSet implements RuleSet {
         missing = "design current of " + at.reference();
         break;
       }
-      boolean threeLines = site.supply().system().lineCount(at.phases()) == 3;
+      SupplySystem atSystem = site.systemOf(at);
+      boolean threeLines = atSystem.lineCount(at.phases()) == 3;
       // unbalance is not credited: a two-wire drop at the largest line current (the neutral taken
       // to carry it as well), or three balanced lines at it
       VoltageDrop.Run run =
@@ -210,7 +214,7 @@ final class NecRuleSet implements RuleSet {
               amps,
               null,
               threeLines,
-              threeLines ? site.supply().system().lineToLineFactor() * u0 : u0);
+              threeLines ? atSystem.lineToLineFactor() * u0 : u0);
       if (!run.isKnown()) {
         missing = run.missing() + " of the feeder to " + at.reference();
         break;
@@ -220,7 +224,7 @@ final class NecRuleSet implements RuleSet {
       at = at.parentBoardId() == null ? null : byId.get(at.parentBoardId());
     }
     return new CircuitContext(
-        site.supply().system(),
+        board == null ? site.supply().system() : site.systemOf(board),
         u0,
         board != null && dwellingBoardIds.contains(board.id()),
         fault,

@@ -11,6 +11,7 @@ import com.wayledger.engine.LoadCategory;
 import com.wayledger.engine.Phase;
 import com.wayledger.engine.PhasePosition;
 import com.wayledger.engine.RatingUnit;
+import com.wayledger.engine.SiteSpec;
 import com.wayledger.engine.SupplySpec;
 import com.wayledger.engine.SupplySystem;
 import java.util.ArrayList;
@@ -51,12 +52,14 @@ class LinePhasorPropertyTests {
             SupplySystem.SPLIT_PHASE_120_240,
             SupplySystem.WYE_208Y_120,
             SupplySystem.WYE_480Y_277,
-            SupplySystem.IEC_WYE)) {
+            SupplySystem.IEC_WYE,
+            SupplySystem.SINGLE_PHASE_120_208)) {
       double u0 = system.lineToNeutralVolts() == null ? 230.0 : system.lineToNeutralVolts();
-      int phases = system.isSplitPhase() ? 1 : 3;
+      boolean twoLines = ANGLES.get(system).length == 2;
+      int phases = twoLines ? 1 : 3;
       SupplySpec supply =
           new SupplySpec(EarthingSystem.TN_C_S, u0, phases, 60.0, null, null, null, system);
-      PhasePosition[] choices = system.isSplitPhase() ? SPLIT : WYE;
+      PhasePosition[] choices = twoLines ? SPLIT : WYE;
       int count = 1 + random.nextInt(12);
       List<CircuitSpec> circuits = new ArrayList<>();
       Complex[] expected = {Complex.ZERO, Complex.ZERO, Complex.ZERO};
@@ -87,8 +90,76 @@ class LinePhasorPropertyTests {
     }
   }
 
+  /**
+   * A 120/208 V single-phase panel fed from two poles of a random 208Y/120 V way: each parent line
+   * carries the currents the panel's loads draw at the parent line's own voltage (the panel's A on
+   * the way's first line, B on its second), summed here load by load, not line by line as the
+   * engine does.
+   */
+  @ParameterizedTest(name = "seed {0}")
+  @ValueSource(longs = {1, 2, 3, 5, 8, 13, 21, 34, 55, 89, 144, 233})
+  void aPanelOnTwoPolesOfAWyeLoadsTheLinesItIsConnectedTo(long seed) {
+    Random random = new Random(seed);
+    double u0 = 120.0;
+    SupplySpec supply =
+        new SupplySpec(
+            EarthingSystem.TN_C_S, u0, 3, 60.0, null, null, null, SupplySystem.WYE_208Y_120);
+    PhasePosition feed =
+        List.of(PhasePosition.L1_L2, PhasePosition.L2_L3, PhasePosition.L3_L1)
+            .get(random.nextInt(3));
+    Phase[] mapped = {feed.fromLine(), feed.toLine()};
+    Complex[] expected = {Complex.ZERO, Complex.ZERO, Complex.ZERO};
+    List<CircuitSpec> panelCircuits = new ArrayList<>();
+    int count = 1 + random.nextInt(10);
+    for (int c = 0; c < count; c++) {
+      PhasePosition position = SPLIT[random.nextInt(SPLIT.length)];
+      double watts = 100.0 + random.nextDouble() * 5000.0;
+      double pf = 0.6 + random.nextDouble() * 0.4;
+      panelCircuits.add(
+          Fixtures.circuit(
+              c + 1, c + 1, position, load(LoadCategory.OTHER, 1, watts, RatingUnit.W, pf)));
+      Complex s = new Complex(watts, watts / pf * Math.sqrt(1 - pf * pf));
+      // the same load seen from the wye: between (or on) the parent lines the panel's lines are
+      PhasePosition onParent =
+          position.isLineToLine() ? feed : PhasePosition.on(mapped[position.ordinal()]);
+      addCurrents(expected, SupplySystem.WYE_208Y_120, u0, onParent, s);
+    }
+    BoardSpec panel =
+        Fixtures.board(2, 1, 1L, DiversityMethods.NONE, 125.0, panelCircuits)
+            .withSupplySystem(SupplySystem.SINGLE_PHASE_120_208);
+    BoardSpec house =
+        Fixtures.board(
+            1, 3, null, DiversityMethods.NONE, 400.0, List.of(Fixtures.feeder(100, 1, feed, 2)));
+    SiteSpec site =
+        new SiteSpec(1, "site", supply, DiversityMethods.NONE, List.of(house, panel), "NEC");
+
+    BoardDemand demand = DemandEngine.evaluate(site, DiversityMethods.builtIn()).board(1);
+
+    String context = "seed " + seed + ", panel on " + feed + ", " + count + " circuits";
+    for (PhaseDemand line : demand.phases()) {
+      assertThat(line.currentAmps())
+          .as("parent current on %s (%s)", line.phase(), context)
+          .isCloseTo(expected[line.phase().ordinal()].abs(), within(1e-6));
+    }
+    assertThat(demand.neutralCurrentAmps())
+        .as("parent neutral (%s)", context)
+        .isCloseTo(expected[0].add(expected[1]).add(expected[2]).abs(), within(1e-6));
+  }
+
+  /**
+   * Line angles typed from the systems' definitions (not read from the engine): 120/240 V A 0°, B
+   * 180°; 120/208 V A 0°, B −120° (two lines of the wye); wye A 0°, B −120°, C +120°.
+   */
+  private static final java.util.Map<SupplySystem, double[]> ANGLES =
+      java.util.Map.of(
+          SupplySystem.SPLIT_PHASE_120_240, new double[] {0.0, 180.0},
+          SupplySystem.SINGLE_PHASE_120_208, new double[] {0.0, -120.0},
+          SupplySystem.WYE_208Y_120, new double[] {0.0, -120.0, 120.0},
+          SupplySystem.WYE_480Y_277, new double[] {0.0, -120.0, 120.0},
+          SupplySystem.IEC_WYE, new double[] {0.0, -120.0, 120.0});
+
   private static Complex voltage(SupplySystem system, double u0, Phase line) {
-    return ComplexPolar.of(u0, system.angleDegrees(line));
+    return ComplexPolar.of(u0, ANGLES.get(system)[line.ordinal()]);
   }
 
   private static void addCurrents(
