@@ -111,6 +111,11 @@ public class Circuit {
   @Column(name = "device_fault_interrupter")
   private FaultInterrupter faultInterrupter;
 
+  /** The conduit the cable runs in (NEC Chapter 9 Table 9); null when not recorded (V25). */
+  @Enumerated(EnumType.STRING)
+  @Column(name = "cable_conduit")
+  private com.wayledger.engine.Conduit conduit;
+
   @Version private long version;
 
   // Load lines carry their own versions: adding or editing one must not move the circuit's.
@@ -141,6 +146,7 @@ public class Circuit {
     device = status == WayStatus.EMPTY ? null : form.deviceDetails();
     faultInterrupter = status == WayStatus.EMPTY ? null : form.deviceFaultInterrupter();
     cable = status == WayStatus.IN_USE ? form.cableDetails() : null;
+    conduit = status == WayStatus.IN_USE ? form.cableConduit() : null;
     measuredLoopImpedanceOhms = form.measuredLoopImpedanceOhms();
   }
 
@@ -163,6 +169,11 @@ public class Circuit {
   /** Sets the line conductors' size and metal (a proposal's conductor), keeping the rest. */
   void replaceConductor(Double lineCsaSquareMillimetres, com.wayledger.engine.ConductorMaterial m) {
     cable = CableDetails.withConductor(cable, lineCsaSquareMillimetres, m);
+  }
+
+  /** The conduit the cable runs in; null when not recorded. */
+  public com.wayledger.engine.Conduit getConduit() {
+    return conduit;
   }
 
   /** The device's GFCI/AFCI function; null for none. */

@@ -23,6 +23,9 @@ import org.springframework.transaction.annotation.Transactional;
 @org.springframework.stereotype.Service
 public class DwellingService {
 
+  /** The key of a dwelling entry's snapshots in the change log. */
+  public static final String LOG_KEY = "dwelling";
+
   /** Summary of a dwelling entry of the change log. */
   record DwellingSnapshot(
       Double floorAreaSquareFeet,
@@ -43,6 +46,21 @@ public class DwellingService {
           + (optionalMethod ? "yes" : "no")
           + ", addition "
           + addition;
+    }
+
+    /**
+     * The log's snapshot of the inputs: {@code {"dwelling": {...}}}, the key telling a replay that
+     * the entry is about the dwelling inputs and not the board header (see {@code
+     * loadlog.HistoryReplay}).
+     */
+    java.util.Map<String, Object> logged() {
+      java.util.Map<String, Object> inputs = new java.util.LinkedHashMap<>();
+      inputs.put("floorAreaSquareFeet", floorAreaSquareFeet);
+      inputs.put("smallApplianceCircuits", smallApplianceCircuits);
+      inputs.put("laundryCircuits", laundryCircuits);
+      inputs.put("optionalMethod", optionalMethod);
+      inputs.put("addition", addition);
+      return java.util.Map.of(LOG_KEY, inputs);
     }
 
     static DwellingSnapshot of(DwellingRecord record) {
@@ -119,9 +137,9 @@ public class DwellingService {
                   + "”: dwelling data "
                   + (before == null ? "added: " : "changed from " + before.text() + " to ")
                   + after.text(),
-              // no snapshots: the log's board snapshots are board headers (history replays them)
-              null,
-              null,
+              // the inputs under their own key, so the history replays them beside the header
+              before == null ? null : before.logged(),
+              after.logged(),
               form.reason()));
     }
     return saved;
@@ -148,7 +166,7 @@ public class DwellingService {
                           + "”: dwelling data removed (was "
                           + before.text()
                           + ")",
-                      null,
+                      before.logged(),
                       null,
                       reason));
             });

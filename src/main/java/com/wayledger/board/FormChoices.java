@@ -26,6 +26,7 @@ final class FormChoices {
     model.addAttribute("tripCurves", TripCurve.values());
     model.addAttribute("rcdTypes", RcdType.values());
     model.addAttribute("faultInterrupters", com.wayledger.engine.FaultInterrupter.values());
+    model.addAttribute("conduits", com.wayledger.engine.Conduit.values());
     model.addAttribute("materials", ConductorMaterial.values());
     model.addAttribute("insulations", Insulation.values());
     model.addAttribute("installationMethods", InstallationMethod.values());

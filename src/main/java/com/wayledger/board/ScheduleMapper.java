@@ -219,14 +219,21 @@ public final class ScheduleMapper {
         circuit.getDevice() == null || circuit.getDevice().toSpec(poles) == null
             ? null
             : circuit.getDevice().toSpec(poles).withFaultInterrupter(circuit.getFaultInterrupter()),
-        withDefaults
-            ? Inheritance.effectiveCable(circuit.getCable(), board)
-            : circuit.getCable() == null ? null : circuit.getCable().toSpec(),
+        inConduit(
+            withDefaults
+                ? Inheritance.effectiveCable(circuit.getCable(), board)
+                : circuit.getCable() == null ? null : circuit.getCable().toSpec(),
+            circuit.getConduit()),
         loads,
         feedsBoardId,
         circuit.getMeasuredLoopImpedanceOhms(),
         circuit.isRingFinal(),
         withDefaults ? Inheritance.effectiveLocation(circuit, board) : circuit.getLocation());
+  }
+
+  private static com.wayledger.engine.CableSpec inConduit(
+      com.wayledger.engine.CableSpec cable, com.wayledger.engine.Conduit conduit) {
+    return cable == null || conduit == null ? cable : cable.inConduit(conduit);
   }
 
   private static LoadSpec toSpec(LoadItem load, Double startUpMultiple) {

@@ -653,6 +653,11 @@ public class ScheduleService {
             "deviceFaultInterrupter", "circuit.device.faultInterrupterBreakerOnly");
       }
     }
+    if (form.cableConduit() != null
+        && form.status() == WayStatus.IN_USE
+        && !rules.usesAwgAndFeet()) {
+      throw new RuleViolation("cableConduit", "circuit.cable.conduitNecOnly", rules.title());
+    }
     MccbSettingRules.check(
         form.deviceKind(),
         form.deviceRatingAmps(),

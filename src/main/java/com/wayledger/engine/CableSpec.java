@@ -14,6 +14,7 @@ package com.wayledger.engine;
  * @param groupedCircuits number of circuits grouped together, this one included
  * @param thermalInsulationMillimetres length of the cable surrounded by thermal insulation, mm (0 =
  *     none)
+ * @param conduit the conduit the conductors run in (NEC Chapter 9 Table 9); null when not recorded
  */
 public record CableSpec(
     Double lineCsaSquareMillimetres,
@@ -24,4 +25,45 @@ public record CableSpec(
     InstallationMethod installationMethod,
     Double ambientCelsius,
     Integer groupedCircuits,
-    Integer thermalInsulationMillimetres) {}
+    Integer thermalInsulationMillimetres,
+    Conduit conduit) {
+
+  /** A cable whose conduit is not recorded: the argument list from before conduits. */
+  public CableSpec(
+      Double lineCsaSquareMillimetres,
+      Double protectiveCsaSquareMillimetres,
+      ConductorMaterial material,
+      Insulation insulation,
+      Double lengthMetres,
+      InstallationMethod installationMethod,
+      Double ambientCelsius,
+      Integer groupedCircuits,
+      Integer thermalInsulationMillimetres) {
+    this(
+        lineCsaSquareMillimetres,
+        protectiveCsaSquareMillimetres,
+        material,
+        insulation,
+        lengthMetres,
+        installationMethod,
+        ambientCelsius,
+        groupedCircuits,
+        thermalInsulationMillimetres,
+        null);
+  }
+
+  /** The same cable in another conduit (null: not recorded). */
+  public CableSpec inConduit(Conduit newConduit) {
+    return new CableSpec(
+        lineCsaSquareMillimetres,
+        protectiveCsaSquareMillimetres,
+        material,
+        insulation,
+        lengthMetres,
+        installationMethod,
+        ambientCelsius,
+        groupedCircuits,
+        thermalInsulationMillimetres,
+        newConduit);
+  }
+}

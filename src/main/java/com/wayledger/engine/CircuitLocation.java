@@ -3,11 +3,12 @@ package com.wayledger.engine;
 /**
  * Where a circuit's equipment is, as far as the location rules care. Under the IEC set some
  * locations need 30 mA additional protection on every circuit whatever it feeds (see {@code
- * ResidualCurrentRules}); under the NEC set the dwelling locations of 210.8(A) and 210.12 decide
- * GFCI and AFCI protection (see {@code engine.nec.DwellingProtection}). Each rule set accepts only
- * its own locations ({@code RuleSet.circuitLocations()}); indoors and outdoors belong to both. A
- * circuit whose location is not recorded carries none (null). Constant names fit the 20-character
- * column.
+ * ResidualCurrentRules}); under the NEC set the locations of 210.8(A) (dwelling units), 210.8(B)
+ * (other occupancies) and 210.12 decide GFCI and AFCI protection (see {@code
+ * engine.nec.DwellingProtection} and {@code engine.nec.OtherOccupancyGroundFault}). Each rule set
+ * accepts only its own locations ({@code RuleSet.circuitLocations()}); indoors and outdoors belong
+ * to both. A circuit whose location is not recorded carries none (null). Constant names fit the
+ * 20-character column.
  */
 public enum CircuitLocation {
   /** Indoors, in no location of the special-location parts of the wiring rules. */
@@ -47,5 +48,18 @@ public enum CircuitLocation {
   /** A bedroom (NEC set). */
   BEDROOM,
   /** A closet or hallway (NEC set). */
-  CLOSET_OR_HALLWAY
+  CLOSET_OR_HALLWAY,
+  /** A rooftop (NEC set; 210.8(B)(3)). */
+  ROOFTOP,
+  /** An indoor damp or wet location (NEC set; 210.8(A)(11), 210.8(B)(6)). */
+  DAMP_OR_WET_INDOORS,
+  /** A locker room with associated showering facilities (NEC set, other occupancies). */
+  LOCKER_ROOM,
+  /** A service bay or similar area where vehicles are serviced (NEC set, other occupancies). */
+  SERVICE_BAY,
+  /**
+   * An area other than a kitchen with a sink and permanent provisions for food preparation or
+   * cooking, such as a break room (NEC set, other occupancies).
+   */
+  FOOD_PREPARATION
 }

@@ -107,6 +107,7 @@ public final class CsvWriter {
     cells[LOCATION.ordinal()] = name(c.location());
     cells[CONNECTION.ordinal()] = Codes.connection(c.position());
     cells[FAULT_INTERRUPTER.ordinal()] = name(c.deviceFaultInterrupter());
+    cells[CONDUIT.ordinal()] = name(c.cableConduit());
     if (l != null) {
       cells[LOAD.ordinal()] = CellText.forCsv(l.description());
       cells[CATEGORY.ordinal()] = name(l.category());

@@ -239,6 +239,9 @@ public enum ImportField {
   MOTOR_HP(
       ScheduleColumn.MOTOR_HP,
       List.of("motor hp", "hp", "horsepower", "motor horsepower", "motor size hp")),
+  CONDUIT(
+      ScheduleColumn.CONDUIT,
+      List.of("conduit", "conduit type", "raceway", "raceway type", "conduit material")),
   DEVICE_SUMMARY(
       null,
       List.of(

@@ -493,6 +493,7 @@ public final class RowReader {
             null,
             cells.choice(LOCATION, CircuitLocation.class, problems),
             cells.choice(FAULT_INTERRUPTER, FaultInterrupter.class, problems));
+    form = form.withCableConduit(cells.conduit(problems));
     for (ConstraintViolation<CircuitForm> violation : validator.validate(form)) {
       ImportField field =
           CIRCUIT_PROPERTIES.getOrDefault(violation.getPropertyPath().toString(), CIRCUIT);
@@ -778,6 +779,22 @@ public final class RowReader {
         problems.add(
             new ImportPlan.Problem(
                 field, "import.cell.unknownChoice", new Object[] {text, choices(type)}));
+      }
+      return value;
+    }
+
+    /** The conduit: its words with or without "conduit" ("Steel", "aluminum conduit"). */
+    com.wayledger.engine.Conduit conduit(List<ImportPlan.Problem> problems) {
+      String text = text(CONDUIT);
+      if (text.isEmpty()) {
+        return null;
+      }
+      com.wayledger.engine.Conduit value =
+          Codes.parseEnum(
+              com.wayledger.engine.Conduit.class,
+              text.replaceAll("(?i)\\s*(conduit|raceway)\\s*$", ""));
+      if (value == null) {
+        value = choice(CONDUIT, com.wayledger.engine.Conduit.class, problems);
       }
       return value;
     }

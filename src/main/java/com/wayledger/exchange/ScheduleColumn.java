@@ -71,7 +71,9 @@ public enum ScheduleColumn {
    */
   FAULT_INTERRUPTER("Fault interrupter", true),
   /** A motor load's nameplate horsepower (NEC Tables 430.248/430.250); blank for other loads. */
-  MOTOR_HP("Motor hp", true);
+  MOTOR_HP("Motor hp", true),
+  /** The conduit an NEC circuit's conductors run in (Chapter 9 Table 9 voltage drop). */
+  CONDUIT("Conduit", true);
 
   /** How a three-pole position is written in the Line column. */
   public static final String THREE_POLE_CODE = "3P";

@@ -31,6 +31,7 @@ final class ScheduleMatcher {
           Map.entry("position", ImportField.LINE),
           Map.entry("location", ImportField.LOCATION),
           Map.entry("deviceFaultInterrupter", ImportField.FAULT_INTERRUPTER),
+          Map.entry("cableConduit", ImportField.CONDUIT),
           Map.entry("description", ImportField.CIRCUIT),
           Map.entry("status", ImportField.STATE),
           Map.entry("lockedForBalancing", ImportField.KEEP_LINE),

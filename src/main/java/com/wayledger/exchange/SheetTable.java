@@ -67,8 +67,10 @@ public record SheetTable(
     }
     // exports written before the circuit key and record version columns end at Findings; those
     // written before the connection column at the record version; those written before the fault
-    // interrupter and motor horsepower columns at the connection
+    // interrupter and motor horsepower columns at the connection; those written before the conduit
+    // column at the motor horsepower
     return headers.size() == ScheduleColumn.values().length
+        || headers.size() == ScheduleColumn.CONDUIT.ordinal()
         || headers.size() == ScheduleColumn.FAULT_INTERRUPTER.ordinal()
         || headers.size() == ScheduleColumn.CONNECTION.ordinal()
         || headers.size() == ScheduleColumn.CIRCUIT_KEY.ordinal();

@@ -473,6 +473,7 @@ public final class WorkbookWriter {
     text(row, LOCATION.ordinal(), name(c.location()), s.text, w);
     text(row, CONNECTION.ordinal(), Codes.connection(c.position()), s.text, w);
     text(row, FAULT_INTERRUPTER.ordinal(), name(c.deviceFaultInterrupter()), s.text, w);
+    text(row, CONDUIT.ordinal(), name(c.cableConduit()), s.text, w);
   }
 
   /**

@@ -27,7 +27,10 @@ import java.util.Set;
  * drops it. The board is evaluated on its own (sub-boards' demand is not carried onto the ways
  * feeding them), with today's supply and diversity catalogue: the log records the schedule, not the
  * site's supply. A dwelling board's NEC dwelling inputs (floor area, small-appliance and laundry
- * circuits) are today's at every point: the NEC dwelling methods read them as they now stand.
+ * circuits) are replayed from their own entries (snapshots under a "dwelling" key): before the
+ * first such entry they are that entry's "before" (none, when it added them). A log whose dwelling
+ * entries carry no snapshots (written before they did) says nothing of them: today's are taken at
+ * every point.
  */
 final class HistoryReplay {
 
@@ -54,7 +57,7 @@ final class HistoryReplay {
 
   /**
    * @param dwelling the board's NEC dwelling inputs as they now stand; {@code UNKNOWN} for a board
-   *     without them
+   *     without them; used where the log has no dwelling snapshots
    */
   static List<HistoryPoint> replay(
       List<ChangeLogEntry> entries,
@@ -67,8 +70,15 @@ final class HistoryReplay {
     Map<Long, CircuitSpec> circuits = new LinkedHashMap<>();
     Set<Long> seen = new HashSet<>();
     boolean boardSeen = false;
+    com.wayledger.engine.demand.DwellingParameters inputs = dwelling;
+    boolean dwellingSeen = false;
     for (ChangeLogEntry entry : entries) {
-      if (isManyCircuits(entry)) {
+      if (isDwelling(entry)) {
+        if (!dwellingSeen) {
+          inputs = Snapshots.dwelling(entry.before());
+          dwellingSeen = true;
+        }
+      } else if (isManyCircuits(entry)) {
         for (CircuitSpec moved : Snapshots.circuits(entry.before())) {
           if (seen.add(moved.id())) {
             circuits.put(moved.id(), moved);
@@ -94,7 +104,9 @@ final class HistoryReplay {
     List<HistoryPoint> points = new ArrayList<>();
     for (ChangeLogEntry entry : entries) {
       boolean removed = false;
-      if (isManyCircuits(entry)) {
+      if (isDwelling(entry)) {
+        inputs = Snapshots.dwelling(entry.after());
+      } else if (isManyCircuits(entry)) {
         List<CircuitSpec> after = Snapshots.circuits(entry.after());
         Set<Long> kept = new HashSet<>();
         after.forEach(circuit -> kept.add(circuit.id()));
@@ -123,7 +135,7 @@ final class HistoryReplay {
                   supply,
                   methods,
                   siteDefaultMethodKey,
-                  dwelling);
+                  inputs);
       points.add(
           new HistoryPoint(
               entry.id(),
@@ -137,6 +149,11 @@ final class HistoryReplay {
               entry.isBackDated()));
     }
     return points;
+  }
+
+  /** An entry about the board's dwelling inputs, with their snapshots. */
+  private static boolean isDwelling(ChangeLogEntry entry) {
+    return entry.circuitId() == null && Snapshots.isDwelling(entry.before(), entry.after());
   }
 
   /**

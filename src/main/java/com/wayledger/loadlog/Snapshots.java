@@ -2,7 +2,9 @@ package com.wayledger.loadlog;
 
 import com.wayledger.engine.BoardSpec;
 import com.wayledger.engine.CircuitSpec;
+import com.wayledger.engine.demand.DwellingParameters;
 import tools.jackson.databind.DeserializationFeature;
+import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.json.JsonMapper;
 
 /**
@@ -29,6 +31,44 @@ final class Snapshots {
     return json == null
         ? java.util.List.of()
         : java.util.List.of(MAPPER.readValue(json, CircuitSpec[].class));
+  }
+
+  /**
+   * Whether an entry's snapshots are a board's NEC dwelling inputs ({@code {"dwelling": …}}, see
+   * {@code board.DwellingService}) and not its header.
+   */
+  static boolean isDwelling(String before, String after) {
+    return hasDwellingKey(before) || hasDwellingKey(after);
+  }
+
+  private static boolean hasDwellingKey(String json) {
+    return json != null && MAPPER.readTree(json).has(com.wayledger.board.DwellingService.LOG_KEY);
+  }
+
+  /** The dwelling inputs in a dwelling entry's snapshot; {@code UNKNOWN} for none (removed). */
+  static DwellingParameters dwelling(String json) {
+    if (json == null) {
+      return DwellingParameters.UNKNOWN;
+    }
+    JsonNode inputs = MAPPER.readTree(json).get(com.wayledger.board.DwellingService.LOG_KEY);
+    if (inputs == null || inputs.isNull()) {
+      return DwellingParameters.UNKNOWN;
+    }
+    return new DwellingParameters(
+        number(inputs, "floorAreaSquareFeet") == null
+            ? null
+            : number(inputs, "floorAreaSquareFeet").doubleValue(),
+        number(inputs, "smallApplianceCircuits") == null
+            ? null
+            : number(inputs, "smallApplianceCircuits").intValue(),
+        number(inputs, "laundryCircuits") == null
+            ? null
+            : number(inputs, "laundryCircuits").intValue());
+  }
+
+  private static Number number(JsonNode node, String field) {
+    JsonNode value = node.get(field);
+    return value == null || value.isNull() ? null : value.numberValue();
   }
 
   static BoardSpec board(String json) {

@@ -31,6 +31,9 @@ class OpenApiDescription {
                         + " submainCpcSize and submainLengthFeet; elsewhere cableLineCsa/cableCpcCsa in mm² and"
                         + " cableLengthMetres (submain… alike). A field in the other units is refused with 422"
                         + " naming it and the field to send instead; a size that is no NEC size is refused too."
+                        + " NEC circuits also take cableConduit (PVC, ALUMINUM or STEEL: the Chapter 9 Table 9"
+                        + " column of the voltage drop; omitted: the conduit of the highest impedance is taken and"
+                        + " the finding says so); a site under another rule set refuses it with 422."
                         + " Caution: figures assist a competent person; local wiring"
                         + " regulations and the current edition of the relevant standard govern; electrical work must be"
                         + " designed, done and certified by qualified people.")

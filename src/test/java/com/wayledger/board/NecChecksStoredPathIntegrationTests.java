@@ -63,23 +63,7 @@ class NecChecksStoredPathIntegrationTests {
   }
 
   private long board(long siteId) throws Exception {
-    mvc.perform(
-            editor(post("/sites/{id}/boards", siteId))
-                .param("reference", "LP-1")
-                .param("phases", "1")
-                .param("wayCount", "30")
-                .param("incomerKind", "MCCB")
-                .param("incomerRatingAmps", "200")
-                .param("incomerPoles", "2")
-                .param("incomerBreakingCapacityKiloAmps", "22")
-                .param("unbalanceLimitPercent", "20")
-                .param("coincidenceFactor", "1"))
-        .andExpect(status().is3xxRedirection());
-    long board =
-        jdbc.sql("SELECT id FROM board WHERE site_id = ? AND reference = 'LP-1'")
-            .param(siteId)
-            .query(Long.class)
-            .single();
+    long board = panel(siteId, "LP-1");
     mvc.perform(
             editor(post("/boards/{id}/dwelling", board))
                 .param("floorArea", "1200")
@@ -90,6 +74,27 @@ class NecChecksStoredPathIntegrationTests {
                 .param("addition", "NONE"))
         .andExpect(status().is3xxRedirection());
     return board;
+  }
+
+  /** A panelboard with no dwelling data: not a dwelling unit's. */
+  private long panel(long siteId, String reference) throws Exception {
+    mvc.perform(
+            editor(post("/sites/{id}/boards", siteId))
+                .param("reference", reference)
+                .param("phases", "1")
+                .param("wayCount", "30")
+                .param("incomerKind", "MCCB")
+                .param("incomerRatingAmps", "200")
+                .param("incomerPoles", "2")
+                .param("incomerBreakingCapacityKiloAmps", "22")
+                .param("unbalanceLimitPercent", "20")
+                .param("coincidenceFactor", "1"))
+        .andExpect(status().is3xxRedirection());
+    return jdbc.sql("SELECT id FROM board WHERE site_id = ? AND reference = ?")
+        .param(siteId)
+        .param(reference)
+        .query(Long.class)
+        .single();
   }
 
   private MockHttpServletRequestBuilder circuit(
@@ -272,5 +277,60 @@ class NecChecksStoredPathIntegrationTests {
                 .query(Long.class)
                 .single())
         .isZero();
+  }
+
+  @Test
+  void rooftopReceptaclesOnAPanelThatIsNoDwellingsNeedGfciUnder210_8B() throws Exception {
+    // NEC 210.8(B)(3) rooftops (2020, from memory): a 120 V 20 A receptacle circuit
+    long panel = panel(site(), "HP-1");
+    mvc.perform(
+            circuit(
+                panel,
+                1,
+                "L1",
+                "Roof receptacles",
+                "ROOFTOP",
+                20,
+                1,
+                ConductorSize.AWG_12,
+                "SOCKET_OUTLETS",
+                360))
+        .andExpect(status().is3xxRedirection());
+    Finding gfci =
+        of(
+            findings(panel, circuitId(panel, "Roof receptacles")),
+            CheckKind.GROUND_FAULT_PROTECTION);
+    assertThat(gfci.verdict()).as(gfci.summary()).isEqualTo(Verdict.WARNING);
+    assertThat(gfci.reference()).contains("210.8(B)(3)");
+  }
+
+  @Test
+  void aRecordedConduitReachesTheVoltageDropFindingAndTheApi() throws Exception {
+    long board = board(site());
+    mvc.perform(
+            circuit(
+                    board,
+                    7,
+                    "L1",
+                    "Shed feed",
+                    "OUTDOORS",
+                    20,
+                    1,
+                    ConductorSize.AWG_12,
+                    "LIGHTING",
+                    1200)
+                .param("cableConduit", "PVC"))
+        .andExpect(status().is3xxRedirection());
+    long id = circuitId(board, "Shed feed");
+    Finding drop = of(findings(board, id), CheckKind.BRANCH_VOLTAGE_DROP);
+    assertThat(drop.summary()).contains("PVC conduit (recorded)");
+    mvc.perform(get("/api/circuits/{id}", id).with(user("vi").roles("VIEWER")))
+        .andExpect(status().isOk())
+        .andExpect(content().string(Matchers.containsString("\"cableConduit\":\"PVC\"")));
+    // the circuit's editor offers the select on an NEC panelboard, the recorded one chosen
+    mvc.perform(get("/circuits/{id}/edit", id).with(user("ed").roles("EDITOR")))
+        .andExpect(status().isOk())
+        .andExpect(content().string(Matchers.containsString("name=\"cableConduit\"")))
+        .andExpect(content().string(Matchers.containsString("PVC conduit")));
   }
 }

@@ -39,6 +39,7 @@ class NecDwellingStoredPathIntegrationTests {
   @Autowired MockMvc mvc;
   @Autowired AnalysisService analysis;
   @Autowired JdbcClient jdbc;
+  @Autowired com.wayledger.loadlog.HistoryService history;
 
   private MockHttpServletRequestBuilder editor(MockHttpServletRequestBuilder request) {
     return request.with(user("ed").roles("EDITOR")).with(csrf());
@@ -390,5 +391,32 @@ class NecDwellingStoredPathIntegrationTests {
                 .query(Long.class)
                 .single())
         .isZero();
+  }
+
+  @Test
+  void theHistoryReplaysTheDwellingInputsAsTheyWereAtEachChange() throws Exception {
+    // Annex D D1(a) (flylib): 1,500 ft² gives 18,600 VA. The same house recorded later as 3,000
+    // ft²:
+    // 220.12 3 VA/ft² = 9,000 + 3,000 small appliance + 1,500 laundry = 13,500 VA; 220.42 first
+    // 3,000 VA at 100 %, the rest at 35 % = 6,675 VA; + 8,000 VA range (Table 220.55 col. C,
+    // 12 kW) + 5,500 VA dryer = 20,175 VA
+    long board = exampleD1a(site(), "nec-220-standard-dwelling");
+    dwelling(board, "3000", "FT2", 2, 1, false);
+
+    var points =
+        history.points(board).stream().filter(p -> p.summary().contains("dwelling data")).toList();
+    assertThat(points).as("the two dwelling entries").hasSize(2);
+    double earlier = total(points.get(0).phaseCurrentsAmps());
+    double later = total(points.get(1).phaseCurrentsAmps());
+    assertThat(later / earlier)
+        .as("replayed demand at 3,000 ft² over that at 1,500 ft² (the earlier date)")
+        .isCloseTo(20_175.0 / 18_600.0, within(1e-6));
+    // the latest point is today's analysis: one figure
+    double today = analysis.ofBoard(board).boardDemand(board).demandVoltAmperes();
+    assertThat(today).isCloseTo(20_175.0, within(1e-6));
+  }
+
+  private static double total(java.util.Map<com.wayledger.engine.Phase, Double> currents) {
+    return currents.values().stream().mapToDouble(Double::doubleValue).sum();
   }
 }

@@ -203,11 +203,18 @@ class NecDemoSiteIntegrationTests {
 
   @Test
   void outdoorReceptaclesOnTheHousePanelHaveNoGroundFaultProtection() {
-    // the house panel is not a dwelling panel: 210.8(B) for other occupancies is not built, so
-    // this stays a precondition; the dwelling case below is the finding
+    // the house panel is not a dwelling panel: NEC 210.8(B)(4) (2020, from memory) asks for GFCI on
+    // outdoor receptacles of other occupancies (120 V to ground, ≤ 50 A single-phase)
     CircuitSpec walk = circuit("HP", "Front walk receptacles");
     assertThat(walk.location()).isEqualTo(CircuitLocation.OUTDOORS);
     assertThat(walk.device().kind().isResidualCurrent()).as("no GFCI device").isFalse();
+    Finding gfci =
+        circuitFindings("HP", "Front walk receptacles").stream()
+            .filter(f -> f.check() == CheckKind.GROUND_FAULT_PROTECTION)
+            .findFirst()
+            .orElseThrow();
+    assertThat(gfci.verdict()).as(gfci.summary()).isEqualTo(Verdict.WARNING);
+    assertThat(gfci.reference()).contains("210.8(B)(4)");
   }
 
   @Test

@@ -108,6 +108,33 @@ class NecExchangeIntegrationTests {
   }
 
   @Test
+  void theConduitOfEachCircuitRoundTripsThroughTheWorkbook() throws Exception {
+    long first = emptyPanel("CP conduit " + UUID.randomUUID().toString().substring(0, 6), "none");
+    importInto(first, export(boardId("CP")));
+    // setup on the copy only (the demo keeps its own): steel conduit on every circuit
+    jdbc.sql("UPDATE circuit SET cable_conduit = 'STEEL' WHERE board_id = ? AND status = 'IN_USE'")
+        .param(first)
+        .update();
+    byte[] workbook = export(first);
+    try (XSSFWorkbook book = new XSSFWorkbook(new ByteArrayInputStream(workbook))) {
+      Sheet sheet = boardSheet(book);
+      DataFormatter text = new DataFormatter();
+      int conduit = column(sheet.getRow(3), "Conduit", text);
+      assertThat(text.formatCellValue(sheet.getRow(4).getCell(conduit))).isEqualTo("Steel");
+    }
+    long second = emptyPanel("CP conduit " + UUID.randomUUID().toString().substring(0, 6), "none");
+    importInto(second, workbook);
+    assertThat(
+            jdbc.sql(
+                    "SELECT DISTINCT cable_conduit FROM circuit WHERE board_id = ?"
+                        + " AND status = 'IN_USE'")
+                .param(second)
+                .query(String.class)
+                .list())
+        .containsExactly("STEEL");
+  }
+
+  @Test
   void apartmentPanelRoundTripsWithItsDwellingInputs() throws Exception {
     long apartment = boardId("APT-1");
     long copy = emptyPanel("APT-1 copy " + UUID.randomUUID().toString().substring(0, 6), null);

@@ -1,6 +1,7 @@
 package com.wayledger.engine.nec;
 
 import com.wayledger.engine.ConductorMaterial;
+import com.wayledger.engine.Conduit;
 
 /**
  * NEC Chapter 9 Table 9: AC resistance and reactance of 600 V cables, three single conductors in
@@ -12,13 +13,6 @@ import com.wayledger.engine.ConductorMaterial;
  * #effectiveOhmsPer1000Feet} reproduces within the table's rounding.
  */
 public final class ConductorImpedance {
-
-  /** Conduit the conductors run in; Table 9 has a column for each. */
-  public enum Conduit {
-    PVC,
-    ALUMINUM,
-    STEEL
-  }
 
   /** The power factor of the table's effective-Z columns. */
   public static final double TABLE_POWER_FACTOR = 0.85;

@@ -18,13 +18,14 @@ import java.util.Set;
 /**
  * Ground-fault (GFCI, NEC 210.8(A)) and arc-fault (AFCI, NEC 210.12(A)) protection of dwelling-unit
  * branch circuits by location: Wayledger's own table of the code's locations, each with its clause
- * (NFPA 70-2020 list items, from memory). 210.8(A) covers 125 V through 250 V receptacles on
- * single-phase branch circuits rated 150 V or less to ground; 210.12(A) covers 120 V single-phase
- * 15 and 20 A branch circuits supplying outlets or devices. A receptacle-type GFCI or an outlet
- * branch-circuit AFCI at the first outlet also meets the rules; the schedule records the breaker
- * only, so a missing breaker function is a warning to check on site, not proof of a fault. 210.8(B)
- * (other than dwelling units), 210.8(D)/(E) (specific appliances, equipment) and the 2023 edition's
- * extensions are not in this version.
+ * (NFPA 70-2020 list items, from memory). 210.8(B) for other occupancies is in {@link
+ * OtherOccupancyGroundFault}, which reads the same locations. 210.8(A) covers 125 V through 250 V
+ * receptacles on single-phase branch circuits rated 150 V or less to ground; 210.12(A) covers 120 V
+ * single-phase 15 and 20 A branch circuits supplying outlets or devices. A receptacle-type GFCI or
+ * an outlet branch-circuit AFCI at the first outlet also meets the rules; the schedule records the
+ * breaker only, so a missing breaker function is a warning to check on site, not proof of a fault.
+ * 210.8(D)/(E) (specific appliances, equipment) and the 2023 edition's extensions are not in this
+ * version.
  */
 public final class DwellingProtection {
 
@@ -41,6 +42,9 @@ public final class DwellingProtection {
   public record Row(String gfciClause, String afciClause) {}
 
   private static final Map<CircuitLocation, Row> TABLE = new EnumMap<>(CircuitLocation.class);
+
+  /** The row of a location that only 210.8(B) names: no dwelling rule can be read from it. */
+  private static final Row OTHER_OCCUPANCIES_ONLY = new Row(null, null);
 
   static {
     TABLE.put(CircuitLocation.INDOORS, new Row(null, null));
@@ -67,6 +71,20 @@ public final class DwellingProtection {
                 + " recreation rooms"));
     TABLE.put(CircuitLocation.BEDROOM, new Row(null, "210.12(A) bedrooms"));
     TABLE.put(CircuitLocation.CLOSET_OR_HALLWAY, new Row(null, "210.12(A) closets, hallways"));
+    TABLE.put(
+        CircuitLocation.ROOFTOP, new Row("210.8(A)(3) outdoors (a rooftop is outdoors)", null));
+    TABLE.put(
+        CircuitLocation.DAMP_OR_WET_INDOORS,
+        new Row("210.8(A)(11) indoor damp and wet locations", null));
+    // locations of other occupancies' list (210.8(B)): in a dwelling they say nothing of the room
+    TABLE.put(CircuitLocation.LOCKER_ROOM, OTHER_OCCUPANCIES_ONLY);
+    TABLE.put(CircuitLocation.SERVICE_BAY, OTHER_OCCUPANCIES_ONLY);
+    TABLE.put(CircuitLocation.FOOD_PREPARATION, OTHER_OCCUPANCIES_ONLY);
+  }
+
+  /** Whether a location belongs to 210.8(B)'s list only and tells nothing in a dwelling unit. */
+  static boolean otherOccupanciesOnly(CircuitLocation location) {
+    return row(location) == OTHER_OCCUPANCIES_ONLY;
   }
 
   private DwellingProtection() {}
@@ -113,8 +131,25 @@ public final class DwellingProtection {
     return gfci ? FaultInterrupter.GFCI : afci ? FaultInterrupter.AFCI : null;
   }
 
-  /** 210.8(A): ground-fault protection of a dwelling circuit. */
+  /**
+   * Which function a circuit needs on its panelboard: the dwelling table's on a dwelling unit's,
+   * 210.8(B)'s GFCI on any other (the AFCI rules of other occupancies are not in this version).
+   */
+  public static FaultInterrupter needed(CircuitSpec circuit, double u0, boolean dwelling) {
+    if (dwelling) {
+      return needed(circuit, u0);
+    }
+    return OtherOccupancyGroundFault.needsGfci(circuit, u0) ? FaultInterrupter.GFCI : null;
+  }
+
+  /**
+   * Ground-fault protection of a branch circuit: 210.8(A) on a dwelling unit's panelboard, 210.8(B)
+   * ({@link OtherOccupancyGroundFault}) on any other.
+   */
   public static Finding groundFault(CircuitSpec circuit, double u0, boolean dwelling) {
+    if (!dwelling && circuit.feedsBoardId() == null) {
+      return OtherOccupancyGroundFault.assess(circuit, u0);
+    }
     Finding early =
         early(CheckKind.GROUND_FAULT_PROTECTION, circuit, dwelling, REF_GFCI, "210.8(B)");
     if (early != null) {
@@ -253,6 +288,17 @@ public final class DwellingProtection {
     if (row(circuit.location()) == null) {
       return Finding.notAssessedBecause(
           check, "the location is not one of the NEC set's", reference);
+    }
+    if (otherOccupanciesOnly(circuit.location())) {
+      Finding f =
+          Finding.notAssessedBecause(
+              check,
+              locationWords(circuit.location())
+                  + " is a location of other occupancies (210.8(B)); it does not say which room of"
+                  + " the dwelling unit this is",
+              reference);
+      return new Finding(
+          f.check(), f.verdict(), f.summary(), f.values(), reference, "record the dwelling room");
     }
     return null;
   }

@@ -50,6 +50,9 @@ public final class MotorCircuit {
    *     as written)
    * @param readings one line per motor load: "5 hp at 230 V: 28 A (Table 430.248)"
    * @param roundedUp whether a horsepower between two rows was read at the larger one
+   * @param motors every motor on the circuit (a load of quantity n counts n times)
+   * @param otherLoadAmps the other loads' current, A, as rated (no 125 % for continuous ones)
+   * @param circuitVolts the circuit's voltage, V
    */
   public record Duty(
       String missing,
@@ -57,16 +60,27 @@ public final class MotorCircuit {
       double requiredConductorAmps,
       boolean singleMotor,
       List<String> readings,
-      boolean roundedUp) {
+      boolean roundedUp,
+      List<Motor> motors,
+      double otherLoadAmps,
+      double circuitVolts) {
 
     static Duty missing(String why) {
-      return new Duty(why, 0, 0, false, List.of(), false);
+      return new Duty(why, 0, 0, false, List.of(), false, List.of(), 0, 0);
+    }
+
+    /** The smallest motor's table full-load current, A. */
+    public double smallestFullLoadAmps() {
+      return motors.stream().mapToDouble(Motor::fullLoadAmps).min().orElse(0);
     }
 
     public boolean isAssessed() {
       return missing == null;
     }
   }
+
+  /** One motor: its recorded horsepower and its table full-load current, A. */
+  public record Motor(double horsepower, double fullLoadAmps) {}
 
   private MotorCircuit() {}
 
@@ -101,10 +115,11 @@ public final class MotorCircuit {
     }
     boolean threePhase = circuit.position() == PhasePosition.THREE_POLE;
     double volts = circuitVolts(system, u0, circuit.position());
-    List<Double> fullLoads = new ArrayList<>();
+    List<Motor> motors = new ArrayList<>();
     List<String> readings = new ArrayList<>();
     boolean roundedUp = false;
     double otherAmps = 0.0;
+    double otherRatedAmps = 0.0;
     double perAmp = LinePhasors.voltAmperesPerAmp(system, circuit.position(), u0);
     for (LoadSpec load : circuit.loads()) {
       if (load.category() != LoadCategory.MOTOR) {
@@ -113,7 +128,9 @@ public final class MotorCircuit {
           return Duty.missing("missing " + connected.missingInput());
         }
         // 430.24(1): other continuous loads at 125 %
-        otherAmps += connected.apparentVoltAmperes() / perAmp * (load.continuous() ? 1.25 : 1.0);
+        double amps = connected.apparentVoltAmperes() / perAmp;
+        otherAmps += amps * (load.continuous() ? 1.25 : 1.0);
+        otherRatedAmps += amps;
         continue;
       }
       if (load.motorHorsepower() == null) {
@@ -146,17 +163,19 @@ public final class MotorCircuit {
                   : "")
               + ")");
       for (int i = 0; i < load.quantity(); i++) {
-        fullLoads.add(r.fullLoadAmps());
+        motors.add(new Motor(load.motorHorsepower(), r.fullLoadAmps()));
       }
     }
-    if (fullLoads.isEmpty()) {
+    if (motors.isEmpty()) {
       return Duty.missing("no motor load");
     }
-    double largest = fullLoads.stream().mapToDouble(Double::doubleValue).max().orElse(0);
-    double sum = fullLoads.stream().mapToDouble(Double::doubleValue).sum();
+    double largest = motors.stream().mapToDouble(Motor::fullLoadAmps).max().orElse(0);
+    double sum = motors.stream().mapToDouble(Motor::fullLoadAmps).sum();
+    // 430.24: 125 % of the largest motor's full-load current plus the others' plus the other loads
     double required = sum + (CONDUCTOR_FACTOR - 1.0) * largest + otherAmps;
-    boolean single = fullLoads.size() == 1 && otherAmps == 0.0;
-    return new Duty(null, largest, required, single, readings, roundedUp);
+    boolean single = motors.size() == 1 && otherAmps == 0.0;
+    return new Duty(
+        null, largest, required, single, readings, roundedUp, motors, otherRatedAmps, volts);
   }
 
   /** 430.22/430.24: the conductor's ampacity against the motors' duty. */
@@ -196,7 +215,7 @@ public final class MotorCircuit {
             + " A against "
             + NecCircuitChecks.fmt(duty.requiredConductorAmps())
             + " A needed ("
-            + (duty.singleMotor() ? "125 % of the table full-load current" : "430.24")
+            + (duty.singleMotor() ? "125 % of the table full-load current" : severalWords(duty))
             + "); "
             + basis;
     if (conductorAmps + 1e-9 < duty.requiredConductorAmps()) {
@@ -213,6 +232,26 @@ public final class MotorCircuit {
     return Finding.pass(CheckKind.MOTOR_CONDUCTOR, text, values, REF_CONDUCTOR);
   }
 
+  /** Table 430.52's percentage for a device of this kind, %. */
+  static double table430_52Percent(DeviceKind kind) {
+    return kind == DeviceKind.FUSE ? TIME_DELAY_FUSE_PERCENT : INVERSE_TIME_BREAKER_PERCENT;
+  }
+
+  /** 430.24's sum in words: 125 % of the largest, the other motors, the other loads. */
+  private static String severalWords(Duty duty) {
+    double others = duty.motors().stream().mapToDouble(Motor::fullLoadAmps).sum();
+    others -= duty.largestFullLoadAmps();
+    double otherLoads =
+        duty.requiredConductorAmps() - CONDUCTOR_FACTOR * duty.largestFullLoadAmps() - others;
+    return "430.24: 125 % of the largest full-load current "
+        + NecCircuitChecks.fmt(duty.largestFullLoadAmps())
+        + " A + the other motors' "
+        + NecCircuitChecks.fmt(others)
+        + " A + the other loads' "
+        + NecCircuitChecks.fmt(Math.max(0.0, otherLoads))
+        + " A (continuous ones at 125 %)";
+  }
+
   /** The largest rating Table 430.52 allows a device of this kind, A; null for none known. */
   public static Integer maximumRatingAmps(double fullLoadAmps, DeviceKind kind) {
     double percent =
@@ -225,19 +264,16 @@ public final class MotorCircuit {
     if (!duty.isAssessed()) {
       return notAssessed(CheckKind.MOTOR_BREAKER, duty.missing(), REF_BREAKER);
     }
-    if (!duty.singleMotor()) {
-      return Finding.notAssessedBecause(
-          CheckKind.MOTOR_BREAKER,
-          "several motors or other loads on one branch circuit (430.53) are not assessed in this"
-              + " version",
-          REF_BREAKER);
-    }
+    String reference = duty.singleMotor() ? REF_BREAKER : SeveralMotors.REF;
     if (!device.kind().protectsAgainstOvercurrent()) {
       return Finding.notAssessedBecause(
-          CheckKind.MOTOR_BREAKER, "the device gives no overcurrent protection", REF_BREAKER);
+          CheckKind.MOTOR_BREAKER, "the device gives no overcurrent protection", reference);
     }
     if (device.ratedCurrentAmps() == null) {
-      return Finding.notAssessed(CheckKind.MOTOR_BREAKER, "device rating In", REF_BREAKER);
+      return Finding.notAssessed(CheckKind.MOTOR_BREAKER, "device rating In", reference);
+    }
+    if (!duty.singleMotor()) {
+      return SeveralMotors.breaker(duty, device.ratedCurrentAmps(), device.kind());
     }
     return breaker(duty.largestFullLoadAmps(), device.ratedCurrentAmps(), device.kind());
   }

@@ -118,7 +118,8 @@ public final class NecDeviceProposer {
                 recorded.installationMethod(),
                 recorded.ambientCelsius(),
                 recorded.groupedCircuits(),
-                recorded.thermalInsulationMillimetres());
+                recorded.thermalInsulationMillimetres(),
+                recorded.conduit());
         DeviceSpec device =
             new DeviceSpec(
                 circuit.device() != null && circuit.device().kind() == DeviceKind.FUSE
@@ -132,7 +133,9 @@ public final class NecDeviceProposer {
                 null,
                 null);
         CircuitSpec trial = with(circuit, device, cable);
-        device = device.withFaultInterrupter(DwellingProtection.needed(trial, context.u0()));
+        device =
+            device.withFaultInterrupter(
+                DwellingProtection.needed(trial, context.u0(), context.dwelling()));
         trial = with(circuit, device, cable);
         List<Finding> findings = NecCircuitChecks.assess(context, trial, designCurrentAmps);
         List<Finding> problems = problems(findings);

@@ -1,12 +1,12 @@
 package com.wayledger.engine.nec;
 
 import com.wayledger.engine.CableSpec;
+import com.wayledger.engine.Conduit;
 import com.wayledger.engine.LinePhasors;
 import com.wayledger.engine.LoadSpec;
 import com.wayledger.engine.PhasePosition;
 import com.wayledger.engine.SupplySystem;
 import com.wayledger.engine.demand.ConnectedLoad;
-import com.wayledger.engine.nec.ConductorImpedance.Conduit;
 import com.wayledger.engine.protection.result.CheckKind;
 import com.wayledger.engine.protection.result.Finding;
 import com.wayledger.engine.protection.result.Quantity;
@@ -79,35 +79,50 @@ public final class VoltageDrop {
     double feet = cable.lengthMetres() * FEET_PER_METRE;
     double ze;
     String note;
+    Conduit recorded = cable.conduit();
     if (powerFactor == null) {
-      Conduit worst = Conduit.STEEL;
-      double worstZ = 0.0;
-      for (Conduit c : Conduit.values()) {
-        double r = ConductorImpedance.resistanceOhmsPer1000Feet(size, cable.material(), c);
-        double x = ConductorImpedance.reactanceOhmsPer1000Feet(size, c);
-        double z = Math.hypot(r, x);
-        if (z > worstZ) {
-          worstZ = z;
-          worst = c;
+      Conduit used = recorded == null ? Conduit.STEEL : recorded;
+      double usedZ = recorded == null ? 0.0 : magnitude(size, cable, recorded);
+      if (recorded == null) {
+        for (Conduit c : Conduit.values()) {
+          double z = magnitude(size, cable, c);
+          if (z > usedZ) {
+            usedZ = z;
+            used = c;
+          }
         }
       }
-      ze = worstZ;
-      note = "power factor not known: |Z| taken; conduit not recorded: " + words(worst) + " taken";
+      ze = usedZ;
+      note =
+          "power factor not known: |Z| taken; "
+              + (recorded == null
+                  ? "conduit not recorded: " + words(used) + " taken"
+                  : words(used) + " (recorded)");
     } else {
-      Conduit worst = ConductorImpedance.worstConduit(size, cable.material(), powerFactor);
-      ze = ConductorImpedance.effectiveOhmsPer1000Feet(size, cable.material(), worst, powerFactor);
+      Conduit used =
+          recorded == null
+              ? ConductorImpedance.worstConduit(size, cable.material(), powerFactor)
+              : recorded;
+      ze = ConductorImpedance.effectiveOhmsPer1000Feet(size, cable.material(), used, powerFactor);
       note =
           "PF "
               + NecCircuitChecks.fmt(powerFactor)
-              + "; conduit not recorded: "
-              + words(worst)
-              + " taken (the highest impedance)";
+              + "; "
+              + (recorded == null
+                  ? "conduit not recorded: " + words(used) + " taken (the highest impedance)"
+                  : words(used) + " (recorded)");
     }
     if (Double.isNaN(ze)) {
       return Run.missing("a Chapter 9 Table 9 entry for " + size.label());
     }
     double volts = (threePhase ? Math.sqrt(3.0) : 2.0) * amps * ze * feet / 1000.0;
     return new Run(null, volts / circuitVolts * 100.0, volts, note);
+  }
+
+  private static double magnitude(ConductorSize size, CableSpec cable, Conduit conduit) {
+    return Math.hypot(
+        ConductorImpedance.resistanceOhmsPer1000Feet(size, cable.material(), conduit),
+        ConductorImpedance.reactanceOhmsPer1000Feet(size, conduit));
   }
 
   /** The plain-number core: k · I · Ze · L / 1000 as % of the circuit voltage. */

@@ -180,4 +180,121 @@ class NecMotorChecksTests {
     assertThat(duty.largestFullLoadAmps()).isEqualTo(30.8);
     assertThat(duty.requiredConductorAmps()).isCloseTo(1.25 * 30.8, within(1e-9));
   }
+
+  static LoadSpec motors(double horsepower, int quantity) {
+    return new LoadSpec(
+        "Fan motor",
+        LoadCategory.MOTOR,
+        quantity,
+        1.0,
+        RatingUnit.A,
+        0.8,
+        null,
+        null,
+        false,
+        horsepower);
+  }
+
+  static List<Finding> assess120(CircuitSpec c) {
+    return NecCircuitChecks.assess(
+        CircuitContext.of(SupplySystem.SPLIT_PHASE_120_240, 120.0), c, 10.0);
+  }
+
+  @Test
+  void severalMotorsConductorIs125PercentOfTheLargestPlusTheOthers() {
+    // 430.24 (from memory): 1.25 × 28 A (5 hp 230 V) + 12 A (2 hp 230 V) = 47 A; Table 430.248
+    // 5 hp 230 V 28 A, 2 hp 230 V 12 A (from memory)
+    CircuitSpec c =
+        circuit(PhasePosition.L1_L2, 45, ConductorSize.AWG_6, motor(5.0, 24.0), motor(2.0, 10.0));
+    MotorCircuit.Duty duty = MotorCircuit.duty(SupplySystem.SPLIT_PHASE_120_240, 120.0, c);
+    assertThat(duty.singleMotor()).isFalse();
+    assertThat(duty.requiredConductorAmps()).isCloseTo(1.25 * 28 + 12, within(1e-9));
+    Finding conductor = finding(assess(c, 34.0), CheckKind.MOTOR_CONDUCTOR);
+    assertThat(conductor.summary()).contains("430.24").contains("125 %");
+  }
+
+  @Test
+  void breakerWithinTheSmallestMotorsMaximumPassesUnder430_53B() {
+    // 430.53(B) with Table 430.52 (from memory): smallest motor 2 hp 230 V 12 A × 250 % = 30 A
+    Finding breaker =
+        finding(
+            assess(
+                circuit(
+                    PhasePosition.L1_L2,
+                    30,
+                    ConductorSize.AWG_6,
+                    motor(5.0, 24.0),
+                    motor(2.0, 10.0)),
+                34.0),
+            CheckKind.MOTOR_BREAKER);
+    assertThat(breaker.verdict()).as(breaker.summary()).isEqualTo(Verdict.PASS);
+    assertThat(breaker.reference()).contains("430.53(B)");
+    assertThat(breaker.value("430.53(B) maximum")).isEqualTo(30.0);
+  }
+
+  @Test
+  void breakerAboveTheSmallestMotorsMaximumAsksForAGroupInstallation() {
+    // 430.53(C)(4) (from memory): the largest motor's 430.52 maximum 70 A (5 hp 230 V, 28 A ×
+    // 250 %) + the other motor's 12 A = 82 A; a 60 A breaker is above (B)'s 30 A
+    Finding group =
+        finding(
+            assess(
+                circuit(
+                    PhasePosition.L1_L2,
+                    60,
+                    ConductorSize.AWG_6,
+                    motor(5.0, 24.0),
+                    motor(2.0, 10.0)),
+                34.0),
+            CheckKind.MOTOR_BREAKER);
+    assertThat(group.verdict()).as(group.summary()).isEqualTo(Verdict.WARNING);
+    assertThat(group.value("430.53(C) maximum")).isCloseTo(70.0 + 12.0, within(1e-9));
+    assertThat(group.remedy()).contains("listed for group installation");
+    Finding above =
+        finding(
+            assess(
+                circuit(
+                    PhasePosition.L1_L2,
+                    90,
+                    ConductorSize.AWG_3,
+                    motor(5.0, 24.0),
+                    motor(2.0, 10.0)),
+                34.0),
+            CheckKind.MOTOR_BREAKER);
+    assertThat(above.verdict()).as(above.summary()).isEqualTo(Verdict.DANGER);
+  }
+
+  @Test
+  void smallMotorsOnA20Amp120VoltCircuitAreAdviceToCheckOnSite() {
+    // 430.53(A) (from memory): motors ≤ 1 hp, each ≤ 6 A, on a nominal 120 V circuit at ≤ 20 A.
+    // Table 430.248 1/4 hp 115 V: 5.8 A (from memory); 430.52 for it: 5.8 × 250 % = 14.5 → 15 A
+    CircuitSpec c = circuit(PhasePosition.L1, 20, ConductorSize.AWG_12, motors(0.25, 3));
+    Finding breaker = finding(assess120(c), CheckKind.MOTOR_BREAKER);
+    assertThat(breaker.verdict()).as(breaker.summary()).isEqualTo(Verdict.ADVICE);
+    assertThat(breaker.reference()).contains("430.53(A)");
+    assertThat(breaker.remedy()).contains("430.32");
+    // 1/3 hp at 115 V: 7.2 A > 6 A (Table 430.248, from memory), so (A) does not apply; 430.52:
+    // 7.2 × 250 % = 18 → 20 A, the next standard rating (240.6(A)), so (B) allows the 20 A
+    Finding larger =
+        finding(
+            assess120(circuit(PhasePosition.L1, 20, ConductorSize.AWG_12, motors(1.0 / 3, 2))),
+            CheckKind.MOTOR_BREAKER);
+    assertThat(larger.reference()).doesNotContain("430.53(A)").contains("430.53(B)");
+    assertThat(larger.verdict()).as(larger.summary()).isEqualTo(Verdict.PASS);
+    assertThat(larger.value("430.53(B) maximum")).isEqualTo(20.0);
+  }
+
+  @Test
+  void aMotorWithOtherLoadsIsAssessedUnder430_53NotLeftOut() {
+    // one 1/2 hp 115 V motor 9.8 A (Table 430.248, from memory) and 5 A of lighting on 15 A:
+    // 430.53(B): 9.8 × 250 % = 24.5 → 25 A ≥ 15 A, a pass
+    LoadSpec light =
+        new LoadSpec("Lights", LoadCategory.LIGHTING, 1, 600, RatingUnit.W, 1.0, null, null, false);
+    Finding breaker =
+        finding(
+            assess120(circuit(PhasePosition.L1, 15, ConductorSize.AWG_14, motors(0.5, 1), light)),
+            CheckKind.MOTOR_BREAKER);
+    assertThat(breaker.verdict()).as(breaker.summary()).isEqualTo(Verdict.PASS);
+    assertThat(breaker.value("430.53(B) maximum")).isEqualTo(25.0);
+  }
 }

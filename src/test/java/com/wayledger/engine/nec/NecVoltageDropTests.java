@@ -5,7 +5,7 @@ import static org.assertj.core.api.Assertions.within;
 
 import com.wayledger.engine.CableSpec;
 import com.wayledger.engine.ConductorMaterial;
-import com.wayledger.engine.nec.ConductorImpedance.Conduit;
+import com.wayledger.engine.Conduit;
 import com.wayledger.engine.protection.result.CheckKind;
 import com.wayledger.engine.protection.result.Finding;
 import com.wayledger.engine.protection.result.Verdict;
@@ -111,5 +111,31 @@ class NecVoltageDropTests {
     Finding missing = VoltageDrop.total(branch, null, "feeder conductor of P1", "");
     assertThat(missing.verdict()).isEqualTo(Verdict.NOT_ASSESSED);
     assertThat(missing.summary()).contains("feeder conductor of P1");
+  }
+
+  @Test
+  void aRecordedConduitChoosesItsColumnAndTheFindingNamesIt() {
+    // Table 9 (from memory): 12 AWG Cu R 2.0 in every conduit, XL 0.054 in PVC, 0.068 in steel;
+    // note 2: Ze = R·cosθ + X·sinθ at PF 0.85; VD = 2 × 16 A × Ze × 100 ft / 1000
+    double sin = Math.sqrt(1 - 0.85 * 0.85);
+    CableSpec cable =
+        new CableSpec(
+            ConductorSize.AWG_12.squareMillimetres(),
+            null,
+            ConductorMaterial.COPPER,
+            null,
+            100 * 0.3048,
+            null,
+            null,
+            null,
+            null);
+    VoltageDrop.Run inPvc = VoltageDrop.of(cable.inConduit(Conduit.PVC), 16.0, 0.85, false, 120.0);
+    assertThat(inPvc.volts()).isCloseTo(2 * 16 * (2.0 * 0.85 + 0.054 * sin) * 0.1, within(1e-9));
+    assertThat(VoltageDrop.branch(inPvc, 16.0).summary()).contains("PVC conduit (recorded)");
+    // not recorded: the highest impedance, steel (XL 0.068), and the finding says it was taken
+    VoltageDrop.Run unknown = VoltageDrop.of(cable, 16.0, 0.85, false, 120.0);
+    assertThat(unknown.volts()).isCloseTo(2 * 16 * (2.0 * 0.85 + 0.068 * sin) * 0.1, within(1e-9));
+    assertThat(VoltageDrop.branch(unknown, 16.0).summary())
+        .contains("conduit not recorded: steel conduit taken");
   }
 }
