@@ -97,6 +97,35 @@ class NecWorkbookTotalsTests {
   }
 
   @Test
+  void findingsOnAPanelboardNameTheSpaceAndLinesAsTheBoardPageDoes() {
+    List<CircuitEntry> circuits = new ArrayList<>();
+    circuits.add(entry(1, 5, PhasePosition.L1, "Kitchen", 2400, RatingUnit.W));
+    circuits.add(entry(2, 3, PhasePosition.L1_L2, "Water heater", 4800, RatingUnit.W));
+    BoardEntry panel = new BoardEntry(1L, "P1", null, 1, 24, null, "", 0, circuits, LETTERS);
+    ExportData data =
+        export(
+            List.of(panel),
+            new SupplySpec(
+                EarthingSystem.TN_C_S,
+                120.0,
+                1,
+                60.0,
+                null,
+                10.0,
+                200.0,
+                SupplySystem.SPLIT_PHASE_120_240),
+            Map.of());
+
+    List<String> places =
+        data.findings().boards().get(0).circuits().stream()
+            .map(com.wayledger.engine.protection.CircuitFindings::placeOnBoard)
+            .toList();
+    assertThat(places)
+        .as("positions in a panelboard's words, not \"way 5 L1\"")
+        .containsExactlyInAnyOrder("space 5 A “Kitchen”", "space 3 A–B “Water heater”");
+  }
+
+  @Test
   void wyePanelCountsTwoPoleLoadsAndCarriesAOneTwentyTwoOhEightPanelLineByLine()
       throws IOException {
     // HP (208Y/120 V): 1200 W on A (10 A ∠0°), 4160 W at 208 V between A and B, and a feeder on
