@@ -290,7 +290,8 @@ public final class WorkbookWriter {
     text(facts, 0, "U0 V", styles.label, null);
     number(facts, 1, u0, styles.number, null);
     text(facts, 2, words.of("workbook.fact.lines"), styles.label, null);
-    number(facts, 3, board.phases(), styles.integer, null);
+    // lines as the totals count them: 2 on a 120/240 V or 120/208 V panel stored single-phase
+    number(facts, 3, linesOf(board, demand), styles.integer, null);
     text(facts, 4, words.of("workbook.fact.ways"), styles.label, null);
     number(facts, 5, board.wayCount(), styles.integer, null);
     text(facts, 6, words.of("workbook.fact.exported"), styles.label, null);
