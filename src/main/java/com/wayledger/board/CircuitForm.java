@@ -843,6 +843,53 @@ public record CircuitForm(
         .withCableConduit(cableConduit);
   }
 
+  /**
+   * The same row with this location and fault interrupter (an import keeps the stored ones when its
+   * file has no such column).
+   */
+  public CircuitForm withLocationAndFaultInterrupter(
+      CircuitLocation newLocation, FaultInterrupter newFaultInterrupter) {
+    return new CircuitForm(
+        wayNumber,
+        position,
+        description,
+        status,
+        lockedForBalancing,
+        deviceKind,
+        deviceCurve,
+        deviceRatingAmps,
+        devicePoles,
+        deviceBreakingCapacityKiloAmps,
+        deviceResidualMilliAmps,
+        deviceRcdType,
+        cableLineCsa,
+        cableCpcCsa,
+        cableMaterial,
+        cableInsulation,
+        cableLengthMetres,
+        cableInstallationMethod,
+        cableAmbientCelsius,
+        cableGroupedCircuits,
+        cableThermalInsulationMm,
+        measuredLoopImpedanceOhms,
+        loadDescription,
+        loadCategory,
+        loadQuantity,
+        loadRatingValue,
+        loadRatingUnit,
+        loadPowerFactor,
+        version,
+        ringFinal,
+        deviceOverloadSettingAmps,
+        deviceInstantaneousSettingAmps,
+        loadStartUpMultiple,
+        newLocation,
+        newFaultInterrupter,
+        cableLineSize,
+        cableCpcSize,
+        cableLengthFeet);
+  }
+
   /** The one place the withers copy the whole row, with the fields they may change. */
   private CircuitForm copy(
       Integer thermalInsulationMm,

@@ -66,7 +66,8 @@ public class ImportService {
                     .toList()));
     List<CircuitEntry> stored = ExportReader.entry(board, 0).circuits();
     ScheduleMatcher.Result matched =
-        ScheduleMatcher.match(read.circuits(), stored, removeMissing, board::lineName);
+        ScheduleMatcher.match(
+            read.circuits(), stored, removeMissing, board::lineName, absentOptional(mapping));
     Map<Integer, ImportPlan.Problem> taken = new HashMap<>();
     matched
         .blocked()
@@ -164,5 +165,19 @@ public class ImportService {
             + removed
             + " removed";
     return schedule.applyEdits(boardId, plan.edits(), summary, reason);
+  }
+
+  /**
+   * The optional circuit columns the file does not have: an absent column leaves the stored value
+   * as it is, as a column the user set to "ignore" does; only a present empty cell clears it.
+   */
+  static Set<ImportField> absentOptional(List<ImportField> mapping) {
+    Set<ImportField> absent = new java.util.HashSet<>();
+    for (ImportField field : List.of(ImportField.LOCATION, ImportField.FAULT_INTERRUPTER)) {
+      if (!mapping.contains(field)) {
+        absent.add(field);
+      }
+    }
+    return absent;
   }
 }

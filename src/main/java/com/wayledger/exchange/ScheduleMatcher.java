@@ -89,15 +89,28 @@ final class ScheduleMatcher {
     return match(planned, stored, removeMissing, Phase::name);
   }
 
-  /**
-   * As {@link #match(List, List, boolean)}, naming lines in the preview as the board does ("3 B",
-   * "1 A-B" on a North American panel).
-   */
   static Result match(
       List<ImportPlan.PlannedCircuit> planned,
       List<CircuitEntry> stored,
       boolean removeMissing,
       java.util.function.Function<Phase, String> lineName) {
+    return match(planned, stored, removeMissing, lineName, Set.of());
+  }
+
+  /**
+   * As {@link #match(List, List, boolean)}, naming lines in the preview as the board does ("3 B",
+   * "1 A-B" on a North American panel).
+   *
+   * @param absent the optional columns the file does not have: a matched circuit keeps its stored
+   *     location and fault interrupter when their column is absent (a present empty cell clears
+   *     them)
+   */
+  static Result match(
+      List<ImportPlan.PlannedCircuit> planned,
+      List<CircuitEntry> stored,
+      boolean removeMissing,
+      java.util.function.Function<Phase, String> lineName,
+      Set<ImportField> absent) {
     Map<Long, CircuitEntry> byId = new HashMap<>();
     Map<String, CircuitEntry> byPosition = new HashMap<>();
     for (CircuitEntry entry : stored) {
@@ -125,6 +138,21 @@ final class ScheduleMatcher {
         claimed.add(entry.circuitId());
         matched.put(circuit, entry);
       }
+    }
+    if (absent.contains(ImportField.LOCATION) || absent.contains(ImportField.FAULT_INTERRUPTER)) {
+      Map<ImportPlan.PlannedCircuit, CircuitEntry> kept = new LinkedHashMap<>();
+      List<ImportPlan.PlannedCircuit> all = new ArrayList<>(planned.size());
+      for (ImportPlan.PlannedCircuit circuit : planned) {
+        CircuitEntry entry = matched.get(circuit);
+        ImportPlan.PlannedCircuit merged =
+            entry == null ? circuit : keepAbsent(circuit, entry.circuit(), absent);
+        all.add(merged);
+        if (entry != null) {
+          kept.put(merged, entry);
+        }
+      }
+      planned = all;
+      matched = kept;
     }
     List<CircuitEntry> left =
         stored.stream().filter(entry -> !claimed.contains(entry.circuitId())).toList();
@@ -190,6 +218,20 @@ final class ScheduleMatcher {
               removeMissing ? CircuitEdit.remove(entry.circuitId(), entry.recordVersion()) : null));
     }
     return new Result(outcomes, blocked);
+  }
+
+  /** The circuit read, with the stored values of the optional columns the file does not have. */
+  private static ImportPlan.PlannedCircuit keepAbsent(
+      ImportPlan.PlannedCircuit read, CircuitForm stored, Set<ImportField> absent) {
+    CircuitForm c = read.circuit();
+    CircuitForm merged =
+        c.withLocationAndFaultInterrupter(
+            absent.contains(ImportField.LOCATION) ? stored.location() : c.location(),
+            absent.contains(ImportField.FAULT_INTERRUPTER)
+                ? stored.deviceFaultInterrupter()
+                : c.deviceFaultInterrupter());
+    return new ImportPlan.PlannedCircuit(
+        merged, read.loads(), read.rowNumbers(), read.key(), read.recordVersion());
   }
 
   private static List<LoadForm> loadsOf(ImportPlan.PlannedCircuit circuit) {

@@ -11,9 +11,11 @@ import java.math.BigDecimal;
  * the sub-board's own sheet when the workbook holds that sheet (so an edit on the sub-board's sheet
  * reaches its parent's lines), as figures from the engine otherwise (a one-board export).
  *
- * <p>A three-pole feeder's rows count a third on each line, as every three-pole way does; a
- * three-line sub-board carries its lines as they are, so each line of the parent gets a share
- * correction: k·(sub-board line demand − sub-board demand / 3).
+ * <p>A multi-pole feeder's rows land on its lines as every such way does (a third on each line for
+ * three poles, the two-pole phasor shares for two); a sub-board with as many lines as the way has
+ * poles carries its lines as they are (a 120/208 V panel on two poles of a 208Y/120 V one), so each
+ * line the way feeds gets a share correction: k·(sub-board line demand) − the way's landing of
+ * k·(sub-board demand) on that line.
  */
 final class SubBoardCells {
 
@@ -27,14 +29,14 @@ final class SubBoardCells {
    */
   record TotalsLayout(String sheetName, int firstLineRow, int lines) {
 
-    static TotalsLayout of(String sheetName, BoardEntry board) {
+    static TotalsLayout of(String sheetName, BoardEntry board, int lines) {
       int dataRows = 0;
       for (CircuitEntry entry : board.circuits()) {
         dataRows += Math.max(1, entry.loads().size());
       }
       // 0-based: header, data rows (at least one), a blank row, the "Totals" heading, a blank row
       int totalsHeading = WorkbookWriter.HEADER_ROW + 1 + Math.max(1, dataRows) + 1;
-      return new TotalsLayout(sheetName, totalsHeading + 2, board.isThreePhase() ? 3 : 1);
+      return new TotalsLayout(sheetName, totalsHeading + 2, lines);
     }
 
     int lastLineRow() {
@@ -52,19 +54,33 @@ final class SubBoardCells {
 
   private final BoardDemand child;
   private final TotalsLayout layout;
-  private final boolean threePole;
+  private final java.util.List<Phase> fed;
+  private final double[][] shares;
   private final String k;
   private final double coincidence;
 
   /**
    * @param child the sub-board's figures
    * @param layout where its sheet keeps its totals; null when the workbook has no sheet for it
-   * @param threePole whether the feeder way is three-pole
+   * @param position the feeder way's position
+   * @param cache the parent sheet's line landing of a row in a position
    */
-  SubBoardCells(BoardDemand child, TotalsLayout layout, boolean threePole) {
+  SubBoardCells(
+      BoardDemand child,
+      TotalsLayout layout,
+      com.wayledger.engine.PhasePosition position,
+      CachedResults cache) {
     this.child = child;
     this.layout = layout;
-    this.threePole = threePole;
+    this.fed =
+        position == null
+            ? java.util.List.of()
+            : position.isLineToLine()
+                ? java.util.List.of(position.fromLine(), position.toLine())
+                : position == com.wayledger.engine.PhasePosition.THREE_POLE
+                    ? java.util.List.of(Phase.values())
+                    : java.util.List.of(position.phases().iterator().next());
+    this.shares = position == null ? new double[3][4] : cache.lineShares(position);
     this.coincidence = child.coincidenceFactor();
     this.k = literal(coincidence);
   }
@@ -111,9 +127,17 @@ final class SubBoardCells {
     return coincidence * child.demandVars() / 1000;
   }
 
-  /** Whether the sub-board's lines are carried as they are (three-pole way, three-line board). */
+  /**
+   * Whether the sub-board's lines are carried as they are: a way of two or three poles feeding a
+   * board of as many lines.
+   */
   boolean carriesLinesAsTheyAre() {
-    return threePole && child.phases().size() == 3;
+    return fed.size() > 1 && child.phases().size() == fed.size();
+  }
+
+  /** Whether the feeder way feeds this line of its board. */
+  boolean feeds(Phase phase) {
+    return fed.contains(phase);
   }
 
   /**
@@ -143,47 +167,56 @@ final class SubBoardCells {
 
   /** The line's share correction, kW (zero unless the lines are carried as they are). */
   String lineShareKilowatts(Phase phase) {
-    if (!carriesLinesAsTheyAre()) {
-      return "0";
-    }
-    if (layout == null) {
-      return literal(lineShareKilowattsValue(phase));
-    }
-    return k
-        + "*("
-        + layout.cell("E", layout.firstLineRow() + phase.ordinal())
-        + "-"
-        + layout.cell("E", layout.totalRow())
-        + "/3)";
+    return lineShare(phase, false);
   }
 
   double lineShareKilowattsValue(Phase phase) {
-    PhaseDemand line = child.onPhase(phase);
-    return !carriesLinesAsTheyAre() || line == null
-        ? 0
-        : coincidence * (line.demandWatts() - child.demandWatts() / 3) / 1000;
+    return lineShareValue(phase, false);
   }
 
   String lineShareKilovars(Phase phase) {
-    if (!carriesLinesAsTheyAre()) {
-      return "0";
-    }
-    if (layout == null) {
-      return literal(lineShareKilovarsValue(phase));
-    }
-    return k
-        + "*("
-        + layout.cell("F", layout.firstLineRow() + phase.ordinal())
-        + "-"
-        + layout.cell("F", layout.totalRow())
-        + "/3)";
+    return lineShare(phase, true);
   }
 
   double lineShareKilovarsValue(Phase phase) {
-    PhaseDemand line = child.onPhase(phase);
-    return !carriesLinesAsTheyAre() || line == null
-        ? 0
-        : coincidence * (line.demandVars() - child.demandVars() / 3) / 1000;
+    return lineShareValue(phase, true);
+  }
+
+  private String lineShare(Phase phase, boolean reactive) {
+    if (!carriesLinesAsTheyAre() || !feeds(phase)) {
+      return "0";
+    }
+    if (layout == null) {
+      return literal(lineShareValue(phase, reactive));
+    }
+    double[] share = shares[phase.ordinal()];
+    double fromP = reactive ? share[2] : share[0];
+    double fromQ = reactive ? share[3] : share[1];
+    String column = reactive ? "F" : "E";
+    return k
+        + "*("
+        + layout.cell(column, layout.firstLineRow() + fed.indexOf(phase))
+        + "-"
+        + literal(fromP)
+        + "*"
+        + layout.cell("E", layout.totalRow())
+        + "-"
+        + literal(fromQ)
+        + "*"
+        + layout.cell("F", layout.totalRow())
+        + ")";
+  }
+
+  private double lineShareValue(Phase phase, boolean reactive) {
+    if (!carriesLinesAsTheyAre() || !feeds(phase)) {
+      return 0;
+    }
+    PhaseDemand line = child.phases().get(fed.indexOf(phase));
+    double[] share = shares[phase.ordinal()];
+    double fromP = reactive ? share[2] : share[0];
+    double fromQ = reactive ? share[3] : share[1];
+    double own = reactive ? line.demandVars() : line.demandWatts();
+    return coincidence * (own - fromP * child.demandWatts() - fromQ * child.demandVars()) / 1000;
   }
 
   /** A number as a formula can hold it: plain digits, never an exponent. */

@@ -123,7 +123,10 @@ public final class WorkbookWriter {
       Map<Long, SubBoardCells.TotalsLayout> layouts = new HashMap<>();
       for (BoardEntry board : data.boards()) {
         String name = uniqueName("Board " + board.reference(), names);
-        layouts.put(board.id(), SubBoardCells.TotalsLayout.of(name, board));
+        layouts.put(
+            board.id(),
+            SubBoardCells.TotalsLayout.of(
+                name, board, linesOf(board, data.demand().board(board.id()))));
       }
       for (BoardEntry board : data.boards()) {
         SXSSFSheet sheet = workbook.createSheet(layouts.get(board.id()).sheetName());
@@ -287,7 +290,8 @@ public final class WorkbookWriter {
     text(facts, 0, "U0 V", styles.label, null);
     number(facts, 1, u0, styles.number, null);
     text(facts, 2, words.of("workbook.fact.lines"), styles.label, null);
-    number(facts, 3, board.phases(), styles.integer, null);
+    // lines as the totals count them: 2 on a 120/240 V or 120/208 V panel stored single-phase
+    number(facts, 3, linesOf(board, demand), styles.integer, null);
     text(facts, 4, words.of("workbook.fact.ways"), styles.label, null);
     number(facts, 5, board.wayCount(), styles.integer, null);
     text(facts, 6, words.of("workbook.fact.exported"), styles.label, null);
@@ -331,30 +335,33 @@ public final class WorkbookWriter {
     int rowIndex = firstData;
     int lastData = firstData + Math.max(1, countRows(board)) - 1;
     String u0Cell = "$B$2";
-    CachedResults cache = new CachedResults(u0, board.isThreePhase());
+    int lineCount = linesOf(board, demand);
+    com.wayledger.engine.SupplySystem system = systemOf(board, demand);
+    CachedResults cache = new CachedResults(u0, system, lineCount);
+    // volt-amperes per ampere of a two-pole row: the line-to-line voltage over U0
+    double lineToLine = lineCount == 1 ? 1.0 : system.lineToLineFactor();
     List<SubBoardCells> carried = new ArrayList<>();
     for (CircuitEntry entry : board.circuits()) {
       BoardFigures.CircuitFigures circuitFigures = figures.circuit(entry.circuitId());
       List<LoadForm> loads =
           entry.loads().isEmpty() ? java.util.Collections.singletonList(null) : entry.loads();
-      boolean threePole =
-          entry.circuit().position() == com.wayledger.engine.PhasePosition.THREE_POLE;
-      Phase phase = threePole ? Phase.L1 : entry.circuit().position().phases().iterator().next();
+      com.wayledger.engine.PhasePosition position = entry.circuit().position();
       SubBoardCells subBoard =
           circuitFigures == null || circuitFigures.carriedBoard() == null
               ? null
               : new SubBoardCells(
                   circuitFigures.carriedBoard(),
                   layouts.get(circuitFigures.carriedBoard().boardId()),
-                  threePole);
+                  position,
+                  cache);
       double circuitKw = subBoard == null ? 0 : subBoard.connectedKilowattsValue();
       double circuitKvar = subBoard == null ? 0 : subBoard.connectedKilovarsValue();
       for (LoadForm load : loads) {
-        CachedResults.RowPower power = cache.rowPower(load, threePole);
+        CachedResults.RowPower power = cache.rowPower(load, position);
         circuitKw += power.kilowatts();
         circuitKvar += power.kilovars();
       }
-      double circuitAmps = cache.circuitCurrentAmps(circuitKw, circuitKvar, threePole);
+      double circuitAmps = cache.circuitCurrentAmps(circuitKw, circuitKvar, position);
       boolean first = true;
       for (LoadForm load : loads) {
         Row row = sheet.createRow(rowIndex);
@@ -363,7 +370,7 @@ public final class WorkbookWriter {
         if (load != null) {
           writeLoadCells(row, load, styles, widths);
         }
-        CachedResults.RowPower power = cache.rowPower(load, threePole);
+        CachedResults.RowPower power = cache.rowPower(load, position);
         SubBoardCells onRow = first ? subBoard : null;
         double[] diversity =
             writeComputedCells(
@@ -374,21 +381,21 @@ public final class WorkbookWriter {
                 onRow,
                 entry.loads().isEmpty(),
                 u0Cell,
+                lineToLine,
                 firstData + 1,
                 lastData + 1,
                 power,
                 circuitAmps,
                 styles,
                 widths);
-        cache.add(power, diversity[0], diversity[1], phase, threePole);
+        cache.add(power, diversity[0], diversity[1], position);
         if (onRow != null) {
           cache.add(
               onRow.connectedKilowattsValue(),
               onRow.connectedKilovarsValue(),
               onRow.demandKilowattsValue(),
               onRow.demandKilovarsValue(),
-              phase,
-              threePole);
+              position);
           carried.add(onRow);
         }
         first = false;
@@ -406,6 +413,7 @@ public final class WorkbookWriter {
             board,
             figures,
             carried,
+            lineCount,
             rowIndex + 1,
             firstData + 1,
             lastData + 1,
@@ -509,6 +517,7 @@ public final class WorkbookWriter {
       SubBoardCells subBoard,
       boolean noLoadsOfItsOwn,
       String u0,
+      double lineToLine,
       int from,
       int to,
       CachedResults.RowPower power,
@@ -520,7 +529,18 @@ public final class WorkbookWriter {
     String unit = ref(UNIT, r);
     String pf = ref(POWER_FACTOR, r);
     String line = ref(LINE, r);
-    String perLine = u0 + "*IF(" + line + "=\"" + THREE_POLE_CODE + "\",3,1)";
+    // U0 line to neutral, the line-to-line voltage on two poles ("A-B"), 3·U0 on three
+    String perLine =
+        u0
+            + "*IF("
+            + line
+            + "=\""
+            + THREE_POLE_CODE
+            + "\",3,IF(ISNUMBER(SEARCH(\"-\","
+            + line
+            + ")),"
+            + SubBoardCells.literal(lineToLine)
+            + ",1))";
     String blank = "OR(" + rating + "=\"\"," + qty + "=\"\"," + pf + "=\"\")";
     formula(
         row,
@@ -681,6 +701,7 @@ public final class WorkbookWriter {
       BoardEntry board,
       BoardFigures figures,
       List<SubBoardCells> carried,
+      int lineCount,
       int startRow,
       int from,
       int to,
@@ -706,7 +727,7 @@ public final class WorkbookWriter {
     for (int i = 0; i < heads.length; i++) {
       text(head, i, heads[i], s.header, null);
     }
-    List<Phase> lines = board.isThreePhase() ? List.of(Phase.values()) : List.of(Phase.L1);
+    List<Phase> lines = List.of(Phase.values()).subList(0, lineCount);
     int first = startRow + 2; // Excel row of the first phase line
     int r = first;
     double sumConnectedKw = 0;
@@ -717,7 +738,7 @@ public final class WorkbookWriter {
     List<Double> lineAmps = new java.util.ArrayList<>();
     for (Phase phase : lines) {
       Row row = sheet.createRow(r - 1);
-      text(row, 0, board.isThreePhase() ? board.lineName(phase) : "L–N", s.label, null);
+      text(row, 0, lineCount > 1 ? board.lineName(phase) : "L–N", s.label, null);
       // feeder rows carry their sub-boards' load (a three-pole way a third on each line); a
       // three-line sub-board on a three-pole way carries its lines as they are, hence the shares
       double connectedKw = cache.connectedKilowatts(phase);
@@ -727,7 +748,7 @@ public final class WorkbookWriter {
       double shareKwValue = 0;
       double shareKvarValue = 0;
       for (SubBoardCells sub : carried) {
-        if (sub.carriesLinesAsTheyAre()) {
+        if (sub.carriesLinesAsTheyAre() && sub.feeds(phase)) {
           shareKw.append(shareKw.isEmpty() ? "" : "+").append(sub.lineShareKilowatts(phase));
           shareKvar.append(shareKvar.isEmpty() ? "" : "+").append(sub.lineShareKilovars(phase));
           shareKwValue += sub.lineShareKilowattsValue(phase);
@@ -739,11 +760,16 @@ public final class WorkbookWriter {
       double demandKvar = cache.demandKilovars(phase) + shareKvarValue;
       double demandAmps = cache.amps(demandKw, demandKvar);
       formula(
-          row, 1, phaseSum(CONNECTED_KW, phase, board, from, to), connectedKw, s.kilowatts, null);
+          row,
+          1,
+          lineSum(CONNECTED_KW, CONNECTED_KVAR, false, phase, board, cache, lineCount, from, to),
+          connectedKw,
+          s.kilowatts,
+          null);
       formula(
           row,
           2,
-          phaseSum(CONNECTED_KVAR, phase, board, from, to),
+          lineSum(CONNECTED_KW, CONNECTED_KVAR, true, phase, board, cache, lineCount, from, to),
           connectedKvar,
           s.kilowatts,
           null);
@@ -765,14 +791,20 @@ public final class WorkbookWriter {
       formula(
           row,
           4,
-          phaseSum(DEMAND_KW, phase, board, from, to) + "+H" + r + "+J" + r,
+          lineSum(DEMAND_KW, DEMAND_KVAR, false, phase, board, cache, lineCount, from, to)
+              + "+H"
+              + r
+              + "+J"
+              + r,
           demandKw,
           s.kilowatts,
           null);
       formula(
           row,
           5,
-          phaseSum(DEMAND_KVAR, phase, board, from, to) + "+I" + r,
+          lineSum(DEMAND_KW, DEMAND_KVAR, true, phase, board, cache, lineCount, from, to)
+              + "+I"
+              + r,
           demandKvar,
           s.kilowatts,
           null);
@@ -807,32 +839,20 @@ public final class WorkbookWriter {
     formula(total, 6, "MAX(G" + first + ":G" + last + ")", highestAmps, s.totalAmps, null);
     text(total, 7, "← highest phase A", s.text, null);
     int totalRow = r++;
-    if (board.isThreePhase()) {
+    if (lineCount > 1) {
       Row unbalance = sheet.createRow(r - 1);
       text(unbalance, 0, "Unbalance %", s.label, null);
       String mean = "AVERAGE(G" + first + ":G" + last + ")";
       double meanAmps = lineAmps.stream().mapToDouble(Double::doubleValue).average().orElse(0);
       double deviation = lineAmps.stream().mapToDouble(a -> Math.abs(a - meanAmps)).max().orElse(0);
+      StringBuilder deviations = new StringBuilder();
+      for (int line = first; line <= last; line++) {
+        deviations.append(line == first ? "" : ",").append("ABS(G" + line + "-" + mean + ")");
+      }
       formula(
           unbalance,
           6,
-          "IF("
-              + mean
-              + "<=0,0,100*MAX(ABS(G"
-              + first
-              + "-"
-              + mean
-              + "),ABS(G"
-              + (first + 1)
-              + "-"
-              + mean
-              + "),ABS(G"
-              + last
-              + "-"
-              + mean
-              + "))/"
-              + mean
-              + ")",
+          "IF(" + mean + "<=0,0,100*MAX(" + deviations + ")/" + mean + ")",
           meanAmps <= 0 ? 0 : 100 * deviation / meanAmps,
           s.percent,
           null);
@@ -866,24 +886,67 @@ public final class WorkbookWriter {
     return rating != null && rating > 0 ? rating : null;
   }
 
-  private static String phaseSum(
-      ScheduleColumn column, Phase phase, BoardEntry board, int from, int to) {
-    if (!board.isThreePhase()) {
-      return "SUM(" + range(column, from, to) + ")";
+  /**
+   * A line's P (or Q) total over the rows, landing as the engine lands them: the line's own rows, a
+   * third of each three-pole row, and each two-pole row on the line by its phasor shares (S/2 per
+   * line on a split-phase board; S/√3 at ∓30° on a wye, which mixes P and Q), see {@link
+   * com.wayledger.engine.LinePhasors#add}. A single-line board sums every row.
+   */
+  private static String lineSum(
+      ScheduleColumn active,
+      ScheduleColumn reactive,
+      boolean wantReactive,
+      Phase phase,
+      BoardEntry board,
+      CachedResults cache,
+      int lineCount,
+      int from,
+      int to) {
+    ScheduleColumn own = wantReactive ? reactive : active;
+    if (lineCount == 1) {
+      return "SUM(" + range(own, from, to) + ")";
     }
-    return "(SUMIFS("
-        + range(column, from, to)
-        + ","
-        + range(LINE, from, to)
-        + ",\""
-        + board.lineName(phase)
-        + "\")+SUMIFS("
-        + range(column, from, to)
-        + ","
-        + range(LINE, from, to)
-        + ",\""
-        + THREE_POLE_CODE
-        + "\")/3)";
+    StringBuilder sum = new StringBuilder("(" + sumIf(own, board.lineName(phase), from, to));
+    if (lineCount == 3) {
+      sum.append("+").append(sumIf(own, THREE_POLE_CODE, from, to)).append("/3");
+    }
+    for (com.wayledger.engine.PhasePosition pair :
+        com.wayledger.engine.PhasePosition.onBoardWith(lineCount, true)) {
+      if (!pair.isLineToLine() || !pair.phases().contains(phase)) {
+        continue;
+      }
+      double[] share = cache.lineShares(pair)[phase.ordinal()];
+      String code = Codes.line(pair, board::lineName);
+      double fromP = wantReactive ? share[2] : share[0];
+      double fromQ = wantReactive ? share[3] : share[1];
+      for (Object[] term : new Object[][] {{active, fromP}, {reactive, fromQ}}) {
+        double factor = (double) term[1];
+        if (Math.abs(factor) > 1e-12) {
+          sum.append("+")
+              .append(SubBoardCells.literal(factor))
+              .append("*")
+              .append(sumIf((ScheduleColumn) term[0], code, from, to));
+        }
+      }
+    }
+    return sum.append(")").toString();
+  }
+
+  private static String sumIf(ScheduleColumn column, String line, int from, int to) {
+    return "SUMIFS(" + range(column, from, to) + "," + range(LINE, from, to) + ",\"" + line + "\")";
+  }
+
+  /**
+   * The board's number of lines as the engine counts them (2 on a single-phase three-wire board).
+   */
+  static int linesOf(BoardEntry board, BoardDemand demand) {
+    return demand != null && demand.lines() > 0 ? demand.lines() : board.isThreePhase() ? 3 : 1;
+  }
+
+  private static com.wayledger.engine.SupplySystem systemOf(BoardEntry board, BoardDemand demand) {
+    return demand != null && demand.system() != null
+        ? demand.system()
+        : com.wayledger.engine.LinePhasors.geometryOf(linesOf(board, demand));
   }
 
   // ---------------------------------------------------------------- other sheets

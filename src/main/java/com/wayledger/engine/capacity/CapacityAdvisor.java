@@ -569,7 +569,8 @@ public final class CapacityAdvisor {
     for (BoardFindings board : findings.boards()) {
       for (Finding f : board.findings()) {
         String way =
-            f.check() == CheckKind.SELECTIVITY && f.summary().startsWith("way ")
+            f.check() == CheckKind.SELECTIVITY
+                    && (f.summary().startsWith("way ") || f.summary().startsWith("space "))
                 ? f.summary()
                     .substring(
                         0,

@@ -438,17 +438,22 @@ final class BoardCalculation {
     Double incomerRating = board.incomerTripRatingAmps();
     Phase[] phases = Phase.values();
     List<PhaseDemand> phaseResults = new ArrayList<>(boardLines);
+    SupplySystem system = systemOf(board, context);
+    // connected per line lands as the demand does: a two-pole circuit puts S/2 on each line of a
+    // split-phase board and S/√3 at ∓30° on two lines of a wye, not S on both (LinePhasors)
     double[] connectedLineWatts = new double[3];
     double[] connectedLineVars = new double[3];
     for (CircuitDemand circuit : circuitResults) {
       if (!circuit.isAssessed() || circuit.position() == null) {
         continue;
       }
-      int share = circuit.position() == PhasePosition.THREE_POLE ? 3 : 1;
-      for (Phase line : circuit.position().phases()) {
-        connectedLineWatts[line.ordinal()] += circuit.connectedWatts() / share;
-        connectedLineVars[line.ordinal()] += circuit.connectedVars() / share;
-      }
+      LinePhasors.add(
+          system,
+          circuit.position(),
+          circuit.connectedWatts(),
+          circuit.connectedVars(),
+          connectedLineWatts,
+          connectedLineVars);
     }
     double[] currents = new double[3];
     double highest = 0.0;
@@ -476,7 +481,6 @@ final class BoardCalculation {
               loadingPercent,
               Math.hypot(connectedLineWatts[k], connectedLineVars[k]) / u0));
     }
-    SupplySystem system = systemOf(board, context);
     double neutral =
         boardLines >= 2
             ? LinePhasors.neutralCurrentAmps(system, boardLines, phaseWatts, phaseVars, u0)

@@ -28,10 +28,14 @@ public record CircuitFindings(
     List<Finding> findings,
     String boardReference,
     com.wayledger.engine.PhasePosition position,
-    String description) {
+    String description,
+    com.wayledger.engine.PositionWords words) {
 
   public CircuitFindings {
     findings = List.copyOf(findings);
+    if (words == null) {
+      words = com.wayledger.engine.PositionWords.WAYS;
+    }
   }
 
   /** Findings not yet placed on a board. */
@@ -53,11 +57,21 @@ public record CircuitFindings(
         findings,
         null,
         null,
+        null,
         null);
   }
 
-  /** The same findings placed: board, line(s) and circuit name. */
+  /** The same findings placed: board, line(s) and circuit name, on a board of ways. */
   public CircuitFindings placed(String board, com.wayledger.engine.PhasePosition at, String feeds) {
+    return placed(board, at, feeds, com.wayledger.engine.PositionWords.WAYS);
+  }
+
+  /** The same findings placed, their position named in the board's words ("space 5 A"). */
+  public CircuitFindings placed(
+      String board,
+      com.wayledger.engine.PhasePosition at,
+      String feeds,
+      com.wayledger.engine.PositionWords boardWords) {
     return new CircuitFindings(
         circuitId,
         wayNumber,
@@ -68,33 +82,24 @@ public record CircuitFindings(
         findings,
         board,
         at,
-        feeds);
+        feeds,
+        boardWords);
   }
 
-  /** The line(s) in words: "L2", "L1–L3"; empty when not recorded. */
+  /** The line(s) in the board's words: "L2", "L1–L3", "A–B"; empty when not recorded. */
   public String lineLabel() {
-    return lineLabel(position);
+    return words.lines(position);
   }
 
-  static String lineLabel(com.wayledger.engine.PhasePosition position) {
-    if (position == null) {
-      return "";
-    }
-    return position.label();
-  }
-
-  /** Where the findings are, in words: "DB2 way 9 L2 “Kitchen sockets”". */
+  /** Where the findings are, in words: "DB2 way 9 L2 “Kitchen sockets”", "LP1 space 5 A …". */
   public String place() {
     return boardReference == null ? placeOnBoard() : boardReference + " " + placeOnBoard();
   }
 
-  /** The same without the board: "way 9 L2 “Kitchen sockets”". */
+  /** The same without the board: "way 9 L2 “Kitchen sockets”", "space 5 A “Kitchen”". */
   public String placeOnBoard() {
     StringBuilder text = new StringBuilder();
-    text.append("way ").append(wayNumber);
-    if (position != null) {
-      text.append(' ').append(lineLabel());
-    }
+    text.append(words.place(wayNumber, position));
     if (description != null && !description.isBlank()) {
       text.append(" “").append(description).append('”');
     }

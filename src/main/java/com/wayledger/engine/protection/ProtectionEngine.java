@@ -72,10 +72,20 @@ public final class ProtectionEngine {
                     loading == null ? null : loading.designCurrentAmps(),
                     mccbSettings.byCircuitId().get(circuit.id()),
                     settings)
-                .placed(board.reference(), circuit.position(), circuit.description()));
+                .placed(
+                    board.reference(),
+                    circuit.position(),
+                    circuit.description(),
+                    com.wayledger.engine.PositionWords.of(site, board)));
       }
       List<Finding> own =
-          boardFindings(board, level, loadingByBoard.get(board.id()), mccbSettings, settings);
+          boardFindings(
+              board,
+              level,
+              loadingByBoard.get(board.id()),
+              mccbSettings,
+              settings,
+              com.wayledger.engine.PositionWords.of(site, board));
       boards.add(new BoardFindings(board.id(), board.reference(), level, own, circuits));
     }
     return new SiteFindings(settings, supplyFuse(site, loadingByBoard), boards);
@@ -120,7 +130,8 @@ public final class ProtectionEngine {
       BoardFaultLevel level,
       BoardLoading loading,
       RecordedMccbSettings mccbSettings,
-      ProtectionSettings settings) {
+      ProtectionSettings settings,
+      com.wayledger.engine.PositionWords words) {
     List<Finding> findings = new ArrayList<>();
     Double largest = loading == null ? null : loading.largestPhaseAmps();
     String missingLoad =
@@ -165,7 +176,7 @@ public final class ProtectionEngine {
               : BoardLoadCheck.unbalance(
                   loading.unbalancePercent(), board.unbalanceLimitPercent()));
     }
-    findings.addAll(selectivity(board, level, mccbSettings, settings));
+    findings.addAll(selectivity(board, level, mccbSettings, settings, words));
     return findings;
   }
 
@@ -190,7 +201,8 @@ public final class ProtectionEngine {
       BoardSpec board,
       BoardFaultLevel level,
       RecordedMccbSettings mccbSettings,
-      ProtectionSettings settings) {
+      ProtectionSettings settings,
+      com.wayledger.engine.PositionWords words) {
     if (level.upstreamDevice() == null) {
       return List.of(
           Finding.notAssessed(
@@ -231,10 +243,7 @@ public final class ProtectionEngine {
             new Finding(
                 f.check(),
                 f.verdict(),
-                "way "
-                    + c.wayNumber()
-                    + " "
-                    + CircuitFindings.lineLabel(c.position())
+                words.place(c.wayNumber(), c.position())
                     + " “"
                     + c.description()
                     + "”: "
@@ -246,10 +255,7 @@ public final class ProtectionEngine {
         findings.add(
             Finding.notAssessedBecause(
                 CheckKind.SELECTIVITY,
-                "way "
-                    + c.wayNumber()
-                    + " "
-                    + CircuitFindings.lineLabel(c.position())
+                words.place(c.wayNumber(), c.position())
                     + " “"
                     + c.description()
                     + "” has no "

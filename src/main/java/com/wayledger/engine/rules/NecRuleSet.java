@@ -120,7 +120,7 @@ final class NecRuleSet implements RuleSet {
                     iec.voltageDropFromOriginPercent(),
                     iec.startUpSurgeAmps(),
                     nec)
-                .placed(iec.boardReference(), iec.position(), iec.description()));
+                .placed(iec.boardReference(), iec.position(), iec.description(), iec.words()));
       }
       List<Finding> boardFindings = new ArrayList<>(relabelled(board.findings()));
       if (spec != null && spec.incomer() != null) {

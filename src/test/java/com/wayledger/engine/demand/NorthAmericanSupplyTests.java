@@ -80,6 +80,57 @@ class NorthAmericanSupplyTests {
   }
 
   @Test
+  void connectedCurrentOfATwoFortyVoltLoadIsHalfItsPowerOnEachLine() {
+    // hand calculation: 4800 W at 240 V draws 4800/240 = 20 A on A and on B; each line carries
+    // 120 V × 20 A = 2400 W, half the load (not 4800 W, which would read 40 A)
+    BoardSpec board =
+        Fixtures.board(
+            1,
+            1,
+            null,
+            DiversityMethods.NONE,
+            200.0,
+            List.of(watts(1, 1, PhasePosition.L1_L2, 4800.0, 1.0)));
+
+    BoardDemand demand = evaluate(board, SPLIT_PHASE);
+
+    for (Phase line : List.of(Phase.L1, Phase.L2)) {
+      assertThat(demand.phases().get(line.ordinal()).connectedCurrentAmps())
+          .as("connected current on " + line + ": 4800 W / 240 V")
+          .isCloseTo(20.0, within(1e-9));
+      assertThat(amps(demand, line))
+          .as("demand current on " + line + " equals connected without diversity")
+          .isCloseTo(20.0, within(1e-9));
+    }
+  }
+
+  @Test
+  void connectedCurrentOfATwoOhEightVoltLoadIsItsLineToLineCurrentOnBothLines() {
+    // hand calculation: 4160 W at 208 V (120·√3) draws 4160/207.85 = 20.01 A on A and on B
+    double expectedAmps = 4160.0 / (120.0 * Math.sqrt(3.0));
+    BoardSpec board =
+        Fixtures.board(
+            1,
+            3,
+            null,
+            DiversityMethods.NONE,
+            225.0,
+            List.of(watts(1, 1, PhasePosition.L1_L2, 4160.0, 0.8)));
+
+    BoardDemand demand = evaluate(board, WYE_208);
+
+    assertThat(demand.phases().get(0).connectedCurrentAmps())
+        .as("connected on A: P/(pf·V_LL)")
+        .isCloseTo(expectedAmps / 0.8, within(1e-9));
+    assertThat(demand.phases().get(1).connectedCurrentAmps())
+        .as("connected on B: P/(pf·V_LL)")
+        .isCloseTo(expectedAmps / 0.8, within(1e-9));
+    assertThat(demand.phases().get(2).connectedCurrentAmps())
+        .as("nothing connected on C")
+        .isCloseTo(0.0, within(1e-9));
+  }
+
+  @Test
   void unbalancedOneTwentyVoltLoadsPutTheDifferenceOnTheNeutral() {
     // 2400 W on A (20 A), 1200 W on B (10 A), and a 240 V 4800 W load (20 A on both lines)
     BoardSpec board =
