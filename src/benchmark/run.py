@@ -214,6 +214,12 @@ def main():
                    help="start Wayledger from its extracted jar with a class-data sharing archive (training run"
                         " first); the bare app still starts as a plain jar")
     p.add_argument("--board", help="reference of the demo board to measure (default: the one with most circuits)")
+    p.add_argument("--only", choices=["all", "pages"], default="all",
+                   help="pages: only the board schedule and full board page against the bare table (no site"
+                        " overview, API, export or transfer sizes); start-up is still timed")
+    p.add_argument("--jar", help="measure this Wayledger jar instead of building one (e.g. a copy of an earlier"
+                        " build, to compare two builds with the same command); the bare app is still built unless"
+                        " --skip-build")
     args = p.parse_args()
     for tool in ("wrk", "java"):
         if not shutil.which(tool):
@@ -222,8 +228,14 @@ def main():
     if args.skip_build:
         jar = sorted(f for f in os.listdir(os.path.join(ROOT, "target")) if f.startswith("wayledger") and f.endswith(".jar"))[0]
         wl_jar, bare_jar = os.path.join(ROOT, "target", jar), os.path.join(BARE, "target", "bare.jar")
+    elif args.jar:
+        mvn = [os.path.join(ROOT, "mvnw"), "-B", "-q"] + ([] if args.online else ["-o"])
+        sh(mvn + ["-f", os.path.join(BARE, "pom.xml"), "package", "-DskipTests"], cwd=ROOT)
+        wl_jar, bare_jar = None, os.path.join(BARE, "target", "bare.jar")
     else:
         wl_jar, bare_jar = build(not args.online)
+    if args.jar:
+        wl_jar = os.path.abspath(args.jar)
 
     work = tempfile.mkdtemp(prefix="wayledger-bench-")
     jfr_file = os.path.join(OUT, "wayledger.jfr")
@@ -284,6 +296,8 @@ def main():
              (wl.url(f"/api/boards/{board_id}/demand"), [f"Authorization: {basic('demo', 'wayledger-demo')}"]),
              (bare.url("/api/rows"), [f"Authorization: {basic('bench', 'bench-password')}"])),
         ]
+        if args.only == "pages":
+            pairs = pairs[:2]
         for app, (url, headers) in [(wl, p[1]) for p in pairs] + [(bare, p[2]) for p in pairs]:
             wrk(url, headers, max(2, args.seconds // 2), args.connections, args.threads)  # warm-up
         results = {label: ([], []) for label, _, _ in pairs}
@@ -298,8 +312,9 @@ def main():
                           f"{res['rps']:.0f} req/s p50 {res['p50_ms']:.1f} ms, server CPU {res['cpu_ms']:.2f} ms/request,"
                           f" load {res['load']:.1f}", flush=True)
 
-        export = timed_get(wl, f"/sites/{site_id}/export.xlsx", {"Cookie": wl.cookie_header()}, 5)
-        sizes = transfer_sizes(wl, board_id)
+        export = (timed_get(wl, f"/sites/{site_id}/export.xlsx", {"Cookie": wl.cookie_header()}, 5)
+                  if args.only == "all" else None)
+        sizes = transfer_sizes(wl, board_id) if args.only == "all" else {}
         write_report(args, start, counts[board_id], results, export, sizes)
     finally:
         for app in (wl, bare):
@@ -396,7 +411,8 @@ def median(xs, key):
 
 def write_report(args, start, board, results, export, sizes):
     lines = [f"# Benchmark run {time.strftime('%Y-%m-%d %H:%M UTC', time.gmtime())}", "",
-             f"`python3 src/benchmark/run.py --rounds {args.rounds} --seconds {args.seconds}{' --cds' if args.cds else ''}` — wrk -t{args.threads} "
+             f"`python3 src/benchmark/run.py --rounds {args.rounds} --seconds {args.seconds}{' --cds' if args.cds else ''}"
+             f"{' --only pages' if args.only == 'pages' else ''}{' --jar ' + args.jar if args.jar else ''}` — wrk -t{args.threads} "
              f"-c{args.connections}, {args.rounds} interleaved rounds of {args.seconds} s, heap {args.heap}; "
              f"board {board[0]} ({board[1]} circuits). Medians; load = 1-minute load average during the runs.", "",
              "Throughput ratio = Wayledger req/s ÷ bare req/s (higher is better, goal ≥ the issue's figure); CPU ratio ="
@@ -417,7 +433,9 @@ def write_report(args, start, board, results, export, sizes):
                      " before the timing); the bare app as a plain jar.", ""] if args.cds else []),
               "| start-up | Wayledger | bare | ratio |", "|---|---|---|---|",
               f"| time to first page (s) | {w[0]:.1f} (load {w[2]:.1f}) | {b[0]:.1f} (load {b[2]:.1f}) | {w[0] / b[0]:.2f} |",
-              f"| idle RSS 10 s later (MB) | {w[1]:.0f} | {b[1]:.0f} | {w[1] / b[1]:.2f} |", "",
+              f"| idle RSS 10 s later (MB) | {w[1]:.0f} | {b[1]:.0f} | {w[1] / b[1]:.2f} |", ""]
+    if export:
+        lines += [
               f"Site export (XLSX, whole demo site), 5 single requests: median {statistics.median(export):.2f} s "
               f"(min {min(export):.2f}, max {max(export):.2f}), load {load():.1f}.", "",
               "| transfer | plain bytes | gzip bytes | Cache-Control |", "|---|---|---|---|"]
