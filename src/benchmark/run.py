@@ -199,6 +199,7 @@ def timed_get(app, path, headers, times):
 
 
 def main():
+    global OUT
     p = argparse.ArgumentParser(description=__doc__, formatter_class=argparse.RawDescriptionHelpFormatter)
     p.add_argument("--rounds", type=int, default=3)
     p.add_argument("--seconds", type=int, default=10)
@@ -220,7 +221,10 @@ def main():
     p.add_argument("--jar", help="measure this Wayledger jar instead of building one (e.g. a copy of an earlier"
                         " build, to compare two builds with the same command); the bare app is still built unless"
                         " --skip-build")
+    p.add_argument("--out", default=OUT, help="where results.md and the JFR recording go (default target/benchmark);"
+                   " give two runs at once different folders and ports")
     args = p.parse_args()
+    OUT = os.path.abspath(args.out)
     for tool in ("wrk", "java"):
         if not shutil.which(tool):
             raise SystemExit(f"{tool} is not on PATH")
