@@ -85,13 +85,13 @@ class SchedulePage {
     onBoard.forEach(
         circuit -> inherited.put(circuit.getId(), new Inheritance.Values(Inheritance.of(circuit))));
     model.addAttribute("inheritedByCircuit", inherited);
+    SiteAnalysis results = analysis.ofSite(board.getSite().getId());
     java.util.Map<Long, java.util.List<String>> missing = new java.util.HashMap<>();
+    // the dwelling boards as the kept analysis saw them: the same data generation, no extra read
     boolean locationChecked =
-        MissingInputs.locationChecked(
-            board, analysis.dwellingBoardIds(board.getSite().getId()).contains(boardId));
+        MissingInputs.locationChecked(board, results.dwellingBoardIds().contains(boardId));
     onBoard.forEach(
         circuit -> missing.put(circuit.getId(), MissingInputs.of(circuit, locationChecked)));
-    SiteAnalysis results = analysis.ofSite(board.getSite().getId());
     var demand = results.boardDemand(boardId);
     model.addAttribute("demand", demand);
     var circuitDemands = results.circuitDemands(boardId);
