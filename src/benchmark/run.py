@@ -221,6 +221,9 @@ def main():
     p.add_argument("--jar", help="measure this Wayledger jar instead of building one (e.g. a copy of an earlier"
                         " build, to compare two builds with the same command); the bare app is still built unless"
                         " --skip-build")
+    p.add_argument("--warmup", type=int,
+                   help="seconds of wrk per endpoint before the timed rounds (default half of --seconds); the JIT"
+                        " needs a few hundred requests of each page, which a loaded machine serves slowly")
     p.add_argument("--out", default=OUT, help="where results.md and the JFR recording go (default target/benchmark);"
                    " give two runs at once different folders and ports")
     args = p.parse_args()
@@ -303,7 +306,7 @@ def main():
         if args.only == "pages":
             pairs = pairs[:2]
         for app, (url, headers) in [(wl, p[1]) for p in pairs] + [(bare, p[2]) for p in pairs]:
-            wrk(url, headers, max(2, args.seconds // 2), args.connections, args.threads)  # warm-up
+            wrk(url, headers, args.warmup or max(2, args.seconds // 2), args.connections, args.threads)  # warm-up
         results = {label: ([], []) for label, _, _ in pairs}
         for r in range(args.rounds):
             for label, mine, theirs in pairs:
@@ -416,7 +419,7 @@ def median(xs, key):
 def write_report(args, start, board, results, export, sizes):
     lines = [f"# Benchmark run {time.strftime('%Y-%m-%d %H:%M UTC', time.gmtime())}", "",
              f"`python3 src/benchmark/run.py --rounds {args.rounds} --seconds {args.seconds}{' --cds' if args.cds else ''}"
-             f"{' --only pages' if args.only == 'pages' else ''}{' --jar ' + args.jar if args.jar else ''}` — wrk -t{args.threads} "
+             f"{' --only pages' if args.only == 'pages' else ''}{f' --warmup {args.warmup}' if args.warmup else ''}{' --jar ' + args.jar if args.jar else ''}` — wrk -t{args.threads} "
              f"-c{args.connections}, {args.rounds} interleaved rounds of {args.seconds} s, heap {args.heap}; "
              f"board {board[0]} ({board[1]} circuits). Medians; load = 1-minute load average during the runs.", "",
              "Throughput ratio = Wayledger req/s ÷ bare req/s (higher is better, goal ≥ the issue's figure); CPU ratio ="
