@@ -35,135 +35,162 @@ final class ScheduleLines {
       String focusElementId,
       PageWords words) {
     boolean severalLines = board.lineCount() > 1;
-    String none = words.word("common.none");
-    String edit = words.word("action.edit");
-    String delete = words.word("action.delete");
-    String addHere = words.word("schedule.addHere");
     List<ScheduleLine> lines = new ArrayList<>(rows.size());
     for (ScheduleRow row : rows) {
-      String id = row.elementId();
-      String way = Integer.toString(row.wayNumber());
-      String phaseClass = "phase ph-" + row.phase().name();
       String phase = row.phase().name();
       if (row.continuation()) {
+        lines.add(continuation(row, phase));
+      } else if (row.circuit() == null) {
+        lines.add(free(board, row, severalLines ? phase : "", contextPath, focusElementId, words));
+      } else {
         lines.add(
-            new ScheduleLine(
-                id,
-                way,
-                phaseClass,
-                phase,
-                true,
-                false,
-                false,
-                null,
-                1,
-                null,
-                null,
-                false,
-                false,
-                null,
-                null,
-                null,
-                List.of(),
-                null,
-                null,
-                false,
-                List.of(),
-                null,
-                null,
-                null,
-                null,
-                null,
-                null,
-                null,
-                false));
-        continue;
+            circuit(
+                board,
+                row,
+                severalLines ? phase : "",
+                contextPath,
+                missing,
+                demands,
+                figures,
+                problems,
+                words));
       }
-      String printedPhase = severalLines ? phase : "";
-      Circuit circuit = row.circuit();
-      if (circuit == null) {
-        lines.add(
-            new ScheduleLine(
-                id,
-                way,
-                phaseClass,
-                printedPhase,
-                false,
-                false,
-                true,
-                null,
-                1,
-                null,
-                null,
-                false,
-                false,
-                null,
-                null,
-                null,
-                List.of(),
-                null,
-                null,
-                false,
-                List.of(),
-                null,
-                null,
-                null,
-                null,
-                null,
-                contextPath
-                    + "/boards/"
-                    + board.getId()
-                    + "/circuits/new?way="
-                    + row.wayNumber()
-                    + "&position="
-                    + phase,
-                addHere + " " + row.wayNumber() + " " + phase,
-                id.equals(focusElementId)));
-        continue;
-      }
-      long circuitId = circuit.getId();
-      String circuitPath = contextPath + "/circuits/" + circuitId;
-      CircuitDemand demand = demands == null ? null : demands.get(circuitId);
-      String description = circuit.getDescription();
-      lines.add(
-          new ScheduleLine(
-              id,
-              way,
-              phaseClass,
-              printedPhase,
-              false,
-              true,
-              false,
-              "status-" + circuit.getStatus().name(),
-              row.spanRows(),
-              circuitPath,
-              description,
-              circuit.isLockedForBalancing(),
-              circuit.isRingFinal(),
-              needed(circuitId, missing == null ? null : missing.get(circuitId), words),
-              circuit.getDevice() != null ? circuit.getDevice().label() : none,
-              circuit.getCable() != null && circuit.getCable().isRecorded()
-                  ? circuit.getCable().label(board.cableUnits())
-                  : none,
-              circuit.getLoads().stream()
-                  .map(load -> new ScheduleLine.Load(load.getDescription(), load.ratingLabel()))
-                  .toList(),
-              figures.get(circuitId),
-              demand != null && !demand.isAssessed()
-                  ? words.sentence("schedule.notAssessed", demand.notAssessedReason())
-                  : null,
-              demand == null,
-              badges(circuitId, problems == null ? null : problems.get(circuitId), words),
-              words.word("enum.WayStatus." + circuit.getStatus().name()),
-              circuitPath + "/edit",
-              edit + " " + description,
-              circuitPath + "/delete",
-              delete + " " + description,
-              null,
-              null,
-              false));
     }
     return lines;
+  }
+
+  private static ScheduleLine continuation(ScheduleRow row, String phase) {
+    return new ScheduleLine(
+        row.elementId(),
+        Integer.toString(row.wayNumber()),
+        "phase ph-" + phase,
+        phase,
+        true,
+        false,
+        false,
+        null,
+        1,
+        null,
+        null,
+        false,
+        false,
+        null,
+        null,
+        null,
+        List.of(),
+        null,
+        null,
+        false,
+        List.of(),
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        null,
+        false);
+  }
+
+  private static ScheduleLine free(
+      Board board,
+      ScheduleRow row,
+      String printedPhase,
+      String contextPath,
+      String focusElementId,
+      PageWords words) {
+    String id = row.elementId();
+    String phase = row.phase().name();
+    return new ScheduleLine(
+        id,
+        Integer.toString(row.wayNumber()),
+        "phase ph-" + phase,
+        printedPhase,
+        false,
+        false,
+        true,
+        null,
+        1,
+        null,
+        null,
+        false,
+        false,
+        null,
+        null,
+        null,
+        List.of(),
+        null,
+        null,
+        false,
+        List.of(),
+        null,
+        null,
+        null,
+        null,
+        null,
+        contextPath
+            + "/boards/"
+            + board.getId()
+            + "/circuits/new?way="
+            + row.wayNumber()
+            + "&position="
+            + phase,
+        words.word("schedule.addHere") + " " + row.wayNumber() + " " + phase,
+        id.equals(focusElementId));
+  }
+
+  private static ScheduleLine circuit(
+      Board board,
+      ScheduleRow row,
+      String printedPhase,
+      String contextPath,
+      Map<Long, List<String>> missing,
+      Map<Long, CircuitDemand> demands,
+      Map<Long, ScheduleFigures> figures,
+      Map<Long, Map<Verdict, Long>> problems,
+      PageWords words) {
+    Circuit circuit = row.circuit();
+    long circuitId = circuit.getId();
+    String circuitPath = contextPath + "/circuits/" + circuitId;
+    CircuitDemand demand = demands == null ? null : demands.get(circuitId);
+    String description = circuit.getDescription();
+    String none = words.word("common.none");
+    return new ScheduleLine(
+        row.elementId(),
+        Integer.toString(row.wayNumber()),
+        "phase ph-" + row.phase().name(),
+        printedPhase,
+        false,
+        true,
+        false,
+        "status-" + circuit.getStatus().name(),
+        row.spanRows(),
+        circuitPath,
+        description,
+        circuit.isLockedForBalancing(),
+        circuit.isRingFinal(),
+        needed(circuitId, missing == null ? null : missing.get(circuitId), words),
+        circuit.getDevice() != null ? circuit.getDevice().label() : none,
+        circuit.getCable() != null && circuit.getCable().isRecorded()
+            ? circuit.getCable().label(board.cableUnits())
+            : none,
+        circuit.getLoads().stream()
+            .map(load -> new ScheduleLine.Load(load.getDescription(), load.ratingLabel()))
+            .toList(),
+        figures.get(circuitId),
+        demand != null && !demand.isAssessed()
+            ? words.sentence("schedule.notAssessed", demand.notAssessedReason())
+            : null,
+        demand == null,
+        badges(circuitId, problems == null ? null : problems.get(circuitId), words),
+        words.word("enum.WayStatus." + circuit.getStatus().name()),
+        circuitPath + "/edit",
+        words.word("action.edit") + " " + description,
+        circuitPath + "/delete",
+        words.word("action.delete") + " " + description,
+        null,
+        null,
+        false);
   }
 
   private static ScheduleLine.Needed needed(long circuitId, List<String> fields, PageWords words) {
