@@ -345,6 +345,7 @@ def write_startup_report(args, jvm, apps, runs):
 
 
 def main():
+    global OUT
     p = argparse.ArgumentParser(description=__doc__, formatter_class=argparse.RawDescriptionHelpFormatter)
     p.add_argument("--rounds", type=int, default=3)
     p.add_argument("--seconds", type=int, default=10)
@@ -359,8 +360,10 @@ def main():
     p.add_argument("--cds", action="store_true",
                    help="start Wayledger from its extracted jar with a class-data sharing archive (training run"
                         " first); the bare app still starts as a plain jar")
-    p.add_argument("--only", choices=("all", "startup"), default="all",
-                   help="startup: only time to first page and idle memory, --starts times each, interleaved")
+    p.add_argument("--only", choices=("all", "startup", "pages"), default="all",
+                   help="startup: only time to first page and idle memory, --starts times each, interleaved;"
+                        " pages: only the board schedule and full board page against the bare table (no site"
+                        " overview, API, export or transfer sizes); start-up is still timed")
     p.add_argument("--starts", type=int, default=3, help="with --only startup: starts of each app")
     p.add_argument("--nmt", action="store_true",
                    help="with --only startup: native memory tracking on in both apps, its summary in the report")
@@ -369,18 +372,32 @@ def main():
     p.add_argument("--variant", action="append", default=[],
                    help="with --only startup: another Wayledger start in the same rounds, NAME=ARGS or NAME=JAR|ARGS"
                         " (e.g. 'deferred=--spring.data.jpa.repositories.bootstrap-mode=deferred')")
-    p.add_argument("--jar", help="with --skip-build: the Wayledger jar to measure (default: the one in target/)")
     p.add_argument("--board", help="reference of the demo board to measure (default: the one with most circuits)")
+    p.add_argument("--jar", help="measure this Wayledger jar instead of building one (e.g. a copy of an earlier"
+                        " build, to compare two builds with the same command); the bare app is still built unless"
+                        " --skip-build")
+    p.add_argument("--warmup", type=int,
+                   help="seconds of wrk per endpoint before the timed rounds (default half of --seconds); the JIT"
+                        " needs a few hundred requests of each page, which a loaded machine serves slowly")
+    p.add_argument("--out", default=OUT, help="where results.md and the JFR recording go (default target/benchmark);"
+                   " give two runs at once different folders and ports")
     args = p.parse_args()
+    OUT = os.path.abspath(args.out)
     for tool in ("wrk", "java"):
         if not shutil.which(tool):
             raise SystemExit(f"{tool} is not on PATH")
     os.makedirs(OUT, exist_ok=True)
     if args.skip_build:
         jar = sorted(f for f in os.listdir(os.path.join(ROOT, "target")) if f.startswith("wayledger") and f.endswith(".jar"))[0]
-        wl_jar, bare_jar = args.jar or os.path.join(ROOT, "target", jar), os.path.join(BARE, "target", "bare.jar")
+        wl_jar, bare_jar = os.path.join(ROOT, "target", jar), os.path.join(BARE, "target", "bare.jar")
+    elif args.jar:
+        mvn = [os.path.join(ROOT, "mvnw"), "-B", "-q"] + ([] if args.online else ["-o"])
+        sh(mvn + ["-f", os.path.join(BARE, "pom.xml"), "package", "-DskipTests"], cwd=ROOT)
+        wl_jar, bare_jar = None, os.path.join(BARE, "target", "bare.jar")
     else:
         wl_jar, bare_jar = build(not args.online)
+    if args.jar:
+        wl_jar = os.path.abspath(args.jar)
     if args.only == "startup":
         startup_only(args, wl_jar, bare_jar)
         return
@@ -444,8 +461,10 @@ def main():
              (wl.url(f"/api/boards/{board_id}/demand"), [f"Authorization: {basic('demo', 'wayledger-demo')}"]),
              (bare.url("/api/rows"), [f"Authorization: {basic('bench', 'bench-password')}"])),
         ]
+        if args.only == "pages":
+            pairs = pairs[:2]
         for app, (url, headers) in [(wl, p[1]) for p in pairs] + [(bare, p[2]) for p in pairs]:
-            wrk(url, headers, max(2, args.seconds // 2), args.connections, args.threads)  # warm-up
+            wrk(url, headers, args.warmup or max(2, args.seconds // 2), args.connections, args.threads)  # warm-up
         results = {label: ([], []) for label, _, _ in pairs}
         for r in range(args.rounds):
             for label, mine, theirs in pairs:
@@ -458,8 +477,9 @@ def main():
                           f"{res['rps']:.0f} req/s p50 {res['p50_ms']:.1f} ms, server CPU {res['cpu_ms']:.2f} ms/request,"
                           f" load {res['load']:.1f}", flush=True)
 
-        export = timed_get(wl, f"/sites/{site_id}/export.xlsx", {"Cookie": wl.cookie_header()}, 5)
-        sizes = transfer_sizes(wl, board_id)
+        export = (timed_get(wl, f"/sites/{site_id}/export.xlsx", {"Cookie": wl.cookie_header()}, 5)
+                  if args.only == "all" else None)
+        sizes = transfer_sizes(wl, board_id) if args.only == "all" else {}
         write_report(args, start, counts[board_id], results, export, sizes)
     finally:
         for app in (wl, bare):
@@ -556,7 +576,8 @@ def median(xs, key):
 
 def write_report(args, start, board, results, export, sizes):
     lines = [f"# Benchmark run {time.strftime('%Y-%m-%d %H:%M UTC', time.gmtime())}", "",
-             f"`python3 src/benchmark/run.py --rounds {args.rounds} --seconds {args.seconds}{' --cds' if args.cds else ''}` — wrk -t{args.threads} "
+             f"`python3 src/benchmark/run.py --rounds {args.rounds} --seconds {args.seconds}{' --cds' if args.cds else ''}"
+             f"{' --only pages' if args.only == 'pages' else ''}{f' --warmup {args.warmup}' if args.warmup else ''}{' --jar ' + args.jar if args.jar else ''}` — wrk -t{args.threads} "
              f"-c{args.connections}, {args.rounds} interleaved rounds of {args.seconds} s, heap {args.heap}; "
              f"board {board[0]} ({board[1]} circuits). Medians; load = 1-minute load average during the runs.", "",
              "Throughput ratio = Wayledger req/s ÷ bare req/s (higher is better, goal ≥ the issue's figure); CPU ratio ="
@@ -577,7 +598,9 @@ def write_report(args, start, board, results, export, sizes):
                      " before the timing); the bare app as a plain jar.", ""] if args.cds else []),
               "| start-up | Wayledger | bare | ratio |", "|---|---|---|---|",
               f"| time to first page (s) | {w[0]:.1f} (load {w[2]:.1f}) | {b[0]:.1f} (load {b[2]:.1f}) | {w[0] / b[0]:.2f} |",
-              f"| idle RSS 10 s later (MB) | {w[1]:.0f} | {b[1]:.0f} | {w[1] / b[1]:.2f} |", "",
+              f"| idle RSS 10 s later (MB) | {w[1]:.0f} | {b[1]:.0f} | {w[1] / b[1]:.2f} |", ""]
+    if export:
+        lines += [
               f"Site export (XLSX, whole demo site), 5 single requests: median {statistics.median(export):.2f} s "
               f"(min {min(export):.2f}, max {max(export):.2f}), load {load():.1f}.", "",
               "| transfer | plain bytes | gzip bytes | Cache-Control |", "|---|---|---|---|"]

@@ -265,7 +265,7 @@ public class AnalysisService {
             ? Map.of()
             : com.wayledger.engine.dwelling.DwellingSite.worksheets(
                 spec, dwellingInputs, measuredDemands);
-    return new SiteAnalysis(spec, demand, findings, worksheets);
+    return new SiteAnalysis(spec, demand, findings, worksheets, dwellingInputs.keySet());
   }
 
   private static Map<Long, CircuitLoading> circuitLoadings(SiteDemand demand) {

@@ -44,8 +44,11 @@ public class BoardController {
     this.methods = methods;
   }
 
-  @ModelAttribute
-  void choices(Model model) {
+  /**
+   * The board form's choices. Only the form handlers add them: the board page and the site overview
+   * need none, and the methods are a database read.
+   */
+  private void choices(Model model) {
     FormChoices.addDeviceAndCable(model);
     model.addAttribute("methods", methods.entries());
   }
@@ -62,6 +65,7 @@ public class BoardController {
 
   @GetMapping("/sites/{siteId}/boards/new")
   public String newBoard(@PathVariable long siteId, Model model) {
+    choices(model);
     Site site = sites.get(siteId);
     model.addAttribute("site", site);
     model.addAttribute("boardSupplySystems", supplySystemsOf(site));
@@ -81,6 +85,7 @@ public class BoardController {
       @RequestParam(required = false) String reason,
       Model model,
       HttpServletResponse response) {
+    choices(model);
     form = FormRecovery.ensure(form, errors, model, "form", BoardForm.class, request);
     model.addAttribute("site", sites.get(siteId));
     model.addAttribute("boardSupplySystems", supplySystemsOf(sites.get(siteId)));
@@ -106,6 +111,7 @@ public class BoardController {
 
   @GetMapping("/boards/{id}/edit")
   public String edit(@PathVariable long id, Model model) {
+    choices(model);
     Board board = boards.get(id);
     model.addAttribute("board", board);
     model.addAttribute("site", board.getSite());
@@ -125,6 +131,7 @@ public class BoardController {
       @RequestParam(required = false) String reason,
       Model model,
       HttpServletResponse response) {
+    choices(model);
     form = FormRecovery.ensure(form, errors, model, "form", BoardForm.class, request);
     Board board = boards.get(id);
     model.addAttribute("board", board);

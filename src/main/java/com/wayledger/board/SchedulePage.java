@@ -1,9 +1,15 @@
 package com.wayledger.board;
 
 import com.wayledger.system.NotFoundException;
+import java.util.Locale;
+import java.util.Map;
+import org.springframework.context.MessageSource;
+import org.springframework.context.i18n.LocaleContextHolder;
 import org.springframework.stereotype.Component;
 import org.springframework.transaction.annotation.Transactional;
 import org.springframework.ui.Model;
+import org.springframework.web.context.request.RequestContextHolder;
+import org.springframework.web.context.request.ServletRequestAttributes;
 
 /**
  * Gathers what the schedule table of a board needs, for the full page and for its htmx fragments.
@@ -14,11 +20,17 @@ class SchedulePage {
   private final BoardRepository boards;
   private final CircuitRepository circuits;
   private final AnalysisService analysis;
+  private final MessageSource messages;
 
-  SchedulePage(BoardRepository boards, CircuitRepository circuits, AnalysisService analysis) {
+  SchedulePage(
+      BoardRepository boards,
+      CircuitRepository circuits,
+      AnalysisService analysis,
+      MessageSource messages) {
     this.boards = boards;
     this.circuits = circuits;
     this.analysis = analysis;
+    this.messages = messages;
   }
 
   @Transactional(readOnly = true)
@@ -73,29 +85,41 @@ class SchedulePage {
     onBoard.forEach(
         circuit -> inherited.put(circuit.getId(), new Inheritance.Values(Inheritance.of(circuit))));
     model.addAttribute("inheritedByCircuit", inherited);
+    SiteAnalysis results = analysis.ofSite(board.getSite().getId());
     java.util.Map<Long, java.util.List<String>> missing = new java.util.HashMap<>();
+    // the dwelling boards as the kept analysis saw them: the same data generation, no extra read
     boolean locationChecked =
-        MissingInputs.locationChecked(
-            board, analysis.dwellingBoardIds(board.getSite().getId()).contains(boardId));
+        MissingInputs.locationChecked(board, results.dwellingBoardIds().contains(boardId));
     onBoard.forEach(
         circuit -> missing.put(circuit.getId(), MissingInputs.of(circuit, locationChecked)));
-    model.addAttribute("missingByCircuit", missing);
-    SiteAnalysis results = analysis.ofSite(board.getSite().getId());
     var demand = results.boardDemand(boardId);
     model.addAttribute("demand", demand);
     var circuitDemands = results.circuitDemands(boardId);
     model.addAttribute("circuitDemand", circuitDemands);
-    model.addAttribute(
-        "figures",
+    Locale locale = LocaleContextHolder.getLocale();
+    model.addAttribute("decimals", new Decimals(locale));
+    Map<Long, ScheduleFigures> figures =
         demand == null
-            ? java.util.Map.of()
-            : ScheduleFigures.of(
-                rows,
-                circuitDemands,
-                demand.nominalVoltageVolts(),
-                org.springframework.context.i18n.LocaleContextHolder.getLocale()));
+            ? Map.of()
+            : ScheduleFigures.of(rows, circuitDemands, demand.nominalVoltageVolts(), locale);
     model.addAttribute("circuitFindings", results.circuitFindings(boardId));
-    model.addAttribute("circuitProblems", results.circuitProblemCounts(boardId));
+    var circuitProblems = results.circuitProblemCounts(boardId);
+    model.addAttribute("circuitProblems", circuitProblems);
+    // the schedule table's rows with their words, links and figures as text: one read per cell
+    PageWords words = new PageWords(messages, locale);
+    model.addAttribute("scheduleWords", ScheduleLine.Words.of(words));
+    model.addAttribute(
+        "lines",
+        ScheduleLines.of(
+            board,
+            rows,
+            contextPath(),
+            missing,
+            circuitDemands,
+            figures,
+            circuitProblems,
+            (String) model.getAttribute("focusElementId"),
+            words));
     model.addAttribute("problems", results.problems(boardId));
     model.addAttribute("problemCounts", results.problemCounts(boardId));
     model.addAttribute("boardFindings", results.boardFindings(boardId).orElse(null));
@@ -122,5 +146,12 @@ class SchedulePage {
       model.addAttribute("connectedAmps", PhaseChart.connectedAmps(demand));
     }
     return board;
+  }
+
+  /** The application's context path, put before every link a row prints ("" at the root). */
+  private static String contextPath() {
+    return RequestContextHolder.getRequestAttributes() instanceof ServletRequestAttributes request
+        ? request.getRequest().getContextPath()
+        : "";
   }
 }

@@ -20,20 +20,26 @@ import java.util.Optional;
  * Everything the engines say about one stored site, computed on read (no stored totals): the engine
  * input it was computed from, the demand on every circuit, phase and board, and the protection
  * findings.
+ *
+ * <p>{@code dwellingBoardIds} are the boards the analysis treated as serving a dwelling unit (those
+ * with NEC dwelling inputs), kept with it so that a page of the same data generation need not read
+ * them again.
  */
 public record SiteAnalysis(
     SiteSpec spec,
     SiteDemand demand,
     SiteFindings findings,
-    Map<Long, List<com.wayledger.engine.dwelling.Worksheet>> dwellingWorksheets) {
+    Map<Long, List<com.wayledger.engine.dwelling.Worksheet>> dwellingWorksheets,
+    java.util.Set<Long> dwellingBoardIds) {
 
   public SiteAnalysis {
     dwellingWorksheets = Map.copyOf(dwellingWorksheets);
+    dwellingBoardIds = java.util.Set.copyOf(dwellingBoardIds);
   }
 
   /** An analysis with no NEC dwelling worksheets (no dwelling inputs or recorded demands). */
   public SiteAnalysis(SiteSpec spec, SiteDemand demand, SiteFindings findings) {
-    this(spec, demand, findings, Map.of());
+    this(spec, demand, findings, Map.of(), java.util.Set.of());
   }
 
   /**
