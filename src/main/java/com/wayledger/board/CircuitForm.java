@@ -745,7 +745,12 @@ public record CircuitForm(
             ringFinal,
             deviceOverloadSettingAmps,
             deviceInstantaneousSettingAmps,
-            loadStartUpMultiple)
+            loadStartUpMultiple,
+            location,
+            deviceFaultInterrupter,
+            cableLineSize,
+            cableCpcSize,
+            cableLengthFeet)
         .withCableConduit(cableConduit);
   }
 
@@ -839,7 +844,10 @@ public record CircuitForm(
             instantaneousSettingAmps,
             null,
             location,
-            function)
+            function,
+            cableLineSize,
+            cableCpcSize,
+            cableLengthFeet)
         .withCableConduit(cableConduit);
   }
 
@@ -931,7 +939,10 @@ public record CircuitForm(
             instantaneousSettingAmps,
             loadStartUpMultiple,
             location,
-            deviceFaultInterrupter)
+            deviceFaultInterrupter,
+            cableLineSize,
+            cableCpcSize,
+            cableLengthFeet)
         .withCableConduit(cableConduit);
   }
 

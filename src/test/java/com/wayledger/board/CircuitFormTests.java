@@ -2,8 +2,13 @@ package com.wayledger.board;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import com.wayledger.engine.CircuitLocation;
+import com.wayledger.engine.ConductorMaterial;
+import com.wayledger.engine.Conduit;
 import com.wayledger.engine.DeviceKind;
 import com.wayledger.engine.DeviceSpec;
+import com.wayledger.engine.FaultInterrupter;
+import com.wayledger.engine.Insulation;
 import com.wayledger.engine.PhasePosition;
 import com.wayledger.engine.TripCurve;
 import com.wayledger.engine.WayStatus;
@@ -48,5 +53,32 @@ class CircuitFormTests {
     assertThat(insulated.ringFinal()).isTrue();
     assertThat(insulated.deviceOverloadSettingAmps()).isEqualTo(80.0);
     assertThat(insulated.description()).isEqualTo(spareMccb.description());
+  }
+
+  @Test
+  void everyWitherKeepsTheNorthAmericanFieldsOfTheRow() {
+    // a breaker on an NEC panel: room, GFCI breaker, 12 AWG typed in site units, PVC conduit
+    CircuitForm nec =
+        CircuitForm.blankAt(5, PhasePosition.L1)
+            .inUseAs(
+                "Kitchen counter", new DeviceSpec(DeviceKind.MCB, null, 20.0, 1, 10.0, null, null))
+            .at(CircuitLocation.OUTDOORS)
+            .withLocationAndFaultInterrupter(CircuitLocation.OUTDOORS, FaultInterrupter.GFCI)
+            .withCableUnits(3.31, 3.31, 12.19, "12 AWG", "12 AWG", 40.0)
+            .withCableConduit(Conduit.PVC);
+    for (CircuitForm copy :
+        java.util.List.of(
+            nec.withConductor(ConductorMaterial.COPPER, Insulation.THERMOPLASTIC_70),
+            nec.withThermalInsulationMm(100),
+            nec.withRingFinal(false),
+            nec.withMccbSettings(null, null),
+            nec.inUseAs("Kitchen counter east", null))) {
+      assertThat(copy.location()).isEqualTo(CircuitLocation.OUTDOORS);
+      assertThat(copy.deviceFaultInterrupter()).isEqualTo(FaultInterrupter.GFCI);
+      assertThat(copy.cableLineSize()).isEqualTo("12 AWG");
+      assertThat(copy.cableCpcSize()).isEqualTo("12 AWG");
+      assertThat(copy.cableLengthFeet()).isEqualTo(40.0);
+      assertThat(copy.cableConduit()).isEqualTo(Conduit.PVC);
+    }
   }
 }
