@@ -4,6 +4,7 @@ import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.CompletionException;
+import java.util.function.Function;
 import java.util.function.Supplier;
 
 /**
@@ -12,16 +13,29 @@ import java.util.function.Supplier;
  * first read at a newer generation computes it once while concurrent readers of that generation
  * wait for the same result; a reader that still sees an older generation computes for itself and
  * keeps nothing. At most {@code capacity} sites are kept, least recently read dropped first.
+ *
+ * <p>Beside each site's analysis are the page views built from it and the site's data at the same
+ * generation ({@link #view}): at most {@code viewsPerSite} of them per site, least recently read
+ * dropped first, and all of them dropped with the analysis when the generation moves on.
  */
 final class AnalysisCache {
 
-  private record Kept(long generation, CompletableFuture<SiteAnalysis> result) {}
+  private record Kept(
+      long generation,
+      CompletableFuture<SiteAnalysis> result,
+      Map<Object, CompletableFuture<Object>> views) {}
 
   private final int capacity;
+  private final int viewsPerSite;
   private final Map<Long, Kept> bySite;
 
   AnalysisCache(int capacity) {
+    this(capacity, 0);
+  }
+
+  AnalysisCache(int capacity, int viewsPerSite) {
     this.capacity = Math.max(0, capacity);
+    this.viewsPerSite = Math.max(0, viewsPerSite);
     this.bySite =
         new LinkedHashMap<>(16, 0.75f, true) {
           @Override
@@ -40,7 +54,7 @@ final class AnalysisCache {
         if (capacity == 0) {
           return compute.get();
         }
-        kept = new Kept(generation, new CompletableFuture<>());
+        kept = new Kept(generation, new CompletableFuture<>(), viewMap());
         bySite.put(siteId, kept);
         computeHere = true;
       } else if (kept.generation() > generation) {
@@ -61,8 +75,71 @@ final class AnalysisCache {
         throw failure;
       }
     }
+    return joined(kept.result());
+  }
+
+  /**
+   * A view of a site at a data generation, built from the site's analysis at that generation: a
+   * read at the same generation and key takes the kept view, the first computes it once while
+   * concurrent readers of the same key wait for it. A reader at an older generation than the kept
+   * one, or a site no longer kept, builds for itself and keeps nothing.
+   *
+   * @param analysis computes the site's analysis when it is not kept (see {@link #get})
+   * @param build builds the view from the analysis; reads the site's data itself
+   */
+  @SuppressWarnings("unchecked")
+  <V> V view(
+      long siteId,
+      long generation,
+      Object key,
+      Supplier<SiteAnalysis> analysis,
+      Function<SiteAnalysis, V> build) {
+    SiteAnalysis results = get(siteId, generation, analysis);
+    CompletableFuture<Object> view;
+    boolean buildHere = false;
+    Kept kept;
+    synchronized (bySite) {
+      kept = bySite.get(siteId);
+      if (kept == null || kept.generation() != generation || viewsPerSite == 0) {
+        view = null;
+      } else {
+        view = kept.views().get(key);
+        if (view == null) {
+          view = new CompletableFuture<>();
+          kept.views().put(key, view);
+          buildHere = true;
+        }
+      }
+    }
+    if (view == null) {
+      return build.apply(results);
+    }
+    if (buildHere) {
+      try {
+        view.complete(build.apply(results));
+      } catch (RuntimeException | Error failure) {
+        view.completeExceptionally(failure);
+        synchronized (bySite) {
+          kept.views().remove(key, view);
+        }
+        throw failure;
+      }
+    }
+    return (V) joined(view);
+  }
+
+  private Map<Object, CompletableFuture<Object>> viewMap() {
+    return new LinkedHashMap<>(16, 0.75f, true) {
+      @Override
+      protected boolean removeEldestEntry(Map.Entry<Object, CompletableFuture<Object>> eldest) {
+        return size() > viewsPerSite;
+      }
+    };
+  }
+
+  private static <T> T joined(CompletableFuture<T> result) {
     try {
-      return kept.result().join();
+      return result.join();
     } catch (CompletionException failed) {
       if (failed.getCause() instanceof RuntimeException runtime) {
         throw runtime;

@@ -23,6 +23,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.atomic.AtomicLong;
+import java.util.function.Function;
 import org.springframework.beans.factory.ObjectProvider;
 import org.springframework.beans.factory.annotation.Value;
 import org.springframework.stereotype.Service;
@@ -58,7 +59,8 @@ public class AnalysisService {
       MethodLibrary methodLibrary,
       ObjectProvider<SiteGenerations> generations,
       ObjectProvider<PlatformTransactionManager> transactions,
-      @Value("${wayledger.analysis.kept-sites:64}") int keptSites) {
+      @Value("${wayledger.analysis.kept-sites:64}") int keptSites,
+      @Value("${wayledger.analysis.kept-views-per-site:16}") int keptViewsPerSite) {
     this.sites = sites;
     this.boards = boards;
     this.dwellings = dwellings;
@@ -67,7 +69,10 @@ public class AnalysisService {
     // Without a database (web slice tests) nothing is kept: every read computes.
     this.generations = generations.getIfAvailable();
     PlatformTransactionManager manager = transactions.getIfAvailable();
-    this.kept = new AnalysisCache(this.generations == null || manager == null ? 0 : keptSites);
+    this.kept =
+        this.generations == null || manager == null
+            ? new AnalysisCache(0)
+            : new AnalysisCache(keptSites, keptViewsPerSite);
     this.readOnly = manager == null ? null : new TransactionTemplate(manager);
     if (readOnly != null) {
       readOnly.setReadOnly(true);
@@ -151,6 +156,35 @@ public class AnalysisService {
             .findById(boardId)
             .orElseThrow(() -> new com.wayledger.system.NotFoundException("Board", boardId));
     return ofSite(board.getSite().getId());
+  }
+
+  /**
+   * A view of a board built from its site's analysis and its stored data, kept beside the analysis
+   * under the same data generation (one query for the board's site and generation on a kept read).
+   * The view must hold no entity: it outlives the read-only transaction it is built in. Where the
+   * analysis is not kept (a transaction that may have changed data, no database), it is built
+   * afresh in the caller's transaction, or a read-only one when there is none.
+   *
+   * @param key what else the view depends on besides the board and the data (its locale, …)
+   * @param build builds the view from the site's analysis, reading the board's data itself
+   */
+  public <V> V keptBoardView(long boardId, Object key, Function<SiteAnalysis, V> build) {
+    if (mayKeep()) {
+      SiteGenerations.Stamp stamp =
+          generations
+              .ofBoard(boardId)
+              .orElseThrow(() -> new com.wayledger.system.NotFoundException("Board", boardId));
+      return kept.view(
+          stamp.siteId(),
+          stamp.generation(),
+          List.of(boardId, key),
+          () -> readOnly.execute(status -> computeOfSite(stamp.siteId())),
+          results -> readOnly.execute(status -> build.apply(results)));
+    }
+    if (readOnly != null && !TransactionSynchronizationManager.isActualTransactionActive()) {
+      return readOnly.execute(status -> build.apply(ofBoard(boardId)));
+    }
+    return build.apply(ofBoard(boardId));
   }
 
   /**

@@ -54,8 +54,9 @@ public class ScheduleController {
 
   @GetMapping("/boards/{boardId}/schedule")
   public String table(@PathVariable long boardId, Model model) {
-    Board board = schedulePage.fill(model, boardId);
-    return board.isPanelboard() ? PANEL_FRAGMENT : SCHEDULE_FRAGMENT;
+    return schedulePage.fill(model, boardId).board().panelboard()
+        ? PANEL_FRAGMENT
+        : SCHEDULE_FRAGMENT;
   }
 
   @GetMapping("/boards/{boardId}/circuits/new")

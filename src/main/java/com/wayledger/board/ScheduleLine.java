@@ -70,6 +70,40 @@ public record ScheduleLine(
     String addLabel,
     boolean autofocus) {
 
+  /** This line with its add button taking the keyboard focus (the next free row after a save). */
+  public ScheduleLine withAutofocus() {
+    return new ScheduleLine(
+        elementId,
+        way,
+        phaseClass,
+        phase,
+        continuation,
+        circuit,
+        free,
+        rowClass,
+        span,
+        href,
+        description,
+        locked,
+        ring,
+        needed,
+        device,
+        cable,
+        loads,
+        figures,
+        notAssessed,
+        noDemand,
+        badges,
+        status,
+        editHref,
+        editLabel,
+        deleteHref,
+        deleteLabel,
+        addHref,
+        addLabel,
+        true);
+  }
+
   /**
    * The inputs a circuit's checks still lack.
    *

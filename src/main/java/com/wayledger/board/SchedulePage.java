@@ -1,21 +1,30 @@
 package com.wayledger.board;
 
 import com.wayledger.system.NotFoundException;
+import java.util.Collections;
+import java.util.HashMap;
+import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.springframework.context.MessageSource;
 import org.springframework.context.i18n.LocaleContextHolder;
 import org.springframework.stereotype.Component;
-import org.springframework.transaction.annotation.Transactional;
 import org.springframework.ui.Model;
 import org.springframework.web.context.request.RequestContextHolder;
 import org.springframework.web.context.request.ServletRequestAttributes;
 
 /**
  * Gathers what the schedule table of a board needs, for the full page and for its htmx fragments.
+ * The gathered view ({@link BoardPage}) is built once per site data generation, locale and context
+ * path and kept beside the site's analysis ({@link AnalysisService#keptBoardView}): a read after no
+ * change costs the one generation query, and every change moves the generation on, so an edit shows
+ * at once.
  */
 @Component
 class SchedulePage {
+
+  /** What a board's view depends on besides its board and the site's data generation. */
+  private record ViewKey(Locale locale, String contextPath) {}
 
   private final BoardRepository boards;
   private final CircuitRepository circuits;
@@ -33,8 +42,7 @@ class SchedulePage {
     this.messages = messages;
   }
 
-  @Transactional(readOnly = true)
-  public Board fill(Model model, long boardId) {
+  public BoardPage fill(Model model, long boardId) {
     return fill(model, boardId, null);
   }
 
@@ -42,21 +50,25 @@ class SchedulePage {
    * As {@link #fill(Model, long)}, and puts the keyboard focus on the first free position after the
    * given way, so that after saving one row the next is one keystroke away.
    */
-  @Transactional(readOnly = true)
-  public Board fill(Model model, long boardId, Integer focusAfterWay) {
+  public BoardPage fill(Model model, long boardId, Integer focusAfterWay) {
+    Locale locale = LocaleContextHolder.getLocale();
+    String contextPath = contextPath();
+    BoardPage page =
+        analysis.keptBoardView(
+            boardId,
+            new ViewKey(locale, contextPath),
+            results -> build(boardId, results, locale, contextPath));
+    page.addTo(model, focusAfterWay);
+    return page;
+  }
+
+  /** Reads the board and its circuits (in the caller's transaction) and builds the page's view. */
+  private BoardPage build(long boardId, SiteAnalysis results, Locale locale, String contextPath) {
     Board board =
         boards.findById(boardId).orElseThrow(() -> new NotFoundException("Board", boardId));
     var onBoard = circuits.findByBoard(boardId);
-    onBoard.forEach(circuit -> circuit.getLoads().size());
-    model.addAttribute("board", board);
-    model.addAttribute("site", board.getSite());
-    board.getSite().getName();
-    if (board.getParent() != null) {
-      board.getParent().getReference();
-    }
     // "MDB, way 3 L1 “Kitchen DB”": the board and its way by name, never an id
-    model.addAttribute(
-        "feedingWay",
+    String feedingWay =
         board.getFedFromCircuitId() == null
             ? null
             : circuits
@@ -67,85 +79,73 @@ class SchedulePage {
                             + (way.getDescription() == null || way.getDescription().isBlank()
                                 ? ""
                                 : " “" + way.getDescription() + "”"))
-                .orElse(null));
-    model.addAttribute("panel", PanelLayout.of(board, onBoard));
+                .orElse(null);
     var rows = ScheduleRows.of(board, onBoard);
-    model.addAttribute("rows", rows);
-    model.addAttribute(
-        "focusElementId",
-        focusAfterWay == null
-            ? null
-            : rows.stream()
-                .filter(row -> row.isFree() && row.wayNumber() >= focusAfterWay)
-                .map(ScheduleRow::elementId)
-                .findFirst()
-                .orElse(null));
-    model.addAttribute("circuitCount", onBoard.size());
-    java.util.Map<Long, Inheritance.Values> inherited = new java.util.HashMap<>();
+    Map<Long, Inheritance.Values> inherited = new HashMap<>();
     onBoard.forEach(
         circuit -> inherited.put(circuit.getId(), new Inheritance.Values(Inheritance.of(circuit))));
-    model.addAttribute("inheritedByCircuit", inherited);
-    SiteAnalysis results = analysis.ofSite(board.getSite().getId());
-    java.util.Map<Long, java.util.List<String>> missing = new java.util.HashMap<>();
+    Map<Long, List<String>> missing = new HashMap<>();
     // the dwelling boards as the kept analysis saw them: the same data generation, no extra read
     boolean locationChecked =
         MissingInputs.locationChecked(board, results.dwellingBoardIds().contains(boardId));
     onBoard.forEach(
         circuit -> missing.put(circuit.getId(), MissingInputs.of(circuit, locationChecked)));
     var demand = results.boardDemand(boardId);
-    model.addAttribute("demand", demand);
     var circuitDemands = results.circuitDemands(boardId);
-    model.addAttribute("circuitDemand", circuitDemands);
-    Locale locale = LocaleContextHolder.getLocale();
-    model.addAttribute("decimals", new Decimals(locale));
     Map<Long, ScheduleFigures> figures =
         demand == null
             ? Map.of()
             : ScheduleFigures.of(rows, circuitDemands, demand.nominalVoltageVolts(), locale);
-    model.addAttribute("circuitFindings", results.circuitFindings(boardId));
     var circuitProblems = results.circuitProblemCounts(boardId);
-    model.addAttribute("circuitProblems", circuitProblems);
     // the schedule table's rows with their words, links and figures as text: one read per cell
     PageWords words = new PageWords(messages, locale);
-    model.addAttribute("scheduleWords", ScheduleLine.Words.of(words));
-    model.addAttribute(
-        "lines",
+    List<ScheduleLine> lines =
         ScheduleLines.of(
             board,
             rows,
-            contextPath(),
+            contextPath,
             missing,
             circuitDemands,
             figures,
             circuitProblems,
-            (String) model.getAttribute("focusElementId"),
-            words));
-    model.addAttribute("problems", results.problems(boardId));
-    model.addAttribute("problemCounts", results.problemCounts(boardId));
-    model.addAttribute("boardFindings", results.boardFindings(boardId).orElse(null));
-    model.addAttribute(
-        "findingGroups",
-        FindingGroups.of(
-            results.boardFindings(boardId).orElse(null), FindingGroups.notPassed(null)));
-    model.addAttribute("findingSettings", results.findings().settings());
-    model.addAttribute("worksheets", results.dwellingWorksheets(boardId));
-    results.spec().boards().stream()
-        .filter(spec -> spec.id() == boardId)
-        .findFirst()
-        .ifPresent(
-            spec ->
-                model.addAttribute(
-                    "dividingVolts",
+            null,
+            words);
+    var boardFindings = results.boardFindings(boardId).orElse(null);
+    Double dividingVolts =
+        results.spec().boards().stream()
+            .filter(spec -> spec.id() == boardId)
+            .findFirst()
+            .map(
+                spec ->
                     com.wayledger.engine.dwelling.DwellingSite.dividingVolts(
-                        spec, results.spec().supply().nominalVoltageToEarthVolts())));
-    if (demand != null) {
-      model.addAttribute(
-          "phaseChart",
-          PhaseChart.of(
-              demand, board.getIncomer() == null ? null : board.getIncomer().tripRatingAmps()));
-      model.addAttribute("connectedAmps", PhaseChart.connectedAmps(demand));
-    }
-    return board;
+                        spec, results.spec().supply().nominalVoltageToEarthVolts()))
+            .orElse(null);
+    return new BoardPage(
+        BoardView.of(board),
+        SiteView.of(board.getSite()),
+        feedingWay,
+        PanelLayout.of(board, onBoard),
+        List.copyOf(lines),
+        onBoard.size(),
+        Collections.unmodifiableMap(inherited),
+        demand,
+        circuitDemands,
+        new Decimals(locale),
+        results.circuitFindings(boardId),
+        circuitProblems,
+        ScheduleLine.Words.of(words),
+        results.problems(boardId),
+        results.problemCounts(boardId),
+        boardFindings,
+        FindingGroups.of(boardFindings, FindingGroups.notPassed(null)),
+        results.findings().settings(),
+        results.dwellingWorksheets(boardId),
+        dividingVolts,
+        demand == null
+            ? null
+            : PhaseChart.of(
+                demand, board.getIncomer() == null ? null : board.getIncomer().tripRatingAmps()),
+        demand == null ? null : PhaseChart.connectedAmps(demand));
   }
 
   /** The application's context path, put before every link a row prints ("" at the root). */

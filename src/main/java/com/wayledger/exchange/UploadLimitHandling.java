@@ -1,6 +1,7 @@
 package com.wayledger.exchange;
 
 import com.wayledger.system.FormStatus;
+import com.wayledger.system.PagePermissions;
 import jakarta.servlet.http.HttpServletResponse;
 import org.springframework.core.Ordered;
 import org.springframework.core.annotation.Order;
@@ -17,8 +18,15 @@ import org.springframework.web.multipart.MaxUploadSizeExceededException;
 @Order(Ordered.HIGHEST_PRECEDENCE)
 public class UploadLimitHandling {
 
+  private final PagePermissions permissions;
+
+  public UploadLimitHandling(PagePermissions permissions) {
+    this.permissions = permissions;
+  }
+
   @ExceptionHandler(MaxUploadSizeExceededException.class)
   public String tooBig(HttpServletResponse response, Model model) {
+    permissions.addTo(model);
     response.setStatus(413);
     model.addAttribute("status", 413);
     model.addAttribute("messageCode", "import.refused.tooBigForServer");

@@ -24,9 +24,11 @@ public class PageErrorHandling {
   private static final Logger LOG = LoggerFactory.getLogger(PageErrorHandling.class);
 
   private final MessageSource messages;
+  private final PagePermissions permissions;
 
-  public PageErrorHandling(MessageSource messages) {
+  public PageErrorHandling(MessageSource messages, PagePermissions permissions) {
     this.messages = messages;
+    this.permissions = permissions;
   }
 
   /** A parameter refused by the request text rules: 400 naming the field and the character. */
@@ -84,8 +86,10 @@ public class PageErrorHandling {
     return problem(HttpStatus.CONFLICT, "error.stale", model, response);
   }
 
-  private static String problem(
+  private String problem(
       HttpStatus status, String messageCode, Model model, HttpServletResponse response) {
+    // an exception handler's model gets no @ModelAttribute methods: the layout's menu needs these
+    permissions.addTo(model);
     response.setStatus(status.value());
     model.addAttribute("status", status.value());
     model.addAttribute("messageCode", messageCode);
