@@ -141,11 +141,7 @@ public class AnalysisService {
   /** The analysis of the site a board is on (see {@link #ofSite(long)}). */
   public SiteAnalysis ofBoard(long boardId) {
     if (mayKeep()) {
-      // one query for the board's site and its generation: no entity loaded on a kept read
-      SiteGenerations.Stamp stamp =
-          generations
-              .ofBoard(boardId)
-              .orElseThrow(() -> new com.wayledger.system.NotFoundException("Board", boardId));
+      SiteGenerations.Stamp stamp = stampOfBoard(boardId);
       return kept.get(
           stamp.siteId(),
           stamp.generation(),
@@ -156,6 +152,13 @@ public class AnalysisService {
             .findById(boardId)
             .orElseThrow(() -> new com.wayledger.system.NotFoundException("Board", boardId));
     return ofSite(board.getSite().getId());
+  }
+
+  /** One query for a board's site and its generation: no entity loaded on a kept read. */
+  private SiteGenerations.Stamp stampOfBoard(long boardId) {
+    return generations
+        .ofBoard(boardId)
+        .orElseThrow(() -> new com.wayledger.system.NotFoundException("Board", boardId));
   }
 
   /**
@@ -170,10 +173,7 @@ public class AnalysisService {
    */
   public <V> V keptBoardView(long boardId, Object key, Function<SiteAnalysis, V> build) {
     if (mayKeep()) {
-      SiteGenerations.Stamp stamp =
-          generations
-              .ofBoard(boardId)
-              .orElseThrow(() -> new com.wayledger.system.NotFoundException("Board", boardId));
+      SiteGenerations.Stamp stamp = stampOfBoard(boardId);
       return kept.view(
           stamp.siteId(),
           stamp.generation(),
