@@ -81,10 +81,6 @@ class SchedulePage {
                 .findFirst()
                 .orElse(null));
     model.addAttribute("circuitCount", onBoard.size());
-    java.util.Map<Long, Inheritance.Values> inherited = new java.util.HashMap<>();
-    onBoard.forEach(
-        circuit -> inherited.put(circuit.getId(), new Inheritance.Values(Inheritance.of(circuit))));
-    model.addAttribute("inheritedByCircuit", inherited);
     SiteAnalysis results = analysis.ofSite(board.getSite().getId());
     java.util.Map<Long, java.util.List<String>> missing = new java.util.HashMap<>();
     // the dwelling boards as the kept analysis saw them: the same data generation, no extra read
@@ -123,10 +119,9 @@ class SchedulePage {
     model.addAttribute("problems", results.problems(boardId));
     model.addAttribute("problemCounts", results.problemCounts(boardId));
     model.addAttribute("boardFindings", results.boardFindings(boardId).orElse(null));
+    // the findings list's lines with their words, links and notes as text: no fragment per line
     model.addAttribute(
-        "findingGroups",
-        FindingGroups.of(
-            results.boardFindings(boardId).orElse(null), FindingGroups.notPassed(null)));
+        "findingLines", FindingLines.ofBoard(boardId, results, onBoard, contextPath(), words));
     model.addAttribute("findingSettings", results.findings().settings());
     model.addAttribute("worksheets", results.dwellingWorksheets(boardId));
     results.spec().boards().stream()
