@@ -42,6 +42,11 @@ class FindingLinesTests {
         .placed("DB2", PhasePosition.L1, name);
   }
 
+  private static BoardFindings board(
+      String reference, List<Finding> own, List<CircuitFindings> circuits) {
+    return new BoardFindings(7L, reference, null, own, circuits);
+  }
+
   private static FindingList list(
       BoardFindings board, Map<Long, Inheritance.Values> inherited, Locale locale) {
     return FindingLines.of(
@@ -65,10 +70,8 @@ class FindingLinesTests {
   @Test
   void aCircuitsOwnLineLinksToItUnderTheContextPathWithItsVerdictWordAndAnchor() {
     BoardFindings board =
-        new BoardFindings(
-            7L,
+        board(
             "DB2",
-            null,
             List.of(),
             List.of(
                 circuit(
@@ -94,10 +97,8 @@ class FindingLinesTests {
   @Test
   void theBoardsOwnFindingHasNoLinkAndABlankRemedyPrintsNothing() {
     BoardFindings board =
-        new BoardFindings(
-            7L,
+        board(
             "DB2",
-            null,
             List.of(finding(CheckKind.PHASE_UNBALANCE, Verdict.WARNING, "phases unbalanced", " ")),
             List.of());
 
@@ -113,10 +114,8 @@ class FindingLinesTests {
   @Test
   void theInheritedValuesTheCheckUsedAreNotedInTheFormsOrderWithTheirSource() {
     BoardFindings board =
-        new BoardFindings(
-            7L,
+        board(
             "DB2",
-            null,
             List.of(),
             List.of(
                 circuit(
@@ -146,10 +145,8 @@ class FindingLinesTests {
                 new Inheritance.InheritedValue(
                     "loadStartUpMultiple", 8.0, Inheritance.Source.SITE, LoadCategory.MOTOR)));
     BoardFindings board =
-        new BoardFindings(
-            7L,
+        board(
             "DB2",
-            null,
             List.of(),
             List.of(
                 circuit(
@@ -167,10 +164,8 @@ class FindingLinesTests {
   void aGroupedLineListsItsWaysAndLinksEachPlaceAnchoringEachCircuitOnce() {
     Finding same = finding(CheckKind.BREAKING_CAPACITY, Verdict.WARNING, "Ics below PFC", "");
     BoardFindings board =
-        new BoardFindings(
-            7L,
+        board(
             "DB2",
-            null,
             List.of(),
             List.of(
                 circuit(30, 3, "Lights", same),
@@ -222,10 +217,8 @@ class FindingLinesTests {
   @Test
   void placesWhoseSentencesDifferEachPrintTheirOwnAndTheLineTheChecksTitle() {
     BoardFindings board =
-        new BoardFindings(
-            7L,
+        board(
             "DB2",
-            null,
             List.of(),
             List.of(
                 circuit(
@@ -247,10 +240,8 @@ class FindingLinesTests {
   @Test
   void adviceIsListedApartFromTheProblemsAndTheFilterKeepsOneVerdict() {
     BoardFindings board =
-        new BoardFindings(
-            7L,
+        board(
             "DB2",
-            null,
             List.of(finding(CheckKind.SELECTIVITY, Verdict.ADVICE, "partial selectivity", "")),
             List.of(
                 circuit(
@@ -276,10 +267,8 @@ class FindingLinesTests {
   void anNecSitesPageSaysSpacesAndPanelboardWhereABritishOneSaysWaysAndBoard() {
     Finding same = finding(CheckKind.CABLE_PROTECTION, Verdict.WARNING, "In > Iz", "");
     BoardFindings board =
-        new BoardFindings(
-            7L,
+        board(
             "LP1",
-            null,
             List.of(),
             List.of(
                 circuit(30, 3, "Lights", same),

@@ -2,6 +2,7 @@ package com.wayledger.board;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import com.wayledger.support.BrowserSteps;
 import com.wayledger.support.Chromium;
 import java.io.IOException;
 import java.time.Duration;
@@ -43,7 +44,7 @@ class FindingsFoldBrowserIntegrationTests {
       WebDriver browser = chromium.driver();
       JavascriptExecutor script = (JavascriptExecutor) browser;
       WebDriverWait wait = new WebDriverWait(browser, PATIENCE);
-      signIn(browser, wait);
+      BrowserSteps.signInAsDemo(browser, wait, "http://localhost:" + port);
       browser.findElement(By.linkText("Tallow Lane Works")).click();
       wait.until(ExpectedConditions.presenceOfElementLocated(By.linkText("KB1")));
       browser.get(browser.findElement(By.linkText("KB1")).getAttribute("href"));
@@ -62,7 +63,7 @@ class FindingsFoldBrowserIntegrationTests {
       assertThat(badge).as("a badge whose circuit has only advice").isNotNull();
       String target = badge.getAttribute("href").replaceAll(".*#", "");
 
-      script.executeScript("arguments[0].click();", badge);
+      BrowserSteps.click(browser, badge);
 
       wait.until(ExpectedConditions.presenceOfElementLocated(By.id(target)));
       wait.until(
@@ -87,13 +88,5 @@ class FindingsFoldBrowserIntegrationTests {
               width, chromium.elementsPastRightEdge())
           .isLessThanOrEqualTo(widths[1]);
     }
-  }
-
-  private void signIn(WebDriver browser, WebDriverWait wait) {
-    browser.get("http://localhost:" + port + "/login");
-    browser.findElement(By.id("username")).sendKeys("demo");
-    browser.findElement(By.id("password")).sendKeys("wayledger-demo");
-    browser.findElement(By.cssSelector("form button[type=submit]")).click();
-    wait.until(ExpectedConditions.urlContains("/sites"));
   }
 }
