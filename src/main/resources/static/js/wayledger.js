@@ -25,3 +25,24 @@ document.addEventListener("htmx:xhr:progress", (event) => {
     bar.setAttribute("value", (event.detail.loaded / event.detail.total) * 100);
   }
 });
+
+// A schedule badge links to its circuit's findings ("#findings-c7"). Advice lines are fetched when
+// their fold is opened, so a badge whose line is not on the page yet opens the fold and goes to the
+// line once it has arrived.
+document.addEventListener("click", (event) => {
+  const link = event.target.closest('a[href^="#findings-c"]');
+  const fold = document.querySelector("details.advice-rows[hx-get]");
+  if (!link || !fold || fold.open || document.getElementById(link.hash.slice(1))) {
+    return;
+  }
+  event.preventDefault();
+  const id = link.hash.slice(1);
+  const arrived = () => {
+    if (document.getElementById(id)) {
+      document.removeEventListener("htmx:afterSettle", arrived);
+      window.location.hash = id;
+    }
+  };
+  document.addEventListener("htmx:afterSettle", arrived);
+  fold.open = true;
+});

@@ -27,7 +27,6 @@ record BoardPage(
     PanelLayout panel,
     List<ScheduleLine> lines,
     int circuitCount,
-    Map<Long, Inheritance.Values> inheritedByCircuit,
     BoardDemand demand,
     Map<Long, CircuitDemand> circuitDemand,
     Decimals decimals,
@@ -37,7 +36,7 @@ record BoardPage(
     List<Finding> problems,
     Map<Verdict, Long> problemCounts,
     BoardFindings boardFindings,
-    List<FindingGroups.Group> findingGroups,
+    FindingList findingLines,
     ProtectionSettings findingSettings,
     List<Worksheet> worksheets,
     Double dividingVolts,
@@ -55,7 +54,6 @@ record BoardPage(
     model.addAttribute("panel", panel);
     model.addAttribute("lines", focusAfterWay == null ? lines : focused(focusAfterWay));
     model.addAttribute("circuitCount", circuitCount);
-    model.addAttribute("inheritedByCircuit", inheritedByCircuit);
     model.addAttribute("demand", demand);
     model.addAttribute("circuitDemand", circuitDemand);
     model.addAttribute("decimals", decimals);
@@ -65,7 +63,7 @@ record BoardPage(
     model.addAttribute("problems", problems);
     model.addAttribute("problemCounts", problemCounts);
     model.addAttribute("boardFindings", boardFindings);
-    model.addAttribute("findingGroups", findingGroups);
+    model.addAttribute("findingLines", findingLines);
     model.addAttribute("findingSettings", findingSettings);
     model.addAttribute("worksheets", worksheets);
     if (dividingVolts != null) {

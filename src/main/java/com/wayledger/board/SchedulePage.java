@@ -1,7 +1,6 @@
 package com.wayledger.board;
 
 import com.wayledger.system.NotFoundException;
-import java.util.Collections;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
@@ -81,9 +80,6 @@ class SchedulePage {
                                 : " “" + way.getDescription() + "”"))
                 .orElse(null);
     var rows = ScheduleRows.of(board, onBoard);
-    Map<Long, Inheritance.Values> inherited = new HashMap<>();
-    onBoard.forEach(
-        circuit -> inherited.put(circuit.getId(), new Inheritance.Values(Inheritance.of(circuit))));
     Map<Long, List<String>> missing = new HashMap<>();
     // the dwelling boards as the kept analysis saw them: the same data generation, no extra read
     boolean locationChecked =
@@ -127,7 +123,6 @@ class SchedulePage {
         PanelLayout.of(board, onBoard),
         List.copyOf(lines),
         onBoard.size(),
-        Collections.unmodifiableMap(inherited),
         demand,
         circuitDemands,
         new Decimals(locale),
@@ -137,7 +132,8 @@ class SchedulePage {
         results.problems(boardId),
         results.problemCounts(boardId),
         boardFindings,
-        FindingGroups.of(boardFindings, FindingGroups.notPassed(null)),
+        // the findings list's lines with their words, links and notes as text: no fragment per line
+        FindingLines.ofBoard(boardId, results, onBoard, contextPath, words),
         results.findings().settings(),
         results.dwellingWorksheets(boardId),
         dividingVolts,

@@ -2,6 +2,8 @@ package com.wayledger.check;
 
 import com.wayledger.board.AnalysisService;
 import com.wayledger.board.Circuit;
+import com.wayledger.board.Inheritance;
+import com.wayledger.board.InheritedNote;
 import com.wayledger.board.LoadItem;
 import com.wayledger.board.ScheduleService;
 import com.wayledger.board.SiteAnalysis;
@@ -13,10 +15,13 @@ import com.wayledger.engine.protection.DeviceProposal;
 import com.wayledger.engine.protection.ProtectionSettings;
 import com.wayledger.engine.protection.device.DeviceCharacteristic;
 import com.wayledger.engine.protection.device.TimeCurrentBand;
+import com.wayledger.engine.protection.result.Finding;
 import com.wayledger.engine.protection.result.Resolved;
 import com.wayledger.system.RuleViolation;
 import java.util.List;
 import java.util.Objects;
+import org.springframework.context.MessageSource;
+import org.springframework.context.i18n.LocaleContextHolder;
 import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
 import org.springframework.web.bind.annotation.GetMapping;
@@ -34,10 +39,13 @@ public class CircuitCheckController {
 
   private final ScheduleService schedule;
   private final AnalysisService analysis;
+  private final MessageSource messages;
 
-  public CircuitCheckController(ScheduleService schedule, AnalysisService analysis) {
+  public CircuitCheckController(
+      ScheduleService schedule, AnalysisService analysis, MessageSource messages) {
     this.schedule = schedule;
     this.analysis = analysis;
+    this.messages = messages;
   }
 
   @GetMapping("/circuits/{id}")
@@ -52,8 +60,16 @@ public class CircuitCheckController {
     model.addAttribute("board", circuit.getBoard());
     model.addAttribute("site", circuit.getBoard().getSite());
     model.addAttribute("loads", loads);
+    // "Used: ambient 30 °C (board default)" beside each finding whose check took such a value
     model.addAttribute(
-        "inherited", new com.wayledger.board.Inheritance.Values(schedule.inheritedBy(id)));
+        "inheritedNotes",
+        InheritedNote.byCheck(
+            new Inheritance.Values(schedule.inheritedBy(id)),
+            findings == null
+                ? List.of()
+                : findings.findings().stream().map(Finding::check).toList(),
+            messages,
+            LocaleContextHolder.getLocale()));
     model.addAttribute("demand", demand);
     model.addAttribute("circuitFindings", findings);
     model.addAttribute("settings", results.findings().settings());

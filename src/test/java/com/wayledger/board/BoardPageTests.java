@@ -17,8 +17,8 @@ class BoardPageTests {
 
   private static BoardPage pageOf(List<ScheduleLine> lines) {
     return new BoardPage(
-        null, null, null, null, lines, 0, Map.of(), null, Map.of(), null, Map.of(), Map.of(), null,
-        List.of(), Map.of(), null, List.of(), null, List.of(), null, null, null);
+        null, null, null, null, lines, 0, null, Map.of(), null, Map.of(), Map.of(), null, List.of(),
+        Map.of(), null, null, null, List.of(), null, null, null);
   }
 
   @SuppressWarnings("unchecked")

@@ -185,6 +185,38 @@ class DefaultsIntegrationTests {
   }
 
   @Test
+  void theBoardsFindingsListNotesTheInheritedValueBesideTheCircuitsLine() throws Exception {
+    mvc.perform(
+            post("/boards/{id}/defaults", boardId)
+                .with(user("ed").roles("EDITOR"))
+                .with(csrf())
+                .param("location", "OUTDOORS"))
+        .andExpect(status().is3xxRedirection());
+    long circuitId = addMotorCircuit(null);
+    assertThat(findingsOf(circuitId))
+        .as("an MCB without 30 mA protection feeding outdoor equipment is a problem")
+        .anySatisfy(
+            finding -> {
+              assertThat(finding.check())
+                  .isEqualTo(com.wayledger.engine.protection.result.CheckKind.SOCKET_RCD);
+              assertThat(finding.verdict().isProblem()).isTrue();
+            });
+
+    String page =
+        mvc.perform(get("/boards/{id}", boardId).with(user("ed").roles("EDITOR")))
+            .andExpect(status().isOk())
+            .andReturn()
+            .getResponse()
+            .getContentAsString();
+    assertThat(page)
+        .as("the circuit's line in the board's findings says which default it used")
+        .contains("id=\"findings-c" + circuitId + "\"")
+        .contains(
+            "<small class=\"inherited\"><span>Used:</span>\n"
+                + "  <span>Outdoors, or equipment used outdoors (board default)</span></small>");
+  }
+
+  @Test
   void aCircuitsOwnValueWinsOverEveryDefault() throws Exception {
     mvc.perform(siteDefaults("C", "30", "1", "0", "8")).andExpect(status().is3xxRedirection());
     long circuitId = addMotorCircuit("25");

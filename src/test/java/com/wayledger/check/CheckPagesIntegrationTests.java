@@ -159,13 +159,14 @@ class CheckPagesIntegrationTests {
       }
     }
     assertThat(ways).as("the demo has a remark repeated on several ways").isGreaterThan(2);
+    String verdict = check.substring(check.indexOf('|') + 1);
+    // the board page filtered to that grade prints its lines in place (advice included)
     String page =
-        mvc.perform(get("/boards/{id}", boardId).with(viewer()))
+        mvc.perform(get("/boards/{id}", boardId).param("severity", verdict).with(viewer()))
             .andExpect(status().isOk())
             .andReturn()
             .getResponse()
             .getContentAsString();
-    String verdict = check.substring(check.indexOf('|') + 1);
     int rows = page.split("class=\"finding v-" + verdict + " grouped\"", -1).length - 1;
     int list = Math.max(0, page.indexOf("id=\"findings\""));
     assertThat(rows)
@@ -178,6 +179,58 @@ class CheckPagesIntegrationTests {
     assertThat(singles)
         .as("fewer %s rows than findings (%d on one check alone)", verdict, ways)
         .isLessThan(results.problems(boardId).size());
+  }
+
+  @Test
+  void theBoardPageFoldsItsAdviceAndFetchesTheLinesWhenTheFoldIsOpened() throws Exception {
+    long kb1 = jdbc.sql("SELECT id FROM board WHERE reference = 'KB1'").query(Long.class).single();
+    long advice =
+        analysis.ofSite(siteOf(kb1)).problems(kb1).stream()
+            .filter(f -> f.verdict() == com.wayledger.engine.protection.result.Verdict.ADVICE)
+            .count();
+    assertThat(advice).as("the demo's KB1 has advice").isGreaterThan(1);
+
+    String page = page("/boards/" + kb1);
+    assertThat(page)
+        .as("the advice lines are left out of the page, the fold and its fetch are there")
+        .doesNotContain("class=\"finding v-ADVICE")
+        .contains("<summary>Advice: ")
+        .contains("hx-get=\"/boards/" + kb1 + "/findings/advice\"")
+        .contains("href=\"/boards/" + kb1 + "?severity=ADVICE#findings\"")
+        .contains("class=\"finding v-WARNING")
+        .contains("assist a competent person");
+
+    String fetched = page("/boards/" + kb1 + "/findings/advice");
+    String inPlace = page("/boards/" + kb1 + "?severity=ADVICE");
+    assertThat(fetched)
+        .as("the fetched lines: advice only, no page around them")
+        .startsWith("<ul class=\"finding-list advice-lines\">")
+        .doesNotContain("class=\"finding v-WARNING")
+        .doesNotContain("<footer");
+    int lines = fetched.split("class=\"finding v-ADVICE", -1).length - 1;
+    assertThat(lines)
+        .as("one line per advice row, as the fold's summary counts them")
+        .isGreaterThan(0)
+        .isLessThanOrEqualTo((int) advice);
+    assertThat(inPlace)
+        .as("filtered to advice, the page prints the same lines in place, opened")
+        .contains("<details class=\"advice-rows\" open=\"open\">")
+        .contains(fetched.substring(0, Math.min(fetched.length(), 2000)));
+  }
+
+  private String page(String path) throws Exception {
+    return mvc.perform(get(path).with(viewer()))
+        .andExpect(status().isOk())
+        .andReturn()
+        .getResponse()
+        .getContentAsString();
+  }
+
+  private long siteOf(long board) {
+    return jdbc.sql("SELECT site_id FROM board WHERE id = ?")
+        .param(board)
+        .query(Long.class)
+        .single();
   }
 
   private long circuit(String description) {
