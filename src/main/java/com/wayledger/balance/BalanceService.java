@@ -267,11 +267,14 @@ public class BalanceService {
 
   /**
    * Whether a two-pole circuit may move as a pair: in use, on a three-line panelboard, with its two
-   * spaces on the panel and on the lines its position says.
+   * spaces on the panel and on the lines its position says, and feeding no sub-board (a 120/208 V
+   * panel fed from two poles draws unequal currents on its two lines, which |S|/U_LL on each would
+   * not follow when it moves; its feeder stays, fixed at the demand engine's own per-line figures).
    */
   private static boolean movesAsPair(PanelSpaces panel, CircuitSpec circuit) {
     return panel != null
         && panel.lines() == 3
+        && circuit.feedsBoardId() == null
         && circuit.status() == WayStatus.IN_USE
         && panel.fitOf(circuit.wayNumber(), 2) == PanelSpaces.Fit.FITS
         && panel.positionOf(circuit.wayNumber(), 2) == circuit.position();

@@ -253,6 +253,46 @@ class TwoPoleBalancingTests {
         .isCloseTo(40.0 * (1 - Math.cos(Math.toRadians(15))) + (heaterAmps - 20.0), within(0.05));
   }
 
+  @Test
+  void aTwoPoleFeederToASubBoardStaysOnItsPair() {
+    CircuitSpec load = circuit(1, 1, PhasePosition.L1_L2, 4160.0);
+    CircuitSpec feeder =
+        new CircuitSpec(
+            load.id(),
+            load.wayNumber(),
+            load.position(),
+            "Feeder to apartment panel",
+            load.status(),
+            false,
+            load.device(),
+            load.cable(),
+            List.of(),
+            7L,
+            null);
+    BoardSpec board =
+        new BoardSpec(
+            1,
+            "HP",
+            3,
+            12,
+            null,
+            null,
+            null,
+            null,
+            10.0,
+            1.0,
+            DiversityMethods.NONE,
+            null,
+            null,
+            List.of(feeder, circuit(2, 2, PhasePosition.L1, 2400.0)));
+
+    BalanceProblem problem =
+        BalanceService.problemOf(board, null, BalancePlans.Basis.CONNECTED, new PanelSpaces(12, 3));
+
+    assertThat(problem.twoPoles()).as("a feeder is never a movable pair").isEmpty();
+    assertThat(problem.items()).extracting(BalanceItem::circuitId).containsExactly(2L);
+  }
+
   private static CircuitSpec lockedCircuit(long id, int way, PhasePosition position, double watts) {
     CircuitSpec free = circuit(id, way, position, watts);
     return new CircuitSpec(
