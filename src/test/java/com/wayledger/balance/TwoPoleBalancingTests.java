@@ -59,20 +59,10 @@ class TwoPoleBalancingTests {
   @Test
   void twoPoleLoadOnA208VoltBoardIsFixedLoadOnBothItsLines() {
     BoardSpec board =
-        new BoardSpec(
-            1,
+        board(
             "HP",
             3,
             42,
-            null,
-            null,
-            null,
-            null,
-            10.0,
-            1.0,
-            DiversityMethods.NONE,
-            null,
-            null,
             List.of(
                 circuit(1, 1, PhasePosition.L2_L3, 4160.0),
                 circuit(2, 2, PhasePosition.L1, 1200.0)));
@@ -109,20 +99,10 @@ class TwoPoleBalancingTests {
   @Test
   void aSplitPhasePanelIsBalancedOverItsTwoLines() {
     BoardSpec board =
-        new BoardSpec(
-            1,
+        board(
             "Apt 1",
             1,
             42,
-            null,
-            null,
-            null,
-            null,
-            10.0,
-            1.0,
-            DiversityMethods.NONE,
-            null,
-            null,
             List.of(
                 circuit(1, 1, PhasePosition.L1_L2, 4800.0),
                 circuit(2, 5, PhasePosition.L1, 1200.0),
@@ -180,20 +160,10 @@ class TwoPoleBalancingTests {
   @Test
   void aTwoPoleLoadOnA208VoltPanelMovesToAnotherPairAndTheDemandEngineAgrees() {
     BoardSpec board =
-        new BoardSpec(
-            1,
+        board(
             "RTU",
             3,
             12,
-            null,
-            null,
-            null,
-            null,
-            10.0,
-            1.0,
-            DiversityMethods.NONE,
-            null,
-            null,
             List.of(
                 circuit(1, 1, PhasePosition.L1_L2, 4160.0),
                 lockedCircuit(2, 2, PhasePosition.L1, 2400.0)));
@@ -269,28 +239,32 @@ class TwoPoleBalancingTests {
             List.of(),
             7L,
             null);
-    BoardSpec board =
-        new BoardSpec(
-            1,
-            "HP",
-            3,
-            12,
-            null,
-            null,
-            null,
-            null,
-            10.0,
-            1.0,
-            DiversityMethods.NONE,
-            null,
-            null,
-            List.of(feeder, circuit(2, 2, PhasePosition.L1, 2400.0)));
+    BoardSpec board = board("HP", 3, 12, List.of(feeder, circuit(2, 2, PhasePosition.L1, 2400.0)));
 
     BalanceProblem problem =
         BalanceService.problemOf(board, null, BalancePlans.Basis.CONNECTED, new PanelSpaces(12, 3));
 
     assertThat(problem.twoPoles()).as("a feeder is never a movable pair").isEmpty();
     assertThat(problem.items()).extracting(BalanceItem::circuitId).containsExactly(2L);
+  }
+
+  private static BoardSpec board(
+      String reference, int phases, int spaces, List<CircuitSpec> circuits) {
+    return new BoardSpec(
+        1,
+        reference,
+        phases,
+        spaces,
+        null,
+        null,
+        null,
+        null,
+        10.0,
+        1.0,
+        DiversityMethods.NONE,
+        null,
+        null,
+        circuits);
   }
 
   private static CircuitSpec lockedCircuit(long id, int way, PhasePosition position, double watts) {

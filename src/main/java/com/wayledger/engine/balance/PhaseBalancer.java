@@ -220,12 +220,9 @@ public final class PhaseBalancer {
 
   private static LimitAnswer fewestMovesToLimit(
       PreparedBoard board, double limitPercent, List<MovesStep> rows, SearchBudget budget) {
-    // Unbalance ≤ limit ⇔ every line within mean·(1 ± limit/100); the tolerance absorbs the decimal
-    // limit.
-    double mean = board.total / (double) board.lines;
-    double allowed = mean * limitPercent / 100.0;
-    long lowest = (long) Math.ceil(mean - allowed - 1e-9);
-    long highest = (long) Math.floor(mean + allowed + 1e-9);
+    long[] band = board.limitBand(limitPercent);
+    long lowest = band[0];
+    long highest = band[1];
     long[] now = board.loadsOf(board.currentPhase);
     if (within(now, board.lines, lowest, highest)) {
       return new LimitAnswer(LimitVerdict.ALREADY_WITHIN, 0, board.currentPhase.clone());

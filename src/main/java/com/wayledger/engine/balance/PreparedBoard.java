@@ -191,22 +191,13 @@ final class PreparedBoard {
         return failed(BalanceOutcome.INVALID_INPUT, "The circuit list contains an empty entry.");
       }
       if (!ids.add(item.circuitId())) {
-        return failed(
-            BalanceOutcome.INVALID_INPUT,
-            "Circuit id "
-                + item.circuitId()
-                + " appears more than once; each circuit may be listed once.");
+        return failed(BalanceOutcome.INVALID_INPUT, duplicateId(item.circuitId()));
       }
       if (item.demandAmps() == null) {
         missingDemand.add("'" + item.label() + "'");
       } else if (!Double.isFinite(item.demandAmps()) || item.demandAmps() < 0.0) {
         return failed(
-            BalanceOutcome.INVALID_INPUT,
-            "Circuit '"
-                + item.label()
-                + "' has an impossible demand of "
-                + item.demandAmps()
-                + " A; demand must be zero or more.");
+            BalanceOutcome.INVALID_INPUT, impossibleDemand(item.label(), item.demandAmps()));
       }
       if (!item.movable() && item.currentPhase() == null) {
         unplacedLocked.add("'" + item.label() + "'");
@@ -220,9 +211,7 @@ final class PreparedBoard {
       }
     }
     if (!missingDemand.isEmpty()) {
-      return failed(
-          BalanceOutcome.NOT_ASSESSED,
-          "Not assessed: demand current not known for " + String.join(", ", missingDemand) + ".");
+      return failed(BalanceOutcome.NOT_ASSESSED, demandNotKnown(missingDemand));
     }
     if (!unplacedLocked.isEmpty()) {
       return failed(
@@ -359,6 +348,34 @@ final class PreparedBoard {
     }
     return new Preparation(
         new PreparedBoard(problem, movable, locked, fixed, capacity, notes), null, null);
+  }
+
+  static String duplicateId(long circuitId) {
+    return "Circuit id " + circuitId + " appears more than once; each circuit may be listed once.";
+  }
+
+  static String impossibleDemand(String label, double amps) {
+    return "Circuit '"
+        + label
+        + "' has an impossible demand of "
+        + amps
+        + " A; demand must be zero or more.";
+  }
+
+  static String demandNotKnown(List<String> quotedLabels) {
+    return "Not assessed: demand current not known for " + String.join(", ", quotedLabels) + ".";
+  }
+
+  /**
+   * The band of line loads, centiamps, inside which the unbalance is within {@code limitPercent}:
+   * every line within mean·(1 ± limit/100); the tolerance absorbs the decimal limit.
+   */
+  long[] limitBand(double limitPercent) {
+    double mean = total / (double) lines;
+    double allowed = mean * limitPercent / 100.0;
+    return new long[] {
+      (long) Math.ceil(mean - allowed - 1e-9), (long) Math.floor(mean + allowed + 1e-9)
+    };
   }
 
   private static Preparation failed(BalanceOutcome outcome, String message) {

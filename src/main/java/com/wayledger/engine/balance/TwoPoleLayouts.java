@@ -73,11 +73,7 @@ final class TwoPoleLayouts {
         return failed(BalanceOutcome.INVALID_INPUT, "The circuit list contains an empty entry.");
       }
       if (!ids.add(item.circuitId())) {
-        return failed(
-            BalanceOutcome.INVALID_INPUT,
-            "Circuit id "
-                + item.circuitId()
-                + " appears more than once; each circuit may be listed once.");
+        return failed(BalanceOutcome.INVALID_INPUT, PreparedBoard.duplicateId(item.circuitId()));
       }
       if (panel.fitOf(item.firstSpace(), 2) != PanelSpaces.Fit.FITS) {
         return failed(
@@ -95,17 +91,11 @@ final class TwoPoleLayouts {
       } else if (!Double.isFinite(item.lineAmps()) || item.lineAmps() < 0.0) {
         return failed(
             BalanceOutcome.INVALID_INPUT,
-            "Circuit '"
-                + item.label()
-                + "' has an impossible demand of "
-                + item.lineAmps()
-                + " A; demand must be zero or more.");
+            PreparedBoard.impossibleDemand(item.label(), item.lineAmps()));
       }
     }
     if (!missing.isEmpty()) {
-      return failed(
-          BalanceOutcome.NOT_ASSESSED,
-          "Not assessed: demand current not known for " + String.join(", ", missing) + ".");
+      return failed(BalanceOutcome.NOT_ASSESSED, PreparedBoard.demandNotKnown(missing));
     }
 
     List<TwoPoleItem> movers = new ArrayList<>();

@@ -334,11 +334,8 @@ final class TwoPoleSearch {
         return result.limitVerdict();
       }
       PhaseCurrents now = result.before();
-      double mean = keys.total / (double) keys.lines;
-      double allowed = mean * limit / 100.0;
-      long lowest = (long) Math.ceil(mean - allowed - 1e-9);
-      long highest = (long) Math.floor(mean + allowed + 1e-9);
-      return PhaseBalancer.within(centiamps(now), keys.lines, lowest, highest)
+      long[] band = keys.limitBand(limit);
+      return PhaseBalancer.within(centiamps(now), keys.lines, band[0], band[1])
           ? LimitVerdict.ALREADY_WITHIN
           : LimitVerdict.NOT_REACHABLE;
     }
