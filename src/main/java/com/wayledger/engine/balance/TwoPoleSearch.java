@@ -11,11 +11,12 @@ import java.util.Map;
 /**
  * Balancing a three-line panelboard whose two-pole breakers may move: every layout of the two-pole
  * breakers ({@link TwoPoleLayouts}) is solved as a single-pole problem by the exact searches, each
- * with an equal share of the budget, and the answers are combined. The optimum is the best layout's
- * optimum (ties: fewer moves); row k of the fewest-moves list is the best over layouts whose
- * two-pole moves m leave k − m single-pole moves; the fewest moves to the limit is the smallest m +
- * that layout's count. A combined figure is "proved" only when every layout's search behind it
- * finished.
+ * with an equal share of what is left of the budget (a layout whose lower bound cannot beat the
+ * best found is skipped in the optimal mode), and the answers are combined. The optimum is the best
+ * layout's optimum (ties: fewer moves); row k of the fewest-moves list is the best over layouts
+ * whose two-pole moves m leave k − m single-pole moves; the fewest moves to the limit is the
+ * smallest m + that layout's count. A combined figure is "proved" only when every layout's search
+ * behind it finished.
  */
 final class TwoPoleSearch {
 
@@ -29,7 +30,7 @@ final class TwoPoleSearch {
     if (layouts.layouts().size() == 1) {
       return balancer.optimise(layouts.layouts().get(0).problem()); // no two-pole breaker can move
     }
-    PhaseBalancer share = sharing(balancer, layouts);
+    Budget budget = new Budget(balancer.settings(), layouts.layouts().size(), 1);
     BalanceResult first = null;
     BalanceResult best = null;
     TwoPoleLayouts.Layout bestLayout = null;
@@ -40,7 +41,17 @@ final class TwoPoleSearch {
     double lowerBound = Double.POSITIVE_INFINITY;
     long nodes = 0;
     for (TwoPoleLayouts.Layout layout : layouts.layouts()) {
-      BalanceResult result = share.optimise(layout.problem());
+      PreparedBoard prepared = PreparedBoard.prepare(layout.problem()).board();
+      if (best != null
+          && prepared != null
+          && new AssignmentSearch(prepared, new SearchBudget(balancer.settings())).rootBoundKey()
+              > bestKey) {
+        budget
+            .skip(); // no arrangement of this layout can beat the best found: a proof, not a guess
+        continue;
+      }
+      BalanceResult result = budget.next().optimise(layout.problem());
+      budget.spent(result.nodesExplored());
       first = first == null ? result : first;
       if (result.after() == null) {
         continue; // this layout leaves too few spaces for the single-pole circuits
@@ -108,12 +119,14 @@ final class TwoPoleSearch {
     if (layouts.layouts().size() == 1) {
       return balancer.fewestMoves(layouts.layouts().get(0).problem());
     }
-    PhaseBalancer share = sharing(balancer, layouts);
+    // a fewest-moves call may spend three budgets (docs/calculations/balance.md)
+    Budget budget = new Budget(balancer.settings(), layouts.layouts().size(), 3);
     List<Answer> answers = new ArrayList<>();
     PreparedBoard keys = null;
     long nodes = 0;
     for (TwoPoleLayouts.Layout layout : layouts.layouts()) {
-      FewestMovesResult result = share.fewestMoves(layout.problem());
+      FewestMovesResult result = budget.next().fewestMoves(layout.problem());
+      budget.spent(result.nodesExplored());
       boolean nothing = result.outcome() == BalanceOutcome.NOTHING_TO_MOVE;
       if (result.steps().isEmpty() && !(nothing && result.before() != null)) {
         if (answers.isEmpty()) {
@@ -353,14 +366,43 @@ final class TwoPoleSearch {
     };
   }
 
-  /** Each layout gets an equal share of the node and time budgets. */
-  private static PhaseBalancer sharing(PhaseBalancer balancer, TwoPoleLayouts.Layouts layouts) {
-    int count = Math.max(1, layouts.layouts().size());
-    BalanceSettings whole = balancer.settings();
-    return new PhaseBalancer(
-        new BalanceSettings(
-            Math.max(1, whole.nodeBudget() / count),
-            Math.max(1, whole.timeBudgetMillis() / count)));
+  /**
+   * The whole call's node and time budgets shared out over the layouts: each layout gets an equal
+   * share of what is left, so what an easy layout does not use goes to the later ones.
+   */
+  private static final class Budget {
+    private final long perCall;
+    private long nodesLeft;
+    private final long deadlineNanos;
+    private int layoutsLeft;
+
+    /**
+     * @param callsPerLayout the budgets one layout's call may spend (1 for the optimum, 3 for
+     *     fewest moves)
+     */
+    Budget(BalanceSettings whole, int layouts, int callsPerLayout) {
+      this.perCall = callsPerLayout;
+      this.nodesLeft = whole.nodeBudget() * callsPerLayout;
+      this.deadlineNanos =
+          System.nanoTime() + whole.timeBudgetMillis() * callsPerLayout * 1_000_000L;
+      this.layoutsLeft = Math.max(1, layouts);
+    }
+
+    PhaseBalancer next() {
+      long share = Math.max(1, nodesLeft / (perCall * layoutsLeft));
+      long millis = Math.max(1, (deadlineNanos - System.nanoTime()) / 1_000_000L);
+      layoutsLeft = Math.max(1, layoutsLeft - 1);
+      return new PhaseBalancer(
+          new BalanceSettings(share, Math.max(1, millis / (perCall * (layoutsLeft + 1)))));
+    }
+
+    void spent(long nodes) {
+      nodesLeft = Math.max(0, nodesLeft - nodes);
+    }
+
+    void skip() {
+      layoutsLeft = Math.max(1, layoutsLeft - 1);
+    }
   }
 
   /**
