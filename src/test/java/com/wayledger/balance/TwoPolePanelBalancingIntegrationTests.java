@@ -9,6 +9,7 @@ import static org.springframework.test.web.servlet.request.MockMvcRequestBuilder
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
 
 import com.wayledger.board.AnalysisService;
+import com.wayledger.board.ScheduleService;
 import com.wayledger.engine.demand.PhaseDemand;
 import java.util.List;
 import java.util.UUID;
@@ -36,6 +37,7 @@ class TwoPolePanelBalancingIntegrationTests {
   @Autowired MockMvc mvc;
   @Autowired JdbcClient jdbc;
   @Autowired AnalysisService analysis;
+  @Autowired ScheduleService schedule;
 
   private MockHttpServletRequestBuilder editor(MockHttpServletRequestBuilder request) {
     return request.with(user("ed").roles("EDITOR")).with(csrf());
@@ -146,5 +148,23 @@ class TwoPolePanelBalancingIntegrationTests {
     assertThat(lines.get(0).currentAmps()).as("A").isCloseTo(20.0, within(0.01));
     assertThat(lines.get(1).currentAmps()).as("B").isCloseTo(heater, within(0.01));
     assertThat(lines.get(2).currentAmps()).as("C").isCloseTo(heater, within(0.01));
+
+    String undo = html.selectFirst("input[name=undo]").val();
+    mvc.perform(
+            editor(post("/boards/{id}/balance/apply", board))
+                .param("placements", undo)
+                .param("version", schedule.scheduleToken(board))
+                .param("undoing", "true"))
+        .andExpect(status().is3xxRedirection());
+    assertThat(
+            jdbc.sql(
+                    "SELECT s.way_number || ' ' || s.phase FROM way_slot s JOIN circuit c ON"
+                        + " c.id = s.circuit_id WHERE c.board_id = ? AND c.description = 'Load at"
+                        + " space 1' ORDER BY s.way_number")
+                .param(board)
+                .query(String.class)
+                .list())
+        .as("undo puts it back on spaces 1 and 3, A and B")
+        .containsExactly("1 L1", "3 L2");
   }
 }
