@@ -18,6 +18,7 @@ import com.wayledger.engine.balance.CircuitMove;
 import com.wayledger.engine.balance.FewestMovesResult;
 import com.wayledger.engine.balance.MovesStep;
 import com.wayledger.engine.balance.PhaseBalancer;
+import com.wayledger.engine.balance.TwoPoleItem;
 import com.wayledger.engine.demand.BoardDemand;
 import com.wayledger.engine.demand.CircuitDemand;
 import com.wayledger.engine.demand.PhaseDemand;
@@ -32,8 +33,9 @@ import org.springframework.stereotype.Service;
 
 /**
  * Turns a stored board into a balancing problem and its plans into placements. Single-pole circuits
- * in use and not locked may move; three-pole and locked circuits are fixed loads; a position is
- * free when no circuit, spare device or empty-space record holds it.
+ * in use and not locked may move, and so may two-pole, line-to-line ones on a three-line
+ * panelboard; three-pole and locked circuits are fixed loads; a position is free when no circuit,
+ * spare device or empty-space record holds it.
  */
 @Service
 public class BalanceService {
@@ -150,7 +152,9 @@ public class BalanceService {
       fixed.put(phase, 0.0);
     }
     Set<String> taken = new HashSet<>();
-    Map<Phase, Double> singlePole = new EnumMap<>(Phase.class);
+    // what the listed (single-pole and two-pole) circuits put on each line, added as magnitudes
+    Map<Phase, Double> listed = new EnumMap<>(Phase.class);
+    List<TwoPoleItem> twoPoles = new ArrayList<>();
     for (CircuitSpec circuit : board.circuits()) {
       if (panel != null) {
         int poles = circuit.position().poles();
@@ -167,13 +171,28 @@ public class BalanceService {
       CircuitDemand result = byCircuit.get(circuit.id());
       Double amps = result == null || !result.isAssessed() ? null : amps(result, basis, u0);
       if (circuit.position().isLineToLine()) {
-        // a two-pole, line-to-line circuit occupies its pair of lines and never moves: its line
-        // current |S|/U_LL (U_LL = 2·U0 split-phase, √3·U0 on a wye and on
-        // 120/208 V) is fixed load on both
-        if (amps != null) {
-          double lineToLine = demand != null ? demand.system().lineToLineFactor() : Math.sqrt(3.0);
+        // a two-pole, line-to-line circuit puts |S|/U_LL on both its lines (U_LL = 2·U0
+        // split-phase, √3·U0 on a wye and on 120/208 V). On a three-line panelboard one in use may
+        // move to a free pair of adjacent spaces on another pair of lines; elsewhere (120/240 V,
+        // where it always spans A–B) it is fixed load on its pair
+        double lineToLine = demand != null ? demand.system().lineToLineFactor() : Math.sqrt(3.0);
+        Double lineAmps = amps == null ? null : amps / lineToLine;
+        if (movesAsPair(panel, circuit)) {
+          twoPoles.add(
+              new TwoPoleItem(
+                  circuit.id(),
+                  circuit.description(),
+                  lineAmps,
+                  circuit.wayNumber(),
+                  !circuit.lockedForBalancing()));
+          if (lineAmps != null) {
+            for (Phase phase : circuit.position().phases()) {
+              listed.merge(phase, lineAmps, Double::sum);
+            }
+          }
+        } else if (lineAmps != null) {
           for (Phase phase : circuit.position().phases()) {
-            fixed.merge(phase, amps / lineToLine, Double::sum);
+            fixed.merge(phase, lineAmps, Double::sum);
           }
         }
         continue;
@@ -191,7 +210,7 @@ public class BalanceService {
       }
       Phase phase = circuit.position().phases().iterator().next();
       if (amps != null) {
-        singlePole.merge(phase, amps, Double::sum);
+        listed.merge(phase, amps, Double::sum);
       }
       items.add(
           new BalanceItem(
@@ -202,15 +221,17 @@ public class BalanceService {
               circuit.wayNumber(),
               !circuit.lockedForBalancing()));
     }
+    Map<Phase, Double> correction = new EnumMap<>(Phase.class);
     if (basis == Basis.DEMAND && demand != null && lines >= 2) {
-      // the fixed share of each line is what the demand engine puts there beyond the single-pole
+      // the fixed share of each line is what the demand engine puts there beyond the listed
       // circuits: three-pole ways at their own per-line figures (a feeder to an unbalanced
-      // sub-board is not spread evenly), allowances carried by no circuit. "As it stands" then
-      // equals the board page's line currents.
+      // sub-board is not spread evenly), allowances carried by no circuit. When the listed
+      // circuits, added as magnitudes, come to more than the line's phasor sum, the difference is
+      // the line's phasor correction. "As it stands" then equals the board page's line currents.
       for (PhaseDemand line : demand.phases()) {
-        fixed.put(
-            line.phase(),
-            Math.max(0.0, line.currentAmps() - singlePole.getOrDefault(line.phase(), 0.0)));
+        double rest = line.currentAmps() - listed.getOrDefault(line.phase(), 0.0);
+        fixed.put(line.phase(), Math.max(0.0, rest));
+        correction.put(line.phase(), Math.min(0.0, rest));
       }
     }
     Map<Phase, List<Integer>> freeWays = new EnumMap<>(Phase.class);
@@ -238,7 +259,25 @@ public class BalanceService {
         freeWays,
         board.unbalanceLimitPercent(),
         lines >= 2,
-        lines >= 2 ? lines : null);
+        lines >= 2 ? lines : null,
+        twoPoles,
+        panel,
+        correction);
+  }
+
+  /**
+   * Whether a two-pole circuit may move as a pair: in use, on a three-line panelboard, with its two
+   * spaces on the panel and on the lines its position says, and feeding no sub-board (a 120/208 V
+   * panel fed from two poles draws unequal currents on its two lines, which |S|/U_LL on each would
+   * not follow when it moves; its feeder stays, fixed at the demand engine's own per-line figures).
+   */
+  private static boolean movesAsPair(PanelSpaces panel, CircuitSpec circuit) {
+    return panel != null
+        && panel.lines() == 3
+        && circuit.feedsBoardId() == null
+        && circuit.status() == WayStatus.IN_USE
+        && panel.fitOf(circuit.wayNumber(), 2) == PanelSpaces.Fit.FITS
+        && panel.positionOf(circuit.wayNumber(), 2) == circuit.position();
   }
 
   /** A circuit's weight in amps: its share of demand on its line, or its connected current. */
@@ -251,14 +290,15 @@ public class BalanceService {
   static List<Placement> placementsOf(List<CircuitMove> moves) {
     return moves.stream()
         .filter(move -> move.toWay() != null)
-        .map(move -> new Placement(move.circuitId(), move.toWay(), move.toPhase()))
+        .map(move -> new Placement(move.circuitId(), move.toWay(), move.toPhase(), move.poles()))
         .toList();
   }
 
   static List<Placement> undoOf(List<CircuitMove> moves) {
     return moves.stream()
         .filter(move -> move.fromWay() != null && move.fromPhase() != null && move.toWay() != null)
-        .map(move -> new Placement(move.circuitId(), move.fromWay(), move.fromPhase()))
+        .map(
+            move -> new Placement(move.circuitId(), move.fromWay(), move.fromPhase(), move.poles()))
         .toList();
   }
 }

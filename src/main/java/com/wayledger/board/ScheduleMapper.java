@@ -65,8 +65,10 @@ public final class ScheduleMapper {
   }
 
   /**
-   * The same site with some single-pole circuits placed elsewhere (a balancing plan), so the
-   * engines can say what the board would carry after the moves without anything being stored.
+   * The same site with some circuits placed elsewhere (a balancing plan: single-pole circuits, and
+   * two-pole ones on a three-line panelboard, which take the pair starting on the placement's
+   * line), so the engines can say what the board would carry after the moves without anything being
+   * stored.
    */
   public static SiteSpec withPlacements(SiteSpec site, List<Placement> placements) {
     Map<Long, Placement> byCircuit =
@@ -85,7 +87,7 @@ public final class ScheduleMapper {
                                       : new CircuitSpec(
                                           circuit.id(),
                                           placement.wayNumber(),
-                                          com.wayledger.engine.PhasePosition.on(placement.phase()),
+                                          placement.position(),
                                           circuit.description(),
                                           circuit.status(),
                                           circuit.lockedForBalancing(),

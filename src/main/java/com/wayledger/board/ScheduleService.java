@@ -2,7 +2,6 @@ package com.wayledger.board;
 
 import com.wayledger.engine.DeviceKind;
 import com.wayledger.engine.Phase;
-import com.wayledger.engine.PhasePosition;
 import com.wayledger.engine.WayStatus;
 import com.wayledger.system.ChangeKind;
 import com.wayledger.system.NotFoundException;
@@ -198,9 +197,11 @@ public class ScheduleService {
 
   /**
    * Moves single-pole circuits of one board to other ways and lines in one transaction (a balancing
-   * plan or its undo): all of them or none. Refused when the board changed since the plan was
-   * shown, when a circuit is locked, three-pole or on another board, or when a target position is
-   * taken by a circuit that stays.
+   * plan or its undo): all of them or none; on a three-line panelboard two-pole, line-to-line
+   * breakers too, each to a top space and the pair of lines its two spaces give. Refused when the
+   * board changed since the plan was shown, when a circuit is locked, three-pole or on another
+   * board, when a breaker would run off the panel, or when a target space is taken by a circuit
+   * that stays.
    */
   @Transactional
   public void rearrange(
@@ -228,7 +229,14 @@ public class ScheduleService {
       if (!circuit.getBoard().getId().equals(boardId)) {
         throw new RuleViolation("placements", "balance.circuit.otherBoard", placement.circuitId());
       }
-      if (circuit.isLockedForBalancing() || !circuit.getPosition().isSinglePole()) {
+      // a two-pole, line-to-line breaker moves as a pair on a three-line panelboard only
+      boolean pair =
+          placement.poles() == 2
+              && circuit.getPosition().isLineToLine()
+              && board.isPanelboard()
+              && board.panelSpaces().lines() == 3;
+      if (circuit.isLockedForBalancing()
+          || !(pair || (placement.poles() == 1 && circuit.getPosition().isSinglePole()))) {
         throw new RuleViolation("placements", "balance.circuit.fixed", circuit.getDescription());
       }
       if (placement.wayNumber() < 1 || placement.wayNumber() > board.getWayCount()) {
@@ -236,8 +244,13 @@ public class ScheduleService {
       }
       if (board.isPanelboard()) {
         // a move on a panelboard is to a space; the space decides the line
-        if (board.panelSpaces().lineOf(placement.wayNumber()) != placement.phase()) {
+        com.wayledger.engine.PanelSpaces panel = board.panelSpaces();
+        if (panel.lineOf(placement.wayNumber()) != placement.phase()) {
           throw new RuleViolation("placements", "panel.move.wrongLine", placement.wayNumber());
+        }
+        if (pair
+            && panel.fitOf(placement.wayNumber(), 2) != com.wayledger.engine.PanelSpaces.Fit.FITS) {
+          throw new RuleViolation("placements", "circuit.way.beyondBoard", board.getWayCount());
         }
       } else if (!board.isThreePhase() && placement.phase() != com.wayledger.engine.Phase.L1) {
         throw new RuleViolation("placements", "circuit.position.singlePhaseBoard");
@@ -250,9 +263,7 @@ public class ScheduleService {
       jdbc.sql("DELETE FROM way_slot WHERE circuit_id = ?").param(circuit.getId()).update();
     }
     for (int i = 0; i < moving.size(); i++) {
-      moving
-          .get(i)
-          .moveTo(placements.get(i).wayNumber(), PhasePosition.on(placements.get(i).phase()));
+      moving.get(i).moveTo(placements.get(i).wayNumber(), placements.get(i).position());
     }
     for (Circuit circuit : moving) {
       occupy(board, circuit);

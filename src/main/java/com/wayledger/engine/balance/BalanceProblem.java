@@ -1,5 +1,6 @@
 package com.wayledger.engine.balance;
 
+import com.wayledger.engine.PanelSpaces;
 import com.wayledger.engine.Phase;
 import java.util.List;
 import java.util.Map;
@@ -24,6 +25,16 @@ import java.util.Map;
  * @param lineCount the lines the board has: 3 (L1, L2, L3), or 2 for a 120/240 V split-phase board
  *     (lines A and B as L1 and L2, nothing on L3): the mean, the unbalance and the limit are taken
  *     over these lines only; {@code null} means 3
+ * @param twoPoleItems the two-pole, line-to-line breakers of a three-line panelboard, movable and
+ *     locked; their current is not in {@code fixedLoadAmps}. They need {@code panel}, and then the
+ *     positions come from {@code freeWays} (free spaces by line), not {@code positionsAvailable}; a
+ *     missing list means none
+ * @param panel the panelboard's spaces, telling which free spaces are vertically adjacent and on
+ *     which pair of lines; {@code null} for a board that is not a panelboard
+ * @param phasorCorrectionAmps per line, zero or less: the line current the demand engine reports (a
+ *     phasor sum) minus the magnitudes the balancer adds up for it (fixed load and every listed
+ *     circuit on it as it stands), so that "as it stands" equals the board page. It stays with the
+ *     line whatever moves; a missing map or phase means none
  */
 public record BalanceProblem(
     List<BalanceItem> items,
@@ -32,7 +43,32 @@ public record BalanceProblem(
     Map<Phase, List<Integer>> freeWays,
     Double unbalanceLimitPercent,
     boolean threePhase,
-    Integer lineCount) {
+    Integer lineCount,
+    List<TwoPoleItem> twoPoleItems,
+    PanelSpaces panel,
+    Map<Phase, Double> phasorCorrectionAmps) {
+
+  /** A board with no movable two-pole breakers (two-pole load, if any, is in the fixed load). */
+  public BalanceProblem(
+      List<BalanceItem> items,
+      Map<Phase, Double> fixedLoadAmps,
+      Map<Phase, Integer> positionsAvailable,
+      Map<Phase, List<Integer>> freeWays,
+      Double unbalanceLimitPercent,
+      boolean threePhase,
+      Integer lineCount) {
+    this(
+        items,
+        fixedLoadAmps,
+        positionsAvailable,
+        freeWays,
+        unbalanceLimitPercent,
+        threePhase,
+        lineCount,
+        List.of(),
+        null,
+        null);
+  }
 
   /** A three-line board (or a single-phase one, with {@code threePhase} false). */
   public BalanceProblem(
@@ -50,6 +86,11 @@ public record BalanceProblem(
         unbalanceLimitPercent,
         threePhase,
         null);
+  }
+
+  /** The two-pole breakers; empty when none are listed. */
+  public List<TwoPoleItem> twoPoles() {
+    return twoPoleItems == null ? List.of() : twoPoleItems;
   }
 
   /** The lines balanced over: {@link #lineCount()}, 3 when not given. */

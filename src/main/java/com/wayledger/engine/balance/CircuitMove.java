@@ -1,6 +1,7 @@
 package com.wayledger.engine.balance;
 
 import com.wayledger.engine.Phase;
+import com.wayledger.engine.PhasePosition;
 
 /**
  * One circuit changing line (or, on a new board, being placed).
@@ -12,6 +13,9 @@ import com.wayledger.engine.Phase;
  * @param fromWay the way it leaves; {@code null} when not placed or not recorded
  * @param toPhase the line it goes to
  * @param toWay the way it goes to; {@code null} when no free position was recorded on that line
+ * @param poles 1, or 2 for a two-pole breaker on a three-line panelboard: then the phases are the
+ *     first lines of its pairs (L1 for L1–L2, L2 for L2–L3, L3 for L3–L1), the ways its top spaces,
+ *     and {@code demandAmps} the current on each of its two lines
  */
 public record CircuitMove(
     long circuitId,
@@ -20,10 +24,46 @@ public record CircuitMove(
     Phase fromPhase,
     Integer fromWay,
     Phase toPhase,
-    Integer toWay) {
+    Integer toWay,
+    int poles) {
+
+  /** A single-pole circuit's move. */
+  public CircuitMove(
+      long circuitId,
+      String description,
+      double demandAmps,
+      Phase fromPhase,
+      Integer fromWay,
+      Phase toPhase,
+      Integer toWay) {
+    this(circuitId, description, demandAmps, fromPhase, fromWay, toPhase, toWay, 1);
+  }
+
+  /** Whether this moves a two-pole breaker. */
+  public boolean isTwoPole() {
+    return poles == 2;
+  }
+
+  /** The second line of the pair it leaves (two-pole only, else null): L2 for L1–L2. */
+  public Phase fromSecondLine() {
+    return isTwoPole() && fromPhase != null ? PhasePosition.twoPoleFrom(fromPhase).toLine() : null;
+  }
+
+  /** The second line of the pair it goes to (two-pole only, else null): L3 for L2–L3. */
+  public Phase toSecondLine() {
+    return isTwoPole() ? PhasePosition.twoPoleFrom(toPhase).toLine() : null;
+  }
 
   /** The move in plain words: "move circuit 'Bakery mixer' from way 4 L2 to way 7 L1". */
   public String inWords() {
+    if (isTwoPole()) {
+      return "move two-pole circuit '"
+          + description
+          + "' from "
+          + spacePair(fromWay, fromPhase)
+          + " to "
+          + spacePair(toWay, toPhase);
+    }
     String target =
         toWay == null
             ? toPhase + " (no free position recorded on " + toPhase + ")"
@@ -33,5 +73,15 @@ public record CircuitMove(
     }
     String source = fromWay == null ? fromPhase.name() : "way " + fromWay + " " + fromPhase;
     return "move circuit '" + description + "' from " + source + " to " + target;
+  }
+
+  /** "spaces 1 and 3 L1–L2": a two-pole breaker's spaces and its pair of lines. */
+  private static String spacePair(Integer firstSpace, Phase firstLine) {
+    return "spaces "
+        + firstSpace
+        + " and "
+        + (firstSpace + 2)
+        + " "
+        + PhasePosition.twoPoleFrom(firstLine).label();
   }
 }

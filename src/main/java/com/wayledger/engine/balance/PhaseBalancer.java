@@ -36,6 +36,9 @@ public final class PhaseBalancer {
 
   /** The optimal arrangement within the budget. */
   public BalanceResult optimise(BalanceProblem problem) {
+    if (hasTwoPoles(problem)) {
+      return TwoPoleSearch.optimise(this, problem);
+    }
     PreparedBoard.Preparation preparation = PreparedBoard.prepare(problem);
     if (preparation.board() == null) {
       return refused(preparation.failure(), preparation.message());
@@ -62,6 +65,9 @@ public final class PhaseBalancer {
    * The greedy baseline: largest circuit first, each onto the lightest line with a free position.
    */
   public BalanceResult largestFirst(BalanceProblem problem) {
+    if (hasTwoPoles(problem)) {
+      return TwoPoleSearch.largestFirst(this, problem);
+    }
     PreparedBoard.Preparation preparation = PreparedBoard.prepare(problem);
     if (preparation.board() == null) {
       return refused(preparation.failure(), preparation.message());
@@ -81,6 +87,9 @@ public final class PhaseBalancer {
    * limit.
    */
   public FewestMovesResult fewestMoves(BalanceProblem problem) {
+    if (hasTwoPoles(problem)) {
+      return TwoPoleSearch.fewestMoves(this, problem);
+    }
     PreparedBoard.Preparation preparation = PreparedBoard.prepare(problem);
     if (preparation.board() == null) {
       return movesRefused(preparation.failure(), preparation.message(), null);
@@ -148,7 +157,42 @@ public final class PhaseBalancer {
     }
 
     boolean complete = allProved && optimumReached && optimumProved;
-    MovesStep last = rows.get(rows.size() - 1);
+    String message =
+        movesMessage(
+            complete,
+            before,
+            rows.get(rows.size() - 1),
+            optimumReached,
+            optimumProved,
+            verdict,
+            movesToLimit,
+            limit,
+            board.notes);
+    return new FewestMovesResult(
+        complete ? BalanceOutcome.PROVED_OPTIMAL : BalanceOutcome.BEST_WITHIN_BUDGET,
+        message,
+        before,
+        List.copyOf(rows),
+        optimumReached,
+        limit,
+        verdict,
+        movesToLimit,
+        limitPlan,
+        optimumBudget.nodes() + stepBudget.nodes() + limitNodes,
+        settings);
+  }
+
+  /** The fewest-moves answer in plain words. */
+  static String movesMessage(
+      boolean complete,
+      PhaseCurrents before,
+      MovesStep last,
+      boolean optimumReached,
+      boolean optimumProved,
+      LimitVerdict verdict,
+      Integer movesToLimit,
+      Double limit,
+      List<String> notes) {
     StringBuilder message = new StringBuilder();
     message.append(complete ? "Proved: " : "Within the search budget: ");
     message.append(
@@ -166,31 +210,19 @@ public final class PhaseBalancer {
             ? (optimumProved ? ", the optimum." : ", the best arrangement found.")
             : ".");
     message.append(limitSentence(verdict, movesToLimit, limit));
-    appendNotes(message, board);
-    return new FewestMovesResult(
-        complete ? BalanceOutcome.PROVED_OPTIMAL : BalanceOutcome.BEST_WITHIN_BUDGET,
-        message.toString(),
-        before,
-        List.copyOf(rows),
-        optimumReached,
-        limit,
-        verdict,
-        movesToLimit,
-        limitPlan,
-        optimumBudget.nodes() + stepBudget.nodes() + limitNodes,
-        settings);
+    for (String note : notes) {
+      message.append(' ').append(note);
+    }
+    return message.toString();
   }
 
   private record LimitAnswer(LimitVerdict verdict, Integer moves, int[] arrangement) {}
 
   private static LimitAnswer fewestMovesToLimit(
       PreparedBoard board, double limitPercent, List<MovesStep> rows, SearchBudget budget) {
-    // Unbalance ≤ limit ⇔ every line within mean·(1 ± limit/100); the tolerance absorbs the decimal
-    // limit.
-    double mean = board.total / (double) board.lines;
-    double allowed = mean * limitPercent / 100.0;
-    long lowest = (long) Math.ceil(mean - allowed - 1e-9);
-    long highest = (long) Math.floor(mean + allowed + 1e-9);
+    long[] band = board.limitBand(limitPercent);
+    long lowest = band[0];
+    long highest = band[1];
     long[] now = board.loadsOf(board.currentPhase);
     if (within(now, board.lines, lowest, highest)) {
       return new LimitAnswer(LimitVerdict.ALREADY_WITHIN, 0, board.currentPhase.clone());
@@ -251,7 +283,7 @@ public final class PhaseBalancer {
     return true;
   }
 
-  private static String limitSentence(LimitVerdict verdict, Integer moves, Double limit) {
+  static String limitSentence(LimitVerdict verdict, Integer moves, Double limit) {
     return switch (verdict) {
       case ALREADY_WITHIN ->
           " The board is within its unbalance limit of " + percent(limit) + " as it stands.";
@@ -324,27 +356,12 @@ public final class PhaseBalancer {
     PhaseCurrents after = board.currentsOf(board.loadsOf(arrangement));
     List<CircuitMove> moves = PositionPlanner.plan(board, arrangement);
     double gapAmps = Math.max(0, PreparedBoard.centiamps(after.largestAmps()) - lowerBound) / 100.0;
-    StringBuilder message = new StringBuilder();
-    if (heading != null) {
-      message.append(heading).append(": largest phase current ");
-    } else {
-      message.append("Best found within the search budget: largest phase current ");
-    }
-    message.append(String.format(Locale.ROOT, "%.2f A", after.largestAmps()));
-    if (!proved) {
-      message.append(
-          String.format(
-              Locale.ROOT,
-              ", at most %.2f A above the lower bound of %.2f A",
-              gapAmps,
-              lowerBound / 100.0));
-    }
-    message.append(String.format(Locale.ROOT, "; unbalance %.1f %%", after.unbalancePercent()));
-    message.append(String.format(Locale.ROOT, "; %d circuit(s) to move.", moves.size()));
-    appendNotes(message, board);
+    String message =
+        arrangedMessage(
+            heading, after, proved, gapAmps, lowerBound / 100.0, moves.size(), board.notes);
     return new BalanceResult(
         proved ? BalanceOutcome.PROVED_OPTIMAL : BalanceOutcome.BEST_WITHIN_BUDGET,
-        message.toString(),
+        message,
         assignmentMap(board, arrangement),
         before,
         after,
@@ -358,10 +375,47 @@ public final class PhaseBalancer {
         settings);
   }
 
-  private static void appendNotes(StringBuilder message, PreparedBoard board) {
-    for (String note : board.notes) {
+  /** The optimal (or greedy) arrangement in plain words. */
+  static String arrangedMessage(
+      String heading,
+      PhaseCurrents after,
+      boolean proved,
+      double gapAmps,
+      double lowerBoundAmps,
+      int moveCount,
+      List<String> notes) {
+    StringBuilder message = new StringBuilder();
+    if (heading != null) {
+      message.append(heading).append(": largest phase current ");
+    } else {
+      message.append("Best found within the search budget: largest phase current ");
+    }
+    message.append(String.format(Locale.ROOT, "%.2f A", after.largestAmps()));
+    if (!proved) {
+      message.append(
+          String.format(
+              Locale.ROOT,
+              ", at most %.2f A above the lower bound of %.2f A",
+              gapAmps,
+              lowerBoundAmps));
+    }
+    message.append(String.format(Locale.ROOT, "; unbalance %.1f %%", after.unbalancePercent()));
+    message.append(String.format(Locale.ROOT, "; %d circuit(s) to move.", moveCount));
+    for (String note : notes) {
       message.append(' ').append(note);
     }
+    return message.toString();
+  }
+
+  private static boolean hasTwoPoles(BalanceProblem problem) {
+    return problem != null
+        && problem.items() != null
+        && problem.threePhase()
+        && !problem.twoPoles().isEmpty();
+  }
+
+  BalanceSettings settings() {
+    return settings;
   }
 
   private static Map<Long, Phase> assignmentMap(PreparedBoard board, int[] arrangement) {
@@ -397,14 +451,13 @@ public final class PhaseBalancer {
         settings);
   }
 
-  private BalanceResult refused(BalanceOutcome outcome, String message) {
+  BalanceResult refused(BalanceOutcome outcome, String message) {
     return new BalanceResult(
         outcome, message, Map.of(), null, null, null, null, 0.0, 0.0, false, 0, List.of(),
         settings);
   }
 
-  private FewestMovesResult movesRefused(
-      BalanceOutcome outcome, String message, PhaseCurrents before) {
+  FewestMovesResult movesRefused(BalanceOutcome outcome, String message, PhaseCurrents before) {
     return new FewestMovesResult(
         outcome,
         message,

@@ -46,6 +46,10 @@ final class PreparedBoard {
   final int[] capacity;
 
   final long total;
+
+  /** The fixed loads below zero, added up as a positive number (phasor corrections), centiamps. */
+  final long negativeFixed;
+
   final List<String> notes;
 
   /**
@@ -71,6 +75,7 @@ final class PreparedBoard {
     this.demand = new long[movable.length];
     this.currentPhase = new int[movable.length];
     long sum = fixed[0] + fixed[1] + fixed[2];
+    this.negativeFixed = Math.max(0, -fixed[0]) + Math.max(0, -fixed[1]) + Math.max(0, -fixed[2]);
     for (int i = 0; i < movable.length; i++) {
       demand[i] = centiamps(movable[i].demandAmps());
       currentPhase[i] =
@@ -153,7 +158,9 @@ final class PreparedBoard {
   }
 
   long keyBase() {
-    return 3 * total + 1;
+    // the deviation term is below this even when a phasor correction makes a line's fixed load
+    // negative: max|3·load − total| ≤ 2·total + 3·(sum of negative fixed loads)
+    return 3 * total + 3 * negativeFixed + 1;
   }
 
   long maxOfKey(long key) {
@@ -184,22 +191,13 @@ final class PreparedBoard {
         return failed(BalanceOutcome.INVALID_INPUT, "The circuit list contains an empty entry.");
       }
       if (!ids.add(item.circuitId())) {
-        return failed(
-            BalanceOutcome.INVALID_INPUT,
-            "Circuit id "
-                + item.circuitId()
-                + " appears more than once; each circuit may be listed once.");
+        return failed(BalanceOutcome.INVALID_INPUT, duplicateId(item.circuitId()));
       }
       if (item.demandAmps() == null) {
         missingDemand.add("'" + item.label() + "'");
       } else if (!Double.isFinite(item.demandAmps()) || item.demandAmps() < 0.0) {
         return failed(
-            BalanceOutcome.INVALID_INPUT,
-            "Circuit '"
-                + item.label()
-                + "' has an impossible demand of "
-                + item.demandAmps()
-                + " A; demand must be zero or more.");
+            BalanceOutcome.INVALID_INPUT, impossibleDemand(item.label(), item.demandAmps()));
       }
       if (!item.movable() && item.currentPhase() == null) {
         unplacedLocked.add("'" + item.label() + "'");
@@ -213,9 +211,7 @@ final class PreparedBoard {
       }
     }
     if (!missingDemand.isEmpty()) {
-      return failed(
-          BalanceOutcome.NOT_ASSESSED,
-          "Not assessed: demand current not known for " + String.join(", ", missingDemand) + ".");
+      return failed(BalanceOutcome.NOT_ASSESSED, demandNotKnown(missingDemand));
     }
     if (!unplacedLocked.isEmpty()) {
       return failed(
@@ -251,6 +247,27 @@ final class PreparedBoard {
         fixed[entry.getKey().ordinal()] += centiamps(amps);
       }
     }
+    Map<Phase, Double> corrections = problem.phasorCorrectionAmps();
+    if (corrections != null) {
+      for (Map.Entry<Phase, Double> entry : corrections.entrySet()) {
+        Double amps = entry.getValue();
+        if (entry.getKey() == null || amps == null) {
+          continue;
+        }
+        if (!Double.isFinite(amps)
+            || amps > 0.0
+            || (problem.lines() == 2 && entry.getKey() == Phase.L3 && amps < 0.0)) {
+          return failed(
+              BalanceOutcome.INVALID_INPUT,
+              "Phasor correction on "
+                  + entry.getKey()
+                  + " of "
+                  + amps
+                  + " A is impossible; a phasor sum is never larger than the magnitudes added.");
+        }
+        fixed[entry.getKey().ordinal()] += centiamps(amps);
+      }
+    }
     double totalAmps = (fixed[0] + fixed[1] + fixed[2]) / 100.0;
     for (BalanceItem item : problem.items()) {
       totalAmps += item.demandAmps();
@@ -277,6 +294,15 @@ final class PreparedBoard {
             .reversed()
             .thenComparingLong(BalanceItem::circuitId));
     BalanceItem[] movable = movableItems.toArray(new BalanceItem[0]);
+    long asItStands = fixed[0] + fixed[1] + fixed[2];
+    for (BalanceItem item : movable) {
+      asItStands += centiamps(item.demandAmps());
+    }
+    if (asItStands < 0) {
+      return failed(
+          BalanceOutcome.INVALID_INPUT,
+          "The phasor corrections are larger than the board's whole load; check the corrections.");
+    }
 
     List<String> notes = new ArrayList<>();
     int[] capacity = new int[3];
@@ -322,6 +348,34 @@ final class PreparedBoard {
     }
     return new Preparation(
         new PreparedBoard(problem, movable, locked, fixed, capacity, notes), null, null);
+  }
+
+  static String duplicateId(long circuitId) {
+    return "Circuit id " + circuitId + " appears more than once; each circuit may be listed once.";
+  }
+
+  static String impossibleDemand(String label, double amps) {
+    return "Circuit '"
+        + label
+        + "' has an impossible demand of "
+        + amps
+        + " A; demand must be zero or more.";
+  }
+
+  static String demandNotKnown(List<String> quotedLabels) {
+    return "Not assessed: demand current not known for " + String.join(", ", quotedLabels) + ".";
+  }
+
+  /**
+   * The band of line loads, centiamps, inside which the unbalance is within {@code limitPercent}:
+   * every line within mean·(1 ± limit/100); the tolerance absorbs the decimal limit.
+   */
+  long[] limitBand(double limitPercent) {
+    double mean = total / (double) lines;
+    double allowed = mean * limitPercent / 100.0;
+    return new long[] {
+      (long) Math.ceil(mean - allowed - 1e-9), (long) Math.floor(mean + allowed + 1e-9)
+    };
   }
 
   private static Preparation failed(BalanceOutcome outcome, String message) {
