@@ -120,7 +120,8 @@ public class BalanceService {
         placements,
         undo,
         figures,
-        chosenStep);
+        chosenStep,
+        com.wayledger.engine.PositionWords.of(results.spec(), board));
   }
 
   /** The balancing problem of a board: public so the API can show what was solved. */
