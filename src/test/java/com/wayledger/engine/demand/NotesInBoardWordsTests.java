@@ -70,4 +70,30 @@ class NotesInBoardWordsTests {
     assertThat(demand.problems())
         .contains("board DB1 way 9 L1–L2 feeds board #99, which is not on this site");
   }
+
+  @Test
+  void faultLevelReasonsOnAnNecSiteSayPanelboard() {
+    BoardSpec orphan =
+        Fixtures.board(2, 1, 99L, DiversityMethods.NONE, 100.0, List.of()).withSupplySystem(null);
+    SiteSpec nec =
+        new SiteSpec(
+            1,
+            "site",
+            NorthAmericanSupplyTests.SPLIT_PHASE,
+            DiversityMethods.NONE,
+            List.of(orphan),
+            "NEC");
+    SiteSpec iec =
+        new SiteSpec(1, "site", Fixtures.SUPPLY_230, DiversityMethods.NONE, List.of(orphan));
+
+    var necLevel =
+        com.wayledger.engine.protection.fault.FaultLevels.of(nec, java.util.Map.of()).get(2L);
+    var iecLevel =
+        com.wayledger.engine.protection.fault.FaultLevels.of(iec, java.util.Map.of()).get(2L);
+
+    assertThat(necLevel.faultCurrentKiloAmps().missing())
+        .isEqualTo("parent panelboard 99 of DB2 (not on the site)");
+    assertThat(iecLevel.faultCurrentKiloAmps().missing())
+        .isEqualTo("parent board 99 of DB2 (not on the site)");
+  }
 }
