@@ -948,7 +948,7 @@ public final class WorkbookWriter {
   }
 
   /** The board's own supply system in words where it has one, else the site's ("" when none). */
-  private static String systemWordsOf(BoardDemand demand, ExportData data) {
+  static String systemWordsOf(BoardDemand demand, ExportData data) {
     if (demand != null && demand.system() != null) {
       return com.wayledger.system.EnumWords.standard().of(demand.system());
     }
