@@ -604,7 +604,13 @@ public class ScheduleService {
       Circuit circuit, ChangeKind kind, String what, Object before, Object after, String reason) {
     Board board = circuit.getBoard();
     String summary =
-        "Way " + circuit.positionLabel() + " “" + circuit.getDescription() + "”: " + what;
+        // in the board's words, as its page names the position: "Space 5 A" on a panelboard
+        (board.isPanelboard() ? "Space " : "Way ")
+            + circuit.positionLabel()
+            + " “"
+            + circuit.getDescription()
+            + "”: "
+            + what;
     events.publishEvent(
         new ScheduleChanged(
             board.getSite().getId(),
