@@ -9,16 +9,13 @@ import static org.springframework.test.web.servlet.request.MockMvcRequestBuilder
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.jsonPath;
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
 
-import com.wayledger.engine.EarthingSystem;
 import com.wayledger.engine.Phase;
 import com.wayledger.engine.PhasePosition;
 import com.wayledger.engine.SupplySystem;
 import com.wayledger.engine.demand.BoardDemand;
 import com.wayledger.site.Site;
-import com.wayledger.site.SiteForm;
 import com.wayledger.site.SiteService;
 import com.wayledger.support.NecPanels;
-import java.util.UUID;
 import org.hamcrest.Matchers;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
@@ -58,24 +55,7 @@ class BoardSupplySystemIntegrationTests {
 
   @BeforeEach
   void aWyeSiteWithAHousePanel() {
-    site =
-        sites.create(
-            new SiteForm(
-                "Invented 208Y building " + UUID.randomUUID(),
-                null,
-                EarthingSystem.TN_C_S,
-                120.0,
-                3,
-                60.0,
-                null,
-                10.0,
-                null,
-                null,
-                null,
-                null,
-                null,
-                "NEC",
-                SupplySystem.WYE_208Y_120));
+    site = NecPanels.wyeSite(sites, "Invented 208Y building");
     house = boards.create(site.getId(), NecPanels.panelForm("HP", 3, 42));
     // spaces 3 and 5 are lines B and C of a three-phase panelboard
     twoPoleWay =

@@ -7,17 +7,13 @@ import static org.springframework.test.web.servlet.request.MockMvcRequestBuilder
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.put;
 
 import com.jayway.jsonpath.JsonPath;
-import com.wayledger.engine.EarthingSystem;
 import com.wayledger.engine.PhasePosition;
-import com.wayledger.engine.SupplySystem;
 import com.wayledger.site.Site;
-import com.wayledger.site.SiteForm;
 import com.wayledger.site.SiteService;
 import com.wayledger.support.NecPanels;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
-import java.util.UUID;
 import java.util.concurrent.Callable;
 import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.ExecutorService;
@@ -57,24 +53,7 @@ class NecConcurrentEditIntegrationTests {
 
   @BeforeEach
   void aServicePanelWithOneBreaker() {
-    Site site =
-        sites.create(
-            new SiteForm(
-                "Invented race building " + UUID.randomUUID(),
-                null,
-                EarthingSystem.TN_C_S,
-                120.0,
-                3,
-                60.0,
-                null,
-                10.0,
-                null,
-                null,
-                null,
-                null,
-                null,
-                "NEC",
-                SupplySystem.WYE_208Y_120));
+    Site site = NecPanels.wyeSite(sites, "Invented race building");
     panel = boards.create(site.getId(), NecPanels.panelForm("RP", 1, 24));
     circuit =
         schedule.addCircuit(panel.getId(), NecPanels.breaker(1, PhasePosition.L1, "Lights", 1200));

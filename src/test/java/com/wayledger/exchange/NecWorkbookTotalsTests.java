@@ -43,6 +43,16 @@ class NecWorkbookTotalsTests {
 
   private static final double AMPS = 0.01;
   private static final List<String> LETTERS = List.of("A", "B", "C");
+  private static final SupplySpec SPLIT_PHASE =
+      new SupplySpec(
+          EarthingSystem.TN_C_S,
+          120.0,
+          1,
+          60.0,
+          null,
+          10.0,
+          200.0,
+          SupplySystem.SPLIT_PHASE_120_240);
 
   @Test
   void splitPhasePanelTotalsLinesAAndBWithTwoFortyVoltLoadsOnBoth() throws IOException {
@@ -54,19 +64,7 @@ class NecWorkbookTotalsTests {
     circuits.add(entry(3, 3, PhasePosition.L1_L2, "Water heater", 4800, RatingUnit.W));
     circuits.add(entry(4, 5, PhasePosition.L1_L2, "Well pump", 20, RatingUnit.A));
     BoardEntry panel = new BoardEntry(1L, "P1", null, 1, 24, null, "", 0, circuits, LETTERS);
-    ExportData data =
-        export(
-            List.of(panel),
-            new SupplySpec(
-                EarthingSystem.TN_C_S,
-                120.0,
-                1,
-                60.0,
-                null,
-                10.0,
-                200.0,
-                SupplySystem.SPLIT_PHASE_120_240),
-            Map.of());
+    ExportData data = export(List.of(panel), SPLIT_PHASE, Map.of());
 
     try (XSSFWorkbook workbook = WorkbookWriterTests.written(data, true)) {
       FormulaEvaluator evaluator = workbook.getCreationHelper().createFormulaEvaluator();
@@ -102,19 +100,7 @@ class NecWorkbookTotalsTests {
     circuits.add(entry(1, 5, PhasePosition.L1, "Kitchen", 2400, RatingUnit.W));
     circuits.add(entry(2, 3, PhasePosition.L1_L2, "Water heater", 4800, RatingUnit.W));
     BoardEntry panel = new BoardEntry(1L, "P1", null, 1, 24, null, "", 0, circuits, LETTERS);
-    ExportData data =
-        export(
-            List.of(panel),
-            new SupplySpec(
-                EarthingSystem.TN_C_S,
-                120.0,
-                1,
-                60.0,
-                null,
-                10.0,
-                200.0,
-                SupplySystem.SPLIT_PHASE_120_240),
-            Map.of());
+    ExportData data = export(List.of(panel), SPLIT_PHASE, Map.of());
 
     List<String> places =
         data.findings().boards().get(0).circuits().stream()
@@ -207,19 +193,7 @@ class NecWorkbookTotalsTests {
     List<CircuitEntry> circuits = new ArrayList<>();
     circuits.add(entry(1, 1, PhasePosition.L1, "Kitchen", 2400, RatingUnit.W));
     BoardEntry panel = new BoardEntry(1L, "P1", null, 3, 24, null, "", 0, circuits, LETTERS);
-    ExportData data =
-        export(
-            List.of(panel),
-            new SupplySpec(
-                EarthingSystem.TN_C_S,
-                120.0,
-                1,
-                60.0,
-                null,
-                10.0,
-                200.0,
-                SupplySystem.SPLIT_PHASE_120_240),
-            Map.of());
+    ExportData data = export(List.of(panel), SPLIT_PHASE, Map.of());
 
     try (XSSFWorkbook workbook = WorkbookWriterTests.written(data, true)) {
       Row row = workbook.getSheet("Summary").getRow(WorkbookWriter.HEADER_ROW + 1);

@@ -28,6 +28,27 @@ public final class NecPanels {
 
   private NecPanels() {}
 
+  /** An invented NEC site on a 208Y/120 V service, named {@code name} and a random suffix. */
+  public static Site wyeSite(SiteService sites, String name) {
+    return sites.create(
+        new SiteForm(
+            name + " " + UUID.randomUUID(),
+            null,
+            EarthingSystem.TN_C_S,
+            120.0,
+            3,
+            60.0,
+            null,
+            10.0,
+            null,
+            null,
+            null,
+            null,
+            null,
+            "NEC",
+            SupplySystem.WYE_208Y_120));
+  }
+
   /** The stored panelboard. */
   public static Board splitPhasePanel(
       SiteService sites, BoardService boards, ScheduleService schedule) {
