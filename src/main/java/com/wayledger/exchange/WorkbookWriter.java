@@ -1111,9 +1111,11 @@ public final class WorkbookWriter {
                   circuit.lineLabel(),
                   circuit.description()));
         } else {
+          // "ways 1–4, 7" on a board of ways, "spaces 1–4, 7" on a panelboard, as its page says
+          String noun = firstOf.get(gathered.getKey()).words().position() + "s ";
           rows.add(
               new FindingRow(
-                  board.reference(), null, gathered.getKey(), ways.size(), wayRanges(ways)));
+                  board.reference(), null, gathered.getKey(), ways.size(), noun + wayRanges(ways)));
         }
       }
     }
@@ -1179,7 +1181,7 @@ public final class WorkbookWriter {
       text(row, 4, finding.summary(), s.text, w);
       String figures =
           item.ways() != null
-              ? item.circuits() + " circuits, ways " + item.ways()
+              ? item.circuits() + " circuits, " + item.ways()
               : joinQuantities(finding.values());
       text(row, 5, figures, s.text, w);
       text(row, 6, finding.reference(), s.text, w);

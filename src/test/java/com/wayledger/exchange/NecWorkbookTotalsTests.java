@@ -112,6 +112,30 @@ class NecWorkbookTotalsTests {
   }
 
   @Test
+  void findingsSheetGathersNotAssessedCircuitsOfAPanelboardBySpaces() throws IOException {
+    // neither breaker records a conductor: the same "not assessed" on both, gathered in one row
+    List<CircuitEntry> circuits = new ArrayList<>();
+    circuits.add(entry(1, 5, PhasePosition.L1, "Kitchen", 2400, RatingUnit.W));
+    circuits.add(entry(2, 7, PhasePosition.L2, "Bedrooms", 1200, RatingUnit.W));
+    BoardEntry panel = new BoardEntry(1L, "P1", null, 1, 24, null, "", 0, circuits, LETTERS);
+    ExportData data = export(List.of(panel), SPLIT_PHASE, Map.of());
+
+    List<String> figures = new ArrayList<>();
+    try (XSSFWorkbook workbook = WorkbookWriterTests.written(data, true)) {
+      for (Row row : workbook.getSheet("Findings")) {
+        Cell cell = row.getCell(5);
+        if (cell != null && cell.getCellType() == CellType.STRING) {
+          figures.add(cell.getStringCellValue());
+        }
+      }
+    }
+    assertThat(figures)
+        .as("gathered rows name the panel's spaces, as its page does")
+        .contains("2 circuits, spaces 5, 7")
+        .noneMatch(text -> text.contains("circuits, ways"));
+  }
+
+  @Test
   void wyePanelCountsTwoPoleLoadsAndCarriesAOneTwentyTwoOhEightPanelLineByLine()
       throws IOException {
     // HP (208Y/120 V): 1200 W on A (10 A ∠0°), 4160 W at 208 V between A and B, and a feeder on
