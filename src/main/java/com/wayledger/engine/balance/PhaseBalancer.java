@@ -25,9 +25,19 @@ import java.util.Map;
 public final class PhaseBalancer {
 
   private final BalanceSettings settings;
+  private final com.wayledger.engine.PositionWords words;
 
   public PhaseBalancer(BalanceSettings settings) {
+    this(settings, com.wayledger.engine.PositionWords.WAYS);
+  }
+
+  /**
+   * A balancer whose messages name the board and its lines in the board's own words ("the
+   * panelboard", "B") on a North American panel.
+   */
+  public PhaseBalancer(BalanceSettings settings, com.wayledger.engine.PositionWords words) {
     this.settings = settings == null ? BalanceSettings.defaults() : settings;
+    this.words = words == null ? com.wayledger.engine.PositionWords.WAYS : words;
   }
 
   public PhaseBalancer() {
@@ -36,7 +46,7 @@ public final class PhaseBalancer {
 
   /** The optimal arrangement within the budget. */
   public BalanceResult optimise(BalanceProblem problem) {
-    PreparedBoard.Preparation preparation = PreparedBoard.prepare(problem);
+    PreparedBoard.Preparation preparation = PreparedBoard.prepare(problem, words);
     if (preparation.board() == null) {
       return refused(preparation.failure(), preparation.message());
     }
@@ -62,7 +72,7 @@ public final class PhaseBalancer {
    * The greedy baseline: largest circuit first, each onto the lightest line with a free position.
    */
   public BalanceResult largestFirst(BalanceProblem problem) {
-    PreparedBoard.Preparation preparation = PreparedBoard.prepare(problem);
+    PreparedBoard.Preparation preparation = PreparedBoard.prepare(problem, words);
     if (preparation.board() == null) {
       return refused(preparation.failure(), preparation.message());
     }
@@ -81,7 +91,7 @@ public final class PhaseBalancer {
    * limit.
    */
   public FewestMovesResult fewestMoves(BalanceProblem problem) {
-    PreparedBoard.Preparation preparation = PreparedBoard.prepare(problem);
+    PreparedBoard.Preparation preparation = PreparedBoard.prepare(problem, words);
     if (preparation.board() == null) {
       return movesRefused(preparation.failure(), preparation.message(), null);
     }
@@ -96,7 +106,9 @@ public final class PhaseBalancer {
     if (!board.withinCapacity(board.currentPhase)) {
       return movesRefused(
           BalanceOutcome.INVALID_INPUT,
-          "The board as recorded has more circuits on a line than the positions given for it; check the"
+          "The "
+              + words.board()
+              + " as recorded has more circuits on a line than the positions given for it; check the"
               + " positions before counting moves.",
           before);
     }
@@ -165,7 +177,7 @@ public final class PhaseBalancer {
         optimumReached
             ? (optimumProved ? ", the optimum." : ", the best arrangement found.")
             : ".");
-    message.append(limitSentence(verdict, movesToLimit, limit));
+    message.append(limitSentence(verdict, movesToLimit, limit, words));
     appendNotes(message, board);
     return new FewestMovesResult(
         complete ? BalanceOutcome.PROVED_OPTIMAL : BalanceOutcome.BEST_WITHIN_BUDGET,
@@ -251,10 +263,15 @@ public final class PhaseBalancer {
     return true;
   }
 
-  private static String limitSentence(LimitVerdict verdict, Integer moves, Double limit) {
+  private static String limitSentence(
+      LimitVerdict verdict, Integer moves, Double limit, com.wayledger.engine.PositionWords words) {
     return switch (verdict) {
       case ALREADY_WITHIN ->
-          " The board is within its unbalance limit of " + percent(limit) + " as it stands.";
+          " The "
+              + words.board()
+              + " is within its unbalance limit of "
+              + percent(limit)
+              + " as it stands.";
       case REACHED ->
           " The fewest moves that bring it within its unbalance limit of "
               + percent(limit)
@@ -275,7 +292,8 @@ public final class PhaseBalancer {
           " Whether its unbalance limit of "
               + percent(limit)
               + " can be reached was not determined within the search budget.";
-      case NOT_ASSESSED -> " Unbalance limit not assessed: the board has no limit set.";
+      case NOT_ASSESSED ->
+          " Unbalance limit not assessed: the " + words.board() + " has no limit set.";
     };
   }
 
@@ -382,7 +400,7 @@ public final class PhaseBalancer {
     return new BalanceResult(
         BalanceOutcome.NOTHING_TO_MOVE,
         board.problem.items().isEmpty()
-            ? "The board has no single-phase circuits to balance."
+            ? "The " + words.board() + " has no single-phase circuits to balance."
             : "Every circuit is locked: nothing can move. The currents are shown as they are.",
         assignmentMap(board, new int[0]),
         now,
