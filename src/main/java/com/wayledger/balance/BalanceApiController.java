@@ -32,15 +32,28 @@ public class BalanceApiController {
     this.balancing = balancing;
   }
 
-  /** Both plans of one problem. */
-  public record Plans(BalanceResult optimal, FewestMovesResult fewestMoves, String caution) {}
+  /**
+   * Both plans of one problem.
+   *
+   * @param movesInWords the optimal plan's moves in the board's own words ("move circuit 'Dryer'
+   *     from space 4 B to space 7 A" on a panelboard, "… from way 4 L2 to way 7 L1" on a board of
+   *     ways), the same words the balancing page shows
+   */
+  public record Plans(
+      BalanceResult optimal,
+      FewestMovesResult fewestMoves,
+      String caution,
+      java.util.List<String> movesInWords) {}
 
   @GetMapping("/boards/{id}/balance")
   @Operation(summary = "Balancing plans for a stored board (nothing is changed)")
   public Plans plans(@PathVariable long id, @RequestParam(defaultValue = "DEMAND") Basis basis) {
     BalancePlans plans = balancing.plans(id, basis, null);
     return new Plans(
-        plans.optimal(), plans.fewestMoves(), com.wayledger.board.AnalysisApiController.CAUTION);
+        plans.optimal(),
+        plans.fewestMoves(),
+        com.wayledger.board.AnalysisApiController.CAUTION,
+        plans.inWords(plans.optimal().moves()));
   }
 
   @PostMapping("/balance")
@@ -67,9 +80,13 @@ public class BalanceApiController {
                                   """))))
   public Plans solve(@RequestBody @NotNull BalanceProblem problem) {
     PhaseBalancer balancer = new PhaseBalancer();
+    BalanceResult optimal = balancer.optimise(problem);
     return new Plans(
-        balancer.optimise(problem),
+        optimal,
         balancer.fewestMoves(problem),
-        com.wayledger.board.AnalysisApiController.CAUTION);
+        com.wayledger.board.AnalysisApiController.CAUTION,
+        optimal.moves() == null
+            ? java.util.List.of()
+            : optimal.moves().stream().map(m -> m.inWords()).toList());
   }
 }

@@ -1,6 +1,7 @@
 package com.wayledger.balance;
 
 import com.wayledger.board.Placement;
+import com.wayledger.engine.PositionWords;
 import com.wayledger.engine.balance.BalanceResult;
 import com.wayledger.engine.balance.CircuitMove;
 import com.wayledger.engine.balance.FewestMovesResult;
@@ -24,6 +25,7 @@ import java.util.List;
  *     diversity method, so the table agrees with the board page and with "as it stands"
  * @param chosenStepMoves the fewest-moves row previewed; null when the optimal plan is not one of
  *     them
+ * @param words how the board names its positions and lines (way 4 L2, space 4 B)
  */
 public record BalancePlans(
     Basis basis,
@@ -36,7 +38,13 @@ public record BalancePlans(
     List<Placement> placements,
     List<Placement> undo,
     List<StepFigures> stepFigures,
-    Integer chosenStepMoves) {
+    Integer chosenStepMoves,
+    PositionWords words) {
+
+  /** Each move of {@code moves} in the board's words: "… from space 4 B to space 7 A". */
+  public List<String> inWords(List<CircuitMove> moves) {
+    return moves == null ? List.of() : moves.stream().map(m -> m.inWords(words)).toList();
+  }
 
   /**
    * A fewest-moves row as the demand engine sees the board after its moves.

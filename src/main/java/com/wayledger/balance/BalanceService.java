@@ -61,7 +61,8 @@ public class BalanceService {
             .orElseThrow(() -> new NotFoundException("Board", boardId));
     BoardDemand before = results.boardDemand(boardId);
     BalanceProblem problem = problemOf(board, before, basis, results.spec().panelSpacesOf(board));
-    PhaseBalancer balancer = new PhaseBalancer();
+    PhaseBalancer balancer =
+        new PhaseBalancer(null, com.wayledger.engine.PositionWords.of(results.spec(), board));
     BalanceResult optimal = balancer.optimise(problem);
     FewestMovesResult fewest = balancer.fewestMoves(problem);
     List<CircuitMove> chosen = optimal.moves() == null ? List.of() : optimal.moves();
@@ -122,7 +123,8 @@ public class BalanceService {
         placements,
         undo,
         figures,
-        chosenStep);
+        chosenStep,
+        com.wayledger.engine.PositionWords.of(results.spec(), board));
   }
 
   /** The balancing problem of a board: public so the API can show what was solved. */

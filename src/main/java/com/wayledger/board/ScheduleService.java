@@ -2,6 +2,7 @@ package com.wayledger.board;
 
 import com.wayledger.engine.DeviceKind;
 import com.wayledger.engine.Phase;
+import com.wayledger.engine.PhasePosition;
 import com.wayledger.engine.WayStatus;
 import com.wayledger.system.ChangeKind;
 import com.wayledger.system.NotFoundException;
@@ -130,6 +131,7 @@ public class ScheduleService {
     }
     Board board = circuit.getBoard();
     checkCircuitRules(board, form, circuitId);
+    checkFedBoardSystem(circuit, form.position());
     if (!form.hasFirstLoad() && CircuitForm.of(circuit).sameRowAs(form)) {
       return circuit; // nothing changed: nothing stored, nothing in the change log
     }
@@ -339,6 +341,7 @@ public class ScheduleService {
       Circuit circuit = changed.get(i);
       CircuitEdit edit = changes.get(i);
       checkCircuitRules(board, edit.circuit(), circuit.getId());
+      checkFedBoardSystem(circuit, edit.circuit().position());
       checkLoads(edit);
       circuit.apply(edit.circuit());
       replaceLoads(circuit, edit.loads());
@@ -615,7 +618,13 @@ public class ScheduleService {
       Circuit circuit, ChangeKind kind, String what, Object before, Object after, String reason) {
     Board board = circuit.getBoard();
     String summary =
-        "Way " + circuit.positionLabel() + " “" + circuit.getDescription() + "”: " + what;
+        // in the board's words, as its page names the position: "Space 5 A" on a panelboard
+        (board.isPanelboard() ? "Space " : "Way ")
+            + circuit.positionLabel()
+            + " “"
+            + circuit.getDescription()
+            + "”: "
+            + what;
     events.publishEvent(
         new ScheduleChanged(
             board.getSite().getId(),
@@ -626,6 +635,41 @@ public class ScheduleService {
             before,
             after,
             reason));
+  }
+
+  /**
+   * A way that feeds a board may take another position only where that board's supply system can
+   * still come from it (two poles of a 208Y/120 V panel feed a 120/208 V panel, three poles a
+   * 208Y/120 V one): else the move is refused beside the position, naming the board and its system,
+   * and nothing is saved. Balancing never moves a feeder of a board off its pair or lines (one-pole
+   * breakers and two-pole loads only), so its feed keeps its system.
+   */
+  private void checkFedBoardSystem(Circuit circuit, PhasePosition newPosition) {
+    if (newPosition == null || newPosition == circuit.getPosition()) {
+      return;
+    }
+    java.util.Optional<Board> fed =
+        jdbc.sql("SELECT id FROM board WHERE fed_from_circuit_id = ?")
+            .param(circuit.getId())
+            .query(Long.class)
+            .optional()
+            .flatMap(boards::findById);
+    if (fed.isEmpty()) {
+      return;
+    }
+    com.wayledger.engine.SupplySystem fedSystem = fed.get().system();
+    java.util.List<com.wayledger.engine.SupplySystem> possible =
+        circuit.getBoard().system().suppliesThrough(newPosition);
+    if (fedSystem != null && !possible.contains(fedSystem)) {
+      throw new RuleViolation(
+          "position",
+          "circuit.position.feedsOtherSystem",
+          fed.get().getReference(),
+          com.wayledger.system.EnumWords.standard().of(fedSystem),
+          possible.stream()
+              .map(s -> com.wayledger.system.EnumWords.standard().of(s))
+              .collect(java.util.stream.Collectors.joining(" or ")));
+    }
   }
 
   private void checkCircuitRules(Board board, CircuitForm form, Long circuitId) {

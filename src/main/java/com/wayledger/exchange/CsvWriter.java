@@ -64,7 +64,17 @@ public final class CsvWriter {
       }
     }
     printer.println();
-    // the caution stays the last line (the importer stops at the blank line before it)
+    // what the schedule was checked against, as the workbook's facts row says it; the importer
+    // reads it back (SystemInFile) and refuses a file of another rule set or supply system
+    if (data.ruleSetTitle() != null) {
+      printer.printRecord(
+          SystemInFile.RULE_SET_LABEL,
+          data.ruleSetTitle(),
+          SystemInFile.SUPPLY_SYSTEM_LABEL,
+          WorkbookWriter.systemWordsOf(
+              data.demand() == null ? null : data.demand().board(board.id()), data));
+    }
+    // the caution stays the last line (the importer keeps the lines after the blank one apart)
     printer.printRecord("Caution: " + caution + " Checked against " + data.ruleSetTitle() + ".");
     printer.flush();
   }

@@ -172,12 +172,6 @@ public class ImportService {
    * as it is, as a column the user set to "ignore" does; only a present empty cell clears it.
    */
   static Set<ImportField> absentOptional(List<ImportField> mapping) {
-    Set<ImportField> absent = new java.util.HashSet<>();
-    for (ImportField field : List.of(ImportField.LOCATION, ImportField.FAULT_INTERRUPTER)) {
-      if (!mapping.contains(field)) {
-        absent.add(field);
-      }
-    }
-    return absent;
+    return AbsentColumns.of(mapping);
   }
 }

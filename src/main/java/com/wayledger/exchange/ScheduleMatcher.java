@@ -102,8 +102,8 @@ final class ScheduleMatcher {
    * "1 A-B" on a North American panel).
    *
    * @param absent the optional columns the file does not have: a matched circuit keeps its stored
-   *     location and fault interrupter when their column is absent (a present empty cell clears
-   *     them)
+   *     values of them ({@link AbsentColumns}: location, fault interrupter, conduit, measured Zs,
+   *     cable conditions, …); a present empty cell clears them
    */
   static Result match(
       List<ImportPlan.PlannedCircuit> planned,
@@ -139,13 +139,13 @@ final class ScheduleMatcher {
         matched.put(circuit, entry);
       }
     }
-    if (absent.contains(ImportField.LOCATION) || absent.contains(ImportField.FAULT_INTERRUPTER)) {
+    if (!absent.isEmpty()) {
       Map<ImportPlan.PlannedCircuit, CircuitEntry> kept = new LinkedHashMap<>();
       List<ImportPlan.PlannedCircuit> all = new ArrayList<>(planned.size());
       for (ImportPlan.PlannedCircuit circuit : planned) {
         CircuitEntry entry = matched.get(circuit);
         ImportPlan.PlannedCircuit merged =
-            entry == null ? circuit : keepAbsent(circuit, entry.circuit(), absent);
+            entry == null ? circuit : AbsentColumns.keep(circuit, entry, absent);
         all.add(merged);
         if (entry != null) {
           kept.put(merged, entry);
@@ -218,20 +218,6 @@ final class ScheduleMatcher {
               removeMissing ? CircuitEdit.remove(entry.circuitId(), entry.recordVersion()) : null));
     }
     return new Result(outcomes, blocked);
-  }
-
-  /** The circuit read, with the stored values of the optional columns the file does not have. */
-  private static ImportPlan.PlannedCircuit keepAbsent(
-      ImportPlan.PlannedCircuit read, CircuitForm stored, Set<ImportField> absent) {
-    CircuitForm c = read.circuit();
-    CircuitForm merged =
-        c.withLocationAndFaultInterrupter(
-            absent.contains(ImportField.LOCATION) ? stored.location() : c.location(),
-            absent.contains(ImportField.FAULT_INTERRUPTER)
-                ? stored.deviceFaultInterrupter()
-                : c.deviceFaultInterrupter());
-    return new ImportPlan.PlannedCircuit(
-        merged, read.loads(), read.rowNumbers(), read.key(), read.recordVersion());
   }
 
   private static List<LoadForm> loadsOf(ImportPlan.PlannedCircuit circuit) {

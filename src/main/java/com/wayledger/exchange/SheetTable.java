@@ -12,6 +12,9 @@ import java.util.List;
  * @param headers the header cells, one per column
  * @param rows the non-blank rows below the header
  * @param above the non-blank rows above the header (our export's title and facts rows)
+ * @param below on our own export, the first non-blank rows after the blank row that ends the
+ *     schedule (the workbook's totals block, the CSV's rule set, supply system and caution lines);
+ *     empty otherwise
  */
 public record SheetTable(
     List<String> sheetNames,
@@ -19,7 +22,8 @@ public record SheetTable(
     int headerRowNumber,
     List<String> headers,
     List<Row> rows,
-    List<Row> above) {
+    List<Row> above,
+    List<Row> below) {
 
   /**
    * One row: its number as the spreadsheet shows it, and its cells (blank as ""), as wide as the
@@ -37,6 +41,18 @@ public record SheetTable(
     headers = List.copyOf(headers);
     rows = List.copyOf(rows);
     above = above == null ? List.of() : List.copyOf(above);
+    below = below == null ? List.of() : List.copyOf(below);
+  }
+
+  /** A table with nothing recorded after its rows. */
+  public SheetTable(
+      List<String> sheetNames,
+      int sheetIndex,
+      int headerRowNumber,
+      List<String> headers,
+      List<Row> rows,
+      List<Row> above) {
+    this(sheetNames, sheetIndex, headerRowNumber, headers, rows, above, List.of());
   }
 
   /** A table with nothing recorded above its header. */
@@ -46,7 +62,7 @@ public record SheetTable(
       int headerRowNumber,
       List<String> headers,
       List<Row> rows) {
-    this(sheetNames, sheetIndex, headerRowNumber, headers, rows, List.of());
+    this(sheetNames, sheetIndex, headerRowNumber, headers, rows, List.of(), List.of());
   }
 
   /** The row above the header with this spreadsheet row number, or null. */

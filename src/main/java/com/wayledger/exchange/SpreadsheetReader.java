@@ -50,6 +50,9 @@ public final class SpreadsheetReader {
   /** Most data rows accepted below the header. */
   public static final int MAX_ROWS = 5_000;
 
+  /** Rows kept after our own export's schedule (its totals block, or the CSV's closing lines). */
+  static final int MAX_ROWS_BELOW = 64;
+
   /**
    * Most rows read from a sheet, empty ones included: a workbook padded with hundreds of thousands
    * of formatted but empty rows is refused after reading this many instead of being parsed whole.
@@ -217,9 +220,16 @@ public final class SpreadsheetReader {
     List<SheetTable.Row> rows = new ArrayList<>();
     boolean own = ownHeaders(headers);
     int previous = header.number();
+    List<SheetTable.Row> below = new ArrayList<>();
     for (SheetTable.Row row : raw.subList(best + 1, raw.size())) {
-      if (own && row.number() != previous + 1) {
-        break; // our export leaves a blank row between the schedule and its totals block
+      if (own && (!below.isEmpty() || row.number() != previous + 1)) {
+        // our export leaves a blank row between the schedule and its totals block (XLSX) or its
+        // rule set, supply system and caution (CSV): kept apart, never read as circuits
+        if (below.size() < MAX_ROWS_BELOW) {
+          below.add(row);
+          continue;
+        }
+        break;
       }
       previous = row.number();
       width = Math.max(width, row.cells().size());
@@ -242,7 +252,8 @@ public final class SpreadsheetReader {
       }
       padded.add(new SheetTable.Row(row.number(), cells));
     }
-    return new SheetTable(names, index, header.number(), headers, padded, raw.subList(0, best));
+    return new SheetTable(
+        names, index, header.number(), headers, padded, raw.subList(0, best), below);
   }
 
   private static boolean ownHeaders(List<String> headers) {

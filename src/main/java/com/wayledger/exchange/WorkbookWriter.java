@@ -307,14 +307,7 @@ public final class WorkbookWriter {
     text(facts, 14, data.ruleSetTitle(), styles.text, null);
     text(facts, 15, words.of("workbook.fact.supplySystem"), styles.label, null);
     // the board's own supply system (a second service, a 120/208 V panel) where it has one
-    text(
-        facts,
-        16,
-        demand != null && demand.system() != null
-            ? com.wayledger.system.EnumWords.standard().of(demand.system())
-            : data.supplySystemWords(),
-        styles.text,
-        null);
+    text(facts, 16, systemWordsOf(demand, data), styles.text, null);
     text(facts, 11, words.of("workbook.fact.fedFrom"), styles.label, null);
     text(
         facts,
@@ -943,6 +936,25 @@ public final class WorkbookWriter {
     return demand != null && demand.lines() > 0 ? demand.lines() : board.isThreePhase() ? 3 : 1;
   }
 
+  /**
+   * The board's phases as the trade counts them: 1 on a single-phase three-wire panel (120/240 V or
+   * 120/208 V, two lines and a neutral), 3 on a three-line board, 1 on a single-line one.
+   */
+  static int phasesOf(BoardEntry board, BoardDemand demand) {
+    if (demand != null && demand.system() != null && demand.system().hasTwoLines()) {
+      return 1;
+    }
+    return linesOf(board, demand) == 3 ? 3 : 1;
+  }
+
+  /** The board's own supply system in words where it has one, else the site's ("" when none). */
+  static String systemWordsOf(BoardDemand demand, ExportData data) {
+    if (demand != null && demand.system() != null) {
+      return com.wayledger.system.EnumWords.standard().of(demand.system());
+    }
+    return data.supplySystemWords() == null ? "" : data.supplySystemWords();
+  }
+
   private static com.wayledger.engine.SupplySystem systemOf(BoardEntry board, BoardDemand demand) {
     return demand != null && demand.system() != null
         ? demand.system()
@@ -969,7 +981,7 @@ public final class WorkbookWriter {
       "Board",
       "Location",
       "Fed from",
-      "Lines",
+      "Phases",
       "Ways",
       "Circuits",
       "Connected kW",
@@ -977,7 +989,8 @@ public final class WorkbookWriter {
       "Highest phase A",
       "Incomer",
       "Unbalance %",
-      "Not assessed"
+      "Not assessed",
+      "Supply system"
     };
     Row head = sheet.createRow(HEADER_ROW);
     for (int i = 0; i < heads.length; i++) {
@@ -991,7 +1004,7 @@ public final class WorkbookWriter {
       text(row, 0, "  ".repeat(board.depth()) + board.reference(), s.text, w);
       text(row, 1, board.location(), s.text, w);
       text(row, 2, board.parentReference() == null ? "origin" : board.parentReference(), s.text, w);
-      number(row, 3, board.phases(), s.integer, w);
+      number(row, 3, phasesOf(board, demand), s.integer, w);
       number(row, 4, board.wayCount(), s.integer, w);
       number(row, 5, board.circuits().size(), s.integer, w);
       formula(row, 6, cells.connectedKilowatts(), cells.connectedKilowattsValue(), s.kilowatts, w);
@@ -1007,6 +1020,7 @@ public final class WorkbookWriter {
           demand == null ? "not assessed" : String.join("; ", demand.notAssessed()),
           s.text,
           w);
+      text(row, 12, systemWordsOf(demand, data), s.text, w);
     }
     sheet.setAutoFilter(
         new CellRangeAddress(HEADER_ROW, Math.max(HEADER_ROW + 1, r - 1), 0, heads.length - 1));
@@ -1097,9 +1111,11 @@ public final class WorkbookWriter {
                   circuit.lineLabel(),
                   circuit.description()));
         } else {
+          // "ways 1–4, 7" on a board of ways, "spaces 1–4, 7" on a panelboard, as its page says
+          String noun = firstOf.get(gathered.getKey()).words().position() + "s ";
           rows.add(
               new FindingRow(
-                  board.reference(), null, gathered.getKey(), ways.size(), wayRanges(ways)));
+                  board.reference(), null, gathered.getKey(), ways.size(), noun + wayRanges(ways)));
         }
       }
     }
@@ -1165,7 +1181,7 @@ public final class WorkbookWriter {
       text(row, 4, finding.summary(), s.text, w);
       String figures =
           item.ways() != null
-              ? item.circuits() + " circuits, ways " + item.ways()
+              ? item.circuits() + " circuits, " + item.ways()
               : joinQuantities(finding.values());
       text(row, 5, figures, s.text, w);
       text(row, 6, finding.reference(), s.text, w);

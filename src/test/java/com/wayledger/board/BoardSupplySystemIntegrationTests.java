@@ -1,6 +1,7 @@
 package com.wayledger.board;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.springframework.security.test.web.servlet.request.SecurityMockMvcRequestPostProcessors.csrf;
 import static org.springframework.security.test.web.servlet.request.SecurityMockMvcRequestPostProcessors.user;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
@@ -8,16 +9,13 @@ import static org.springframework.test.web.servlet.request.MockMvcRequestBuilder
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.jsonPath;
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
 
-import com.wayledger.engine.EarthingSystem;
 import com.wayledger.engine.Phase;
 import com.wayledger.engine.PhasePosition;
 import com.wayledger.engine.SupplySystem;
 import com.wayledger.engine.demand.BoardDemand;
 import com.wayledger.site.Site;
-import com.wayledger.site.SiteForm;
 import com.wayledger.site.SiteService;
 import com.wayledger.support.NecPanels;
-import java.util.UUID;
 import org.hamcrest.Matchers;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
@@ -57,24 +55,7 @@ class BoardSupplySystemIntegrationTests {
 
   @BeforeEach
   void aWyeSiteWithAHousePanel() {
-    site =
-        sites.create(
-            new SiteForm(
-                "Invented 208Y building " + UUID.randomUUID(),
-                null,
-                EarthingSystem.TN_C_S,
-                120.0,
-                3,
-                60.0,
-                null,
-                10.0,
-                null,
-                null,
-                null,
-                null,
-                null,
-                "NEC",
-                SupplySystem.WYE_208Y_120));
+    site = NecPanels.wyeSite(sites, "Invented 208Y building");
     house = boards.create(site.getId(), NecPanels.panelForm("HP", 3, 42));
     // spaces 3 and 5 are lines B and C of a three-phase panelboard
     twoPoleWay =
@@ -164,6 +145,47 @@ class BoardSupplySystemIntegrationTests {
     assertThat(parent.onPhase(Phase.L3).currentAmps()).as("C: 2400/120").isCloseTo(20.0, offset());
     // |10∠−120° + 20∠120°| = √(100 + 400 − 200) = √300 (textbook phasor sum)
     assertThat(parent.neutralCurrentAmps()).isCloseTo(Math.sqrt(300.0), offset());
+  }
+
+  @Test
+  void aFeederOfA120208PanelCannotBecomeThreePoleAndNothingIsSaved() throws Exception {
+    mvc.perform(subPanel("U5", twoPoleWay, "SINGLE_PHASE_120_208", "1"))
+        .andExpect(status().is3xxRedirection());
+    long version = twoPoleWay.getVersion();
+
+    // three poles of a 208Y/120 V panel give 208Y/120 V, not the 120/208 V the unit panel is on
+    assertThatThrownBy(
+            () ->
+                schedule.updateCircuit(
+                    twoPoleWay.getId(),
+                    NecPanels.feeder(13, PhasePosition.THREE_POLE, "Feeder to unit panel")))
+        .isInstanceOfSatisfying(
+            com.wayledger.system.RuleViolation.class,
+            refused -> {
+              assertThat(refused.field()).isEqualTo("position");
+              assertThat(refused.messageCode()).isEqualTo("circuit.position.feedsOtherSystem");
+            });
+
+    Circuit stored = schedule.circuit(twoPoleWay.getId());
+    assertThat(stored.getPosition()).as("nothing saved").isEqualTo(PhasePosition.L2_L3);
+    assertThat(stored.getWayNumber()).isEqualTo(3);
+    assertThat(stored.getVersion()).isEqualTo(version);
+  }
+
+  @Test
+  void aFeederOfA120208PanelMayMoveToAnotherPairOfLines() throws Exception {
+    mvc.perform(subPanel("U6", twoPoleWay, "SINGLE_PHASE_120_208", "1"))
+        .andExpect(status().is3xxRedirection());
+    Board unit = boardNamed("U6");
+
+    // space 13 starts rows 7 and 8: A then B on a three-line panel (common practice); still two
+    // poles, so still a 120/208 V feed
+    schedule.updateCircuit(
+        twoPoleWay.getId(), NecPanels.feeder(13, PhasePosition.L1_L2, "Feeder to unit panel"));
+
+    assertThat(schedule.circuit(twoPoleWay.getId()).getPosition().isLineToLine()).isTrue();
+    assertThat(boardRepository.findById(unit.getId()).orElseThrow().system())
+        .isEqualTo(SupplySystem.SINGLE_PHASE_120_208);
   }
 
   @Test

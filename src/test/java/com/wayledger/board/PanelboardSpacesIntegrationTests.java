@@ -301,7 +301,21 @@ class PanelboardSpacesIntegrationTests {
         .andExpect(jsonPath("$.optimal.unbalanceAfterPercent").value(0.0))
         .andExpect(jsonPath("$.fewestMoves.limitVerdict").value("REACHED"))
         .andExpect(jsonPath("$.fewestMoves.movesToReachLimit").value(1))
-        .andExpect(jsonPath("$.fewestMoves.limitPlan[0].toPhase").value("L2"));
+        .andExpect(jsonPath("$.fewestMoves.limitPlan[0].toPhase").value("L2"))
+        // the moves in the panel's words, as its balancing page names them (common practice)
+        .andExpect(
+            jsonPath("$.movesInWords[0]")
+                .value(
+                    org.hamcrest.Matchers.matchesPattern(
+                        "move circuit 'Receptacles [125]' from space [125] A to space \\d+ B")));
+    assertThat(
+            jdbc.sql("SELECT summary FROM change_log WHERE board_id = ? ORDER BY id")
+                .param(boardId)
+                .query(String.class)
+                .list())
+        .as("the change log names spaces and lines A/B as the panel's page does")
+        .contains("Space 3 B “Receptacles 3”: added")
+        .noneMatch(line -> line.startsWith("Way "));
     mvc.perform(get("/api/boards/{id}/demand", boardId).with(viewer))
         .andExpect(status().isOk())
         .andExpect(jsonPath("$.result.unbalancePercent").value(50.0));

@@ -87,4 +87,86 @@ class ImportAbsentColumnsTests {
         .isEqualTo(FaultInterrupter.GFCI);
     assertThat(outcome.edit().circuit().location()).isEqualTo(CircuitLocation.OUTDOORS);
   }
+
+  @Test
+  void fileWithoutTheConduitColumnKeepsTheStoredConduitAndAPresentEmptyCellClearsIt() {
+    CircuitForm steel = READ.withCableConduit(com.wayledger.engine.Conduit.STEEL);
+    List<CircuitEntry> stored = List.of(new CircuitEntry(31L, steel, List.of(LOAD), "2-abc"));
+    List<ImportPlan.PlannedCircuit> read =
+        List.of(new ImportPlan.PlannedCircuit(READ, List.of(LOAD), List.of(5), 31L, "2-abc"));
+
+    ImportOutcome withoutColumn =
+        ScheduleMatcher.match(
+                read,
+                stored,
+                false,
+                Phase::name,
+                ImportService.absentOptional(List.of(ImportField.WAY, ImportField.CIRCUIT)))
+            .outcomes()
+            .get(0);
+    ImportOutcome emptyCell =
+        ScheduleMatcher.match(
+                read,
+                stored,
+                false,
+                Phase::name,
+                ImportService.absentOptional(
+                    List.of(ImportField.WAY, ImportField.CIRCUIT, ImportField.CONDUIT)))
+            .outcomes()
+            .get(0);
+
+    assertThat(withoutColumn.kind())
+        .as("a file without the Conduit column changes nothing (docs/exchange.md)")
+        .isEqualTo(ImportOutcome.Kind.UNCHANGED);
+    assertThat(emptyCell.changes().stream().map(ImportOutcome.Change::field).toList())
+        .containsExactly(ImportField.CONDUIT);
+    assertThat(emptyCell.edit().circuit().cableConduit()).as("empty cell clears it").isNull();
+  }
+
+  @Test
+  void fileWithoutTheMotorHorsepowerColumnKeepsEachLoadLinesRating() {
+    LoadForm motor =
+        new LoadForm(
+            "Pump", LoadCategory.MOTOR, 1, 1100.0, RatingUnit.W, 0.8, null, null, false, 1.5);
+    LoadForm readMotor =
+        new LoadForm(
+            "Pump", LoadCategory.MOTOR, 1, 1100.0, RatingUnit.W, 0.8, null, null, false, null);
+
+    ImportOutcome outcome =
+        ScheduleMatcher.match(
+                List.of(
+                    new ImportPlan.PlannedCircuit(
+                        READ, List.of(readMotor), List.of(5), 31L, "2-abc")),
+                List.of(new CircuitEntry(31L, READ, List.of(motor), "2-abc")),
+                false,
+                Phase::name,
+                ImportService.absentOptional(
+                    List.of(
+                        ImportField.WAY,
+                        ImportField.CIRCUIT,
+                        ImportField.LOCATION,
+                        ImportField.FAULT_INTERRUPTER)))
+            .outcomes()
+            .get(0);
+
+    assertThat(outcome.kind()).isEqualTo(ImportOutcome.Kind.UNCHANGED);
+  }
+
+  @Test
+  void everyKeptFieldNamesAComponentOfTheFormRecords() {
+    Set<String> circuit = new java.util.HashSet<>();
+    for (var c : CircuitForm.class.getRecordComponents()) {
+      circuit.add(c.getName());
+    }
+    Set<String> load = new java.util.HashSet<>();
+    for (var c : LoadForm.class.getRecordComponents()) {
+      load.add(c.getName());
+    }
+    List<AbsentColumns.Kept> all = new java.util.ArrayList<>(AbsentColumns.KEPT);
+    all.add(AbsentColumns.MCCB_SETTINGS);
+    for (AbsentColumns.Kept kept : all) {
+      assertThat(circuit).as("columns %s", kept.columns()).containsAll(kept.circuitComponents());
+      assertThat(load).as("columns %s", kept.columns()).containsAll(kept.loadComponents());
+    }
+  }
 }

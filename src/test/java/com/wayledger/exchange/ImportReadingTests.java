@@ -162,10 +162,13 @@ class ImportReadingTests {
   }
 
   @Test
-  void ourCsvEndsWithTheCautionAfterABlankLine() throws IOException {
+  void ourCsvEndsWithTheRuleSetAndTheCautionAfterABlankLine() throws IOException {
     String[] lines =
         new String(csv(ExchangeFixtures.shopExport()), StandardCharsets.UTF_8).split("\r?\n");
-    assertThat(lines[lines.length - 2]).as("blank line before the caution").isEmpty();
+    assertThat(lines[lines.length - 3]).as("blank line after the schedule").isEmpty();
+    assertThat(lines[lines.length - 2])
+        .as("then what the schedule was checked against, as the workbook's facts row")
+        .startsWith("\"Rule set\",\"IEC 60364 / BS 7671\",\"Supply system\",");
     assertThat(lines[lines.length - 1]).contains("Caution: " + ExchangeFixtures.CAUTION);
   }
 

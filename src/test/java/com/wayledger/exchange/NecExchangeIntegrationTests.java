@@ -313,7 +313,38 @@ class NecExchangeIntegrationTests {
   }
 
   @Test
+  void csvCarriesTheRuleSetAndSupplySystemAndRoundTripsIntoAnEmptyPanel() throws Exception {
+    long common = boardId("CP");
+    byte[] csv = exportCsv(common);
+    String text = new String(csv, java.nio.charset.StandardCharsets.UTF_8);
+    assertThat(text)
+        .as("the line after the schedule names what it was checked against, as the workbook does")
+        .contains(
+            "\"Rule set\",\""
+                + com.wayledger.engine.rules.RuleSets.of("NEC").title()
+                + "\",\"Supply system\",\"120/208 V single-phase three-wire");
+    long copy = emptyPanel("CP csv " + UUID.randomUUID().toString().substring(0, 6), "none");
+
+    importInto(copy, csv, "panel.csv");
+
+    assertSameDemand(common, copy);
+  }
+
+  @Test
+  void aCsvOfAnotherRuleSetIsRefusedNamingBothAndNothingIsStored() throws Exception {
+    refusedNamingBoth("board.csv", this::exportCsv);
+  }
+
+  @Test
   void aWorkbookOfAnotherRuleSetIsRefusedNamingBothAndNothingIsStored() throws Exception {
+    refusedNamingBoth("board.xlsx", this::export);
+  }
+
+  private interface Exporter {
+    byte[] of(long boardId) throws Exception;
+  }
+
+  private void refusedNamingBoth(String fileName, Exporter exporter) throws Exception {
     long iecBoard =
         jdbc.sql(
                 "SELECT b.id FROM board b JOIN site s ON s.id = b.site_id WHERE s.rule_set = 'IEC'"
@@ -327,7 +358,7 @@ class NecExchangeIntegrationTests {
                 multipart("/boards/{id}/import", panel)
                     .file(
                         new MockMultipartFile(
-                            "file", "board.xlsx", "application/octet-stream", export(iecBoard)))
+                            "file", fileName, "application/octet-stream", exporter.of(iecBoard)))
                     .with(EDITOR)
                     .with(csrf()))
             .andExpect(status().is3xxRedirection())
@@ -439,14 +470,26 @@ class NecExchangeIntegrationTests {
         .getContentAsByteArray();
   }
 
-  /** Uploads, previews and imports a workbook; returns the preview page. */
+  private byte[] exportCsv(long boardId) throws Exception {
+    return mvc.perform(get("/boards/{id}/export.csv", boardId).with(EDITOR))
+        .andExpect(status().isOk())
+        .andReturn()
+        .getResponse()
+        .getContentAsByteArray();
+  }
+
   private String importInto(long boardId, byte[] workbook) throws Exception {
+    return importInto(boardId, workbook, "panel.xlsx");
+  }
+
+  /** Uploads, previews and imports a workbook or CSV file; returns the preview page. */
+  private String importInto(long boardId, byte[] workbook, String fileName) throws Exception {
     String location =
         mvc.perform(
                 multipart("/boards/{id}/import", boardId)
                     .file(
                         new MockMultipartFile(
-                            "file", "panel.xlsx", "application/octet-stream", workbook))
+                            "file", fileName, "application/octet-stream", workbook))
                     .with(EDITOR)
                     .with(csrf()))
             .andExpect(status().is3xxRedirection())

@@ -43,6 +43,16 @@ class NecWorkbookTotalsTests {
 
   private static final double AMPS = 0.01;
   private static final List<String> LETTERS = List.of("A", "B", "C");
+  private static final SupplySpec SPLIT_PHASE =
+      new SupplySpec(
+          EarthingSystem.TN_C_S,
+          120.0,
+          1,
+          60.0,
+          null,
+          10.0,
+          200.0,
+          SupplySystem.SPLIT_PHASE_120_240);
 
   @Test
   void splitPhasePanelTotalsLinesAAndBWithTwoFortyVoltLoadsOnBoth() throws IOException {
@@ -54,19 +64,7 @@ class NecWorkbookTotalsTests {
     circuits.add(entry(3, 3, PhasePosition.L1_L2, "Water heater", 4800, RatingUnit.W));
     circuits.add(entry(4, 5, PhasePosition.L1_L2, "Well pump", 20, RatingUnit.A));
     BoardEntry panel = new BoardEntry(1L, "P1", null, 1, 24, null, "", 0, circuits, LETTERS);
-    ExportData data =
-        export(
-            List.of(panel),
-            new SupplySpec(
-                EarthingSystem.TN_C_S,
-                120.0,
-                1,
-                60.0,
-                null,
-                10.0,
-                200.0,
-                SupplySystem.SPLIT_PHASE_120_240),
-            Map.of());
+    ExportData data = export(List.of(panel), SPLIT_PHASE, Map.of());
 
     try (XSSFWorkbook workbook = WorkbookWriterTests.written(data, true)) {
       FormulaEvaluator evaluator = workbook.getCreationHelper().createFormulaEvaluator();
@@ -102,19 +100,7 @@ class NecWorkbookTotalsTests {
     circuits.add(entry(1, 5, PhasePosition.L1, "Kitchen", 2400, RatingUnit.W));
     circuits.add(entry(2, 3, PhasePosition.L1_L2, "Water heater", 4800, RatingUnit.W));
     BoardEntry panel = new BoardEntry(1L, "P1", null, 1, 24, null, "", 0, circuits, LETTERS);
-    ExportData data =
-        export(
-            List.of(panel),
-            new SupplySpec(
-                EarthingSystem.TN_C_S,
-                120.0,
-                1,
-                60.0,
-                null,
-                10.0,
-                200.0,
-                SupplySystem.SPLIT_PHASE_120_240),
-            Map.of());
+    ExportData data = export(List.of(panel), SPLIT_PHASE, Map.of());
 
     List<String> places =
         data.findings().boards().get(0).circuits().stream()
@@ -123,6 +109,30 @@ class NecWorkbookTotalsTests {
     assertThat(places)
         .as("positions in a panelboard's words, not \"way 5 L1\"")
         .containsExactlyInAnyOrder("space 5 A “Kitchen”", "space 3 A–B “Water heater”");
+  }
+
+  @Test
+  void findingsSheetGathersNotAssessedCircuitsOfAPanelboardBySpaces() throws IOException {
+    // neither breaker records a conductor: the same "not assessed" on both, gathered in one row
+    List<CircuitEntry> circuits = new ArrayList<>();
+    circuits.add(entry(1, 5, PhasePosition.L1, "Kitchen", 2400, RatingUnit.W));
+    circuits.add(entry(2, 7, PhasePosition.L2, "Bedrooms", 1200, RatingUnit.W));
+    BoardEntry panel = new BoardEntry(1L, "P1", null, 1, 24, null, "", 0, circuits, LETTERS);
+    ExportData data = export(List.of(panel), SPLIT_PHASE, Map.of());
+
+    List<String> figures = new ArrayList<>();
+    try (XSSFWorkbook workbook = WorkbookWriterTests.written(data, true)) {
+      for (Row row : workbook.getSheet("Findings")) {
+        Cell cell = row.getCell(5);
+        if (cell != null && cell.getCellType() == CellType.STRING) {
+          figures.add(cell.getStringCellValue());
+        }
+      }
+    }
+    assertThat(figures)
+        .as("gathered rows name the panel's spaces, as its page does")
+        .contains("2 circuits, spaces 5, 7")
+        .noneMatch(text -> text.contains("circuits, ways"));
   }
 
   @Test
@@ -182,6 +192,40 @@ class NecWorkbookTotalsTests {
           .as("TP line B: 1200 W / 120 V")
           .isCloseTo(10.0, within(AMPS));
       sameAsTheEngine(tenantTotals, data.demand().board(2L), 2);
+
+      Sheet summary = workbook.getSheet("Summary");
+      Row head = summary.getRow(WorkbookWriter.HEADER_ROW);
+      Row hpRow = summary.getRow(WorkbookWriter.HEADER_ROW + 1);
+      Row tpRow = summary.getRow(WorkbookWriter.HEADER_ROW + 2);
+      assertThat(head.getCell(3).getStringCellValue()).isEqualTo("Phases");
+      // common practice: a 208Y/120 V panel is three-phase four-wire; a 120/208 V panel (two lines
+      // and the neutral of the wye) is single-phase three-wire, however many lines it has
+      assertThat(hpRow.getCell(3).getNumericCellValue()).as("HP, 208Y/120 V").isEqualTo(3.0);
+      assertThat(tpRow.getCell(3).getNumericCellValue()).as("TP, 120/208 V").isEqualTo(1.0);
+      assertThat(head.getCell(12).getStringCellValue()).isEqualTo("Supply system");
+      assertThat(hpRow.getCell(12).getStringCellValue())
+          .isEqualTo("208Y/120 V three-phase four-wire");
+      assertThat(tpRow.getCell(12).getStringCellValue())
+          .startsWith("120/208 V single-phase three-wire");
+    }
+  }
+
+  @Test
+  void summaryCountsASplitPhasePanelAsOnePhaseEvenWhenStoredWithThree() throws IOException {
+    // a panel recorded with 3 phases before its site took the 120/240 V system: still two lines
+    // and a neutral, single-phase three-wire (common practice)
+    List<CircuitEntry> circuits = new ArrayList<>();
+    circuits.add(entry(1, 1, PhasePosition.L1, "Kitchen", 2400, RatingUnit.W));
+    BoardEntry panel = new BoardEntry(1L, "P1", null, 3, 24, null, "", 0, circuits, LETTERS);
+    ExportData data = export(List.of(panel), SPLIT_PHASE, Map.of());
+
+    try (XSSFWorkbook workbook = WorkbookWriterTests.written(data, true)) {
+      Row row = workbook.getSheet("Summary").getRow(WorkbookWriter.HEADER_ROW + 1);
+      assertThat(row.getCell(3).getNumericCellValue())
+          .as("phases of a 120/240 V panel")
+          .isEqualTo(1.0);
+      assertThat(row.getCell(12).getStringCellValue())
+          .isEqualTo("120/240 V single-phase three-wire");
     }
   }
 

@@ -28,27 +28,35 @@ public final class NecPanels {
 
   private NecPanels() {}
 
+  /** An invented NEC site on a 208Y/120 V service, named {@code name} and a random suffix. */
+  public static Site wyeSite(SiteService sites, String name) {
+    return necSite(sites, name, 3, SupplySystem.WYE_208Y_120);
+  }
+
+  private static Site necSite(SiteService sites, String name, int phases, SupplySystem system) {
+    return sites.create(
+        new SiteForm(
+            name + " " + UUID.randomUUID(),
+            null,
+            EarthingSystem.TN_C_S,
+            120.0,
+            phases,
+            60.0,
+            null,
+            10.0,
+            null,
+            null,
+            null,
+            null,
+            null,
+            "NEC",
+            system));
+  }
+
   /** The stored panelboard. */
   public static Board splitPhasePanel(
       SiteService sites, BoardService boards, ScheduleService schedule) {
-    Site site =
-        sites.create(
-            new SiteForm(
-                "Invented duplex " + UUID.randomUUID(),
-                null,
-                EarthingSystem.TN_C_S,
-                120.0,
-                1,
-                60.0,
-                null,
-                10.0,
-                null,
-                null,
-                null,
-                null,
-                null,
-                "NEC",
-                SupplySystem.SPLIT_PHASE_120_240));
+    Site site = necSite(sites, "Invented duplex", 1, SupplySystem.SPLIT_PHASE_120_240);
     Board board = boards.create(site.getId(), panelForm("LP-A", 1, 42));
     schedule.addCircuit(board.getId(), breaker(1, PhasePosition.L1, "Kitchen receptacles", 1500));
     schedule.addCircuit(board.getId(), breaker(2, PhasePosition.L1, "Bedroom lights", 600));

@@ -2,6 +2,7 @@ package com.wayledger.engine.balance;
 
 import com.wayledger.engine.Phase;
 import com.wayledger.engine.PhasePosition;
+import com.wayledger.engine.PositionWords;
 
 /**
  * One circuit changing line (or, on a new board, being placed).
@@ -54,34 +55,55 @@ public record CircuitMove(
     return isTwoPole() ? PhasePosition.twoPoleFrom(toPhase).toLine() : null;
   }
 
-  /** The move in plain words: "move circuit 'Bakery mixer' from way 4 L2 to way 7 L1". */
+  /**
+   * The move in plain words on a board of ways: "move circuit 'Bakery mixer' from way 4 L2 to way 7
+   * L1".
+   */
   public String inWords() {
+    return inWords(PositionWords.WAYS);
+  }
+
+  /**
+   * The move in the board's own words: "… from way 4 L2 to way 7 L1" on a board of ways, "… from
+   * space 4 B to space 7 A" on a panelboard, "move two-pole circuit 'X' from spaces 1 and 3 A–B to
+   * spaces 4 and 6 B–C" for a two-pole breaker.
+   */
+  public String inWords(PositionWords words) {
     if (isTwoPole()) {
       return "move two-pole circuit '"
           + description
           + "' from "
-          + spacePair(fromWay, fromPhase)
+          + spacePair(words, fromWay, fromPhase)
           + " to "
-          + spacePair(toWay, toPhase);
+          + spacePair(words, toWay, toPhase);
     }
     String target =
         toWay == null
-            ? toPhase + " (no free position recorded on " + toPhase + ")"
-            : "way " + toWay + " " + toPhase;
+            ? words.line(toPhase)
+                + " (no free "
+                + words.position()
+                + " recorded on "
+                + words.line(toPhase)
+                + ")"
+            : words.place(toWay, PhasePosition.valueOf(toPhase.name()));
     if (fromPhase == null) {
       return "place circuit '" + description + "' on " + target;
     }
-    String source = fromWay == null ? fromPhase.name() : "way " + fromWay + " " + fromPhase;
+    String source =
+        fromWay == null
+            ? words.line(fromPhase)
+            : words.place(fromWay, PhasePosition.valueOf(fromPhase.name()));
     return "move circuit '" + description + "' from " + source + " to " + target;
   }
 
-  /** "spaces 1 and 3 L1–L2": a two-pole breaker's spaces and its pair of lines. */
-  private static String spacePair(Integer firstSpace, Phase firstLine) {
-    return "spaces "
+  /** "spaces 1 and 3 A–B": a two-pole breaker's spaces and its pair of lines. */
+  private static String spacePair(PositionWords words, Integer firstSpace, Phase firstLine) {
+    return words.position()
+        + "s "
         + firstSpace
         + " and "
         + (firstSpace + 2)
         + " "
-        + PhasePosition.twoPoleFrom(firstLine).label();
+        + words.lines(PhasePosition.twoPoleFrom(firstLine));
   }
 }

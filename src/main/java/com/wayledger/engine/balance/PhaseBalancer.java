@@ -25,9 +25,19 @@ import java.util.Map;
 public final class PhaseBalancer {
 
   private final BalanceSettings settings;
+  private final com.wayledger.engine.PositionWords words;
 
   public PhaseBalancer(BalanceSettings settings) {
+    this(settings, com.wayledger.engine.PositionWords.WAYS);
+  }
+
+  /**
+   * A balancer whose messages name the board and its lines in the board's own words ("the
+   * panelboard", "B") on a North American panel.
+   */
+  public PhaseBalancer(BalanceSettings settings, com.wayledger.engine.PositionWords words) {
     this.settings = settings == null ? BalanceSettings.defaults() : settings;
+    this.words = words == null ? com.wayledger.engine.PositionWords.WAYS : words;
   }
 
   public PhaseBalancer() {
@@ -39,7 +49,7 @@ public final class PhaseBalancer {
     if (hasTwoPoles(problem)) {
       return TwoPoleSearch.optimise(this, problem);
     }
-    PreparedBoard.Preparation preparation = PreparedBoard.prepare(problem);
+    PreparedBoard.Preparation preparation = PreparedBoard.prepare(problem, words);
     if (preparation.board() == null) {
       return refused(preparation.failure(), preparation.message());
     }
@@ -68,7 +78,7 @@ public final class PhaseBalancer {
     if (hasTwoPoles(problem)) {
       return TwoPoleSearch.largestFirst(this, problem);
     }
-    PreparedBoard.Preparation preparation = PreparedBoard.prepare(problem);
+    PreparedBoard.Preparation preparation = PreparedBoard.prepare(problem, words);
     if (preparation.board() == null) {
       return refused(preparation.failure(), preparation.message());
     }
@@ -90,7 +100,7 @@ public final class PhaseBalancer {
     if (hasTwoPoles(problem)) {
       return TwoPoleSearch.fewestMoves(this, problem);
     }
-    PreparedBoard.Preparation preparation = PreparedBoard.prepare(problem);
+    PreparedBoard.Preparation preparation = PreparedBoard.prepare(problem, words);
     if (preparation.board() == null) {
       return movesRefused(preparation.failure(), preparation.message(), null);
     }
@@ -105,7 +115,9 @@ public final class PhaseBalancer {
     if (!board.withinCapacity(board.currentPhase)) {
       return movesRefused(
           BalanceOutcome.INVALID_INPUT,
-          "The board as recorded has more circuits on a line than the positions given for it; check the"
+          "The "
+              + words.board()
+              + " as recorded has more circuits on a line than the positions given for it; check the"
               + " positions before counting moves.",
           before);
     }
@@ -167,7 +179,8 @@ public final class PhaseBalancer {
             verdict,
             movesToLimit,
             limit,
-            board.notes);
+            board.notes,
+            words);
     return new FewestMovesResult(
         complete ? BalanceOutcome.PROVED_OPTIMAL : BalanceOutcome.BEST_WITHIN_BUDGET,
         message,
@@ -192,7 +205,8 @@ public final class PhaseBalancer {
       LimitVerdict verdict,
       Integer movesToLimit,
       Double limit,
-      List<String> notes) {
+      List<String> notes,
+      com.wayledger.engine.PositionWords words) {
     StringBuilder message = new StringBuilder();
     message.append(complete ? "Proved: " : "Within the search budget: ");
     message.append(
@@ -209,7 +223,7 @@ public final class PhaseBalancer {
         optimumReached
             ? (optimumProved ? ", the optimum." : ", the best arrangement found.")
             : ".");
-    message.append(limitSentence(verdict, movesToLimit, limit));
+    message.append(limitSentence(verdict, movesToLimit, limit, words));
     for (String note : notes) {
       message.append(' ').append(note);
     }
@@ -283,10 +297,15 @@ public final class PhaseBalancer {
     return true;
   }
 
-  static String limitSentence(LimitVerdict verdict, Integer moves, Double limit) {
+  static String limitSentence(
+      LimitVerdict verdict, Integer moves, Double limit, com.wayledger.engine.PositionWords words) {
     return switch (verdict) {
       case ALREADY_WITHIN ->
-          " The board is within its unbalance limit of " + percent(limit) + " as it stands.";
+          " The "
+              + words.board()
+              + " is within its unbalance limit of "
+              + percent(limit)
+              + " as it stands.";
       case REACHED ->
           " The fewest moves that bring it within its unbalance limit of "
               + percent(limit)
@@ -307,7 +326,8 @@ public final class PhaseBalancer {
           " Whether its unbalance limit of "
               + percent(limit)
               + " can be reached was not determined within the search budget.";
-      case NOT_ASSESSED -> " Unbalance limit not assessed: the board has no limit set.";
+      case NOT_ASSESSED ->
+          " Unbalance limit not assessed: the " + words.board() + " has no limit set.";
     };
   }
 
@@ -414,6 +434,11 @@ public final class PhaseBalancer {
         && !problem.twoPoles().isEmpty();
   }
 
+  /** The words its messages name the board and its lines in. */
+  com.wayledger.engine.PositionWords words() {
+    return words;
+  }
+
   BalanceSettings settings() {
     return settings;
   }
@@ -436,7 +461,7 @@ public final class PhaseBalancer {
     return new BalanceResult(
         BalanceOutcome.NOTHING_TO_MOVE,
         board.problem.items().isEmpty()
-            ? "The board has no single-phase circuits to balance."
+            ? "The " + words.board() + " has no single-phase circuits to balance."
             : "Every circuit is locked: nothing can move. The currents are shown as they are.",
         assignmentMap(board, new int[0]),
         now,

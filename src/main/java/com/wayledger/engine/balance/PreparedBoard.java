@@ -168,18 +168,29 @@ final class PreparedBoard {
   }
 
   static Preparation prepare(BalanceProblem problem) {
+    return prepare(problem, com.wayledger.engine.PositionWords.WAYS);
+  }
+
+  /** As {@link #prepare(BalanceProblem)}, its messages in the board's own words. */
+  static Preparation prepare(BalanceProblem problem, com.wayledger.engine.PositionWords words) {
+    String board = words.board();
     if (problem == null || problem.items() == null) {
-      return failed(BalanceOutcome.NOT_ASSESSED, "Not assessed: the board has no circuit list.");
+      return failed(
+          BalanceOutcome.NOT_ASSESSED, "Not assessed: the " + board + " has no circuit list.");
     }
     if (!problem.threePhase()) {
       return failed(
           BalanceOutcome.NOT_THREE_PHASE,
-          "This is a single-phase board: every circuit is on the one line, so there is nothing to balance.");
+          "This is a single-phase "
+              + board
+              + ": every circuit is on the one line, so there is nothing to balance.");
     }
     if (problem.lines() != 2 && problem.lines() != 3) {
       return failed(
           BalanceOutcome.INVALID_INPUT,
-          "A board to balance has 2 lines (120/240 V split-phase) or 3; "
+          "A "
+              + board
+              + " to balance has 2 lines (120/240 V split-phase) or 3; "
               + problem.lines()
               + " given.");
     }
@@ -207,7 +218,11 @@ final class PreparedBoard {
             BalanceOutcome.INVALID_INPUT,
             "Circuit '"
                 + item.label()
-                + "' is on L3, which a two-line (split-phase) board does not have.");
+                + "' is on "
+                + words.line(Phase.L3)
+                + ", which a two-line (split-phase) "
+                + board
+                + " does not have.");
       }
     }
     if (!missingDemand.isEmpty()) {
@@ -242,7 +257,11 @@ final class PreparedBoard {
               BalanceOutcome.INVALID_INPUT,
               "Fixed load of "
                   + amps
-                  + " A on L3, which a two-line (split-phase) board does not have.");
+                  + " A on "
+                  + words.line(Phase.L3)
+                  + ", which a two-line (split-phase) "
+                  + board
+                  + " does not have.");
         }
         fixed[entry.getKey().ordinal()] += centiamps(amps);
       }
@@ -275,9 +294,13 @@ final class PreparedBoard {
     if (totalAmps > MAX_TOTAL_AMPS) {
       return failed(
           BalanceOutcome.INVALID_INPUT,
-          "The board's total demand of "
+          "The "
+              + board
+              + "'s total demand of "
               + totalAmps
-              + " A is beyond any low-voltage board; check the units.");
+              + " A is beyond any low-voltage "
+              + board
+              + "; check the units.");
     }
     List<BalanceItem> movableItems = new ArrayList<>();
     List<BalanceItem> locked = new ArrayList<>();
@@ -317,7 +340,11 @@ final class PreparedBoard {
         if (given < 0) {
           return failed(
               BalanceOutcome.INVALID_INPUT,
-              "Positions available on " + phase + " is " + given + "; it must be zero or more.");
+              "Positions available on "
+                  + words.line(phase)
+                  + " is "
+                  + given
+                  + "; it must be zero or more.");
         }
         capacity[phase.ordinal()] = Math.min(given, movable.length);
       } else if (problem.freeWays() != null) {
@@ -328,7 +355,7 @@ final class PreparedBoard {
             (int) Math.min(movable.length, onPhaseNow + (free == null ? 0 : free.size()));
       } else {
         capacity[phase.ordinal()] = movable.length;
-        notes.add("Positions on " + phase + " not given: not limited.");
+        notes.add("Positions on " + words.line(phase) + " not given: not limited.");
       }
     }
     int positions = capacity[0] + capacity[1] + capacity[2];
@@ -338,11 +365,17 @@ final class PreparedBoard {
           movable.length
               + " movable single-phase circuits but only "
               + positions
-              + " positions for them (L1 "
+              + " positions for them ("
+              + words.line(Phase.L1)
+              + " "
               + capacity[0]
-              + ", L2 "
+              + ", "
+              + words.line(Phase.L2)
+              + " "
               + capacity[1]
-              + ", L3 "
+              + ", "
+              + words.line(Phase.L3)
+              + " "
               + capacity[2]
               + "): free positions or lock circuits before balancing.");
     }

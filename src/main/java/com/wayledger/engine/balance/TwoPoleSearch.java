@@ -30,7 +30,7 @@ final class TwoPoleSearch {
     if (layouts.layouts().size() == 1) {
       return balancer.optimise(layouts.layouts().get(0).problem()); // no two-pole breaker can move
     }
-    Budget budget = new Budget(balancer.settings(), layouts.layouts().size(), 1);
+    Budget budget = new Budget(balancer, layouts.layouts().size(), 1);
     BalanceResult first = null;
     BalanceResult best = null;
     TwoPoleLayouts.Layout bestLayout = null;
@@ -41,7 +41,7 @@ final class TwoPoleSearch {
     double lowerBound = Double.POSITIVE_INFINITY;
     long nodes = 0;
     for (TwoPoleLayouts.Layout layout : layouts.layouts()) {
-      PreparedBoard prepared = PreparedBoard.prepare(layout.problem()).board();
+      PreparedBoard prepared = PreparedBoard.prepare(layout.problem(), balancer.words()).board();
       if (best != null
           && prepared != null
           && new AssignmentSearch(prepared, new SearchBudget(balancer.settings())).rootBoundKey()
@@ -56,7 +56,8 @@ final class TwoPoleSearch {
       if (result.after() == null) {
         continue; // this layout leaves too few spaces for the single-pole circuits
       }
-      keys = keys == null ? PreparedBoard.prepare(layout.problem()).board() : keys;
+      keys =
+          keys == null ? PreparedBoard.prepare(layout.problem(), balancer.words()).board() : keys;
       nodes += result.nodesExplored();
       proved &= result.provedOptimal();
       lowerBound = Math.min(lowerBound, result.lowerBoundAmps());
@@ -120,7 +121,7 @@ final class TwoPoleSearch {
       return balancer.fewestMoves(layouts.layouts().get(0).problem());
     }
     // a fewest-moves call may spend three budgets (docs/calculations/balance.md)
-    Budget budget = new Budget(balancer.settings(), layouts.layouts().size(), 3);
+    Budget budget = new Budget(balancer, layouts.layouts().size(), 3);
     List<Answer> answers = new ArrayList<>();
     PreparedBoard keys = null;
     long nodes = 0;
@@ -134,7 +135,8 @@ final class TwoPoleSearch {
         }
         continue;
       }
-      keys = keys == null ? PreparedBoard.prepare(layout.problem()).board() : keys;
+      keys =
+          keys == null ? PreparedBoard.prepare(layout.problem(), balancer.words()).board() : keys;
       nodes += result.nodesExplored();
       answers.add(new Answer(layout, result, nothing, keys));
     }
@@ -205,7 +207,8 @@ final class TwoPoleSearch {
             reach.verdict,
             reach.moves,
             limit,
-            layouts.notes());
+            layouts.notes(),
+            balancer.words());
     return new FewestMovesResult(
         complete ? BalanceOutcome.PROVED_OPTIMAL : BalanceOutcome.BEST_WITHIN_BUDGET,
         message,
@@ -372,6 +375,7 @@ final class TwoPoleSearch {
    */
   private static final class Budget {
     private final long perCall;
+    private final com.wayledger.engine.PositionWords words;
     private long nodesLeft;
     private final long deadlineNanos;
     private int layoutsLeft;
@@ -380,7 +384,9 @@ final class TwoPoleSearch {
      * @param callsPerLayout the budgets one layout's call may spend (1 for the optimum, 3 for
      *     fewest moves)
      */
-    Budget(BalanceSettings whole, int layouts, int callsPerLayout) {
+    Budget(PhaseBalancer balancer, int layouts, int callsPerLayout) {
+      BalanceSettings whole = balancer.settings();
+      this.words = balancer.words();
       this.perCall = callsPerLayout;
       this.nodesLeft = whole.nodeBudget() * callsPerLayout;
       this.deadlineNanos =
@@ -393,7 +399,7 @@ final class TwoPoleSearch {
       long millis = Math.max(1, (deadlineNanos - System.nanoTime()) / 1_000_000L);
       layoutsLeft = Math.max(1, layoutsLeft - 1);
       return new PhaseBalancer(
-          new BalanceSettings(share, Math.max(1, millis / (perCall * (layoutsLeft + 1)))));
+          new BalanceSettings(share, Math.max(1, millis / (perCall * (layoutsLeft + 1)))), words);
     }
 
     void spent(long nodes) {

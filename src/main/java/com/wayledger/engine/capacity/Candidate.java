@@ -2,6 +2,7 @@ package com.wayledger.engine.capacity;
 
 import com.wayledger.engine.DeviceSpec;
 import com.wayledger.engine.PhasePosition;
+import com.wayledger.engine.PositionWords;
 
 /**
  * One place a new load could go.
@@ -18,6 +19,7 @@ import com.wayledger.engine.PhasePosition;
  * @param deviceProposed whether {@code device} is a proposal for a new circuit
  * @param deviceNote how the device was chosen and what must still be done (a new circuit's cable);
  *     may be empty
+ * @param words how the board names its positions and lines
  */
 public record Candidate(
     long boardId,
@@ -29,10 +31,43 @@ public record Candidate(
     String circuitDescription,
     DeviceSpec device,
     boolean deviceProposed,
-    String deviceNote) {
+    String deviceNote,
+    PositionWords words) {
 
-  /** "KB1 way 11 L2", or "KB1 way 4 L1–L3". */
+  public Candidate {
+    if (words == null) {
+      words = PositionWords.WAYS;
+    }
+  }
+
+  /** A candidate on a board of ways (IEC words). */
+  public Candidate(
+      long boardId,
+      String boardReference,
+      CandidateKind kind,
+      int wayNumber,
+      PhasePosition position,
+      Long circuitId,
+      String circuitDescription,
+      DeviceSpec device,
+      boolean deviceProposed,
+      String deviceNote) {
+    this(
+        boardId,
+        boardReference,
+        kind,
+        wayNumber,
+        position,
+        circuitId,
+        circuitDescription,
+        device,
+        deviceProposed,
+        deviceNote,
+        PositionWords.WAYS);
+  }
+
+  /** "KB1 way 11 L2", "KB1 way 4 L1–L3", or on a panelboard "P1 space 5 A". */
   public String label() {
-    return boardReference + " way " + wayNumber + " " + position.label();
+    return boardReference + " " + words.place(wayNumber, position);
   }
 }

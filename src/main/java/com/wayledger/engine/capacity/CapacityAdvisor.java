@@ -84,13 +84,22 @@ public final class CapacityAdvisor {
       if (!boardIds.isEmpty() && !boardIds.contains(board.id())) {
         continue;
       }
+      com.wayledger.engine.PositionWords words = com.wayledger.engine.PositionWords.of(site, board);
       if (load.threePhase() && !board.isThreePhase()) {
-        notes.add(board.reference() + ": a single-phase board cannot take a three-phase load");
+        notes.add(
+            board.reference()
+                + ": a single-phase "
+                + words.board()
+                + " cannot take a three-phase load");
         continue;
       }
-      List<Candidate> candidates = candidates(board, load);
+      List<Candidate> candidates = candidates(board, load, words);
       if (candidates.isEmpty()) {
-        notes.add(board.reference() + ": no spare way, free position or circuit of the same kind");
+        notes.add(
+            board.reference()
+                + ": no spare "
+                + words.position()
+                + ", free position or circuit of the same kind");
       }
       for (Candidate candidate : candidates) {
         outcomes.add(evaluate(site, board, candidate, load, before, methods, mccb, settings));
@@ -126,7 +135,8 @@ public final class CapacityAdvisor {
   }
 
   /** The candidate positions of one board for the load, in way order. */
-  static List<Candidate> candidates(BoardSpec board, NewLoad load) {
+  static List<Candidate> candidates(
+      BoardSpec board, NewLoad load, com.wayledger.engine.PositionWords words) {
     Map<String, CircuitSpec> held = new HashMap<>();
     Map<String, CircuitSpec> emptyRecords = new HashMap<>();
     for (CircuitSpec circuit : board.circuits()) {
@@ -142,10 +152,10 @@ public final class CapacityAdvisor {
         continue;
       }
       if (circuit.status() == WayStatus.SPARE_DEVICE) {
-        found.add(existing(board, circuit, CandidateKind.SPARE_WAY));
+        found.add(existing(board, circuit, words, CandidateKind.SPARE_WAY));
       } else if (circuit.status() == WayStatus.IN_USE
           && circuit.loads().stream().anyMatch(l -> l.category() == load.category())) {
-        found.add(existing(board, circuit, CandidateKind.SHARED_CIRCUIT));
+        found.add(existing(board, circuit, words, CandidateKind.SHARED_CIRCUIT));
       }
     }
     List<Phase> lines = board.isThreePhase() ? List.of(Phase.values()) : List.of(Phase.L1);
@@ -154,7 +164,7 @@ public final class CapacityAdvisor {
         final int w = way;
         if (lines.stream().noneMatch(p -> held.containsKey(key(w, p)))) {
           CircuitSpec record = emptyRecords.get(key(way, Phase.L1));
-          found.add(empty(board, way, PhasePosition.THREE_POLE, record));
+          found.add(empty(board, words, way, PhasePosition.THREE_POLE, record));
           break;
         }
       }
@@ -164,7 +174,8 @@ public final class CapacityAdvisor {
           if (!held.containsKey(key(way, phase))) {
             CircuitSpec record = emptyRecords.get(key(way, phase));
             boolean recordFits = record != null && record.position().isSinglePole();
-            found.add(empty(board, way, PhasePosition.on(phase), recordFits ? record : null));
+            found.add(
+                empty(board, words, way, PhasePosition.on(phase), recordFits ? record : null));
             break;
           }
         }
@@ -178,7 +189,11 @@ public final class CapacityAdvisor {
     return way + ":" + phase;
   }
 
-  private static Candidate existing(BoardSpec board, CircuitSpec circuit, CandidateKind kind) {
+  private static Candidate existing(
+      BoardSpec board,
+      CircuitSpec circuit,
+      com.wayledger.engine.PositionWords words,
+      CandidateKind kind) {
     return new Candidate(
         board.id(),
         board.reference(),
@@ -189,11 +204,16 @@ public final class CapacityAdvisor {
         circuit.description(),
         circuit.device(),
         false,
-        "");
+        "",
+        words);
   }
 
   private static Candidate empty(
-      BoardSpec board, int way, PhasePosition position, CircuitSpec record) {
+      BoardSpec board,
+      com.wayledger.engine.PositionWords words,
+      int way,
+      PhasePosition position,
+      CircuitSpec record) {
     return new Candidate(
         board.id(),
         board.reference(),
@@ -204,7 +224,8 @@ public final class CapacityAdvisor {
         null,
         null,
         true,
-        "");
+        "",
+        words);
   }
 
   /** Id given to a new circuit in the trial copy of the site: below every stored id. */
@@ -518,7 +539,8 @@ public final class CapacityAdvisor {
         candidate.circuitDescription(),
         device,
         true,
-        note);
+        note,
+        candidate.words());
   }
 
   private static Map<Phase, Double> currents(BoardDemand board) {
@@ -642,7 +664,7 @@ public final class CapacityAdvisor {
     StringBuilder text = new StringBuilder();
     text.append(
         switch (c.kind()) {
-          case SPARE_WAY -> "Spare way " + c.label();
+          case SPARE_WAY -> "Spare " + c.words().position() + " " + c.label();
           case SHARED_CIRCUIT -> "Share " + c.label() + " (" + c.circuitDescription() + ")";
           case EMPTY_POSITION -> "New circuit at " + c.label();
         });
@@ -657,7 +679,7 @@ public final class CapacityAdvisor {
             .orElse(null);
     if (worst != null) {
       text.append("; largest line ")
-          .append(worst)
+          .append(c.words().line(worst))
           .append(' ')
           .append(fixed(o.largestPhaseAmps()))
           .append(" A");

@@ -7,6 +7,7 @@ import com.wayledger.engine.LoadCategory;
 import com.wayledger.engine.LoadSpec;
 import com.wayledger.engine.Phase;
 import com.wayledger.engine.PhasePosition;
+import com.wayledger.engine.PositionWords;
 import com.wayledger.engine.SupplySpec;
 import com.wayledger.engine.SupplySystem;
 import com.wayledger.engine.WayStatus;
@@ -37,7 +38,8 @@ final class BoardCalculation {
       DemandSettings settings,
       SupplySpec supply,
       Map<Long, BoardDemand> evaluatedSubBoards,
-      List<String> notes) {}
+      List<String> notes,
+      PositionWords words) {}
 
   static BoardDemand evaluate(BoardSpec board, Context context) {
     double u0 = context.nominalVoltageVolts();
@@ -46,6 +48,7 @@ final class BoardCalculation {
     int boardLines = system.lineCount(board.phases());
     List<String> notAssessed = new ArrayList<>();
     List<String> notes = new ArrayList<>(context.notes());
+    PositionWords words = context.words();
 
     CircuitSpec[] circuits = board.circuits().toArray(new CircuitSpec[0]);
     Arrays.sort(circuits, WAY_ORDER);
@@ -66,16 +69,25 @@ final class BoardCalculation {
         continue;
       }
       if (circuit.position() == null) {
-        reason[c] = "not assessed — missing position (L1, L2, L3 or three-pole)";
+        reason[c] =
+            "not assessed — missing position (line "
+                + words.linesInWords(boardLines == 2 ? 2 : 3).replace(" and ", ", ")
+                + " or "
+                + (boardLines == 2 ? "two-pole" : "three-pole")
+                + ")";
       } else if (boardLines == 1 && circuit.position() == PhasePosition.THREE_POLE) {
-        reason[c] = "not assessed — three-pole position on a single-phase board";
+        reason[c] = "not assessed — three-pole position on a single-phase " + words.board();
       } else if (boardLines == 1 && circuit.position().isLineToLine()) {
-        reason[c] = "not assessed — two-pole position on a single-phase two-wire board";
+        reason[c] = "not assessed — two-pole position on a single-phase two-wire " + words.board();
       } else if (boardLines == 2 && !fitsSplitPhase(circuit.position())) {
         reason[c] =
             "not assessed — position "
-                + circuit.position()
-                + " on a split-phase board (lines A and B only)";
+                + words.lines(circuit.position())
+                + (system.isSplitPhase() ? " on a split-phase " : " on a single-phase three-wire ")
+                + words.board()
+                + " (lines "
+                + words.linesInWords(2)
+                + " only)";
       }
       position[c] = reason[c] == null ? effectivePosition(circuit.position(), boardLines) : null;
       double perAmp = LinePhasors.voltAmperesPerAmp(system, position[c], u0);
@@ -93,8 +105,14 @@ final class BoardCalculation {
         }
       }
       if (reason[c] != null) {
+        // the line goes with the place unless the position itself is what is wrong
+        PhasePosition named = position[c] == null ? null : circuit.position();
         notAssessed.add(
-            "way " + circuit.wayNumber() + " (" + circuit.description() + "): " + reason[c]);
+            words.place(circuit.wayNumber(), named)
+                + " ("
+                + circuit.description()
+                + "): "
+                + reason[c]);
         continue;
       }
       for (LoadSpec load : circuit.loads()) {
@@ -105,19 +123,24 @@ final class BoardCalculation {
       if (circuit.feedsBoardId() != null) {
         if (!carried.add(circuit.feedsBoardId())) {
           notes.add(
-              "way "
-                  + circuit.wayNumber()
-                  + " feeds sub-board #"
+              words.place(circuit.wayNumber(), circuit.position())
+                  + " feeds "
+                  + words.subBoard()
+                  + " #"
                   + circuit.feedsBoardId()
-                  + " like an earlier way; its demand is carried once, by the earlier way");
+                  + " like an earlier "
+                  + words.position()
+                  + "; its demand is carried once, by the earlier "
+                  + words.position());
           continue;
         }
         subBoard[c] = context.evaluatedSubBoards().get(circuit.feedsBoardId());
         if (subBoard[c] == null) {
           notAssessed.add(
-              "way "
-                  + circuit.wayNumber()
-                  + ": the demand of sub-board #"
+              words.place(circuit.wayNumber(), circuit.position())
+                  + ": the demand of "
+                  + words.subBoard()
+                  + " #"
                   + circuit.feedsBoardId()
                   + " is not available and is not included");
         }
@@ -307,9 +330,10 @@ final class BoardCalculation {
       boolean lineByLine = child != null && fed.size() > 1 && child.phases().size() == fed.size();
       if (child != null && fed.size() > 1 && !lineByLine) {
         notes.add(
-            "way "
-                + circuit.wayNumber()
-                + " feeds a board of "
+            words.place(circuit.wayNumber(), circuit.position())
+                + " feeds a "
+                + words.board()
+                + " of "
                 + child.phases().size()
                 + " line(s) from "
                 + fed.size()
@@ -517,7 +541,11 @@ final class BoardCalculation {
     if (board.parentBoardId() != null) {
       supplyFuse =
           RatingLoading.notApplicable(
-              "supply fuse", "not applicable — fed from a way of its parent board");
+              "supply fuse",
+              "not applicable — fed from a "
+                  + context.words().position()
+                  + " of its parent "
+                  + context.words().board());
     } else if (context.supply() == null) {
       supplyFuse = RatingLoading.notApplicable("supply fuse", "not assessed — missing supply");
     } else {

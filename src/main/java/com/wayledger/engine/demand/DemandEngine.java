@@ -60,12 +60,17 @@ public final class DemandEngine {
               c -> {
                 Long child = c.feedsBoardId();
                 if (!byId.containsKey(child)) {
+                  com.wayledger.engine.PositionWords words =
+                      com.wayledger.engine.PositionWords.of(site, board);
                   problems.add(
-                      "board "
+                      words.board()
+                          + " "
                           + board.reference()
-                          + " way "
-                          + c.wayNumber()
-                          + " feeds board #"
+                          + " "
+                          + words.place(c.wayNumber(), c.position())
+                          + " feeds "
+                          + words.board()
+                          + " #"
                           + child
                           + ", which is not on this site");
                 } else if (fedFrom.putIfAbsent(child, board.id()) != null
@@ -179,7 +184,8 @@ public final class DemandEngine {
             settings,
             dwellingByBoardId.getOrDefault(board.id(), DwellingParameters.UNKNOWN),
             u0,
-            children);
+            children,
+            com.wayledger.engine.PositionWords.of(site, board));
     done.put(board.id(), result);
     ordered.add(result);
   }
@@ -223,7 +229,9 @@ public final class DemandEngine {
         settings,
         dwelling,
         nominalVoltage(supply, settings),
-        Map.of());
+        Map.of(),
+        com.wayledger.engine.PositionWords.ofSystem(
+            board.systemOn(supply == null ? null : supply.system())));
   }
 
   private static BoardDemand evaluateWithChildren(
@@ -234,7 +242,8 @@ public final class DemandEngine {
       DemandSettings settings,
       DwellingParameters dwelling,
       double u0,
-      Map<Long, BoardDemand> children) {
+      Map<Long, BoardDemand> children,
+      com.wayledger.engine.PositionWords words) {
     List<String> notes = new ArrayList<>();
     DiversityMethod method =
         methods.resolve(
@@ -248,7 +257,8 @@ public final class DemandEngine {
     }
     return BoardCalculation.evaluate(
         board,
-        new BoardCalculation.Context(u0, method, dwelling, settings, supply, children, notes));
+        new BoardCalculation.Context(
+            u0, method, dwelling, settings, supply, children, notes, words));
   }
 
   private static void noteUnusableKey(

@@ -463,7 +463,7 @@ public final class NecDwellingCalculator {
         }
         case LIGHTING, SOCKET_OUTLETS ->
             w.assume(
-                "Lighting and receptacle load lines on the board are covered by the unit load of"
+                "Lighting and receptacle load lines on the panelboard are covered by the unit load of"
                     + " 220.12 and 220.52 and not added.");
         default -> {}
       }

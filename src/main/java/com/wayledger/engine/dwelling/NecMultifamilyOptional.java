@@ -57,7 +57,7 @@ public final class NecMultifamilyOptional {
     Lines w = new Lines();
     if (units.size() < MINIMUM_UNITS) {
       w.notAssessed.add(
-          "not assessed — 220.84 applies to three or more dwelling units; this board feeds "
+          "not assessed — 220.84 applies to three or more dwelling units; this panelboard feeds "
               + units.size());
       return w.sheet(WorksheetMethod.MULTIFAMILY_OPTIONAL, null);
     }

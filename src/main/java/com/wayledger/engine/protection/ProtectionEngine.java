@@ -135,7 +135,11 @@ public final class ProtectionEngine {
     List<Finding> findings = new ArrayList<>();
     Double largest = loading == null ? null : loading.largestPhaseAmps();
     String missingLoad =
-        "design current of board " + board.reference() + " (from the demand calculation)";
+        "design current of "
+            + words.board()
+            + " "
+            + board.reference()
+            + " (from the demand calculation)";
 
     if (board.incomer() != null && board.incomer().kind() != DeviceKind.RCD) {
       Resolved<DeviceCharacteristic> incomer =
@@ -155,7 +159,8 @@ public final class ProtectionEngine {
               rating,
               missingLoad,
               "incomer rating",
-              BoardLoadCheck.REFERENCE_OVERLOAD));
+              BoardLoadCheck.REFERENCE_OVERLOAD,
+              words));
     }
     findings.add(
         rated(
@@ -165,16 +170,20 @@ public final class ProtectionEngine {
             board.busbarRatingAmps(),
             missingLoad,
             "busbar rating",
-            BoardLoadCheck.REFERENCE_BUSBAR));
+            BoardLoadCheck.REFERENCE_BUSBAR,
+            words));
     if (board.isThreePhase()) {
       findings.add(
           loading == null || loading.unbalancePercent() == null
               ? Finding.notAssessed(
                   CheckKind.PHASE_UNBALANCE,
-                  "phase unbalance of board " + board.reference(),
+                  "phase unbalance of " + words.board() + " " + board.reference(),
                   BoardLoadCheck.REFERENCE_UNBALANCE)
               : BoardLoadCheck.unbalance(
-                  loading.unbalancePercent(), board.unbalanceLimitPercent()));
+                  loading.unbalancePercent(),
+                  board.unbalanceLimitPercent(),
+                  words,
+                  words.system().lineCount(board.phases())));
     }
     findings.addAll(selectivity(board, level, mccbSettings, settings, words));
     return findings;
@@ -187,14 +196,15 @@ public final class ProtectionEngine {
       Double rating,
       String missingLoad,
       String missingRating,
-      String reference) {
+      String reference,
+      com.wayledger.engine.PositionWords words) {
     if (rating == null) {
       return Finding.notAssessed(check, missingRating, reference);
     }
     if (largest == null) {
       return Finding.notAssessed(check, missingLoad, reference);
     }
-    return BoardLoadCheck.overload(check, what, largest, rating, reference);
+    return BoardLoadCheck.overload(check, what, largest, rating, reference, words);
   }
 
   private static List<Finding> selectivity(

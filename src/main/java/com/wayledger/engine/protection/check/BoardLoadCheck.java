@@ -1,5 +1,6 @@
 package com.wayledger.engine.protection.check;
 
+import com.wayledger.engine.PositionWords;
 import com.wayledger.engine.protection.result.CheckKind;
 import com.wayledger.engine.protection.result.Finding;
 import com.wayledger.engine.protection.result.Quantity;
@@ -28,6 +29,20 @@ public final class BoardLoadCheck {
    */
   public static Finding overload(
       CheckKind check, String what, double largestPhaseAmps, double ratedAmps, String reference) {
+    return overload(check, what, largestPhaseAmps, ratedAmps, reference, PositionWords.WAYS);
+  }
+
+  /**
+   * As {@link #overload(CheckKind, String, double, double, String)}, its remedy in the board's own
+   * words ("move load to another panelboard" under the NEC rule set).
+   */
+  public static Finding overload(
+      CheckKind check,
+      String what,
+      double largestPhaseAmps,
+      double ratedAmps,
+      String reference,
+      PositionWords words) {
     List<Quantity> values =
         List.of(
             new Quantity("largest phase current", largestPhaseAmps, "A"),
@@ -43,10 +58,21 @@ public final class BoardLoadCheck {
         what + " overloaded: largest phase " + shown[0] + " > " + shown[1],
         values,
         reference,
-        "rebalance the phases, move load to another board, or uprate the " + what);
+        "rebalance the phases, move load to another " + words.board() + ", or uprate the " + what);
   }
 
   public static Finding unbalance(double unbalancePercent, double limitPercent) {
+    return unbalance(unbalancePercent, limitPercent, PositionWords.WAYS, 3);
+  }
+
+  /**
+   * As {@link #unbalance(double, double)}, its remedy naming the board's own lines ("between A and
+   * B" on a 120/240 V panelboard).
+   *
+   * @param lines how many lines the board has (2 or 3)
+   */
+  public static Finding unbalance(
+      double unbalancePercent, double limitPercent, PositionWords words, int lines) {
     List<Quantity> values =
         List.of(
             new Quantity("unbalance", unbalancePercent, "%"),
@@ -70,6 +96,8 @@ public final class BoardLoadCheck {
             + Rounding.percent(limitPercent),
         values,
         REFERENCE_UNBALANCE,
-        "move single-phase circuits between L1, L2 and L3 (see phase balancing)");
+        "move single-phase circuits between "
+            + words.linesInWords(lines)
+            + " (see phase balancing)");
   }
 }

@@ -75,7 +75,9 @@ public final class FaultLevels {
       return known;
     }
     if (!visiting.add(board.id())) {
-      String loop = "a board tree without loops (board " + board.reference() + " feeds itself)";
+      String noun = com.wayledger.engine.PositionWords.of(site, board).board();
+      String loop =
+          "a " + noun + " tree without loops (" + noun + " " + board.reference() + " feeds itself)";
       return new BoardFaultLevel(
           board.id(),
           SourcedValue.missing(loop),
@@ -120,7 +122,9 @@ public final class FaultLevels {
       upstreamResidual = null;
     } else if (parent == null) {
       String why =
-          "parent board "
+          "parent "
+              + com.wayledger.engine.PositionWords.of(site, board).board()
+              + " "
               + board.parentBoardId()
               + " of "
               + board.reference()
@@ -210,7 +214,11 @@ public final class FaultLevels {
   private Resolved<Double> submainDropPercent(BoardSpec board, CableSpec submain, double u0) {
     Double amps = boardCurrentAmps.get(board.id());
     if (amps == null) {
-      return Resolved.missing("design current of board " + board.reference());
+      return Resolved.missing(
+          "design current of "
+              + com.wayledger.engine.PositionWords.of(site, board).board()
+              + " "
+              + board.reference());
     }
     if (submain == null) {
       return Resolved.missing("cable");
