@@ -98,8 +98,8 @@ public record CircuitMove(
 
   /** "spaces 1 and 3 A–B": a two-pole breaker's spaces and its pair of lines. */
   private static String spacePair(PositionWords words, Integer firstSpace, Phase firstLine) {
-    return words.position()
-        + "s "
+    // two-pole moves exist on panelboards only, whose positions are spaces
+    return "spaces "
         + firstSpace
         + " and "
         + (firstSpace + 2)

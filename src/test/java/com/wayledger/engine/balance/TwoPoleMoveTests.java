@@ -78,6 +78,16 @@ class TwoPoleMoveTests {
         .isEqualTo(
             "move two-pole circuit 'Water heater' from spaces 1 and 3 L1–L2 to spaces 4 and 6"
                 + " L2–L3");
+    // in a 208Y/120 V panelboard's words its lines are A, B and C (common practice)
+    assertThat(
+            result
+                .moves()
+                .get(0)
+                .inWords(
+                    new com.wayledger.engine.PositionWords(
+                        true, com.wayledger.engine.SupplySystem.WYE_208Y_120, true)))
+        .isEqualTo(
+            "move two-pole circuit 'Water heater' from spaces 1 and 3 A–B to spaces 4 and 6 B–C");
   }
 
   @Test
