@@ -46,6 +46,8 @@ public final class FindingGroups {
    * @param boardId the board
    * @param boardReference its name
    * @param check which check
+   * @param title the check's title in the board's words ({@link BoardFindings#titleOf}), shown when
+   *     the places' sentences differ
    * @param verdict its grade
    * @param summary the sentence shared by every place, or null when they differ (each place then
    *     carries its own)
@@ -58,6 +60,7 @@ public final class FindingGroups {
       long boardId,
       String boardReference,
       CheckKind check,
+      String title,
       Verdict verdict,
       String summary,
       String reference,
@@ -99,6 +102,7 @@ public final class FindingGroups {
                 board.boardId(),
                 board.reference(),
                 finding.check(),
+                board.titleOf(finding),
                 finding.verdict(),
                 finding.summary(),
                 finding.reference(),
@@ -142,6 +146,7 @@ public final class FindingGroups {
               board.boardId(),
               board.reference(),
               first.check(),
+              board.titleOf(first),
               first.verdict(),
               oneSentence ? first.summary() : null,
               first.reference(),

@@ -18,7 +18,8 @@ import java.util.List;
  * @param href the circuit's page, for a line that stands for one circuit; else null
  * @param place that circuit's place ("way 2 L1–L3 “Spiral dough mixer”"); null without a circuit
  * @param ways for a grouped line, its places counted and listed ("24 ways: 1–12"); else null
- * @param summary the sentence shared by the line's places, or the check's title when they differ
+ * @param summary the sentence shared by the line's places, or the check's title in the board's
+ *     words when they differ
  * @param note the inherited values the check used, for a line that stands for one circuit; else
  *     null
  * @param reference the clause

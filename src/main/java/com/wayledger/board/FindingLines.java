@@ -106,7 +106,7 @@ final class FindingLines {
         circuitId == null ? null : contextPath + "/circuits/" + circuitId,
         circuitId == null ? null : single.place(),
         grouped ? words.sentence("findings.group.ways", group.places().size(), group.ways()) : null,
-        group.summary() != null ? group.summary() : group.check().title(),
+        group.summary() != null ? group.summary() : group.title(),
         values == null ? null : InheritedNote.of(values.usedBy(group.check()), words),
         group.reference(),
         group.remedy() != null && !group.remedy().isBlank() ? "→ " + group.remedy() : null,

@@ -1032,7 +1032,8 @@ public final class WorkbookWriter {
   /**
    * One row of the Findings sheet: a finding of the site, a board or one circuit ({@code way} set),
    * or the same "not assessed" finding of several circuits of a board gathered into one row ({@code
-   * circuits} > 1, {@code ways} listing their ways).
+   * circuits} > 1, {@code ways} listing their ways); {@code title} is the check's title in the
+   * board's words, as the board page names it.
    */
   record FindingRow(
       String board,
@@ -1041,10 +1042,12 @@ public final class WorkbookWriter {
       int circuits,
       String ways,
       String line,
-      String circuit) {
+      String circuit,
+      String title) {
 
-    FindingRow(String board, Integer way, Finding finding, int circuits, String ways) {
-      this(board, way, finding, circuits, ways, null, null);
+    FindingRow(
+        String board, Integer way, Finding finding, int circuits, String ways, String title) {
+      this(board, way, finding, circuits, ways, null, null, title);
     }
   }
 
@@ -1065,7 +1068,14 @@ public final class WorkbookWriter {
     }
     for (Finding finding : data.findings().siteFindings()) {
       if (finding.verdict() != Verdict.PASS) {
-        rows.add(new FindingRow("origin", null, finding, 0, null));
+        rows.add(
+            new FindingRow(
+                "origin",
+                null,
+                finding,
+                0,
+                null,
+                finding.check().title(data.findings().originWords())));
       }
     }
     for (BoardFindings board : data.findings().boards()) {
@@ -1074,7 +1084,8 @@ public final class WorkbookWriter {
       }
       for (Finding finding : board.findings()) {
         if (finding.verdict() != Verdict.PASS) {
-          rows.add(new FindingRow(board.reference(), null, finding, 0, null));
+          rows.add(
+              new FindingRow(board.reference(), null, finding, 0, null, board.titleOf(finding)));
         }
       }
       Map<Finding, List<Integer>> notAssessed = new LinkedHashMap<>();
@@ -1093,7 +1104,8 @@ public final class WorkbookWriter {
                     1,
                     null,
                     circuit.lineLabel(),
-                    circuit.description()));
+                    circuit.description(),
+                    board.titleOf(finding)));
           }
         }
       }
@@ -1109,13 +1121,19 @@ public final class WorkbookWriter {
                   1,
                   null,
                   circuit.lineLabel(),
-                  circuit.description()));
+                  circuit.description(),
+                  board.titleOf(gathered.getKey())));
         } else {
           // "ways 1–4, 7" on a board of ways, "spaces 1–4, 7" on a panelboard, as its page says
           String noun = firstOf.get(gathered.getKey()).words().position() + "s ";
           rows.add(
               new FindingRow(
-                  board.reference(), null, gathered.getKey(), ways.size(), noun + wayRanges(ways)));
+                  board.reference(),
+                  null,
+                  gathered.getKey(),
+                  ways.size(),
+                  noun + wayRanges(ways),
+                  board.titleOf(gathered.getKey())));
         }
       }
     }
@@ -1176,7 +1194,7 @@ public final class WorkbookWriter {
       if (item.way() != null) {
         number(row, 1, item.way(), s.integer, w);
       }
-      text(row, 2, finding.check().title(), s.text, w);
+      text(row, 2, item.title(), s.text, w);
       text(row, 3, Codes.word(finding.verdict()), s.text, w);
       text(row, 4, finding.summary(), s.text, w);
       String figures =

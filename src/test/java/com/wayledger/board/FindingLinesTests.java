@@ -112,6 +112,38 @@ class FindingLinesTests {
   }
 
   @Test
+  void aLineWhosePlacesDifferIsTitledInThePanelboardsWordsAndInTheBaseWordsOnABoardOfWays() {
+    List<CircuitFindings> overloads =
+        List.of(
+            circuit(
+                30, 3, "Lights", finding(CheckKind.WAY_OVERLOAD, Verdict.WARNING, "Ib 21 A", "")),
+            circuit(
+                50, 5, "Range", finding(CheckKind.WAY_OVERLOAD, Verdict.WARNING, "Ib 44 A", "")));
+    BoardFindings panel =
+        new BoardFindings(
+            7L,
+            "LP-1",
+            null,
+            List.of(),
+            overloads,
+            new com.wayledger.engine.PositionWords(
+                true, com.wayledger.engine.SupplySystem.SPLIT_PHASE_120_240));
+
+    // the title follows the board's rule set (as its findings' sentences do), whatever the page
+    assertThat(list(panel, Map.of(), Locale.US).problems().get(0).summary())
+        .isEqualTo("Space overloaded (Ib > In)");
+    assertThat(list(panel, Map.of(), Locale.UK).problems().get(0).summary())
+        .isEqualTo("Space overloaded (Ib > In)");
+    assertThat(
+            list(board("DB2", List.of(), overloads), Map.of(), Locale.UK)
+                .problems()
+                .get(0)
+                .summary())
+        .as("en-GB title unchanged on a board of ways")
+        .isEqualTo("Way overloaded (Ib > In)");
+  }
+
+  @Test
   void theInheritedValuesTheCheckUsedAreNotedInTheFormsOrderWithTheirSource() {
     BoardFindings board =
         board(

@@ -190,6 +190,28 @@ class NecDemoSiteIntegrationTests {
   }
 
   @Test
+  void commonAreaPanelLegsAreUnbalancedBeyondItsLimitAndTheFindingNamesThem() throws Exception {
+    // by hand from the line currents worked above (A 136.70 A, B 92.14 A), the NEMA MG-1
+    // definition over the two legs (our extension to two lines, common practice for the limit):
+    // mean 114.42 A, largest deviation 22.28 A, 22.28 / 114.42 = 19.47 %
+    Finding unbalance =
+        boardFindings("CP").stream()
+            .filter(f -> f.check() == CheckKind.PHASE_UNBALANCE)
+            .findFirst()
+            .orElseThrow();
+    assertThat(unbalance.values().get(0).value())
+        .as("unbalance of lines A and B")
+        .isCloseTo(19.47, org.assertj.core.data.Offset.offset(0.05));
+    assertThat(unbalance.values().get(0).value())
+        .as("the same figure as the panel's demand")
+        .isEqualTo(board("CP").unbalancePercent());
+    assertThat(spec("CP").unbalanceLimitPercent()).as("the panel's limit").isLessThan(19.47);
+    assertThat(unbalance.verdict()).as(unbalance.summary()).isEqualTo(Verdict.WARNING);
+    assertThat(unbalance.summary()).startsWith("lines A and B unbalanced: 19.5 %");
+    assertThat(page("CP")).contains(asHtmlText(unbalance.summary()));
+  }
+
+  @Test
   void twentyAmpBreakerOnFourteenAwgIsASmallConductorFinding() throws Exception {
     // NEC 240.4(D)(3) (as published): 14 AWG copper at most 15 A
     Finding small =

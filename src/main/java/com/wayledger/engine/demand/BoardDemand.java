@@ -26,8 +26,8 @@ import java.util.List;
  *     load with no lighting or socket circuits to carry it), spread evenly over the lines at unity
  *     power factor, VA
  * @param neutralCurrentAmps neutral current, A (on a single-phase board, the line current)
- * @param unbalancePercent NEMA MG-1 unbalance of the phase currents, %; null on a single-phase
- *     board
+ * @param unbalancePercent NEMA MG-1 unbalance of the line currents over the board's lines (three
+ *     phases, or the two lines A and B of a split-phase board), %; null on a single-line board
  * @param unbalanceLimitPercent the limit it is compared with, %
  * @param incomer highest phase current against the incomer device rating In
  * @param busbar against the busbar rating

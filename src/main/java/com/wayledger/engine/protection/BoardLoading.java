@@ -10,7 +10,9 @@ import java.util.Map;
  * @param boardId the board
  * @param phaseCurrentsAmps design current on each line at the board's incomer, A (a single-phase
  *     board uses L1)
- * @param unbalancePercent phase unbalance, %; null for a single-phase board or when not worked out
+ * @param unbalancePercent unbalance over the board's lines, %: three phases, or the two lines A and
+ *     B of a 120/240 V or 120/208 V board (the demand engine's figure); null for a single-line
+ *     board or when not worked out
  * @param neutralCurrentAmps neutral current of a three-phase board from the phasor sum of its line
  *     currents, A; null when not worked out (the submain drop then takes the lines as balanced only
  *     if they are equal, and otherwise bounds the neutral by the largest line)

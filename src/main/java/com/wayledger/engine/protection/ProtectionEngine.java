@@ -58,6 +58,7 @@ public final class ProtectionEngine {
     List<BoardFindings> boards = new ArrayList<>();
     for (BoardSpec board : site.boards()) {
       BoardFaultLevel level = levels.get(board.id());
+      com.wayledger.engine.PositionWords words = com.wayledger.engine.PositionWords.of(site, board);
       List<CircuitFindings> circuits = new ArrayList<>();
       for (CircuitSpec circuit : board.circuits()) {
         if (circuit.status() == WayStatus.EMPTY) {
@@ -72,21 +73,12 @@ public final class ProtectionEngine {
                     loading == null ? null : loading.designCurrentAmps(),
                     mccbSettings.byCircuitId().get(circuit.id()),
                     settings)
-                .placed(
-                    board.reference(),
-                    circuit.position(),
-                    circuit.description(),
-                    com.wayledger.engine.PositionWords.of(site, board)));
+                .placed(board.reference(), circuit.position(), circuit.description(), words));
       }
       List<Finding> own =
           boardFindings(
-              board,
-              level,
-              loadingByBoard.get(board.id()),
-              mccbSettings,
-              settings,
-              com.wayledger.engine.PositionWords.of(site, board));
-      boards.add(new BoardFindings(board.id(), board.reference(), level, own, circuits));
+              board, level, loadingByBoard.get(board.id()), mccbSettings, settings, words);
+      boards.add(new BoardFindings(board.id(), board.reference(), level, own, circuits, words));
     }
     return new SiteFindings(settings, supplyFuse(site, loadingByBoard), boards);
   }
@@ -172,18 +164,22 @@ public final class ProtectionEngine {
             "busbar rating",
             BoardLoadCheck.REFERENCE_BUSBAR,
             words));
-    if (board.isThreePhase()) {
+    // unbalance on every board of more than one line: three phases, or the two legs A and B of a
+    // 120/240 V (or 120/208 V) panel, over which the demand engine and the balancer take the mean
+    int lines = words.system().lineCount(board.phases());
+    if (lines >= 2) {
       findings.add(
           loading == null || loading.unbalancePercent() == null
               ? Finding.notAssessed(
                   CheckKind.PHASE_UNBALANCE,
-                  "phase unbalance of " + words.board() + " " + board.reference(),
+                  BoardLoadCheck.unbalanceOf(words)
+                      + " of "
+                      + words.board()
+                      + " "
+                      + board.reference(),
                   BoardLoadCheck.REFERENCE_UNBALANCE)
               : BoardLoadCheck.unbalance(
-                  loading.unbalancePercent(),
-                  board.unbalanceLimitPercent(),
-                  words,
-                  words.system().lineCount(board.phases())));
+                  loading.unbalancePercent(), board.unbalanceLimitPercent(), words, lines));
     }
     findings.addAll(selectivity(board, level, mccbSettings, settings, words));
     return findings;

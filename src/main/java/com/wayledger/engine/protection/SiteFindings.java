@@ -1,5 +1,6 @@
 package com.wayledger.engine.protection;
 
+import com.wayledger.engine.PositionWords;
 import com.wayledger.engine.protection.result.Finding;
 import java.util.ArrayList;
 import java.util.List;
@@ -17,6 +18,18 @@ public record SiteFindings(
   public SiteFindings {
     siteFindings = List.copyOf(siteFindings);
     boards = List.copyOf(boards);
+  }
+
+  /**
+   * The words of the findings about the origin: the site's nouns (every board of a site shares its
+   * rule set) on no board's layout; the base words on a site without boards.
+   */
+  public PositionWords originWords() {
+    if (boards.isEmpty()) {
+      return PositionWords.WAYS;
+    }
+    PositionWords first = boards.get(0).words();
+    return new PositionWords(false, first.system(), first.usTrade());
   }
 
   /** All findings, site first, then each board's own and its circuits'. */

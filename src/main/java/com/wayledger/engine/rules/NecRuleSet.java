@@ -41,7 +41,8 @@ final class NecRuleSet implements RuleSet {
   static final String REF_OVERLOAD =
       "NEC 408.36 (panelboard overcurrent protection), 215.3, 230.90: load within the rating";
   static final String REF_UNBALANCE =
-      "common practice: no NEC clause limits unbalance (NEMA MG-1 definition applied to currents)";
+      "common practice: no NEC clause limits unbalance; largest deviation from the mean line current"
+          + " / mean (NEMA MG-1 definition applied to currents; on two lines |IA − IB| / (IA + IB))";
 
   private static final Set<CheckKind> KEPT_BOARD_CHECKS =
       Set.of(
@@ -133,7 +134,8 @@ final class NecRuleSet implements RuleSet {
               board.reference(),
               board.faultLevel(),
               boardFindings,
-              circuitFindings));
+              circuitFindings,
+              board.words()));
     }
     return new SiteFindings(settings, relabelled(physics.siteFindings()), boards);
   }

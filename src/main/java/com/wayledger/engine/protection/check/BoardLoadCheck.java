@@ -66,8 +66,11 @@ public final class BoardLoadCheck {
   }
 
   /**
-   * As {@link #unbalance(double, double)}, its remedy naming the board's own lines ("between A and
-   * B" on a 120/240 V panelboard).
+   * As {@link #unbalance(double, double)} in the board's own words: on a board under the NEC rule
+   * set the finding names the lines it compares ("lines A and B unbalanced" on a 120/240 V
+   * panelboard, whose two legs are not phases), and its remedy names them too ("between A and B").
+   * The figure is the demand engine's over the board's lines (two or three), the one the balancer
+   * and the board page show.
    *
    * @param lines how many lines the board has (2 or 3)
    */
@@ -77,27 +80,29 @@ public final class BoardLoadCheck {
         List.of(
             new Quantity("unbalance", unbalancePercent, "%"),
             new Quantity("limit", limitPercent, "%"));
+    String compared = Rounding.percent(unbalancePercent);
+    String limit = Rounding.percent(limitPercent);
+    String named = "lines " + words.linesInWords(lines);
     if (unbalancePercent <= limitPercent) {
       return Finding.pass(
           CheckKind.PHASE_UNBALANCE,
-          "unbalance "
-              + Rounding.percent(unbalancePercent)
-              + " ≤ "
-              + Rounding.percent(limitPercent),
+          (words.usTrade() ? named + ": unbalance " : "unbalance ") + compared + " ≤ " + limit,
           values,
           REFERENCE_UNBALANCE);
     }
     return new Finding(
         CheckKind.PHASE_UNBALANCE,
         Verdict.WARNING,
-        "phases unbalanced: "
-            + Rounding.percent(unbalancePercent)
-            + " > "
-            + Rounding.percent(limitPercent),
+        (words.usTrade() ? named : "phases") + " unbalanced: " + compared + " > " + limit,
         values,
         REFERENCE_UNBALANCE,
         "move single-phase circuits between "
             + words.linesInWords(lines)
             + " (see phase balancing)");
+  }
+
+  /** What the unbalance check compares, in the board's words: "phase" or "line unbalance". */
+  public static String unbalanceOf(PositionWords words) {
+    return words.usTrade() ? "line unbalance" : "phase unbalance";
   }
 }

@@ -1,8 +1,11 @@
 package com.wayledger.engine.protection.result;
 
+import com.wayledger.engine.PositionWords;
+
 /**
  * The protection and cable checks the engine runs, with a plain-words title for screens and
- * exports.
+ * exports: {@link #title()} in the base (en-GB) words, {@link #title(PositionWords)} in a board's
+ * own words, which every screen and export that shows a title takes.
  */
 public enum CheckKind {
   WAY_OVERLOAD("Way overloaded (Ib > In)"),
@@ -37,7 +40,32 @@ public enum CheckKind {
     this.title = title;
   }
 
+  /** The title in the base words ("Phase unbalance within the board's limit"). */
   public String title() {
     return title;
+  }
+
+  /**
+   * The title in a board's words, as its finding texts speak (docs/wording.md): a way is a "space"
+   * on a panelboard; under the NEC rule set the board is a "panelboard", a phase of the board a
+   * "line" (A, B, C: a 120/240 V panel's two legs are not phases) and earth is "ground". Only words
+   * whose meanings truly match are swapped; every other title is {@link #title()}. Like the
+   * findings' own sentences, the title follows the site's rule set, not the reader's language, so
+   * that the board page, the findings page and the workbook print one text.
+   *
+   * @param words the words of the finding's board; null reads as the base words
+   */
+  public String title(PositionWords words) {
+    if (words == null) {
+      return title;
+    }
+    return switch (this) {
+      case WAY_OVERLOAD -> (words.panelboard() ? "Space" : "Way") + " overloaded (Ib > In)";
+      case PHASE_UNBALANCE ->
+          words.usTrade() ? "Line unbalance within the " + words.board() + "'s limit" : title;
+      case LOOP_IMPEDANCE ->
+          words.usTrade() ? "Ground fault loop impedance within the disconnection limit" : title;
+      default -> title;
+    };
   }
 }
