@@ -81,14 +81,16 @@ class SplitPhaseUnbalanceIntegrationTests {
     double legA = demand.onPhase(Phase.L1).currentAmps();
     double legB = demand.onPhase(Phase.L2).currentAmps();
 
-    // by hand (invented loads, unity power factor): leg A 1,500 + 600 + 900 W at 120 V = 25 A plus
-    // the 4,500 W water heater at 240 V = 18.75 A on each leg: A 43.75 A, B 18.75 A
-    assertThat(legA).as("leg A").isCloseTo(43.75, within(1e-6));
-    assertThat(legB).as("leg B").isCloseTo(18.75, within(1e-6));
-    // NEMA MG-1 definition over the two legs: mean 31.25 A, deviation 12.5 A, 12.5 / 31.25 = 40 %
+    // by hand (invented loads, unity power factor; a space's line follows from its row, rows
+    // alternating A, B — common practice): spaces 1 and 2 (row 1, A) 1,500 + 600 W at 120 V =
+    // 17.5 A, space 8 (row 4, B) 900 W = 7.5 A, and the 4,500 W water heater at 240 V = 18.75 A on
+    // each leg: A 36.25 A, B 26.25 A
+    assertThat(legA).as("leg A").isCloseTo(36.25, within(1e-6));
+    assertThat(legB).as("leg B").isCloseTo(26.25, within(1e-6));
+    // NEMA MG-1 definition over the two legs: mean 31.25 A, deviation 5 A, 5 / 31.25 = 16 %
     double mean = (legA + legB) / 2;
     double expected = 100 * Math.max(Math.abs(legA - mean), Math.abs(legB - mean)) / mean;
-    assertThat(expected).isCloseTo(40.0, within(1e-6));
+    assertThat(expected).isCloseTo(16.0, within(1e-6));
     Finding finding = unbalanceOf(results, panel);
     assertThat(finding.verdict()).as(finding.summary()).isEqualTo(Verdict.WARNING);
     assertThat(figure(finding)).as("the check's figure").isCloseTo(expected, within(1e-9));
@@ -105,10 +107,10 @@ class SplitPhaseUnbalanceIntegrationTests {
                 .getContentAsString());
     assertThat(page.select("li.finding").eachText())
         .as("the board page's findings")
-        .anyMatch(text -> text.contains("lines A and B unbalanced: 40.0 % > 10.0 %"));
+        .anyMatch(text -> text.contains("lines A and B unbalanced: 16.0 % > 10.0 %"));
     assertThat(page.select("dl.facts").text())
         .as("the board page's unbalance figure, now shown on a two-line panel")
-        .contains("40.0 %")
+        .contains("16.0 %")
         .contains("beyond the panelboard's limit");
 
     String siteFindings =
@@ -119,7 +121,7 @@ class SplitPhaseUnbalanceIntegrationTests {
             .getContentAsString();
     assertThat(Jsoup.parse(siteFindings).text())
         .as("the site's findings page")
-        .contains("lines A and B unbalanced: 40.0 % > 10.0 %");
+        .contains("lines A and B unbalanced: 16.0 % > 10.0 %");
 
     String balancing =
         mvc.perform(get("/boards/{id}/balance", panel).with(VIEWER))
@@ -129,7 +131,7 @@ class SplitPhaseUnbalanceIntegrationTests {
             .getContentAsString();
     assertThat(Jsoup.parse(balancing).text())
         .as("the balancing page, as it stands")
-        .contains("40.0 %");
+        .contains("16.0 %");
 
     mvc.perform(get("/api/boards/{id}/demand", panel).with(VIEWER))
         .andExpect(status().isOk())
