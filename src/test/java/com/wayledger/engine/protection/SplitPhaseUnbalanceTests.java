@@ -99,6 +99,13 @@ class SplitPhaseUnbalanceTests {
         1, "Invented cottage", supply, DiversityMethods.NONE, List.of(board), "NEC");
   }
 
+  /** A 120/240 V panelboard on an NEC site, one 120 V circuit on each leg. */
+  private static SiteSpec twoLegs(double legAAmps, double legBAmps) {
+    return necSite(
+        SPLIT_PHASE,
+        panel(1, leg(11, 1, PhasePosition.L1, legAAmps), leg(12, 2, PhasePosition.L2, legBAmps)));
+  }
+
   /** The demand engine's figures handed to the checks as the stored path hands them. */
   private static Map<Long, BoardLoading> loadingOf(BoardDemand demand) {
     Map<Phase, Double> currents = new EnumMap<>(Phase.class);
@@ -129,10 +136,7 @@ class SplitPhaseUnbalanceTests {
 
   @Test
   void legsOfSixtyAndTwentyAmpsAreFiftyPercentUnbalancedAndTheFindingNamesLegsAAndB() {
-    SiteSpec site =
-        necSite(
-            SPLIT_PHASE,
-            panel(1, leg(11, 1, PhasePosition.L1, 60.0), leg(12, 2, PhasePosition.L2, 20.0)));
+    SiteSpec site = twoLegs(60.0, 20.0);
     BoardDemand demand = demandOf(site);
 
     SiteFindings findings =
@@ -161,10 +165,7 @@ class SplitPhaseUnbalanceTests {
 
   @Test
   void theNecRuleSetKeepsTheLegUnbalanceWithCommonPracticeAsItsSource() {
-    SiteSpec site =
-        necSite(
-            SPLIT_PHASE,
-            panel(1, leg(11, 1, PhasePosition.L1, 60.0), leg(12, 2, PhasePosition.L2, 20.0)));
+    SiteSpec site = twoLegs(60.0, 20.0);
 
     SiteFindings findings =
         RuleSets.of("NEC")
@@ -185,10 +186,7 @@ class SplitPhaseUnbalanceTests {
 
   @Test
   void legsWithinTheLimitPassAndSayWhichLinesWereCompared() {
-    SiteSpec site =
-        necSite(
-            SPLIT_PHASE,
-            panel(1, leg(11, 1, PhasePosition.L1, 45.0), leg(12, 2, PhasePosition.L2, 40.0)));
+    SiteSpec site = twoLegs(45.0, 40.0);
 
     Finding finding =
         unbalance(
