@@ -201,6 +201,30 @@ class SplitPhaseUnbalanceTests {
   }
 
   @Test
+  void anOverloadedLegIsCaughtLineByLineByTheIncomerAndBusbarChecks() {
+    SiteFindings findings =
+        ProtectionEngine.check(
+            twoLegs(230.0, 20.0),
+            Map.of(),
+            loadingOf(demandOf(twoLegs(230.0, 20.0))),
+            ProtectionSettings.DEFAULTS);
+
+    // leg A 230 A against the 200 A main and 200 A busbar (NEC 408.36: load within the rating);
+    // the mean of the legs (125 A) would hide it, the largest line does not
+    for (CheckKind check : List.of(CheckKind.INCOMER_OVERLOAD, CheckKind.BUSBAR_OVERLOAD)) {
+      Finding finding =
+          findings.boards().get(0).findings().stream()
+              .filter(f -> f.check() == check)
+              .findFirst()
+              .orElseThrow();
+      assertThat(finding.verdict()).as(finding.summary()).isEqualTo(Verdict.WARNING);
+      assertThat(figure(finding, "largest phase current"))
+          .as(check.name())
+          .isCloseTo(230.0, within(1e-9));
+    }
+  }
+
+  @Test
   void aLegPanelWithoutADemandFigureIsNotAssessedNeverPassed() {
     SiteSpec site = necSite(SPLIT_PHASE, panel(1, leg(11, 1, PhasePosition.L1, 60.0)));
 
