@@ -48,7 +48,6 @@ public class CapacityController {
     model.addAttribute("categories", LoadCategory.values());
     model.addAttribute("locations", com.wayledger.engine.CircuitLocation.values());
     model.addAttribute("ratingUnits", List.of(RatingUnit.W, RatingUnit.A));
-    model.addAttribute("allLines", Phase.values());
   }
 
   @GetMapping("/boards/{id}/can-it-take-it")
@@ -62,6 +61,9 @@ public class CapacityController {
       HttpServletResponse response) {
     Board board = boards.get(id);
     model.addAttribute("board", board);
+    // the board's own lines by their names: A and B on a 120/240 V panel, L1–L3 on a 400 V board
+    model.addAttribute("allLines", java.util.Arrays.copyOf(Phase.values(), board.lineCount()));
+    model.addAttribute("lineNames", lineNames(board.system()));
     return answer(board.getSite().getId(), id, ask, form, errors, request, model, response);
   }
 
@@ -74,7 +76,19 @@ public class CapacityController {
       HttpServletRequest request,
       Model model,
       HttpServletResponse response) {
+    // the boards of a site differ in lines: every line, named as the site's supply names them
+    model.addAttribute("allLines", Phase.values());
+    model.addAttribute("lineNames", lineNames(sites.get(id).getSupplySystem()));
     return answer(id, null, ask, form, errors, request, model, response);
+  }
+
+  /** Each line's name on a supply system: "L1" or "A". */
+  static java.util.Map<Phase, String> lineNames(com.wayledger.engine.SupplySystem system) {
+    java.util.Map<Phase, String> names = new java.util.EnumMap<>(Phase.class);
+    for (Phase line : Phase.values()) {
+      names.put(line, system.lineName(line));
+    }
+    return names;
   }
 
   private String answer(

@@ -58,7 +58,8 @@ public class LoadLogController {
     java.util.Collections.reverse(newestFirst);
     model.addAttribute("points", newestFirst);
     model.addAttribute("chart", history.chart(id, points));
-    model.addAttribute("lines", board.isThreePhase() ? List.of(Phase.values()) : List.of(Phase.L1));
+    // the board's own lines: A and B on a 120/240 V panel, L1–L3 on a 400 V board, L1 alone
+    model.addAttribute("lines", List.of(Phase.values()).subList(0, board.lineCount()));
     return "loadlog/history";
   }
 

@@ -93,7 +93,7 @@ public final class CapacityAdvisor {
                 + " cannot take a three-phase load");
         continue;
       }
-      List<Candidate> candidates = candidates(board, load, words);
+      List<Candidate> candidates = candidates(board, load, words, site.panelSpacesOf(board));
       if (candidates.isEmpty()) {
         notes.add(
             board.reference()
@@ -134,9 +134,21 @@ public final class CapacityAdvisor {
     };
   }
 
-  /** The candidate positions of one board for the load, in way order. */
+  /** The candidate positions of one board of ways (not a panelboard) for the load, in way order. */
   static List<Candidate> candidates(
       BoardSpec board, NewLoad load, com.wayledger.engine.PositionWords words) {
+    return candidates(board, load, words, null);
+  }
+
+  /**
+   * The candidate positions of one board for the load, in way order; on a panelboard ({@code panel}
+   * not null) the free spaces as the panel lays them out, each on the line of its row.
+   */
+  static List<Candidate> candidates(
+      BoardSpec board,
+      NewLoad load,
+      com.wayledger.engine.PositionWords words,
+      com.wayledger.engine.PanelSpaces panel) {
     Map<String, CircuitSpec> held = new HashMap<>();
     Map<String, CircuitSpec> emptyRecords = new HashMap<>();
     for (CircuitSpec circuit : board.circuits()) {
@@ -158,30 +170,79 @@ public final class CapacityAdvisor {
         found.add(existing(board, circuit, words, CandidateKind.SHARED_CIRCUIT));
       }
     }
-    List<Phase> lines = board.isThreePhase() ? List.of(Phase.values()) : List.of(Phase.L1);
-    if (load.threePhase()) {
-      for (int way = 1; way <= board.wayCount(); way++) {
-        final int w = way;
-        if (lines.stream().noneMatch(p -> held.containsKey(key(w, p)))) {
-          CircuitSpec record = emptyRecords.get(key(way, Phase.L1));
-          found.add(empty(board, words, way, PhasePosition.THREE_POLE, record));
-          break;
-        }
-      }
+    if (panel != null) {
+      found.addAll(freeSpaces(board, load, words, panel));
     } else {
-      for (Phase phase : lines) {
+      List<Phase> lines = board.isThreePhase() ? List.of(Phase.values()) : List.of(Phase.L1);
+      if (load.threePhase()) {
         for (int way = 1; way <= board.wayCount(); way++) {
-          if (!held.containsKey(key(way, phase))) {
-            CircuitSpec record = emptyRecords.get(key(way, phase));
-            boolean recordFits = record != null && record.position().isSinglePole();
-            found.add(
-                empty(board, words, way, PhasePosition.on(phase), recordFits ? record : null));
+          final int w = way;
+          if (lines.stream().noneMatch(p -> held.containsKey(key(w, p)))) {
+            CircuitSpec record = emptyRecords.get(key(way, Phase.L1));
+            found.add(empty(board, words, way, PhasePosition.THREE_POLE, record));
             break;
+          }
+        }
+      } else {
+        for (Phase phase : lines) {
+          for (int way = 1; way <= board.wayCount(); way++) {
+            if (!held.containsKey(key(way, phase))) {
+              CircuitSpec record = emptyRecords.get(key(way, phase));
+              boolean recordFits = record != null && record.position().isSinglePole();
+              found.add(
+                  empty(board, words, way, PhasePosition.on(phase), recordFits ? record : null));
+              break;
+            }
           }
         }
       }
     }
     found.sort(Comparator.comparingInt(Candidate::wayNumber).thenComparing(Candidate::position));
+    return found;
+  }
+
+  /**
+   * A panelboard's free spaces for a new load: for a one-pole load the first free space on each of
+   * its lines (space 1 is line A, space 3 line B, … — the line is the space's row, never chosen
+   * apart from it); for a three-phase load the first three vertically adjacent free spaces. A space
+   * is taken when any recorded breaker that is not an empty record covers it.
+   */
+  private static List<Candidate> freeSpaces(
+      BoardSpec board,
+      NewLoad load,
+      com.wayledger.engine.PositionWords words,
+      com.wayledger.engine.PanelSpaces panel) {
+    java.util.Set<Integer> taken = new java.util.HashSet<>();
+    Map<Integer, CircuitSpec> emptyRecords = new HashMap<>();
+    for (CircuitSpec circuit : board.circuits()) {
+      int poles = circuit.position().poles();
+      if (panel.fitOf(circuit.wayNumber(), poles) != com.wayledger.engine.PanelSpaces.Fit.FITS) {
+        continue;
+      }
+      if (circuit.status() == WayStatus.EMPTY) {
+        emptyRecords.put(circuit.wayNumber(), circuit);
+      } else {
+        taken.addAll(panel.spacesOf(circuit.wayNumber(), poles));
+      }
+    }
+    List<Candidate> found = new ArrayList<>();
+    int poles = load.threePhase() ? 3 : 1;
+    java.util.Set<Phase> linesFound = java.util.EnumSet.noneOf(Phase.class);
+    for (int space = 1; space <= panel.spaceCount(); space++) {
+      if (panel.fitOf(space, poles) != com.wayledger.engine.PanelSpaces.Fit.FITS
+          || panel.spacesOf(space, poles).stream().anyMatch(taken::contains)) {
+        continue;
+      }
+      PhasePosition position = panel.positionOf(space, poles);
+      if (poles == 3 || linesFound.add(panel.lineOf(space))) {
+        CircuitSpec record = emptyRecords.get(space);
+        boolean recordFits = record != null && record.position() == position;
+        found.add(empty(board, words, space, position, recordFits ? record : null));
+        if (poles == 3 || linesFound.size() == panel.lines()) {
+          break;
+        }
+      }
+    }
     return found;
   }
 
