@@ -53,7 +53,10 @@ class ScheduleMarkupIntegrationTests {
   @Test
   void rowsCarryNoTemplateWhitespaceAndOneLineEach() throws Exception {
     String page = page("editor", "EDITOR");
-    String body = page.substring(page.indexOf("<tbody"), page.indexOf("</tbody>")).stripTrailing();
+    int table = page.indexOf("id=\"schedule\"");
+    String body =
+        page.substring(page.indexOf("<tbody", table), page.indexOf("</tbody>", table))
+            .stripTrailing();
 
     assertThat(body).as("no indentation, no blank line").doesNotContain("\n ", "\n\n", "\t");
     Element tbody = Jsoup.parse(page).getElementById("schedule").selectFirst("tbody");
