@@ -70,6 +70,14 @@ public record ScheduleLine(
     String addLabel,
     boolean autofocus) {
 
+  /**
+   * The rowspan printed on the circuit's cells: null, so that no attribute is printed, when the
+   * circuit takes one row (a browser reads a missing rowspan as 1).
+   */
+  public Integer rowspan() {
+    return span > 1 ? span : null;
+  }
+
   /** This line with its add button taking the keyboard focus (the next free row after a save). */
   public ScheduleLine withAutofocus() {
     return new ScheduleLine(
@@ -128,7 +136,6 @@ public record ScheduleLine(
   /**
    * The words every row of a schedule shares, looked up once per page.
    *
-   * @param checks the circuit link's title
    * @param locked the "locked" tag
    * @param ring the "ring" tag
    * @param device the device column's name (the cell's data-label on narrow screens)
@@ -143,7 +150,6 @@ public record ScheduleLine(
    * @param free "free position"
    */
   public record Words(
-      String checks,
       String locked,
       String ring,
       String device,
@@ -159,7 +165,6 @@ public record ScheduleLine(
 
     static Words of(PageWords words) {
       return new Words(
-          words.word("schedule.checks"),
           words.word("schedule.locked"),
           words.word("schedule.ring"),
           words.word("schedule.device"),

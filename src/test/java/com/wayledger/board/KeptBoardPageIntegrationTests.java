@@ -1,9 +1,6 @@
 package com.wayledger.board;
 
 import static org.assertj.core.api.Assertions.assertThat;
-import static org.springframework.security.test.web.servlet.request.SecurityMockMvcRequestPostProcessors.user;
-import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
-import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
 
 import com.wayledger.engine.PhasePosition;
 import com.wayledger.loadlog.LogFixtures;
@@ -94,10 +91,6 @@ class KeptBoardPageIntegrationTests {
   }
 
   private String page(String name, String role) throws Exception {
-    return mvc.perform(get("/boards/{id}", board.getId()).with(user(name).roles(role)))
-        .andExpect(status().isOk())
-        .andReturn()
-        .getResponse()
-        .getContentAsString();
+    return PageFixtures.boardPage(mvc, board.getId(), name, role);
   }
 }

@@ -16,6 +16,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import org.springframework.test.util.ReflectionTestUtils;
+import org.springframework.test.web.servlet.MockMvc;
 import org.springframework.test.web.servlet.request.MockHttpServletRequestBuilder;
 import org.springframework.test.web.servlet.request.MockMvcRequestBuilders;
 
@@ -192,5 +193,20 @@ final class PageFixtures {
     fields.put("powerFactor", "1");
     fields.put("_continuous", "on");
     return fields;
+  }
+
+  /** The board page as a signed-in user of the given role reads it (HTTP 200 asserted). */
+  static String boardPage(MockMvc mvc, long boardId, String name, String role) throws Exception {
+    return mvc.perform(
+            MockMvcRequestBuilders.get("/boards/{id}", boardId)
+                .with(
+                    org.springframework.security.test.web.servlet.request
+                        .SecurityMockMvcRequestPostProcessors.user(name)
+                        .roles(role)))
+        .andExpect(
+            org.springframework.test.web.servlet.result.MockMvcResultMatchers.status().isOk())
+        .andReturn()
+        .getResponse()
+        .getContentAsString();
   }
 }

@@ -107,6 +107,8 @@ class ScheduleLinesTests {
     assertThat(row.deleteHref()).isEqualTo("/app/circuits/41/delete");
     assertThat(row.deleteLabel()).isEqualTo("Delete Boiler");
     assertThat(row.status()).isEqualTo("in use");
+    assertThat(row.span()).isEqualTo(1);
+    assertThat(row.rowspan()).as("one row: no rowspan printed").isNull();
     assertThat(row.badges())
         .containsExactly(new ScheduleLine.Badge("#findings-c41", "badge v-DANGER", "2 ▲ danger"));
     assertThat(row.needed())
